@@ -1,0 +1,62 @@
+import AccountCircleOutlined from '@mui/icons-material/AccountCircleOutlined';
+import Logout from '@mui/icons-material/Logout';
+import { Box, Button, Divider, ListItemIcon, Menu, MenuItem, Typography } from '@mui/material';
+import { useState } from 'react';
+import { useAuth, useSessionUser } from '@/features/auth/auth-context';
+import { roleLabels } from '@/lib/roles';
+
+export function UserMenu() {
+  const user = useSessionUser();
+  const { signOut, signingOut } = useAuth();
+  const [anchor, setAnchor] = useState<HTMLElement | null>(null);
+
+  return (
+    <>
+      <Button
+        color="inherit"
+        startIcon={<AccountCircleOutlined />}
+        aria-haspopup="menu"
+        aria-controls={anchor ? 'user-menu' : undefined}
+        onClick={(event) => setAnchor(event.currentTarget)}
+      >
+        {user.name}
+      </Button>
+      <Menu
+        id="user-menu"
+        anchorEl={anchor}
+        open={Boolean(anchor)}
+        onClose={() => setAnchor(null)}
+        anchorOrigin={{ vertical: 'bottom', horizontal: 'right' }}
+        transformOrigin={{ vertical: 'top', horizontal: 'right' }}
+      >
+        <Box sx={{ px: 2, py: 1, minWidth: 220 }}>
+          <Typography variant="subtitle1">{user.name}</Typography>
+          <Typography variant="body2" color="text.secondary">
+            {user.email}
+          </Typography>
+          <Typography
+            variant="body2"
+            color="secondary.dark"
+            sx={{ fontWeight: 600 }}
+            data-testid="user-role"
+          >
+            {roleLabels[user.role]}
+          </Typography>
+        </Box>
+        <Divider />
+        <MenuItem
+          disabled={signingOut}
+          onClick={() => {
+            setAnchor(null);
+            signOut();
+          }}
+        >
+          <ListItemIcon>
+            <Logout fontSize="small" />
+          </ListItemIcon>
+          Sign out
+        </MenuItem>
+      </Menu>
+    </>
+  );
+}

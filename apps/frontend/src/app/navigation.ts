@@ -1,0 +1,69 @@
+import type { SvgIconComponent } from '@mui/icons-material';
+import ManageAccountsOutlined from '@mui/icons-material/ManageAccountsOutlined';
+import TodayOutlined from '@mui/icons-material/TodayOutlined';
+import { paths } from '@/config/paths';
+import type { Role } from '@/lib/roles';
+
+export interface NavItem {
+  label: string;
+  path: string;
+  icon: SvgIconComponent;
+  /** Roles that may open the screen. The server checks again; this only hides. */
+  roles: readonly Role[];
+}
+
+/**
+ * The side navigation, in order. Add a screen with one line once it exists.
+ * Planned (DESIGN.md): Receiving (clerk, qa_lead, admin), Lots (all), Suppliers (all),
+ * Products (all), Instruments (qa_lead, admin; read by clerk), Returns (purchasing, admin),
+ * Corrective actions (purchasing, qa_lead, admin), Scorecards (purchasing, qa_lead, admin),
+ * Reference (all).
+ */
+export const navItems: readonly NavItem[] = [
+  // purchasing is on Today only until Scorecards, its real home, exists.
+  {
+    label: 'Today',
+    path: paths.today.path,
+    icon: TodayOutlined,
+    roles: ['clerk', 'qa_lead', 'purchasing', 'admin'],
+  },
+  { label: 'Users', path: paths.users.path, icon: ManageAccountsOutlined, roles: ['admin'] },
+];
+
+export function navItemsFor(role: Role): NavItem[] {
+  return navItems.filter((item) => item.roles.includes(role));
+}
+
+function itemForPath(pathname: string): NavItem | undefined {
+  return navItems.find((item) => pathname === item.path || pathname.startsWith(`${item.path}/`));
+}
+
+/** False only for a known screen the role may not use; unknown paths fall to not-found. */
+export function canOpen(role: Role, pathname: string): boolean {
+  const item = itemForPath(pathname);
+  return item === undefined || item.roles.includes(role);
+}
+
+/** The screen a role lands on after signing in. */
+export function homePathFor(role: Role): string {
+  switch (role) {
+    case 'purchasing':
+      return paths.today.getHref(); // Scorecards once that screen exists.
+    case 'clerk':
+    case 'qa_lead':
+    case 'admin':
+      return paths.today.getHref();
+  }
+}
+
+/** Where to go after signing in: back where the user was, if that is safe and allowed. */
+export function afterSignInPath(role: Role, redirectTo: string | null): string {
+  if (!redirectTo || !redirectTo.startsWith('/') || redirectTo.startsWith('//')) {
+    return homePathFor(role);
+  }
+  const pathname = new URL(redirectTo, 'http://local').pathname;
+  if (pathname === paths.signIn.path || pathname === paths.root.path || !canOpen(role, pathname)) {
+    return homePathFor(role);
+  }
+  return redirectTo;
+}

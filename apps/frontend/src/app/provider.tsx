@@ -1,0 +1,36 @@
+import { CssBaseline, ThemeProvider } from '@mui/material';
+import { QueryClientProvider } from '@tanstack/react-query';
+import { useState, type ReactNode } from 'react';
+import { theme } from '@/app/theme';
+import { ErrorBoundary } from '@/components/error-boundary';
+import { FullPageError } from '@/components/full-page-state';
+import { Toaster } from '@/components/toaster';
+import { AuthProvider } from '@/features/auth/auth-context';
+import { meQueryKey } from '@/features/auth/api/get-me';
+import { createQueryClient } from '@/lib/query-client';
+
+export function AppProvider({ children }: { children: ReactNode }) {
+  const [queryClient] = useState(() =>
+    createQueryClient({
+      // The session ended: forget the user; the sign-in gate then sends the user to
+      // the sign-in page and remembers where they were.
+      onUnauthorized: (client) => client.setQueryData(meQueryKey, null),
+    }),
+  );
+
+  return (
+    <ThemeProvider theme={theme}>
+      <CssBaseline />
+      <ErrorBoundary
+        fallback={({ error }) => (
+          <FullPageError message={error.message} onRetry={() => window.location.reload()} />
+        )}
+      >
+        <QueryClientProvider client={queryClient}>
+          <AuthProvider>{children}</AuthProvider>
+          <Toaster />
+        </QueryClientProvider>
+      </ErrorBoundary>
+    </ThemeProvider>
+  );
+}

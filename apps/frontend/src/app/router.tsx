@@ -1,0 +1,54 @@
+import { createBrowserRouter, Navigate, type RouteObject } from 'react-router-dom';
+import { AppShell } from '@/app/layout/app-shell';
+import { RequireAuth } from '@/app/layout/require-auth';
+import { RoleGate } from '@/app/layout/role-gate';
+import { homePathFor } from '@/app/navigation';
+import { NotFoundRoute } from '@/app/routes/not-found';
+import { RouteError } from '@/app/routes/route-error';
+import { SignInRoute } from '@/app/routes/sign-in';
+import { TodayRoute } from '@/app/routes/today';
+import { UsersRoute } from '@/app/routes/users';
+import { paths } from '@/config/paths';
+import { useSessionUser } from '@/features/auth/auth-context';
+
+function HomeRedirect() {
+  const user = useSessionUser();
+  return <Navigate to={homePathFor(user.role)} replace />;
+}
+
+/** Screens inside the shell; RoleGate checks the navigation model's roles. */
+const shellRoutes: RouteObject[] = [
+  { index: true, element: <HomeRedirect /> },
+  {
+    path: paths.today.path,
+    element: (
+      <RoleGate>
+        <TodayRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.users.path,
+    element: (
+      <RoleGate>
+        <UsersRoute />
+      </RoleGate>
+    ),
+  },
+  { path: '*', element: <NotFoundRoute /> },
+].map((route) => ({ ...route, errorElement: <RouteError /> }));
+
+export const routes: RouteObject[] = [
+  {
+    errorElement: <RouteError />,
+    children: [
+      { path: paths.signIn.path, element: <SignInRoute /> },
+      {
+        element: <RequireAuth />,
+        children: [{ path: paths.root.path, element: <AppShell />, children: shellRoutes }],
+      },
+    ],
+  },
+];
+
+export const createRouter = () => createBrowserRouter(routes);

@@ -1,0 +1,37 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { api } from '@/lib/api-client';
+import { meQueryKey } from '@/features/auth/api/get-me';
+import type { SessionUser } from '@/features/auth/types';
+
+export const loginSchema = z.object({
+  email: z
+    .string()
+    .trim()
+    .min(1, 'Enter your e-mail address.')
+    .pipe(z.email('Enter a valid e-mail address.')),
+  password: z.string().min(1, 'Enter your password.'),
+});
+export type LoginInput = z.infer<typeof loginSchema>;
+
+export interface LoginResponse {
+  accessToken: string;
+  user: SessionUser;
+}
+
+export const login = (input: LoginInput) => api.post<LoginResponse>('/auth/login', input);
+
+export function useLogin() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationKey: ['auth', 'login'],
+    mutationFn: login,
+    // A 401 here means wrong credentials; the form shows it.
+    meta: { ignoreUnauthorized: true, inlineErrors: true },
+    onSuccess: ({ user }) => {
+      // Nothing cached for a previous user may leak into this session.
+      queryClient.clear();
+      queryClient.setQueryData(meQueryKey, user);
+    },
+  });
+}

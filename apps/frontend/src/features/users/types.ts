@@ -1,0 +1,11 @@
+import type { Role } from '@/lib/roles';
+
+export interface User {
+  id: number;
+  email: string;
+  name: string;
+  role: Role;
+  active: boolean;
+  /** ISO date-time. */
+  createdAt: string;
+}

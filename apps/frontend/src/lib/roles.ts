@@ -1,0 +1,29 @@
+export const ROLES = ['clerk', 'qa_lead', 'purchasing', 'admin'] as const;
+export type Role = (typeof ROLES)[number];
+
+export const roleLabels: Record<Role, string> = {
+  clerk: 'Receiving clerk',
+  qa_lead: 'QA lead',
+  purchasing: 'Purchasing',
+  admin: 'Administrator',
+};
+
+/** What each role does in Gaugeproof, in the words of the trade. */
+export const roleDuties: Record<Role, readonly string[]> = {
+  clerk: [
+    'Log each delivery against its purchase order and put the lot on hold.',
+    'Cut and strip the samples the sampling plan asks for.',
+    'Record weights, lengths and other readings, and upload photos of the evidence.',
+  ],
+  qa_lead: [
+    'Review the evidence for each lot and decide: accept, accept on concession or reject.',
+    'Void a wrong reading with a reason; it stays visible in the history.',
+    'Keep the instrument register and the acceptance policy.',
+  ],
+  purchasing: [
+    'Review supplier scorecards built from inspection results.',
+    'Raise returns to vendor and corrective-action requests.',
+    'Export evidence and e-mail suppliers.',
+  ],
+  admin: ['Manage users and their roles, and the settings.', 'Do anything any other role can do.'],
+};

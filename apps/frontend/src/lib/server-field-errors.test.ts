@@ -1,0 +1,33 @@
+import { describe, expect, it } from 'vitest';
+import { ApiError } from '@/lib/api-client';
+import { splitServerErrors } from '@/lib/server-field-errors';
+
+const badRequest = (message: string | string[]) =>
+  new ApiError(
+    400,
+    { statusCode: 400, error: 'Bad Request', message, path: '/api/users', requestId: 'r' },
+    '',
+  );
+
+describe('splitServerErrors', () => {
+  it('puts messages that start with a field name on that field', () => {
+    const error = badRequest([
+      'email must be an email',
+      'password is too short',
+      'property x should not exist',
+    ]);
+    expect(splitServerErrors(error, ['email', 'password'] as const)).toEqual({
+      fieldErrors: { email: 'email must be an email', password: 'password is too short' },
+      formErrors: ['property x should not exist'],
+    });
+  });
+
+  it('treats a single message naming no field as a form error', () => {
+    expect(
+      splitServerErrors(badRequest('A user with this e-mail exists.'), ['email'] as const),
+    ).toEqual({
+      fieldErrors: {},
+      formErrors: ['A user with this e-mail exists.'],
+    });
+  });
+});
