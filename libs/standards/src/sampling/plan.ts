@@ -1,0 +1,130 @@
+import { StandardsInputError } from '../errors.js';
+import { requireInteger, requireOneOf } from '../validate.js';
+import {
+  AQLS,
+  CODE_LETTER_TABLE,
+  INSPECTION_LEVELS,
+  PLAN_TABLE,
+  SEVERITIES,
+  type Aql,
+  type CodeLetter,
+  type InspectionLevel,
+  type Severity,
+} from './tables.js';
+
+export interface SamplingPlanInput {
+  /** Units in the lot; at least 2 (Table I starts at 2). */
+  lotSize: number;
+  level?: InspectionLevel;
+  /** AQL in percent, as written in the tables ('1.0') or as a number (1). */
+  aql?: Aql | number;
+  severity?: Severity;
+}
+
+export interface SamplingPlan {
+  lotSize: number;
+  level: InspectionLevel;
+  aql: Aql;
+  severity: Severity;
+  /** Sample-size code letter from Table I (the arrows may lead to another letter's plan). */
+  codeLetter: CodeLetter;
+  /** Units to inspect: the plan's n, capped at the lot size. */
+  sampleSize: number;
+  /** The plan's n before capping. */
+  planSampleSize: number;
+  /** Accept the lot when the nonconforming count is at most this (Ac). */
+  accept: number;
+  /** Reject the lot when the nonconforming count is at least this (Re). */
+  reject: number;
+  /** True when the plan's sample reaches the lot size: inspect every unit. */
+  inspectAll: boolean;
+}
+
+/** The AQL key of the tables for '1.0', '1', 1 or 0.65; StandardsInputError('aql') if none. */
+export function aqlKey(aql: unknown): Aql {
+  const value = typeof aql === 'number' ? aql : typeof aql === 'string' ? Number(aql.trim()) : NaN;
+  const key = Number.isFinite(value) ? AQLS.find((a) => Number(a) === value) : undefined;
+  if (key === undefined) {
+    throw new StandardsInputError(
+      'aql',
+      `AQL ${String(aql)} is not in the tables (${AQLS.join(', ')}).`,
+    );
+  }
+  return key;
+}
+
+/** Sample-size code letter from lot size and inspection level (Table I, MIL-STD-105E). */
+export function codeLetterFor(lotSize: number, level: InspectionLevel = 'II'): CodeLetter {
+  const n = requireInteger('lotSize', lotSize, 2);
+  const levelIndex = INSPECTION_LEVELS.indexOf(requireOneOf('level', level, INSPECTION_LEVELS));
+  const row = CODE_LETTER_TABLE.find(([min, max]) => n >= min && (max === null || n <= max));
+  if (row === undefined)
+    throw new StandardsInputError('lotSize', `No Table I row for lot size ${n}.`);
+  return row[2][levelIndex];
+}
+
+/**
+ * The single sampling plan for a lot (MIL-STD-105E Tables I, II-A/B/C; ANSI/ASQ Z1.4):
+ * code letter from Table I, then the plan at the AQL with the table's arrows followed.
+ * When the plan's n reaches the lot size every unit is inspected (`inspectAll`), judged
+ * with the same Ac and Re.
+ */
+export function samplingPlan(input: SamplingPlanInput): SamplingPlan {
+  const lotSize = requireInteger('lotSize', input.lotSize, 2);
+  const level = requireOneOf('level', input.level ?? 'II', INSPECTION_LEVELS);
+  const aql = aqlKey(input.aql ?? '1.0');
+  const severity = requireOneOf('severity', input.severity ?? 'normal', SEVERITIES);
+  const codeLetter = codeLetterFor(lotSize, level);
+  const [n, accept, reject] = PLAN_TABLE[severity][codeLetter][AQLS.indexOf(aql)];
+  return {
+    lotSize,
+    level,
+    aql,
+    severity,
+    codeLetter,
+    sampleSize: Math.min(n, lotSize),
+    planSampleSize: n,
+    accept,
+    reject,
+    inspectAll: n >= lotSize,
+  };
+}
+
+export type LotOutcome = 'accept' | 'reject' | 'accept_and_return_to_normal';
+
+/**
+ * The lot's fate from the count of nonconforming units in the sample: accept at Ac or
+ * fewer, reject at Re or more; on reduced inspection a count between them accepts the lot
+ * but returns the stream to normal inspection (MIL-STD-105E; the JSON's notes).
+ */
+export function lotOutcome(plan: SamplingPlan, nonconformingCount: number): LotOutcome {
+  if (
+    typeof plan !== 'object' ||
+    plan === null ||
+    !Number.isInteger(plan.accept) ||
+    !Number.isInteger(plan.reject)
+  ) {
+    throw new StandardsInputError('plan', 'plan must come from samplingPlan().');
+  }
+  const count = requireInteger('nonconformingCount', nonconformingCount, 0);
+  if (count > plan.sampleSize) {
+    throw new StandardsInputError(
+      'nonconformingCount',
+      `${count} nonconforming units cannot come from a sample of ${plan.sampleSize}.`,
+    );
+  }
+  if (count <= plan.accept) return 'accept';
+  if (count >= plan.reject) return 'reject';
+  return 'accept_and_return_to_normal';
+}
+
+/**
+ * Would the lot also be accepted with the AQL one step tighter (the normal plan of the same
+ * code letter at the next smaller AQL)? Used by the switching score. False at the tightest AQL.
+ */
+export function acceptedAtTighterAql(plan: SamplingPlan, nonconformingCount: number): boolean {
+  const index = AQLS.indexOf(aqlKey(plan.aql));
+  if (index === 0) return false;
+  const count = requireInteger('nonconformingCount', nonconformingCount, 0);
+  return count <= PLAN_TABLE.normal[plan.codeLetter][index - 1][1];
+}
