@@ -1,0 +1,60 @@
+import { DynamicModule, Module } from '@nestjs/common';
+import { DiscoveryModule } from '@nestjs/core';
+import { MikroOrmModule } from '@mikro-orm/nestjs';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { LoggerModule } from 'nestjs-pino';
+import { existsSync } from 'node:fs';
+import { randomUUID } from 'node:crypto';
+import type { IncomingMessage } from 'node:http';
+import { AuditModule } from './audit/audit.module';
+import { AuthModule } from './auth/auth.module';
+import { ConfigModule } from './config/config.module';
+import type { AppConfig } from './config/env';
+import { ormOptions } from './database/orm-options';
+import { HealthModule } from './health/health.module';
+import { UsersModule } from './users/users.module';
+
+/** Domain modules; each later domain adds its module here. */
+const DOMAIN_MODULES = [AuditModule, AuthModule, UsersModule, HealthModule];
+
+function requestId(req: IncomingMessage): string {
+  const given = req.headers['x-request-id'];
+  return typeof given === 'string' && /^[\w-]{8,64}$/.test(given) ? given : randomUUID();
+}
+
+@Module({})
+export class AppModule {
+  static forRoot(config: AppConfig): DynamicModule {
+    const staticSite = existsSync(config.frontendDist)
+      ? [
+          ServeStaticModule.forRoot({
+            rootPath: config.frontendDist,
+            exclude: ['/api/{*rest}'],
+          }),
+        ]
+      : [];
+    return {
+      module: AppModule,
+      imports: [
+        ConfigModule.forRoot(config),
+        DiscoveryModule,
+        LoggerModule.forRoot({
+          pinoHttp: {
+            level: config.logLevel,
+            genReqId: requestId,
+            customProps: () => ({ app: 'gaugeproof' }),
+            redact: [
+              'req.headers.authorization',
+              'req.headers.cookie',
+              'res.headers["set-cookie"]',
+            ],
+            autoLogging: { ignore: (req) => req.url === '/api/health' },
+          },
+        }),
+        MikroOrmModule.forRoot(ormOptions(config)),
+        ...DOMAIN_MODULES,
+        ...staticSite,
+      ],
+    };
+  }
+}

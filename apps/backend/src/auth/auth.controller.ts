@@ -1,0 +1,50 @@
+import { Body, Controller, Get, HttpCode, Post, Req, Res, UseGuards } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import { Throttle } from '@nestjs/throttler';
+import type { Request, Response } from 'express';
+import { AuthService } from './auth.service';
+import { CurrentUser, Public, Roles } from './decorators';
+import { LoginDto } from './dto/login.dto';
+import { LoginThrottlerGuard } from './login-throttler.guard';
+import { SESSION_COOKIE, SESSION_HOURS, type RequestUser } from './request-user';
+import { ALL_ROLES } from './roles';
+
+@ApiTags('auth')
+@Controller('auth')
+export class AuthController {
+  constructor(private readonly auth: AuthService) {}
+
+  @Public()
+  @Post('login')
+  @HttpCode(200)
+  @UseGuards(LoginThrottlerGuard)
+  @Throttle({ default: { limit: 5, ttl: 60_000 } })
+  async login(
+    @Body() dto: LoginDto,
+    @Req() req: Request,
+    @Res({ passthrough: true }) res: Response,
+  ) {
+    const result = await this.auth.login(dto.email, dto.password);
+    res.cookie(SESSION_COOKIE, result.accessToken, {
+      httpOnly: true,
+      sameSite: 'strict',
+      secure: req.secure,
+      path: '/',
+      maxAge: SESSION_HOURS * 3600 * 1000,
+    });
+    return result;
+  }
+
+  @Roles(...ALL_ROLES)
+  @Get('me')
+  me(@CurrentUser() user: RequestUser) {
+    return user;
+  }
+
+  @Roles(...ALL_ROLES)
+  @Post('logout')
+  @HttpCode(204)
+  logout(@Res({ passthrough: true }) res: Response) {
+    res.clearCookie(SESSION_COOKIE, { path: '/', httpOnly: true, sameSite: 'strict' });
+  }
+}

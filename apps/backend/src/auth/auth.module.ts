@@ -1,0 +1,24 @@
+import { Module } from '@nestjs/common';
+import { APP_GUARD } from '@nestjs/core';
+import { JwtModule } from '@nestjs/jwt';
+import { ThrottlerModule } from '@nestjs/throttler';
+import { APP_CONFIG } from '../config/config.module';
+import type { AppConfig } from '../config/env';
+import { AuthController } from './auth.controller';
+import { AuthGuard } from './auth.guard';
+import { AuthService } from './auth.service';
+
+@Module({
+  imports: [
+    JwtModule.registerAsync({
+      global: true,
+      inject: [APP_CONFIG],
+      useFactory: (config: AppConfig) => ({ secret: config.jwtSecret }),
+    }),
+    // Only the sign-in route uses it (LoginThrottlerGuard); in memory, per server.
+    ThrottlerModule.forRoot([{ name: 'default', ttl: 60_000, limit: 5 }]),
+  ],
+  controllers: [AuthController],
+  providers: [AuthService, { provide: APP_GUARD, useClass: AuthGuard }],
+})
+export class AuthModule {}

@@ -1,0 +1,37 @@
+import { Injectable, UnauthorizedException } from '@nestjs/common';
+import { JwtService } from '@nestjs/jwt';
+import { EntityManager } from '@mikro-orm/core';
+import bcrypt from 'bcryptjs';
+import { User } from '../users/entities/user.entity';
+import { SESSION_HOURS, type JwtClaims, type RequestUser } from './request-user';
+
+/** A real hash, so an unknown e-mail costs the same time as a wrong password. */
+const DUMMY_HASH = bcrypt.hashSync('not-a-real-password', 10);
+const WRONG = 'E-mail or password is not right';
+
+@Injectable()
+export class AuthService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly jwt: JwtService,
+  ) {}
+
+  async login(email: string, password: string) {
+    const user = await this.em.findOne(
+      User,
+      { email: email.trim().toLowerCase() },
+      { populate: ['passwordHash'] },
+    );
+    const ok = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH);
+    if (!user || !ok || !user.active) throw new UnauthorizedException(WRONG);
+    const claims: JwtClaims = { sub: user.id, role: user.role };
+    const accessToken = await this.jwt.signAsync(claims, { expiresIn: `${SESSION_HOURS}h` });
+    const publicUser: RequestUser = {
+      id: user.id,
+      email: user.email,
+      name: user.name,
+      role: user.role,
+    };
+    return { accessToken, user: publicUser };
+  }
+}

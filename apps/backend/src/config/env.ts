@@ -1,0 +1,94 @@
+import { randomBytes } from 'node:crypto';
+import { chmodSync, existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { dirname, join, resolve } from 'node:path';
+
+/** Everything the server reads from its environment, checked once at start-up. */
+export interface AppConfig {
+  port: number;
+  dbPath: string;
+  /** postgresql://… when set; the SQLite file is used otherwise. */
+  dbUrl: string | null;
+  uploadDir: string;
+  smtpUrl: string | null;
+  mailFrom: string;
+  jwtSecret: string;
+  seedDemo: boolean;
+  /** Extra origins allowed to send cookie-authenticated writes (comma-separated). */
+  appOrigins: string[];
+  /** Public address of the app, used in QR codes and e-mails. */
+  publicUrl: string;
+  logLevel: string;
+  frontendDist: string;
+}
+
+export class ConfigError extends Error {
+  constructor(readonly problems: string[]) {
+    super(`Gaugeproof cannot start; fix these settings:\n  - ${problems.join('\n  - ')}`);
+  }
+}
+
+const REPO_ROOT = resolve(__dirname, '..', '..', '..', '..');
+
+function fromRepo(p: string): string {
+  return resolve(REPO_ROOT, p);
+}
+
+/** Reads the JWT secret from the data folder, creating one (mode 0600) on first start. */
+function persistentSecret(dataDir: string): string {
+  const file = join(dataDir, 'jwt-secret');
+  if (existsSync(file)) return readFileSync(file, 'utf8').trim();
+  mkdirSync(dataDir, { recursive: true });
+  const secret = randomBytes(48).toString('base64url');
+  writeFileSync(file, secret, { mode: 0o600 });
+  chmodSync(file, 0o600);
+  return secret;
+}
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
+  const problems: string[] = [];
+  const port = Number(env.PORT ?? '3000');
+  if (!Number.isInteger(port) || port < 1 || port > 65535) {
+    problems.push(`PORT must be a whole number from 1 to 65535 (got "${env.PORT}")`);
+  }
+  const dbPath = fromRepo(env.DB_PATH || 'data/gaugeproof.sqlite');
+  const dbUrl = env.DB_URL?.trim() || null;
+  if (dbUrl && !/^postgres(ql)?:\/\//.test(dbUrl)) {
+    problems.push('DB_URL must start with postgresql:// (leave it empty for the SQLite file)');
+  }
+  const uploadDir = fromRepo(env.UPLOAD_DIR || 'data/uploads');
+  const smtpUrl = env.SMTP_URL?.trim() || null;
+  if (smtpUrl && !/^smtps?:\/\//.test(smtpUrl)) {
+    problems.push('SMTP_URL must start with smtp:// or smtps:// (leave it empty to log mail)');
+  }
+  const seedRaw = (env.SEED_DEMO ?? 'true').toLowerCase();
+  if (!['true', 'false'].includes(seedRaw)) {
+    problems.push(`SEED_DEMO must be "true" or "false" (got "${env.SEED_DEMO}")`);
+  }
+  const jwtSecret = env.JWT_SECRET?.trim();
+  if (jwtSecret !== undefined && jwtSecret !== '' && jwtSecret.length < 16) {
+    problems.push('JWT_SECRET must be at least 16 characters (or unset to generate one)');
+  }
+  const logLevel = env.LOG_LEVEL || 'info';
+  if (!['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'].includes(logLevel)) {
+    problems.push(`LOG_LEVEL must be one of fatal, error, warn, info, debug, trace, silent`);
+  }
+  if (problems.length > 0) throw new ConfigError(problems);
+  const publicUrl = (env.PUBLIC_URL || `http://localhost:${port}`).replace(/\/$/, '');
+  return {
+    port,
+    dbPath,
+    dbUrl,
+    uploadDir,
+    smtpUrl,
+    mailFrom: env.MAIL_FROM || 'Gaugeproof <gaugeproof@localhost>',
+    jwtSecret: jwtSecret || persistentSecret(dirname(dbPath)),
+    seedDemo: seedRaw === 'true',
+    appOrigins: (env.APP_ORIGINS ?? '')
+      .split(',')
+      .map((o) => o.trim())
+      .filter(Boolean),
+    publicUrl,
+    logLevel,
+    frontendDist: fromRepo('apps/frontend/dist'),
+  };
+}

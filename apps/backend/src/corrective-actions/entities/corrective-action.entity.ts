@@ -1,0 +1,65 @@
+import {
+  Collection,
+  Entity,
+  Enum,
+  ManyToMany,
+  ManyToOne,
+  PrimaryKey,
+  Property,
+  type Opt,
+} from '@mikro-orm/core';
+import { Lot } from '../../lots/entities/lot.entity';
+import { Supplier } from '../../suppliers/entities/supplier.entity';
+import { User } from '../../users/entities/user.entity';
+
+export const CAR_STATUSES = ['open', 'responded', 'verified', 'reopened', 'closed'] as const;
+export type CorrectiveActionStatus = (typeof CAR_STATUSES)[number];
+
+/** Supplier corrective action request (SCAR). */
+@Entity({ tableName: 'corrective_actions' })
+export class CorrectiveAction {
+  @PrimaryKey({ type: 'integer' })
+  id!: number;
+
+  @Property({ type: 'string', length: 20 })
+  number!: string;
+
+  @ManyToOne(() => Supplier)
+  supplier!: Supplier;
+
+  @ManyToMany(() => Lot, undefined, { pivotTable: 'corrective_action_lots', owner: true })
+  lots = new Collection<Lot>(this);
+
+  @Property({ type: 'text' })
+  problem!: string;
+
+  @Property({ type: 'string', length: 10 })
+  dueOn!: string;
+
+  @Enum({ items: () => CAR_STATUSES, type: 'string' })
+  status: Opt<CorrectiveActionStatus> = 'open';
+
+  @Property({ type: 'text', nullable: true })
+  containment: string | null = null;
+
+  @Property({ type: 'text', nullable: true })
+  rootCause: string | null = null;
+
+  @Property({ type: 'text', nullable: true })
+  correctiveAction: string | null = null;
+
+  @Property({ type: 'datetime', nullable: true })
+  respondedAt: Date | null = null;
+
+  @Property({ type: 'datetime', nullable: true })
+  closedAt: Date | null = null;
+
+  @ManyToOne(() => User)
+  createdBy!: User;
+
+  @Property({ type: 'datetime' })
+  createdAt: Opt<Date> = new Date();
+
+  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  updatedAt: Opt<Date> = new Date();
+}

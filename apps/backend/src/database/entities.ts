@@ -1,0 +1,36 @@
+import { AuditEvent } from '../audit/entities/audit-event.entity';
+import { CorrectiveAction } from '../corrective-actions/entities/corrective-action.entity';
+import { Decision } from '../decisions/entities/decision.entity';
+import { Nonconformance } from '../decisions/entities/nonconformance.entity';
+import { Reading } from '../inspection/entities/reading.entity';
+import { Sample } from '../inspection/entities/sample.entity';
+import { Instrument } from '../instruments/entities/instrument.entity';
+import { Lot } from '../lots/entities/lot.entity';
+import { OutboundMessage } from '../mail/entities/outbound-message.entity';
+import { Photo } from '../photos/entities/photo.entity';
+import { ConductorSpec } from '../products/entities/conductor-spec.entity';
+import { InspectionState } from '../products/entities/inspection-state.entity';
+import { Product } from '../products/entities/product.entity';
+import { VendorReturn } from '../returns/entities/vendor-return.entity';
+import { Supplier } from '../suppliers/entities/supplier.entity';
+import { User } from '../users/entities/user.entity';
+
+/** Every entity, in one list, so the migrator and every test see the same schema. */
+export const ENTITIES = [
+  User,
+  Supplier,
+  Product,
+  ConductorSpec,
+  InspectionState,
+  Lot,
+  Sample,
+  Reading,
+  Instrument,
+  Photo,
+  Decision,
+  Nonconformance,
+  VendorReturn,
+  CorrectiveAction,
+  AuditEvent,
+  OutboundMessage,
+];

@@ -1,0 +1,49 @@
+import { defineConfig as defineSqlite } from '@mikro-orm/sqlite';
+import { Migrator } from '@mikro-orm/migrations';
+import { ReflectMetadataProvider, type Options } from '@mikro-orm/core';
+import { dirname } from 'node:path';
+import { mkdirSync } from 'node:fs';
+import { ENTITIES } from './entities';
+import { SQLITE_MIGRATIONS } from '../migrations';
+
+interface SqliteConnection {
+  exec(sql: string, cb: (err: Error | null) => void): void;
+  configure(option: 'busyTimeout', ms: number): void;
+}
+
+/**
+ * SQLite in WAL mode with foreign keys on and a busy timeout, set on every pooled
+ * connection. Queries stay portable: nothing here is used by the application SQL.
+ */
+export function sqliteOptions(dbPath: string): Options {
+  if (dbPath !== ':memory:') mkdirSync(dirname(dbPath), { recursive: true });
+  return defineSqlite({
+    dbName: dbPath,
+    entities: ENTITIES,
+    metadataProvider: ReflectMetadataProvider,
+    extensions: [Migrator],
+    forceUtcTimezone: true,
+    allowGlobalContext: false,
+    debug: false,
+    migrations: {
+      migrationsList: SQLITE_MIGRATIONS,
+      transactional: true,
+      allOrNothing: true,
+      snapshot: false,
+      path: 'apps/backend/src/migrations',
+      pathTs: 'apps/backend/src/migrations',
+      emit: 'ts',
+    },
+    pool: {
+      min: 1,
+      max: 1,
+      afterCreate: (conn: SqliteConnection, done: (err: Error | null, conn: unknown) => void) => {
+        conn.configure('busyTimeout', 5000);
+        conn.exec(
+          'PRAGMA journal_mode = WAL; PRAGMA foreign_keys = ON; PRAGMA synchronous = FULL;',
+          (err) => done(err, conn),
+        );
+      },
+    },
+  });
+}

@@ -1,0 +1,41 @@
+import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { Lot } from '../../lots/entities/lot.entity';
+import { User } from '../../users/entities/user.entity';
+
+export const DECISION_OUTCOMES = ['accept', 'accept_on_concession', 'reject'] as const;
+export type DecisionOutcome = (typeof DECISION_OUTCOMES)[number];
+
+/** Append-only: a later decision supersedes an earlier one, never edits it. */
+@Entity({ tableName: 'decisions' })
+@Index({ properties: ['lot', 'decidedAt'] })
+export class Decision {
+  @PrimaryKey({ type: 'integer' })
+  id!: number;
+
+  @ManyToOne(() => Lot)
+  lot!: Lot;
+
+  @Enum({ items: () => DECISION_OUTCOMES, type: 'string' })
+  outcome!: DecisionOutcome;
+
+  /** What the evaluation recommended when the decision was taken. */
+  @Property({ type: 'string', length: 16 })
+  recommendation!: string;
+
+  @Property({ type: 'text' })
+  reason!: string;
+
+  /** Snapshot of the evaluation counts the decision was taken on. */
+  @Property({ type: 'json' })
+  evaluation!: Record<string, unknown>;
+
+  /** The lot version the decision was taken against. */
+  @Property({ type: 'integer' })
+  lotVersion!: number;
+
+  @ManyToOne(() => User)
+  decidedBy!: User;
+
+  @Property({ type: 'datetime' })
+  decidedAt: Opt<Date> = new Date();
+}

@@ -1,0 +1,39 @@
+import { Entity, ManyToOne, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
+import { Lot } from '../../lots/entities/lot.entity';
+import { Decision } from './decision.entity';
+
+export const NCR_STATUSES = ['open', 'closed'] as const;
+
+/** Nonconformance report opened by a reject, numbered NCR-YYYY-NNNN. */
+@Entity({ tableName: 'nonconformances' })
+@Unique({ properties: ['year', 'seq'] })
+export class Nonconformance {
+  @PrimaryKey({ type: 'integer' })
+  id!: number;
+
+  @Property({ type: 'string', length: 20 })
+  @Unique()
+  number!: string;
+
+  @Property({ type: 'integer' })
+  year!: number;
+
+  @Property({ type: 'integer' })
+  seq!: number;
+
+  @ManyToOne(() => Lot)
+  lot!: Lot;
+
+  @ManyToOne(() => Decision)
+  decision!: Decision;
+
+  /** Material review disposition once decided: return_to_vendor, use_as_is, rework, scrap. */
+  @Property({ type: 'string', length: 24, nullable: true })
+  disposition: string | null = null;
+
+  @Property({ type: 'string', length: 8 })
+  status: Opt<string> = 'open';
+
+  @Property({ type: 'datetime' })
+  createdAt: Opt<Date> = new Date();
+}

@@ -1,0 +1,93 @@
+import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { User } from '../../users/entities/user.entity';
+import { Sample } from './sample.entity';
+
+export const READING_METHODS = ['mass', 'strands', 'resistance', 'diameter'] as const;
+export type ReadingMethod = (typeof READING_METHODS)[number];
+export const VERDICTS = ['conforms', 'nonconforming', 'inconclusive'] as const;
+export type Verdict = (typeof VERDICTS)[number];
+
+/** What an instrument was when the reading was taken, kept as evidence. */
+export interface InstrumentSnapshot {
+  id: number;
+  kind: string;
+  name: string;
+  serial: string;
+  resolution: number;
+  resolutionUnit: string;
+  calibrationDueOn: string;
+}
+
+/**
+ * One measurement on a sample. Never deleted: a wrong one is voided with a reason.
+ * The flat result columns feed lists and scorecards; `result` keeps the whole computation.
+ */
+@Entity({ tableName: 'readings' })
+@Index({ properties: ['sample', 'voided'] })
+export class Reading {
+  @PrimaryKey({ type: 'integer' })
+  id!: number;
+
+  @ManyToOne(() => Sample)
+  sample!: Sample;
+
+  @Enum({ items: () => READING_METHODS, type: 'string' })
+  method!: ReadingMethod;
+
+  /** The raw inputs as entered (massG, lengthMm, …). */
+  @Property({ type: 'json' })
+  inputs!: Record<string, number>;
+
+  @Property({ type: 'json' })
+  instruments: Opt<InstrumentSnapshot[]> = [];
+
+  @Property({ type: 'double' })
+  areaMm2!: number;
+
+  /** Standard uncertainty of the area. */
+  @Property({ type: 'double' })
+  uMm2!: number;
+
+  /** Expanded uncertainty, k = 2. */
+  @Property({ type: 'double' })
+  expandedUMm2!: number;
+
+  @Property({ type: 'double' })
+  areaRatio!: number;
+
+  @Property({ type: 'string', length: 32 })
+  measuresAs!: string;
+
+  /** copper | cca | aluminium | inconsistent | unknown, when the readings allow it. */
+  @Property({ type: 'string', length: 16, nullable: true })
+  identifiedMaterial: string | null = null;
+
+  /** Sold as copper, found CCA or aluminium. */
+  @Property({ type: 'boolean' })
+  materialMismatch: Opt<boolean> = false;
+
+  @Enum({ items: () => VERDICTS, type: 'string' })
+  verdict!: Verdict;
+
+  /** Full computation: budget, reasons, material identification, length for a conclusive result. */
+  @Property({ type: 'json' })
+  result!: Record<string, unknown>;
+
+  @ManyToOne(() => User)
+  takenBy!: User;
+
+  @Property({ type: 'datetime' })
+  takenAt: Opt<Date> = new Date();
+
+  @Property({ type: 'boolean' })
+  voided: Opt<boolean> = false;
+
+  @Property({ type: 'text', nullable: true })
+  voidReason: string | null = null;
+
+  @ManyToOne(() => User, { nullable: true })
+  voidedBy: User | null = null;
+
+  @Property({ type: 'datetime', nullable: true })
+  voidedAt: Date | null = null;
+}

@@ -1,0 +1,52 @@
+import { Entity, Enum, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
+
+export const INSTRUMENT_KINDS = [
+  'balance',
+  'micrometer',
+  'caliper',
+  'length_rule',
+  'milliohm_meter',
+  'thermometer',
+] as const;
+export type InstrumentKind = (typeof INSTRUMENT_KINDS)[number];
+
+/** A registered measuring instrument with its calibration status (ISO 9001 7.1.5). */
+@Entity({ tableName: 'instruments' })
+export class Instrument {
+  @PrimaryKey({ type: 'integer' })
+  id!: number;
+
+  @Enum({ items: () => INSTRUMENT_KINDS, type: 'string' })
+  kind!: InstrumentKind;
+
+  @Property({ type: 'string', length: 120 })
+  name!: string;
+
+  @Property({ type: 'string', length: 64 })
+  @Unique()
+  serial!: string;
+
+  /** Smallest step the instrument shows, in `resolutionUnit`. */
+  @Property({ type: 'double' })
+  resolution!: number;
+
+  /** g, mm, ohm, degC */
+  @Property({ type: 'string', length: 8 })
+  resolutionUnit!: string;
+
+  /** Calendar dates as YYYY-MM-DD. */
+  @Property({ type: 'string', length: 10 })
+  calibratedOn!: string;
+
+  @Property({ type: 'string', length: 10 })
+  calibrationDueOn!: string;
+
+  @Property({ type: 'boolean' })
+  active: Opt<boolean> = true;
+
+  @Property({ type: 'datetime' })
+  createdAt: Opt<Date> = new Date();
+
+  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  updatedAt: Opt<Date> = new Date();
+}

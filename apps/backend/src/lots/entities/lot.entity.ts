@@ -1,0 +1,98 @@
+import {
+  Collection,
+  Entity,
+  Enum,
+  Index,
+  ManyToOne,
+  OneToMany,
+  PrimaryKey,
+  Property,
+  type Opt,
+} from '@mikro-orm/core';
+import { Product } from '../../products/entities/product.entity';
+import { Supplier } from '../../suppliers/entities/supplier.entity';
+import { User } from '../../users/entities/user.entity';
+import { Sample } from '../../inspection/entities/sample.entity';
+
+export const LOT_STATUSES = [
+  'on_hold',
+  'inspecting',
+  'awaiting_decision',
+  'accepted',
+  'accepted_on_concession',
+  'rejected',
+  'returned',
+] as const;
+export type LotStatus = (typeof LOT_STATUSES)[number];
+
+/** The plan stored with the lot so later policy changes never rewrite history. */
+export interface StoredSamplingPlan {
+  severity: 'normal' | 'tightened' | 'reduced';
+  level: string;
+  aql: string;
+  codeLetter: string;
+  sampleSize: number;
+  accept: number;
+  reject: number;
+  inspectAll: boolean;
+}
+
+@Entity({ tableName: 'lots' })
+@Index({ properties: ['status', 'receivedAt'] })
+@Index({ properties: ['supplier', 'receivedAt'] })
+export class Lot {
+  @PrimaryKey({ type: 'integer' })
+  id!: number;
+
+  @ManyToOne(() => Product)
+  product!: Product;
+
+  /** Copied from the product so supplier filters and scorecards need no join. */
+  @ManyToOne(() => Supplier)
+  supplier!: Supplier;
+
+  @Property({ type: 'string', length: 64 })
+  @Index()
+  poNumber!: string;
+
+  @Property({ type: 'string', length: 64, nullable: true })
+  packingSlip: string | null = null;
+
+  @Property({ type: 'string', length: 64, nullable: true })
+  supplierLotCode: string | null = null;
+
+  @Property({ type: 'integer' })
+  quantity!: number;
+
+  /** spools, kits, metres, feet … as written on the packing slip. */
+  @Property({ type: 'string', length: 16 })
+  unit!: string;
+
+  @Property({ type: 'datetime' })
+  receivedAt: Opt<Date> = new Date();
+
+  @ManyToOne(() => User)
+  receivedBy!: User;
+
+  @Enum({ items: () => LOT_STATUSES, type: 'string' })
+  status: Opt<LotStatus> = 'on_hold';
+
+  @Property({ type: 'json' })
+  samplingPlan!: StoredSamplingPlan;
+
+  @Property({ type: 'text', nullable: true })
+  notes: string | null = null;
+
+  @OneToMany(() => Sample, (s) => s.lot)
+  samples = new Collection<Sample>(this);
+
+  /** Optimistic lock: a decision on a stale version is refused with 409. */
+  @Property({ type: 'integer', version: true })
+  version!: number;
+
+  @Property({ type: 'datetime' })
+  createdAt: Opt<Date> = new Date();
+
+  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  updatedAt: Opt<Date> = new Date();
+}

@@ -1,0 +1,49 @@
+import { Entity, Enum, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { Product } from './product.entity';
+
+export const CONDUCTOR_PURPOSES = ['power', 'ground', 'remote', 'speaker', 'other'] as const;
+export type ConductorPurpose = (typeof CONDUCTOR_PURPOSES)[number];
+export const CLAIMED_MATERIALS = [
+  'copper',
+  'tinned_copper',
+  'cca10',
+  'cca15',
+  'aluminium',
+] as const;
+export type ClaimedMaterial = (typeof CLAIMED_MATERIALS)[number];
+
+@Entity({ tableName: 'conductor_specs' })
+export class ConductorSpec {
+  @PrimaryKey({ type: 'integer' })
+  id!: number;
+
+  @ManyToOne(() => Product)
+  product!: Product;
+
+  /** Order within the product (a kit lists power first). */
+  @Property({ type: 'integer' })
+  position: Opt<number> = 0;
+
+  @Enum({ items: () => CONDUCTOR_PURPOSES, type: 'string' })
+  purpose!: ConductorPurpose;
+
+  /** Canonical label from parseGauge ("4 AWG", "1/0 AWG", "25 mm²"). */
+  @Property({ type: 'string', length: 32 })
+  gaugeLabel!: string;
+
+  @Property({ type: 'string', length: 8 })
+  gaugeSystem!: 'awg' | 'metric';
+
+  @Property({ type: 'double' })
+  nominalAreaMm2!: number;
+
+  @Enum({ items: () => CLAIMED_MATERIALS, type: 'string' })
+  claimedMaterial!: ClaimedMaterial;
+
+  @Property({ type: 'integer', nullable: true })
+  claimedStrands: number | null = null;
+
+  /** Kept so that a changed product never rewrites the history of old lots. */
+  @Property({ type: 'boolean' })
+  active: Opt<boolean> = true;
+}

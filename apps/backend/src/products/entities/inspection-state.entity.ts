@@ -1,0 +1,27 @@
+import { Entity, OneToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { Product } from './product.entity';
+
+/** ISO 2859-1 switching state of one supplier's product (a product has one supplier). */
+@Entity({ tableName: 'inspection_states' })
+export class InspectionState {
+  @PrimaryKey({ type: 'integer' })
+  id!: number;
+
+  @OneToOne(() => Product, { owner: true, unique: true })
+  product!: Product;
+
+  /** normal | tightened | reduced | discontinued, mirrored from `state` for queries. */
+  @Property({ type: 'string', length: 16 })
+  severity: Opt<string> = 'normal';
+
+  /** Plain JSON state from the standards library's switching rules. */
+  @Property({ type: 'json' })
+  state!: Record<string, unknown>;
+
+  /** Why the state last changed, in words for the QA lead. */
+  @Property({ type: 'text', nullable: true })
+  reason: string | null = null;
+
+  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  updatedAt: Opt<Date> = new Date();
+}

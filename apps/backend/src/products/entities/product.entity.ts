@@ -1,0 +1,63 @@
+import {
+  Collection,
+  Entity,
+  Enum,
+  ManyToOne,
+  OneToMany,
+  PrimaryKey,
+  Property,
+  Unique,
+  type Opt,
+} from '@mikro-orm/core';
+import { Supplier } from '../../suppliers/entities/supplier.entity';
+import { ConductorSpec } from './conductor-spec.entity';
+
+export const PRODUCT_KINDS = ['spool', 'kit'] as const;
+export type ProductKind = (typeof PRODUCT_KINDS)[number];
+
+@Entity({ tableName: 'products' })
+@Unique({ properties: ['supplier', 'sku'] })
+export class Product {
+  @PrimaryKey({ type: 'integer' })
+  id!: number;
+
+  @ManyToOne(() => Supplier)
+  supplier!: Supplier;
+
+  @Property({ type: 'string', length: 64 })
+  sku!: string;
+
+  @Enum({ items: () => PRODUCT_KINDS, type: 'string' })
+  kind!: ProductKind;
+
+  @Property({ type: 'string', length: 300 })
+  description!: string;
+
+  /** Length of cable in one unit (a spool, or the power run of a kit), metres. */
+  @Property({ type: 'double', nullable: true })
+  lengthPerUnitM: number | null = null;
+
+  /** ISO 2859-1 inspection level; S-3 by default because samples are destroyed. */
+  @Property({ type: 'string', length: 8 })
+  inspectionLevel: Opt<string> = 'S-3';
+
+  /** AQL in percent nonconforming, written as in the tables ("1.0"). */
+  @Property({ type: 'string', length: 8 })
+  aql: Opt<string> = '1.0';
+
+  /** Area acceptance: at least 98 % of nominal by default (ASTM B496). */
+  @Property({ type: 'double' })
+  minAreaRatio: Opt<number> = 0.98;
+
+  @Property({ type: 'boolean' })
+  active: Opt<boolean> = true;
+
+  @OneToMany(() => ConductorSpec, (c) => c.product, { orphanRemoval: false })
+  conductors = new Collection<ConductorSpec>(this);
+
+  @Property({ type: 'datetime' })
+  createdAt: Opt<Date> = new Date();
+
+  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  updatedAt: Opt<Date> = new Date();
+}

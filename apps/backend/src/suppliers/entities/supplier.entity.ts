@@ -1,0 +1,32 @@
+import { Entity, Enum, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
+
+export const SUPPLIER_STATUSES = ['approved', 'probation', 'suspended'] as const;
+export type SupplierStatus = (typeof SUPPLIER_STATUSES)[number];
+
+@Entity({ tableName: 'suppliers' })
+export class Supplier {
+  @PrimaryKey({ type: 'integer' })
+  id!: number;
+
+  @Property({ type: 'string', length: 160 })
+  name!: string;
+
+  @Property({ type: 'string', length: 32 })
+  @Unique()
+  code!: string;
+
+  @Property({ type: 'string', length: 254, nullable: true })
+  contactEmail: string | null = null;
+
+  @Enum({ items: () => SUPPLIER_STATUSES, type: 'string' })
+  status: Opt<SupplierStatus> = 'approved';
+
+  @Property({ type: 'text', nullable: true })
+  notes: string | null = null;
+
+  @Property({ type: 'datetime' })
+  createdAt: Opt<Date> = new Date();
+
+  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  updatedAt: Opt<Date> = new Date();
+}

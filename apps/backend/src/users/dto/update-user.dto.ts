@@ -1,0 +1,29 @@
+import { ApiPropertyOptional } from '@nestjs/swagger';
+import { IsBoolean, IsIn, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { ROLES, type Role } from '../../auth/roles';
+
+export class UpdateUserDto {
+  @ApiPropertyOptional()
+  @IsOptional()
+  @IsString()
+  @MinLength(1, { message: 'name cannot be empty' })
+  @MaxLength(120)
+  readonly name?: string;
+
+  @ApiPropertyOptional({ enum: ROLES })
+  @IsOptional()
+  @IsIn(ROLES, { message: `role must be one of ${ROLES.join(', ')}` })
+  readonly role?: Role;
+
+  @ApiPropertyOptional()
+  @IsOptional()
+  @IsBoolean()
+  readonly active?: boolean;
+
+  @ApiPropertyOptional({ minLength: 10, description: 'Sets a new password (reset).' })
+  @IsOptional()
+  @IsString()
+  @MinLength(10, { message: 'password must be at least 10 characters' })
+  @MaxLength(200)
+  readonly password?: string;
+}

@@ -1,0 +1,30 @@
+import { Entity, Enum, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
+import { ROLES, type Role } from '../../auth/roles';
+
+@Entity({ tableName: 'users' })
+export class User {
+  @PrimaryKey({ type: 'integer' })
+  id!: number;
+
+  @Property({ type: 'string', length: 254 })
+  @Unique()
+  email!: string;
+
+  @Property({ type: 'string', length: 120 })
+  name!: string;
+
+  @Property({ type: 'string', length: 100, hidden: true, lazy: true })
+  passwordHash!: string;
+
+  @Enum({ items: () => ROLES, type: 'string' })
+  role!: Role;
+
+  @Property({ type: 'boolean' })
+  active: Opt<boolean> = true;
+
+  @Property({ type: 'datetime' })
+  createdAt: Opt<Date> = new Date();
+
+  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  updatedAt: Opt<Date> = new Date();
+}

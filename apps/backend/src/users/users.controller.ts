@@ -1,0 +1,33 @@
+import { Body, Controller, Get, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import { CurrentUser, Roles } from '../auth/decorators';
+import type { RequestUser } from '../auth/request-user';
+import { CreateUserDto } from './dto/create-user.dto';
+import { UpdateUserDto } from './dto/update-user.dto';
+import { UsersService } from './users.service';
+
+@ApiTags('users')
+@Controller('users')
+@Roles('admin')
+export class UsersController {
+  constructor(private readonly users: UsersService) {}
+
+  @Get()
+  list() {
+    return this.users.list();
+  }
+
+  @Post()
+  create(@Body() dto: CreateUserDto, @CurrentUser() actor: RequestUser) {
+    return this.users.create(dto, actor);
+  }
+
+  @Patch(':id')
+  update(
+    @Param('id', ParseIntPipe) id: number,
+    @Body() dto: UpdateUserDto,
+    @CurrentUser() actor: RequestUser,
+  ) {
+    return this.users.update(id, dto, actor);
+  }
+}

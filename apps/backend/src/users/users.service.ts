@@ -1,0 +1,79 @@
+import { ConflictException, Injectable, UnprocessableEntityException } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/core';
+import bcrypt from 'bcryptjs';
+import { AuditService } from '../audit/audit.service';
+import type { RequestUser } from '../auth/request-user';
+import { CreateUserDto } from './dto/create-user.dto';
+import { UpdateUserDto } from './dto/update-user.dto';
+import { User } from './entities/user.entity';
+
+export function publicUser(u: User) {
+  return {
+    id: u.id,
+    email: u.email,
+    name: u.name,
+    role: u.role,
+    active: u.active,
+    createdAt: u.createdAt,
+  };
+}
+
+@Injectable()
+export class UsersService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly audit: AuditService,
+  ) {}
+
+  async list() {
+    const users = await this.em.find(User, {}, { orderBy: { name: 'asc' } });
+    return users.map(publicUser);
+  }
+
+  async create(dto: CreateUserDto, actor: RequestUser) {
+    const email = dto.email.trim().toLowerCase();
+    if (await this.em.count(User, { email })) {
+      throw new ConflictException(`A user with e-mail ${email} already exists`);
+    }
+    const user = this.em.create(User, {
+      email,
+      name: dto.name.trim(),
+      role: dto.role,
+      passwordHash: await bcrypt.hash(dto.password, 10),
+      active: true,
+    });
+    this.em.persist(user);
+    await this.em.flush();
+    this.audit.record(this.em, actor, {
+      action: 'user.create',
+      entityType: 'user',
+      entityId: user.id,
+      after: publicUser(user),
+    });
+    await this.em.flush();
+    return publicUser(user);
+  }
+
+  async update(id: number, dto: UpdateUserDto, actor: RequestUser) {
+    const user = await this.em.findOneOrFail(User, { id });
+    if (user.id === actor.id && (dto.active === false || (dto.role && dto.role !== 'admin'))) {
+      throw new UnprocessableEntityException(
+        'You cannot deactivate your own account or take away your own admin role',
+      );
+    }
+    const before = publicUser(user);
+    if (dto.name !== undefined) user.name = dto.name.trim();
+    if (dto.role !== undefined) user.role = dto.role;
+    if (dto.active !== undefined) user.active = dto.active;
+    if (dto.password !== undefined) user.passwordHash = await bcrypt.hash(dto.password, 10);
+    this.audit.record(this.em, actor, {
+      action: dto.password !== undefined ? 'user.update+password' : 'user.update',
+      entityType: 'user',
+      entityId: user.id,
+      before,
+      after: publicUser(user),
+    });
+    await this.em.flush();
+    return publicUser(user);
+  }
+}

@@ -1,0 +1,64 @@
+import type { INestApplication } from '@nestjs/common';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import request from 'supertest';
+import { createApp } from '../../src/app.factory';
+import { loadConfig, type AppConfig } from '../../src/config/env';
+import { DEMO_PASSWORD } from '../../src/seed/seed-users';
+
+export const ORIGIN = 'http://127.0.0.1';
+
+export interface TestApp {
+  app: INestApplication;
+  http: ReturnType<typeof request>;
+  config: AppConfig;
+  dir: string;
+  /** Bearer token of a demo user, by e-mail. */
+  token(email: string): Promise<string>;
+  close(): Promise<void>;
+}
+
+/** Boots the real application on a fresh SQLite file in a scratch folder. */
+export async function startTestApp(env: Record<string, string> = {}): Promise<TestApp> {
+  const dir = mkdtempSync(join(tmpdir(), 'gp-test-'));
+  const config = loadConfig({
+    PORT: '3999',
+    DB_PATH: join(dir, 'test.sqlite'),
+    UPLOAD_DIR: join(dir, 'uploads'),
+    JWT_SECRET: 'test-secret-that-is-long-enough',
+    SEED_DEMO: 'true',
+    LOG_LEVEL: 'silent',
+    PUBLIC_URL: ORIGIN,
+    ...env,
+  });
+  const app = await createApp(config);
+  await app.init();
+  const http = request(app.getHttpServer());
+  const tokens = new Map<string, string>();
+  return {
+    app,
+    http,
+    config,
+    dir,
+    async token(email: string) {
+      const known = tokens.get(email);
+      if (known) return known;
+      const res = await http.post('/api/auth/login').send({ email, password: DEMO_PASSWORD });
+      if (res.status !== 200) throw new Error(`login ${email}: ${res.status}`);
+      tokens.set(email, res.body.accessToken as string);
+      return res.body.accessToken as string;
+    },
+    async close() {
+      await app.close();
+      rmSync(dir, { recursive: true, force: true });
+    },
+  };
+}
+
+export const DEMO = {
+  clerk: 'clerk@demo.example',
+  qa: 'qa@demo.example',
+  buyer: 'buyer@demo.example',
+  admin: 'admin@demo.example',
+} as const;
