@@ -10,6 +10,12 @@ export interface MeasuresAs {
   ratio: number;
 }
 
+/** ln of every nominal area, computed once: measuresAs runs on every keystroke. */
+const LOG_AREAS: Record<GaugeSystem, readonly number[]> = {
+  awg: AWG_SIZES.map((g) => Math.log(g.nominalAreaMm2)),
+  metric: METRIC_SIZES.map((g) => Math.log(g.nominalAreaMm2)),
+};
+
 /** The standard sizes of a system, thickest first for AWG, smallest first for metric. */
 export function standardSizes(system: GaugeSystem): readonly Gauge[] {
   if (system === 'awg') return AWG_SIZES;
@@ -27,16 +33,14 @@ export function standardSizes(system: GaugeSystem): readonly Gauge[] {
  */
 export function measuresAs(areaMm2: number, system: GaugeSystem = 'awg'): MeasuresAs {
   const area = requirePositive('areaMm2', areaMm2);
-  let best: Gauge | undefined;
-  let bestDistance = Infinity;
-  for (const gauge of standardSizes(system)) {
-    const distance = Math.abs(Math.log(area / gauge.nominalAreaMm2));
-    if (distance < bestDistance) {
-      best = gauge;
-      bestDistance = distance;
-    }
+  const sizes = standardSizes(system);
+  const logAreas = LOG_AREAS[system];
+  const logArea = Math.log(area);
+  let bestIndex = 0;
+  for (let i = 1; i < sizes.length; i += 1) {
+    if (Math.abs(logArea - logAreas[i]) < Math.abs(logArea - logAreas[bestIndex])) bestIndex = i;
   }
-  const gauge = best as Gauge;
+  const gauge = sizes[bestIndex];
   return { gauge, ratio: area / gauge.nominalAreaMm2 };
 }
 

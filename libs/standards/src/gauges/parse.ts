@@ -1,7 +1,10 @@
 import { StandardsInputError } from '../errors.js';
-import { AWG_MAX, awgGauge } from './awg.js';
-import { metricGauge } from './metric.js';
+import { AWG_MAX, AWG_SIZES, awgGauge } from './awg.js';
+import { METRIC_SIZES, metricGauge } from './metric.js';
 import type { Gauge } from './types.js';
+
+/** Canonical labels map straight to the shared, frozen size objects. */
+const CANONICAL = new Map<string, Gauge>([...AWG_SIZES, ...METRIC_SIZES].map((g) => [g.label, g]));
 
 const AWG_SUFFIX = /\s*(?:awg|a\.w\.g\.?|ga\.?|gauge|gage)$/;
 const METRIC_SUFFIX = /^(\d+(?:[.,]\d+)?)\s*(?:mm²|mm2|mm\^2|sq\.?\s*mm|sqmm|mm sq\.?)$/;
@@ -9,10 +12,13 @@ const METRIC_SUFFIX = /^(\d+(?:[.,]\d+)?)\s*(?:mm²|mm2|mm\^2|sq\.?\s*mm|sqmm|mm
 /**
  * Reads a size the way the trade writes it: `4`, `4 AWG`, `4 ga`, `4 Gauge`, `#4`, `4AWG`,
  * `1/0`, `0`, `00`, `000`, `0000`, `2/0 AWG`, `25 mm²`, `25 mm2`, `25 sq mm`, `2,5 mm²`.
- * Returns the canonical standard size; anything else throws `StandardsInputError('label')`.
+ * Returns the canonical standard size (a shared, frozen object); anything else throws
+ * `StandardsInputError('label')`.
  * SAE sizes are refused on purpose: an SAE "4" is not an AWG 4 (REFERENCE §1, SAE J1127).
  */
 export function parseGauge(label: string): Gauge {
+  const known = typeof label === 'string' ? CANONICAL.get(label) : undefined;
+  if (known !== undefined) return known;
   if (typeof label !== 'string' || label.trim() === '') {
     throw new StandardsInputError('label', 'Enter a size such as "4 AWG", "1/0" or "25 mm²".');
   }
@@ -24,7 +30,10 @@ export function parseGauge(label: string): Gauge {
     );
   }
   const metric = METRIC_SUFFIX.exec(text);
-  if (metric) return metricGauge(Number(metric[1].replace(',', '.')));
+  if (metric) {
+    const gauge = metricGauge(Number(metric[1].replace(',', '.')));
+    return CANONICAL.get(gauge.label) ?? gauge;
+  }
 
   const n = awgNumberOf(
     text
@@ -38,7 +47,8 @@ export function parseGauge(label: string): Gauge {
       `"${label}" is not a size we know. Write it like "4 AWG", "1/0 AWG" or "25 mm²".`,
     );
   }
-  return awgGauge(n);
+  const gauge = awgGauge(n);
+  return CANONICAL.get(gauge.label) ?? gauge;
 }
 
 /** The B258 gauge number for `4`, `1/0`, `0`, `00` …, or undefined. */
