@@ -13,9 +13,10 @@ import type { AppConfig } from './config/env';
 import { ormOptions } from './database/orm-options';
 import { HealthModule } from './health/health.module';
 import { UsersModule } from './users/users.module';
+import { InspectionModule } from './inspection/inspection.module';
 
 /** Domain modules; each later domain adds its module here. */
-const DOMAIN_MODULES = [AuditModule, AuthModule, UsersModule, HealthModule];
+const DOMAIN_MODULES = [AuditModule, AuthModule, UsersModule, HealthModule, InspectionModule];
 
 function requestId(req: IncomingMessage): string {
   const given = req.headers['x-request-id'];
