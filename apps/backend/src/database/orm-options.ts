@@ -1,11 +1,9 @@
 import type { Options } from '@mikro-orm/core';
 import type { AppConfig } from '../config/env';
-import { sqliteOptions } from './mikro-orm.config';
+import { postgresOptions } from './postgres.config';
+import { sqliteOptions } from './sqlite.config';
 
-/** The ORM options for this configuration: SQLite by default. */
+/** The ORM options for this configuration: PostgreSQL when DB_URL is set, else SQLite. */
 export function ormOptions(config: AppConfig): Options {
-  if (config.dbUrl) {
-    throw new Error('DB_URL (PostgreSQL) is not supported yet; unset it to use SQLite');
-  }
-  return sqliteOptions(config.dbPath);
+  return config.dbUrl ? postgresOptions(config.dbUrl) : sqliteOptions(config.dbPath);
 }

@@ -30,8 +30,8 @@ export function sqliteOptions(dbPath: string): Options {
       transactional: true,
       allOrNothing: true,
       snapshot: false,
-      path: 'apps/backend/src/migrations',
-      pathTs: 'apps/backend/src/migrations',
+      path: 'apps/backend/src/migrations/sqlite',
+      pathTs: 'apps/backend/src/migrations/sqlite',
       emit: 'ts',
     },
     pool: {

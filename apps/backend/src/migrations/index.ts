@@ -1,7 +1,16 @@
 import type { MigrationObject } from '@mikro-orm/core';
-import { Migration20261201224334 } from './Migration20261201224334';
+import { Migration20261201225022 } from './postgresql/Migration20261201225022';
+import { Migration20261201224334 } from './sqlite/Migration20261201224334';
 
-/** SQLite migrations in order; listed in code so the built server needs no globbing. */
+/**
+ * Migrations per driver, in order, each driver in its own folder; listed in code so the
+ * built server needs no globbing. `test/migrations.e2e-spec.ts` checks that each set
+ * builds exactly the schema the entities describe.
+ */
 export const SQLITE_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261201224334', class: Migration20261201224334 },
+];
+
+export const POSTGRES_MIGRATIONS: MigrationObject[] = [
+  { name: 'Migration20261201225022', class: Migration20261201225022 },
 ];

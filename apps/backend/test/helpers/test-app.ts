@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
 import { createApp } from '../../src/app.factory';
+import { createScratchDatabase } from '../../src/database/pg-scratch';
 import { loadConfig, type AppConfig } from '../../src/config/env';
 import { DEMO_PASSWORD } from '../../src/seed/seed-users';
 
@@ -22,7 +23,11 @@ export interface TestApp {
 /** Boots the real application on a fresh SQLite file in a scratch folder. */
 export async function startTestApp(env: Record<string, string> = {}): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'gp-test-'));
+  // The PostgreSQL pass of the suite (npm run test:pg) gives each app its own database.
+  const pgAdmin = process.env.TEST_PG_ADMIN_URL;
+  const pg = pgAdmin ? await createScratchDatabase(pgAdmin, 'gp_test') : null;
   const config = loadConfig({
+    ...(pg ? { DB_URL: pg.url } : {}),
     PORT: '3999',
     DB_PATH: join(dir, 'test.sqlite'),
     UPLOAD_DIR: join(dir, 'uploads'),
@@ -51,6 +56,7 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
     },
     async close() {
       await app.close();
+      await pg?.drop();
       rmSync(dir, { recursive: true, force: true });
     },
   };

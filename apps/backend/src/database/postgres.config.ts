@@ -1,0 +1,28 @@
+import { defineConfig as definePostgres } from '@mikro-orm/postgresql';
+import { Migrator } from '@mikro-orm/migrations';
+import { ReflectMetadataProvider, type Options } from '@mikro-orm/core';
+import { ENTITIES } from './entities';
+import { POSTGRES_MIGRATIONS } from '../migrations';
+
+/** PostgreSQL, for a business that outgrows one machine: same entities, own migrations. */
+export function postgresOptions(dbUrl: string): Options {
+  return definePostgres({
+    clientUrl: dbUrl,
+    entities: ENTITIES,
+    metadataProvider: ReflectMetadataProvider,
+    extensions: [Migrator],
+    forceUtcTimezone: true,
+    allowGlobalContext: false,
+    debug: false,
+    pool: { min: 1, max: 10 },
+    migrations: {
+      migrationsList: POSTGRES_MIGRATIONS,
+      transactional: true,
+      allOrNothing: true,
+      snapshot: false,
+      path: 'apps/backend/src/migrations/postgresql',
+      pathTs: 'apps/backend/src/migrations/postgresql',
+      emit: 'ts',
+    },
+  });
+}
