@@ -8,6 +8,7 @@ import { Toaster } from '@/components/toaster';
 import { AuthProvider } from '@/features/auth/auth-context';
 import { meQueryKey } from '@/features/auth/api/get-me';
 import { createQueryClient } from '@/lib/query-client';
+import { UnitsProvider } from '@/lib/units';
 
 export function AppProvider({ children }: { children: ReactNode }) {
   const [queryClient] = useState(() =>
@@ -27,7 +28,9 @@ export function AppProvider({ children }: { children: ReactNode }) {
         )}
       >
         <QueryClientProvider client={queryClient}>
-          <AuthProvider>{children}</AuthProvider>
+          <AuthProvider>
+            <UnitsProvider>{children}</UnitsProvider>
+          </AuthProvider>
           <Toaster />
         </QueryClientProvider>
       </ErrorBoundary>

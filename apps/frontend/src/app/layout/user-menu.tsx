@@ -1,14 +1,26 @@
 import AccountCircleOutlined from '@mui/icons-material/AccountCircleOutlined';
 import Logout from '@mui/icons-material/Logout';
-import { Box, Button, Divider, ListItemIcon, Menu, MenuItem, Typography } from '@mui/material';
+import {
+  Box,
+  Button,
+  Divider,
+  ListItemIcon,
+  Menu,
+  MenuItem,
+  ToggleButton,
+  ToggleButtonGroup,
+  Typography,
+} from '@mui/material';
 import { useState } from 'react';
 import { useAuth, useSessionUser } from '@/features/auth/auth-context';
 import { roleLabels } from '@/lib/roles';
+import { useUnits, type UnitSystem } from '@/lib/units';
 
 export function UserMenu() {
   const user = useSessionUser();
   const { signOut, signingOut } = useAuth();
   const [anchor, setAnchor] = useState<HTMLElement | null>(null);
+  const { system, setSystem } = useUnits();
 
   return (
     <>
@@ -42,6 +54,22 @@ export function UserMenu() {
           >
             {roleLabels[user.role]}
           </Typography>
+        </Box>
+        <Divider />
+        <Box sx={{ px: 2, py: 1 }}>
+          <Typography variant="caption" color="text.secondary" component="div" id="units-label">
+            Units
+          </Typography>
+          <ToggleButtonGroup
+            size="small"
+            exclusive
+            value={system}
+            aria-labelledby="units-label"
+            onChange={(_event, next: UnitSystem | null) => next && setSystem(next)}
+          >
+            <ToggleButton value="metric">mm · g · mm²</ToggleButton>
+            <ToggleButton value="imperial">in · lb · cmil</ToggleButton>
+          </ToggleButtonGroup>
         </Box>
         <Divider />
         <MenuItem
