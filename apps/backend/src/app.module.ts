@@ -9,14 +9,26 @@ import type { IncomingMessage } from 'node:http';
 import { AuditModule } from './audit/audit.module';
 import { AuthModule } from './auth/auth.module';
 import { ConfigModule } from './config/config.module';
+import { DecisionsModule } from './decisions/decisions.module';
 import type { AppConfig } from './config/env';
 import { ormOptions } from './database/orm-options';
 import { HealthModule } from './health/health.module';
 import { UsersModule } from './users/users.module';
 import { InspectionModule } from './inspection/inspection.module';
+import { ScorecardsModule } from './scorecards/scorecards.module';
+import { InstrumentsModule } from './instruments/instruments.module';
 
 /** Domain modules; each later domain adds its module here. */
-const DOMAIN_MODULES = [AuditModule, AuthModule, UsersModule, HealthModule, InspectionModule];
+const DOMAIN_MODULES = [
+  AuditModule,
+  AuthModule,
+  UsersModule,
+  HealthModule,
+  InstrumentsModule,
+  InspectionModule,
+  ScorecardsModule,
+  DecisionsModule,
+];
 
 function requestId(req: IncomingMessage): string {
   const given = req.headers['x-request-id'];

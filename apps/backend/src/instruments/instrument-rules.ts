@@ -1,0 +1,79 @@
+import { daysBetween, isCalendarDate, isoDate } from '../common/calendar';
+import type { Instrument, InstrumentKind } from './entities/instrument.entity';
+
+export const RESOLUTION_UNITS = ['g', 'mm', 'ohm', 'mohm', 'degC'] as const;
+export type ResolutionUnit = (typeof RESOLUTION_UNITS)[number];
+
+/** What each kind of instrument can read in (common practice, no source). */
+export const UNITS_BY_KIND: Record<InstrumentKind, readonly ResolutionUnit[]> = {
+  balance: ['g'],
+  micrometer: ['mm'],
+  caliper: ['mm'],
+  length_rule: ['mm'],
+  milliohm_meter: ['ohm', 'mohm'],
+  thermometer: ['degC'],
+};
+
+/** "Due soon" means due within 14 days (docs/api-conventions.md; common practice, no source). */
+export const DUE_SOON_DAYS = 14;
+
+export const KIND_NAMES: Record<InstrumentKind, string> = {
+  balance: 'Balance',
+  micrometer: 'Micrometer',
+  caliper: 'Caliper',
+  length_rule: 'Length rule',
+  milliohm_meter: 'Milliohm meter',
+  thermometer: 'Thermometer',
+};
+
+export type CalibrationStatus = 'ok' | 'due_soon' | 'overdue';
+
+/** Overdue once the due date has passed; an instrument is still usable on its due date. */
+export function calibrationStatus(dueOn: string, today: string): CalibrationStatus {
+  const days = daysBetween(today, dueOn);
+  if (days < 0) return 'overdue';
+  return days <= DUE_SOON_DAYS ? 'due_soon' : 'ok';
+}
+
+export function instrumentView(i: Instrument, now = new Date()) {
+  const today = isoDate(now);
+  return {
+    id: i.id,
+    kind: i.kind,
+    name: i.name,
+    serial: i.serial,
+    resolution: i.resolution,
+    resolutionUnit: i.resolutionUnit,
+    calibratedOn: i.calibratedOn,
+    calibrationDueOn: i.calibrationDueOn,
+    active: i.active,
+    calibrationStatus: calibrationStatus(i.calibrationDueOn, today),
+    daysToDue: daysBetween(today, i.calibrationDueOn),
+    createdAt: i.createdAt,
+    updatedAt: i.updatedAt,
+  };
+}
+export type InstrumentView = ReturnType<typeof instrumentView>;
+
+/** Field messages for an instrument as a whole (after a create or a patch), [] when fine. */
+export function instrumentProblems(i: {
+  kind: InstrumentKind;
+  resolutionUnit: string;
+  calibratedOn: string;
+  calibrationDueOn: string;
+}): string[] {
+  const problems: string[] = [];
+  const units = UNITS_BY_KIND[i.kind];
+  if (!(units as readonly string[]).includes(i.resolutionUnit)) {
+    problems.push(
+      `resolutionUnit of a ${KIND_NAMES[i.kind].toLowerCase()} must be ${units.join(' or ')}`,
+    );
+  }
+  if (!isCalendarDate(i.calibratedOn)) problems.push('calibratedOn is not a real date');
+  if (!isCalendarDate(i.calibrationDueOn)) {
+    problems.push('calibrationDueOn is not a real date');
+  } else if (i.calibrationDueOn <= i.calibratedOn) {
+    problems.push('calibrationDueOn must be after calibratedOn');
+  }
+  return problems;
+}

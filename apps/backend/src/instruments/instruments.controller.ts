@@ -1,0 +1,43 @@
+import { Body, Controller, Get, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import { CurrentUser, Roles } from '../auth/decorators';
+import type { RequestUser } from '../auth/request-user';
+import { ALL_ROLES } from '../auth/roles';
+import { CreateInstrumentDto } from './dto/create-instrument.dto';
+import { ListInstrumentsDto } from './dto/list-instruments.dto';
+import { UpdateInstrumentDto } from './dto/update-instrument.dto';
+import { InstrumentsService } from './instruments.service';
+
+@ApiTags('instruments')
+@Controller('instruments')
+export class InstrumentsController {
+  constructor(private readonly instruments: InstrumentsService) {}
+
+  @Get()
+  @Roles(...ALL_ROLES)
+  list(@Query() query: ListInstrumentsDto) {
+    return this.instruments.list(query);
+  }
+
+  @Get(':id')
+  @Roles(...ALL_ROLES)
+  get(@Param('id', ParseIntPipe) id: number) {
+    return this.instruments.get(id);
+  }
+
+  @Post()
+  @Roles('qa_lead', 'admin')
+  create(@Body() dto: CreateInstrumentDto, @CurrentUser() actor: RequestUser) {
+    return this.instruments.create(dto, actor);
+  }
+
+  @Patch(':id')
+  @Roles('qa_lead', 'admin')
+  update(
+    @Param('id', ParseIntPipe) id: number,
+    @Body() dto: UpdateInstrumentDto,
+    @CurrentUser() actor: RequestUser,
+  ) {
+    return this.instruments.update(id, dto, actor);
+  }
+}

@@ -1,0 +1,149 @@
+import {
+  BadRequestException,
+  ConflictException,
+  Injectable,
+  UnprocessableEntityException,
+} from '@nestjs/common';
+import { EntityManager, type FilterQuery } from '@mikro-orm/core';
+import { AuditService } from '../audit/audit.service';
+import type { RequestUser } from '../auth/request-user';
+import { addDays, isoDate } from '../common/calendar';
+import { paging, parseSort, type Page } from '../common/paging';
+import { CreateInstrumentDto } from './dto/create-instrument.dto';
+import { ListInstrumentsDto } from './dto/list-instruments.dto';
+import { UpdateInstrumentDto } from './dto/update-instrument.dto';
+import { Instrument } from './entities/instrument.entity';
+import {
+  instrumentProblems,
+  instrumentView,
+  KIND_NAMES,
+  type InstrumentView,
+} from './instrument-rules';
+
+const SORTS = ['name', 'kind', 'serial', 'calibrationDueOn'] as const;
+
+/**
+ * Refuses instruments that may not be used on `on`: unknown, retired or past their
+ * calibration due date (ISO 9001 7.1.5: measuring equipment must be fit for its purpose).
+ * Returns the instruments in the order of `ids`. Usable with any EntityManager, so a
+ * reading can check inside its own unit of work.
+ */
+export async function assertUsableInstruments(
+  em: EntityManager,
+  ids: readonly number[],
+  on: Date,
+): Promise<Instrument[]> {
+  const unique = [...new Set(ids)];
+  const found = unique.length ? await em.find(Instrument, { id: { $in: unique } }) : [];
+  const byId = new Map(found.map((i) => [i.id, i]));
+  const day = isoDate(on);
+  const problems: string[] = [];
+  for (const id of unique) {
+    const i = byId.get(id);
+    if (!i) {
+      problems.push(`Instrument #${id} is not in the instrument register.`);
+      continue;
+    }
+    const label = `${KIND_NAMES[i.kind]} '${i.name}' (serial ${i.serial})`;
+    if (!i.active) {
+      problems.push(`${label} is retired; readings with it are refused.`);
+    } else if (i.calibrationDueOn < day) {
+      problems.push(
+        `${label} was due for calibration on ${i.calibrationDueOn}; readings with it are refused until it is recalibrated.`,
+      );
+    }
+  }
+  if (problems.length) throw new UnprocessableEntityException(problems.join(' '));
+  return ids.map((id) => byId.get(id) as Instrument);
+}
+
+@Injectable()
+export class InstrumentsService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly audit: AuditService,
+  ) {}
+
+  /** See assertUsableInstruments; uses this request's EntityManager. */
+  assertUsable(ids: readonly number[], on: Date = new Date()): Promise<Instrument[]> {
+    return assertUsableInstruments(this.em, ids, on);
+  }
+
+  async list(q: ListInstrumentsDto): Promise<Page<InstrumentView>> {
+    const { page, pageSize, offset } = paging(q);
+    const [field, dir] = parseSort(q.sort, SORTS, ['name', 'asc']);
+    const where: FilterQuery<Instrument> = {};
+    if (q.kind) where.kind = q.kind;
+    if (q.active !== undefined) where.active = q.active;
+    if (q.dueWithinDays !== undefined) {
+      where.calibrationDueOn = { $lte: addDays(isoDate(new Date()), q.dueWithinDays) };
+    }
+    const [rows, total] = await this.em.findAndCount(Instrument, where, {
+      orderBy: { [field]: dir, id: 'asc' },
+      limit: pageSize,
+      offset,
+    });
+    return { items: rows.map((i) => instrumentView(i)), total, page, pageSize };
+  }
+
+  async get(id: number): Promise<InstrumentView> {
+    return instrumentView(await this.em.findOneOrFail(Instrument, { id }));
+  }
+
+  async create(dto: CreateInstrumentDto, actor: RequestUser): Promise<InstrumentView> {
+    const fields = { ...dto, name: dto.name.trim(), serial: dto.serial.trim() };
+    this.check(fields);
+    await this.assertSerialFree(fields.serial);
+    const instrument = this.em.create(Instrument, fields);
+    await this.em.flush();
+    this.audit.record(this.em, actor, {
+      action: 'instrument.create',
+      entityType: 'instrument',
+      entityId: instrument.id,
+      after: instrumentView(instrument),
+    });
+    await this.em.flush();
+    return instrumentView(instrument);
+  }
+
+  async update(id: number, dto: UpdateInstrumentDto, actor: RequestUser) {
+    const instrument = await this.em.findOneOrFail(Instrument, { id });
+    const before = instrumentView(instrument);
+    const next = {
+      kind: dto.kind ?? instrument.kind,
+      resolutionUnit: dto.resolutionUnit ?? instrument.resolutionUnit,
+      calibratedOn: dto.calibratedOn ?? instrument.calibratedOn,
+      calibrationDueOn: dto.calibrationDueOn ?? instrument.calibrationDueOn,
+    };
+    this.check(next);
+    const serial = dto.serial?.trim();
+    if (serial !== undefined && serial !== instrument.serial) await this.assertSerialFree(serial);
+    const given = Object.fromEntries(Object.entries(dto).filter(([, v]) => v !== undefined));
+    this.em.assign(instrument, {
+      ...given,
+      ...next,
+      ...(dto.name !== undefined ? { name: dto.name.trim() } : {}),
+      ...(serial !== undefined ? { serial } : {}),
+    });
+    this.audit.record(this.em, actor, {
+      action: 'instrument.update',
+      entityType: 'instrument',
+      entityId: instrument.id,
+      before,
+      after: instrumentView(instrument),
+    });
+    await this.em.flush();
+    return instrumentView(instrument);
+  }
+
+  private check(i: Parameters<typeof instrumentProblems>[0]): void {
+    const problems = instrumentProblems(i);
+    if (problems.length) throw new BadRequestException(problems);
+  }
+
+  private async assertSerialFree(serial: string): Promise<void> {
+    if (await this.em.count(Instrument, { serial })) {
+      throw new ConflictException(`An instrument with serial ${serial} is already registered`);
+    }
+  }
+}
