@@ -8,7 +8,8 @@ export default mergeConfig(
   defineConfig({
     test: {
       include: ['test/**/*.e2e-spec.ts', 'test/**/*.pg-spec.ts'],
-      exclude: ['test/migrations.e2e-spec.ts'],
+      // SQLite-only checks: the migration comparison and the SQLite backup tool.
+      exclude: ['test/migrations.e2e-spec.ts', 'test/backup.e2e-spec.ts'],
     },
   }),
 );

@@ -1,4 +1,4 @@
-import { DynamicModule, Module } from '@nestjs/common';
+import { DynamicModule, Module, RequestMethod } from '@nestjs/common';
 import { DiscoveryModule } from '@nestjs/core';
 import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { ServeStaticModule } from '@nestjs/serve-static';
@@ -17,6 +17,7 @@ import { UsersModule } from './users/users.module';
 import { InspectionModule } from './inspection/inspection.module';
 import { ScorecardsModule } from './scorecards/scorecards.module';
 import { InstrumentsModule } from './instruments/instruments.module';
+import { SuppliersModule } from './suppliers/suppliers.module';
 
 /** Domain modules; each later domain adds its module here. */
 const DOMAIN_MODULES = [
@@ -25,6 +26,7 @@ const DOMAIN_MODULES = [
   UsersModule,
   HealthModule,
   InstrumentsModule,
+  SuppliersModule,
   InspectionModule,
   ScorecardsModule,
   DecisionsModule,
@@ -52,6 +54,7 @@ export class AppModule {
         ConfigModule.forRoot(config),
         DiscoveryModule,
         LoggerModule.forRoot({
+          forRoutes: [{ path: '{*splat}', method: RequestMethod.ALL }],
           pinoHttp: {
             level: config.logLevel,
             genReqId: requestId,
