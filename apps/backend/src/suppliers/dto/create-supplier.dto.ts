@@ -1,0 +1,46 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import {
+  IsEmail,
+  IsIn,
+  IsOptional,
+  IsString,
+  Matches,
+  MaxLength,
+  MinLength,
+  ValidateIf,
+} from 'class-validator';
+import { SUPPLIER_STATUSES, type SupplierStatus } from '../entities/supplier.entity';
+
+export class CreateSupplierDto {
+  @ApiProperty({ example: 'Northbank Cable Works' })
+  @IsString()
+  @MinLength(1, { message: 'name is required' })
+  @MaxLength(160, { message: 'name must be at most 160 characters' })
+  readonly name: string;
+
+  @ApiProperty({ example: 'NBCW', description: 'Short unique code (letters, digits, - and _)' })
+  @IsString()
+  @Matches(/^[A-Za-z0-9][A-Za-z0-9_-]{0,31}$/, {
+    message: 'code must be 1 to 32 letters, digits, - or _',
+  })
+  readonly code: string;
+
+  @ApiPropertyOptional({ example: 'quality@northbank.example', nullable: true })
+  @IsOptional()
+  @ValidateIf((_o, v) => v !== null)
+  @IsEmail({}, { message: 'contactEmail must be an e-mail address' })
+  @MaxLength(254)
+  readonly contactEmail?: string | null;
+
+  @ApiPropertyOptional({ enum: SUPPLIER_STATUSES, default: 'approved' })
+  @IsOptional()
+  @IsIn(SUPPLIER_STATUSES, { message: `status must be one of ${SUPPLIER_STATUSES.join(', ')}` })
+  readonly status?: SupplierStatus;
+
+  @ApiPropertyOptional({ nullable: true })
+  @IsOptional()
+  @ValidateIf((_o, v) => v !== null)
+  @IsString()
+  @MaxLength(4000, { message: 'notes must be at most 4000 characters' })
+  readonly notes?: string | null;
+}
