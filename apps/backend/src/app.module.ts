@@ -9,13 +9,11 @@ import type { IncomingMessage } from 'node:http';
 import { AuditModule } from './audit/audit.module';
 import { AuthModule } from './auth/auth.module';
 import { ConfigModule } from './config/config.module';
-import { DecisionsModule } from './decisions/decisions.module';
 import type { AppConfig } from './config/env';
 import { ormOptions } from './database/orm-options';
 import { HealthModule } from './health/health.module';
 import { UsersModule } from './users/users.module';
 import { InspectionModule } from './inspection/inspection.module';
-import { ScorecardsModule } from './scorecards/scorecards.module';
 import { InstrumentsModule } from './instruments/instruments.module';
 import { SuppliersModule } from './suppliers/suppliers.module';
 
@@ -28,8 +26,6 @@ const DOMAIN_MODULES = [
   InstrumentsModule,
   SuppliersModule,
   InspectionModule,
-  ScorecardsModule,
-  DecisionsModule,
 ];
 
 function requestId(req: IncomingMessage): string {
