@@ -18,6 +18,7 @@ export function postgresOptions(dbUrl: string): Options {
     migrations: {
       migrationsList: POSTGRES_MIGRATIONS,
       transactional: true,
+      silent: true,
       allOrNothing: true,
       snapshot: false,
       path: 'apps/backend/src/migrations/postgresql',

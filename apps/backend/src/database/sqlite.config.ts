@@ -28,6 +28,7 @@ export function sqliteOptions(dbPath: string): Options {
     migrations: {
       migrationsList: SQLITE_MIGRATIONS,
       transactional: true,
+      silent: true,
       allOrNothing: true,
       snapshot: false,
       path: 'apps/backend/src/migrations/sqlite',
