@@ -14,6 +14,7 @@ import { ormOptions } from './database/orm-options';
 import { HealthModule } from './health/health.module';
 import { UsersModule } from './users/users.module';
 import { InspectionModule } from './inspection/inspection.module';
+import { ScorecardsModule } from './scorecards/scorecards.module';
 import { InstrumentsModule } from './instruments/instruments.module';
 import { SuppliersModule } from './suppliers/suppliers.module';
 
@@ -26,6 +27,7 @@ const DOMAIN_MODULES = [
   InstrumentsModule,
   SuppliersModule,
   InspectionModule,
+  ScorecardsModule,
 ];
 
 function requestId(req: IncomingMessage): string {

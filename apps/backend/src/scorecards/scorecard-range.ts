@@ -1,0 +1,83 @@
+import { BadRequestException } from '@nestjs/common';
+import { addDays, isCalendarDate, isoDate } from '../common/calendar';
+
+/** Longest range a scorecard answers: five years of monthly buckets (our choice). */
+export const MAX_RANGE_MONTHS = 60;
+
+export interface MonthBucket {
+  /** `YYYY-MM` */
+  month: string;
+  /** First instant of the bucket (the range start for the first month). */
+  start: Date;
+  /** First instant after the bucket (the day after `to` for the last month). */
+  end: Date;
+}
+
+/**
+ * A received-date range of calendar days, both ends inclusive, read in UTC like every
+ * calendar date of the server (common/calendar.ts): a lot counts when
+ * `from 00:00Z <= receivedAt < (to + 1 day) 00:00Z`.
+ */
+export interface ScorecardRange {
+  from: string;
+  to: string;
+  start: Date;
+  /** Exclusive end: midnight UTC after `to`. */
+  end: Date;
+  months: MonthBucket[];
+}
+
+function utcMidnight(date: string): Date {
+  return new Date(`${date}T00:00:00.000Z`);
+}
+
+function firstOfMonth(year: number, monthIndex: number): Date {
+  return new Date(Date.UTC(year, monthIndex, 1));
+}
+
+/** Default range: the last 12 calendar months, this month included, up to today. */
+export function defaultRange(today: Date): { from: string; to: string } {
+  const from = firstOfMonth(today.getUTCFullYear(), today.getUTCMonth() - 11);
+  return { from: isoDate(from), to: isoDate(today) };
+}
+
+/** Month buckets covering [start, end), each clipped to the range. */
+export function monthBuckets(start: Date, end: Date): MonthBucket[] {
+  const months: MonthBucket[] = [];
+  let cursor = firstOfMonth(start.getUTCFullYear(), start.getUTCMonth());
+  while (cursor < end) {
+    const next = firstOfMonth(cursor.getUTCFullYear(), cursor.getUTCMonth() + 1);
+    months.push({
+      month: isoDate(cursor).slice(0, 7),
+      start: cursor < start ? start : cursor,
+      end: next > end ? end : next,
+    });
+    cursor = next;
+  }
+  return months;
+}
+
+/** Checks `from`/`to` (either may be missing) and builds the range; 400 with field messages. */
+export function resolveRange(
+  from: string | undefined,
+  to: string | undefined,
+  today: Date = new Date(),
+): ScorecardRange {
+  const fallback = defaultRange(today);
+  const fromDate = from ?? (to ? addDays(to, -364) : fallback.from);
+  const toDate = to ?? fallback.to;
+  const errors: string[] = [];
+  if (!isCalendarDate(fromDate)) errors.push('from must be a real calendar date (YYYY-MM-DD)');
+  if (!isCalendarDate(toDate)) errors.push('to must be a real calendar date (YYYY-MM-DD)');
+  if (errors.length) throw new BadRequestException(errors);
+  if (fromDate > toDate) throw new BadRequestException(['from must be on or before to']);
+  const start = utcMidnight(fromDate);
+  const end = utcMidnight(addDays(toDate, 1));
+  const months = monthBuckets(start, end);
+  if (months.length > MAX_RANGE_MONTHS) {
+    throw new BadRequestException([
+      `the range may span at most ${MAX_RANGE_MONTHS} calendar months (got ${months.length})`,
+    ]);
+  }
+  return { from: fromDate, to: toDate, start, end, months };
+}

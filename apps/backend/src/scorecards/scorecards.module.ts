@@ -1,0 +1,13 @@
+import { Module } from '@nestjs/common';
+import { ScorecardExportService } from './scorecard-export.service';
+import { ScorecardsController } from './scorecards.controller';
+import { ScorecardsService } from './scorecards.service';
+import { SupplierDetailQuery } from './supplier-detail.query';
+import { SupplierMetricsQuery } from './supplier-metrics.query';
+
+/** Supplier scorecards: SQL aggregates over lots, readings, SCARs and returns; CSV. */
+@Module({
+  controllers: [ScorecardsController],
+  providers: [ScorecardsService, ScorecardExportService, SupplierMetricsQuery, SupplierDetailQuery],
+})
+export class ScorecardsModule {}
