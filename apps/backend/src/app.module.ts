@@ -17,6 +17,7 @@ import { InspectionModule } from './inspection/inspection.module';
 import { ScorecardsModule } from './scorecards/scorecards.module';
 import { InstrumentsModule } from './instruments/instruments.module';
 import { SuppliersModule } from './suppliers/suppliers.module';
+import { ProductsModule } from './products/products.module';
 
 /** Domain modules; each later domain adds its module here. */
 const DOMAIN_MODULES = [
@@ -26,6 +27,7 @@ const DOMAIN_MODULES = [
   HealthModule,
   InstrumentsModule,
   SuppliersModule,
+  ProductsModule,
   InspectionModule,
   ScorecardsModule,
 ];

@@ -1,0 +1,72 @@
+import { BadRequestException } from '@nestjs/common';
+import type { EntityManager } from '@mikro-orm/core';
+import { parseGauge, StandardsInputError, type Gauge } from '@gaugeproof/standards';
+import type { ConductorDto } from './dto/conductor.dto';
+import { ConductorSpec } from './entities/conductor-spec.entity';
+import type { Product } from './entities/product.entity';
+
+interface ParsedConductor extends ConductorDto {
+  gaugeOf: Gauge;
+}
+
+/**
+ * Reads every label with parseGauge; a label it refuses is a 400 naming the field,
+ * `conductors[1].gauge` (0-based, as the other conductor field messages count).
+ */
+export function parseConductors(list: readonly ConductorDto[]): ParsedConductor[] {
+  const problems: string[] = [];
+  const parsed = list.map((c, i) => {
+    try {
+      return { ...c, gaugeOf: parseGauge(c.gauge) };
+    } catch (e) {
+      if (!(e instanceof StandardsInputError)) throw e;
+      problems.push(`conductors[${i}].gauge: ${e.message}`);
+      return null;
+    }
+  });
+  if (problems.length) throw new BadRequestException(problems);
+  return parsed as ParsedConductor[];
+}
+
+const sameSpec = (spec: ConductorSpec, c: ParsedConductor, position: number) =>
+  spec.active &&
+  spec.position === position &&
+  spec.purpose === c.purpose &&
+  spec.gaugeLabel === c.gaugeOf.label &&
+  spec.claimedMaterial === c.claimedMaterial &&
+  spec.claimedStrands === (c.claimedStrands ?? null);
+
+/**
+ * Makes `list` the product's active conductors. An unchanged spec at the same position is
+ * kept as it is; the others are deactivated, never deleted, since lots and samples point
+ * at them. The product's conductors collection must be loaded.
+ */
+export function replaceConductors(
+  em: EntityManager,
+  product: Product,
+  list: readonly ParsedConductor[],
+): void {
+  const existing = product.conductors.getItems();
+  const kept = new Set<ConductorSpec>();
+  list.forEach((c, position) => {
+    const same = existing.find((s) => !kept.has(s) && sameSpec(s, c, position));
+    if (same) {
+      kept.add(same);
+      return;
+    }
+    const spec = em.create(ConductorSpec, {
+      product,
+      position,
+      purpose: c.purpose,
+      gaugeLabel: c.gaugeOf.label,
+      gaugeSystem: c.gaugeOf.system,
+      nominalAreaMm2: c.gaugeOf.nominalAreaMm2,
+      claimedMaterial: c.claimedMaterial,
+      claimedStrands: c.claimedStrands ?? null,
+      active: true,
+    });
+    product.conductors.add(spec);
+    kept.add(spec);
+  });
+  for (const spec of existing) if (!kept.has(spec)) spec.active = false;
+}

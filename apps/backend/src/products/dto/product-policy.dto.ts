@@ -1,0 +1,37 @@
+import { ApiPropertyOptional } from '@nestjs/swagger';
+import { AQLS, INSPECTION_LEVELS, type Aql, type InspectionLevel } from '@gaugeproof/standards';
+import { IsIn, IsNumber, IsOptional, Max, Min, ValidateIf } from 'class-validator';
+
+/** The inspection policy and unit length of a product, each with its default. */
+export class ProductPolicyDto {
+  @ApiPropertyOptional({ nullable: true, description: 'Metres of cable in one unit' })
+  @IsOptional()
+  @ValidateIf((_o, v) => v !== null)
+  @IsNumber(
+    { allowNaN: false, allowInfinity: false },
+    { message: 'lengthPerUnitM must be a number' },
+  )
+  @Min(0.01, { message: 'lengthPerUnitM must be greater than 0' })
+  @Max(100_000, { message: 'lengthPerUnitM must be at most 100000' })
+  readonly lengthPerUnitM?: number | null;
+
+  @ApiPropertyOptional({ enum: INSPECTION_LEVELS, default: 'S-3' })
+  @IsOptional()
+  @IsIn(INSPECTION_LEVELS, {
+    message: `inspectionLevel must be one of ${INSPECTION_LEVELS.join(', ')}`,
+  })
+  readonly inspectionLevel?: InspectionLevel;
+
+  @ApiPropertyOptional({ enum: AQLS, default: '1.0' })
+  @IsOptional()
+  @IsIn(AQLS, { message: `aql must be one of ${AQLS.join(', ')}` })
+  readonly aql?: Aql;
+
+  /** 0.98 by default (ASTM B496 area tolerance); below 0.5 is no longer a size check. */
+  @ApiPropertyOptional({ minimum: 0.5, maximum: 1, default: 0.98 })
+  @IsOptional()
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'minAreaRatio must be a number' })
+  @Min(0.5, { message: 'minAreaRatio must be from 0.5 to 1.0' })
+  @Max(1, { message: 'minAreaRatio must be from 0.5 to 1.0' })
+  readonly minAreaRatio?: number;
+}

@@ -1,0 +1,42 @@
+import { ApiPropertyOptional } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  IsArray,
+  IsBoolean,
+  IsOptional,
+  IsString,
+  MaxLength,
+  MinLength,
+  ValidateNested,
+} from 'class-validator';
+import { ConductorDto } from './conductor.dto';
+import { ProductPolicyDto } from './product-policy.dto';
+
+/**
+ * Supplier, SKU and kind stay as created (lots are filed under them). `conductors`, when
+ * given, replaces the list; specs that go are kept inactive since lots and samples point at them.
+ */
+export class UpdateProductDto extends ProductPolicyDto {
+  @ApiPropertyOptional()
+  @IsOptional()
+  @IsString({ message: 'description cannot be empty' })
+  @MinLength(1, { message: 'description cannot be empty' })
+  @MaxLength(300, { message: 'description must be at most 300 characters' })
+  readonly description?: string;
+
+  @ApiPropertyOptional({ type: [ConductorDto] })
+  @IsOptional()
+  @IsArray({ message: 'conductors must hold at least one conductor' })
+  @ArrayMinSize(1, { message: 'conductors must hold at least one conductor' })
+  @ArrayMaxSize(12, { message: 'conductors can hold at most 12 conductors' })
+  @ValidateNested({ each: true })
+  @Type(() => ConductorDto)
+  readonly conductors?: ConductorDto[];
+
+  @ApiPropertyOptional()
+  @IsOptional()
+  @IsBoolean({ message: 'active must be true or false' })
+  readonly active?: boolean;
+}

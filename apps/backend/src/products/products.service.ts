@@ -1,0 +1,158 @@
+import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/core';
+import type { SqlEntityManager } from '@mikro-orm/sqlite';
+import { initialInspectionState } from '@gaugeproof/standards';
+import { AuditService } from '../audit/audit.service';
+import type { RequestUser } from '../auth/request-user';
+import { likePattern, paging, parseSort, type Page } from '../common/paging';
+import { Supplier } from '../suppliers/entities/supplier.entity';
+import { parseConductors, replaceConductors } from './conductor-specs';
+import { CreateProductDto } from './dto/create-product.dto';
+import { ListProductsDto } from './dto/list-products.dto';
+import { UpdateProductDto } from './dto/update-product.dto';
+import { InspectionState } from './entities/inspection-state.entity';
+import { Product } from './entities/product.entity';
+import { productView, type ProductView } from './product-view';
+import { planForLot, type PlanAnswer } from './sampling-plan';
+
+const SORTS = ['sku', 'description', 'kind', 'supplier', 'createdAt'] as const;
+const SORT_COLUMNS: Record<(typeof SORTS)[number], string> = {
+  sku: 'p.sku',
+  description: 'p.description',
+  kind: 'p.kind',
+  supplier: 's.name',
+  createdAt: 'p.createdAt',
+};
+
+@Injectable()
+export class ProductsService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly audit: AuditService,
+  ) {}
+
+  async list(q: ListProductsDto): Promise<Page<ProductView>> {
+    const { page, pageSize, offset } = paging(q);
+    const [field, dir] = parseSort(q.sort, SORTS, ['sku', 'asc']);
+    const qb = (this.em as SqlEntityManager)
+      .createQueryBuilder(Product, 'p')
+      .select('p.*')
+      .join('p.supplier', 's');
+    if (q.supplierId) qb.andWhere({ supplier: q.supplierId });
+    if (q.kind) qb.andWhere({ kind: q.kind });
+    if (q.active !== undefined) qb.andWhere({ active: q.active });
+    if (q.q?.trim()) {
+      const p = likePattern(q.q);
+      qb.andWhere(
+        `(lower(p.sku) like ? escape '\\' or lower(p.description) like ? escape '\\' or lower(s.name) like ? escape '\\')`,
+        [p, p, p],
+      );
+    }
+    const total = await qb.clone().getCount('p.id');
+    const rows = await qb
+      .orderBy({ [SORT_COLUMNS[field]]: dir, 'p.id': 'asc' })
+      .limit(pageSize)
+      .offset(offset)
+      .getResultList();
+    await this.em.populate(rows, ['supplier', 'conductors']);
+    const states = await this.statesOf(rows);
+    return {
+      items: rows.map((p) => productView(p, states.get(p.id) ?? null)),
+      total,
+      page,
+      pageSize,
+    };
+  }
+
+  async get(id: number): Promise<ProductView> {
+    const product = await this.load(id);
+    return productView(product, await this.stateOf(product));
+  }
+
+  async samplingPlan(id: number, quantity: number): Promise<PlanAnswer> {
+    const product = await this.load(id);
+    return planForLot(product, await this.stateOf(product), quantity);
+  }
+
+  async create(dto: CreateProductDto, actor: RequestUser): Promise<ProductView> {
+    const conductors = parseConductors(dto.conductors);
+    const supplier = await this.em.findOne(Supplier, { id: dto.supplierId });
+    if (!supplier) throw new BadRequestException(['supplierId must be the id of a supplier']);
+    const sku = dto.sku.trim();
+    if (await this.em.count(Product, { supplier, sku })) {
+      throw new ConflictException(`${supplier.name} already has a product with SKU ${sku}`);
+    }
+    return this.em.transactional(async (em) => {
+      const product = em.create(Product, {
+        supplier,
+        sku,
+        kind: dto.kind,
+        description: dto.description.trim(),
+        lengthPerUnitM: dto.lengthPerUnitM ?? null,
+        inspectionLevel: dto.inspectionLevel ?? 'S-3',
+        aql: dto.aql ?? '1.0',
+        minAreaRatio: dto.minAreaRatio ?? 0.98,
+      });
+      replaceConductors(em, product, conductors);
+      // Every supplier-product stream starts on normal inspection (ISO 2859-1).
+      const state = em.create(InspectionState, {
+        product,
+        severity: 'normal',
+        state: { ...initialInspectionState() },
+      });
+      await em.flush();
+      const view = productView(product, state);
+      this.audit.record(em, actor, {
+        action: 'product.create',
+        entityType: 'product',
+        entityId: product.id,
+        after: view,
+      });
+      return view;
+    });
+  }
+
+  async update(id: number, dto: UpdateProductDto, actor: RequestUser): Promise<ProductView> {
+    const conductors = dto.conductors ? parseConductors(dto.conductors) : null;
+    return this.em.transactional(async (em) => {
+      const product = await em.findOneOrFail(
+        Product,
+        { id },
+        { populate: ['supplier', 'conductors'] },
+      );
+      const state = await em.findOne(InspectionState, { product });
+      const before = productView(product, state);
+      if (dto.description !== undefined) product.description = dto.description.trim();
+      if (dto.lengthPerUnitM !== undefined) product.lengthPerUnitM = dto.lengthPerUnitM;
+      if (dto.inspectionLevel !== undefined) product.inspectionLevel = dto.inspectionLevel;
+      if (dto.aql !== undefined) product.aql = dto.aql;
+      if (dto.minAreaRatio !== undefined) product.minAreaRatio = dto.minAreaRatio;
+      if (dto.active !== undefined) product.active = dto.active;
+      if (conductors) replaceConductors(em, product, conductors);
+      await em.flush();
+      const after = productView(product, state);
+      this.audit.record(em, actor, {
+        action: 'product.update',
+        entityType: 'product',
+        entityId: product.id,
+        before,
+        after,
+      });
+      return after;
+    });
+  }
+
+  private load(id: number): Promise<Product> {
+    return this.em.findOneOrFail(Product, { id }, { populate: ['supplier', 'conductors'] });
+  }
+
+  private stateOf(product: Product): Promise<InspectionState | null> {
+    return this.em.findOne(InspectionState, { product });
+  }
+
+  private async statesOf(products: Product[]): Promise<Map<number, InspectionState>> {
+    if (!products.length) return new Map();
+    const states = await this.em.find(InspectionState, { product: { $in: products } });
+    return new Map(states.map((s) => [s.product.id, s]));
+  }
+}

@@ -1,0 +1,71 @@
+import { samplingPlan, type Aql, type InspectionLevel } from '@gaugeproof/standards';
+import type { StoredSamplingPlan } from '../lots/entities/lot.entity';
+import type { InspectionState } from './entities/inspection-state.entity';
+import type { Product } from './entities/product.entity';
+import { inspectionStateView } from './product-view';
+
+export interface PlanAnswer {
+  samplingPlan: StoredSamplingPlan | null;
+  severity: 'normal' | 'tightened' | 'reduced' | 'discontinued';
+  discontinued: boolean;
+  message: string;
+}
+
+const SEVERITY_WORDS = {
+  normal: 'Normal inspection',
+  tightened: 'Tightened inspection (recent lots of this product were not accepted)',
+  reduced: "Reduced inspection (earned by this supplier's record)",
+} as const;
+
+/** Why a discontinued product cannot be received (ISO 2859-1 discontinuation of inspection). */
+export function discontinuedMessage(product: Product, reason: string | null): string {
+  const why = reason ?? 'too many lots were not accepted on tightened inspection.';
+  return (
+    `Inspection of ${product.supplier.name} ${product.sku} is discontinued (ISO 2859-1): ${why} ` +
+    'No lot of it can be received until the QA lead restores inspection, once the supplier’s ' +
+    'corrective action is accepted (inspection then resumes on tightened).'
+  );
+}
+
+/**
+ * The sampling plan a lot of `quantity` units gets today: the product's level and AQL at
+ * the stream's current severity (MIL-STD-105E / ANSI/ASQ Z1.4 through the standards library).
+ */
+export function planForLot(
+  product: Product,
+  state: InspectionState | null,
+  quantity: number,
+): PlanAnswer {
+  const { severity, reason } = inspectionStateView(state);
+  if (severity === 'discontinued') {
+    return {
+      samplingPlan: null,
+      severity,
+      discontinued: true,
+      message: discontinuedMessage(product, reason),
+    };
+  }
+  const plan = samplingPlan({
+    lotSize: quantity,
+    level: product.inspectionLevel as InspectionLevel,
+    aql: product.aql as Aql,
+    severity,
+  });
+  const stored: StoredSamplingPlan = {
+    severity: plan.severity,
+    level: plan.level,
+    aql: plan.aql,
+    codeLetter: plan.codeLetter,
+    sampleSize: plan.sampleSize,
+    accept: plan.accept,
+    reject: plan.reject,
+    inspectAll: plan.inspectAll,
+  };
+  const cut = plan.inspectAll
+    ? `inspect every one of the ${quantity} units`
+    : `cut ${plan.sampleSize} of the ${quantity} units`;
+  const message =
+    `${SEVERITY_WORDS[plan.severity]}: ${cut} (code letter ${plan.codeLetter}, level ${plan.level}, AQL ${plan.aql}); ` +
+    `accept with ${plan.accept} or fewer nonconforming, reject at ${plan.reject}.`;
+  return { samplingPlan: stored, severity, discontinued: false, message };
+}
