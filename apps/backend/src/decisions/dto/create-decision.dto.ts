@@ -1,0 +1,28 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { IsBoolean, IsIn, IsInt, IsOptional, IsString, MaxLength, Min } from 'class-validator';
+import { DECISION_OUTCOMES, type DecisionOutcome } from '../entities/decision.entity';
+
+export class CreateDecisionDto {
+  @ApiProperty({ enum: DECISION_OUTCOMES })
+  @IsIn(DECISION_OUTCOMES, { message: `outcome must be one of ${DECISION_OUTCOMES.join(', ')}` })
+  readonly outcome: DecisionOutcome;
+
+  @ApiProperty({
+    description: 'Why; at least 20 characters when against the recommendation or on concession.',
+  })
+  @IsString({ message: 'reason must be text' })
+  @MaxLength(4000, { message: 'reason must be at most 4000 characters' })
+  readonly reason: string;
+
+  @ApiProperty({ description: 'The lot version the decision was taken on (optimistic lock).' })
+  @IsInt({ message: 'version must be a whole number' })
+  @Min(1, { message: 'version must be a whole number' })
+  readonly version: number;
+
+  @ApiPropertyOptional({
+    description: 'The QA lead approves a move to reduced inspection when the rules allow it.',
+  })
+  @IsOptional()
+  @IsBoolean({ message: 'approveReduced must be true or false' })
+  readonly approveReduced?: boolean;
+}

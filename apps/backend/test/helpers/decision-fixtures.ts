@@ -1,0 +1,158 @@
+import { EntityManager, MikroORM } from '@mikro-orm/core';
+import { samplingPlan, type Severity } from '@gaugeproof/standards';
+import { Reading, type Verdict } from '../../src/inspection/entities/reading.entity';
+import { Sample } from '../../src/inspection/entities/sample.entity';
+import { Lot, type LotStatus } from '../../src/lots/entities/lot.entity';
+import { ConductorSpec } from '../../src/products/entities/conductor-spec.entity';
+import { InspectionState } from '../../src/products/entities/inspection-state.entity';
+import { Product } from '../../src/products/entities/product.entity';
+import { Supplier } from '../../src/suppliers/entities/supplier.entity';
+import { User } from '../../src/users/entities/user.entity';
+import { initialInspectionState } from '@gaugeproof/standards';
+import { DEMO, type TestApp } from './test-app';
+
+/**
+ * Builds suppliers, products, lots, samples and readings straight through the ORM, so the
+ * decision, return and corrective-action tests need no other domain's routes. All names are
+ * invented.
+ */
+export class Fixtures {
+  private counter = 0;
+  constructor(private readonly t: TestApp) {}
+
+  em(): EntityManager {
+    return this.t.app.get(MikroORM).em.fork();
+  }
+
+  async supplier(name = 'Northwind Cable Works', contactEmail = 'quality@northwind.example') {
+    const em = this.em();
+    const n = ++this.counter;
+    const s = em.create(Supplier, { name, code: `SUP${n}`, contactEmail });
+    await em.flush();
+    return s;
+  }
+
+  /** A power-and-ground kit (4 AWG each, copper) with its switching state on normal. */
+  async product(supplierId: number, sku = `KIT-4-${++this.counter}`) {
+    const em = this.em();
+    const product = em.create(Product, {
+      supplier: em.getReference(Supplier, supplierId),
+      sku,
+      kind: 'kit',
+      description: '4 AWG amplifier wiring kit, 5 m power and 1 m ground',
+      lengthPerUnitM: 5,
+      inspectionLevel: 'S-3',
+      aql: '2.5',
+    });
+    for (const [position, purpose] of (['power', 'ground'] as const).entries()) {
+      em.create(ConductorSpec, {
+        product,
+        position,
+        purpose,
+        gaugeLabel: '4 AWG',
+        gaugeSystem: 'awg',
+        nominalAreaMm2: 21.15, // ASTM B258 (REFERENCE §1)
+        claimedMaterial: 'copper',
+      });
+    }
+    const state = initialInspectionState();
+    em.create(InspectionState, { product, severity: state.severity, state: { ...state } });
+    await em.flush();
+    return product;
+  }
+
+  /** The product's stored switching state. */
+  async inspectionState(productId: number) {
+    return this.em().findOneOrFail(InspectionState, { product: productId });
+  }
+
+  /**
+   * A lot of `quantity` kits inspected on the plan at `severity`, with every planned unit
+   * sampled on both conductors and the first `nonconforming` units failing on power.
+   */
+  async lot(
+    productId: number,
+    opts: {
+      nonconforming?: number;
+      inconclusive?: number;
+      untested?: number;
+      severity?: Severity;
+      quantity?: number;
+      status?: LotStatus;
+      poNumber?: string;
+    } = {},
+  ) {
+    const em = this.em();
+    const product = await em.findOneOrFail(Product, productId, { populate: ['conductors'] });
+    const clerk = await em.findOneOrFail(User, { email: DEMO.clerk });
+    const quantity = opts.quantity ?? 200;
+    const plan = samplingPlan({
+      lotSize: quantity,
+      level: 'S-3',
+      aql: '2.5',
+      severity: opts.severity ?? 'normal',
+    });
+    const lot = em.create(Lot, {
+      product,
+      supplier: product.supplier,
+      poNumber: opts.poNumber ?? `PO-${7000 + ++this.counter}`,
+      packingSlip: `PS-${this.counter}`,
+      supplierLotCode: `L${this.counter}`,
+      quantity,
+      unit: 'kits',
+      receivedBy: clerk,
+      status: opts.status ?? 'awaiting_decision',
+      version: 1,
+      samplingPlan: {
+        severity: plan.severity as 'normal' | 'tightened' | 'reduced',
+        level: plan.level,
+        aql: plan.aql,
+        codeLetter: plan.codeLetter,
+        sampleSize: plan.sampleSize,
+        accept: plan.accept,
+        reject: plan.reject,
+        inspectAll: plan.inspectAll,
+      },
+    });
+    const bad = opts.nonconforming ?? 0;
+    const unsure = opts.inconclusive ?? 0;
+    const tested = plan.sampleSize - (opts.untested ?? 0);
+    for (let seq = 1; seq <= tested; seq++) {
+      for (const conductor of product.conductors) {
+        const sample = em.create(Sample, {
+          lot,
+          conductor,
+          seq,
+          unitRef: `K-${seq}`,
+          createdBy: clerk,
+        });
+        let verdict: Verdict = 'conforms';
+        if (conductor.purpose === 'power' && seq <= bad) verdict = 'nonconforming';
+        else if (conductor.purpose === 'power' && seq <= bad + unsure) verdict = 'inconclusive';
+        em.create(Reading, reading(sample, clerk, verdict));
+      }
+    }
+    await em.flush();
+    return { lot, plan };
+  }
+}
+
+/** A mass reading whose result suits its verdict (8.4 mm² measures as 8 AWG). */
+function reading(sample: Sample, takenBy: User, verdict: Verdict) {
+  const areaMm2 = verdict === 'nonconforming' ? 8.4 : verdict === 'inconclusive' ? 20.8 : 21.3;
+  return {
+    sample,
+    method: 'mass' as const,
+    inputs: { massG: Math.round(areaMm2 * 8.89 * 0.5 * 1.02 * 100) / 100, lengthMm: 500 },
+    areaMm2,
+    uMm2: 0.12,
+    expandedUMm2: 0.24,
+    areaRatio: Math.round((areaMm2 / 21.15) * 1000) / 1000,
+    measuresAs:
+      verdict === 'nonconforming' ? '8 AWG' : verdict === 'inconclusive' ? '6 AWG' : '4 AWG',
+    identifiedMaterial: 'copper',
+    verdict,
+    result: { reasons: [] },
+    takenBy,
+  };
+}
