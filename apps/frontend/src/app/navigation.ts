@@ -1,4 +1,6 @@
 import type { SvgIconComponent } from '@mui/icons-material';
+import Inventory2Outlined from '@mui/icons-material/Inventory2Outlined';
+import LocalShippingOutlined from '@mui/icons-material/LocalShippingOutlined';
 import ManageAccountsOutlined from '@mui/icons-material/ManageAccountsOutlined';
 import TodayOutlined from '@mui/icons-material/TodayOutlined';
 import { paths } from '@/config/paths';
@@ -25,6 +27,18 @@ export const navItems: readonly NavItem[] = [
     label: 'Today',
     path: paths.today.path,
     icon: TodayOutlined,
+    roles: ['clerk', 'qa_lead', 'purchasing', 'admin'],
+  },
+  {
+    label: 'Receiving',
+    path: paths.receiving.path,
+    icon: LocalShippingOutlined,
+    roles: ['clerk', 'qa_lead', 'admin'],
+  },
+  {
+    label: 'Lots',
+    path: paths.lots.path,
+    icon: Inventory2Outlined,
     roles: ['clerk', 'qa_lead', 'purchasing', 'admin'],
   },
   { label: 'Users', path: paths.users.path, icon: ManageAccountsOutlined, roles: ['admin'] },

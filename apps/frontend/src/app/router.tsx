@@ -7,6 +7,9 @@ import { NotFoundRoute } from '@/app/routes/not-found';
 import { RouteError } from '@/app/routes/route-error';
 import { SignInRoute } from '@/app/routes/sign-in';
 import { TodayRoute } from '@/app/routes/today';
+import { LotRoute } from '@/app/routes/lot';
+import { LotsRoute } from '@/app/routes/lots';
+import { ReceivingRoute } from '@/app/routes/receiving';
 import { UsersRoute } from '@/app/routes/users';
 import { paths } from '@/config/paths';
 import { useSessionUser } from '@/features/auth/auth-context';
@@ -32,6 +35,30 @@ const shellRoutes: RouteObject[] = [
     element: (
       <RoleGate>
         <UsersRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.receiving.path,
+    element: (
+      <RoleGate>
+        <ReceivingRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.lots.path,
+    element: (
+      <RoleGate>
+        <LotsRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.lot.path,
+    element: (
+      <RoleGate>
+        <LotRoute />
       </RoleGate>
     ),
   },

@@ -8,4 +8,10 @@ export const paths = {
   },
   today: { path: '/today', getHref: () => '/today' },
   users: { path: '/users', getHref: () => '/users' },
+  receiving: { path: '/receiving', getHref: () => '/receiving' },
+  lots: {
+    path: '/lots',
+    getHref: (status?: string) => (status ? `/lots?status=${encodeURIComponent(status)}` : '/lots'),
+  },
+  lot: { path: '/lots/:id', getHref: (id: number | string) => `/lots/${id}` },
 } as const;

@@ -1,48 +1,79 @@
-import {
-  Alert,
-  Card,
-  CardContent,
-  List,
-  ListItem,
-  ListItemText,
-  Stack,
-  Typography,
-} from '@mui/material';
+import LocalShippingOutlined from '@mui/icons-material/LocalShippingOutlined';
+import { Button, Grid, Stack, Typography } from '@mui/material';
+import { Link as RouterLink } from 'react-router-dom';
 import { SafetyCaution } from '@/components/safety-caution';
+import { SectionBoundary } from '@/components/section-boundary';
+import { paths } from '@/config/paths';
 import { useSessionUser } from '@/features/auth/auth-context';
-import { roleDuties, roleLabels } from '@/lib/roles';
+import { InstrumentsDueSection } from '@/features/inspection/components/instruments-due-section';
+import { TodayLotsSection } from '@/features/lots/components/today-lots-section';
+import { roleLabels } from '@/lib/roles';
+
+const CAN_RECEIVE = ['clerk', 'qa_lead', 'admin'];
 
 export function TodayRoute() {
   const user = useSessionUser();
   return (
-    <Stack spacing={3} sx={{ maxWidth: 880 }}>
-      <div>
-        <Typography variant="h1">Today</Typography>
-        <Typography color="text.secondary">
-          Hello, {user.name}. You are signed in as {roleLabels[user.role]}.
-        </Typography>
-      </div>
-
-      <Card>
-        <CardContent>
-          <Typography variant="h4" component="h2" gutterBottom>
-            What your role does
+    <Stack spacing={3}>
+      <Stack
+        direction={{ xs: 'column', sm: 'row' }}
+        spacing={2}
+        sx={{ justifyContent: 'space-between' }}
+      >
+        <div>
+          <Typography variant="h1">Today</Typography>
+          <Typography color="text.secondary">
+            Hello, {user.name}. You are signed in as {roleLabels[user.role]}. Oldest work first.
           </Typography>
-          <List dense disablePadding>
-            {roleDuties[user.role].map((duty) => (
-              <ListItem key={duty} disableGutters>
-                <ListItemText primary={duty} />
-              </ListItem>
-            ))}
-          </List>
-        </CardContent>
-      </Card>
-
-      <Alert severity="info">
-        Lots on hold, lots awaiting a decision and instruments coming due will be listed here as
-        those screens are built. Nothing is shown until there is real data behind it.
-      </Alert>
-
+        </div>
+        {CAN_RECEIVE.includes(user.role) && (
+          <div>
+            <Button
+              variant="contained"
+              size="large"
+              startIcon={<LocalShippingOutlined />}
+              component={RouterLink}
+              to={paths.receiving.getHref()}
+            >
+              Receive a delivery
+            </Button>
+          </div>
+        )}
+      </Stack>
+      <Grid container spacing={2}>
+        <Grid size={{ xs: 12, lg: 6 }}>
+          <SectionBoundary name="lots on hold">
+            <TodayLotsSection
+              title="On hold"
+              status="on_hold"
+              emptyText="No lot is waiting to be inspected."
+            />
+          </SectionBoundary>
+        </Grid>
+        <Grid size={{ xs: 12, lg: 6 }}>
+          <SectionBoundary name="lots being inspected">
+            <TodayLotsSection
+              title="Being inspected"
+              status="inspecting"
+              emptyText="No inspection is under way."
+            />
+          </SectionBoundary>
+        </Grid>
+        <Grid size={{ xs: 12, lg: 6 }}>
+          <SectionBoundary name="lots awaiting a decision">
+            <TodayLotsSection
+              title="Awaiting a decision"
+              status="awaiting_decision"
+              emptyText="No inspected lot is waiting for the QA lead."
+            />
+          </SectionBoundary>
+        </Grid>
+        <Grid size={{ xs: 12, lg: 6 }}>
+          <SectionBoundary name="instruments due">
+            <InstrumentsDueSection />
+          </SectionBoundary>
+        </Grid>
+      </Grid>
       <SafetyCaution />
     </Stack>
   );

@@ -1,0 +1,121 @@
+import { Alert, Button, CircularProgress, Grid, Stack, Typography } from '@mui/material';
+import { Link as RouterLink, useParams } from 'react-router-dom';
+import { SectionBoundary } from '@/components/section-boundary';
+import { paths } from '@/config/paths';
+import { useSessionUser } from '@/features/auth/auth-context';
+import { useLot } from '@/features/inspection/api/get-lot';
+import { EvaluationCard } from '@/features/inspection/components/evaluation-card';
+import { ImportReadingsCard } from '@/features/inspection/components/import-readings-card';
+import { InspectionPanel } from '@/features/inspection/components/inspection-panel';
+import { LotHeader } from '@/features/lots/components/lot-header';
+import { PhotosPanel } from '@/features/photos/components/photos-panel';
+import { isApiError } from '@/lib/api-client';
+import { errorMessage } from '@/lib/query-client';
+import type { Role } from '@/lib/roles';
+
+const RECORDERS: readonly Role[] = ['clerk', 'qa_lead', 'admin'];
+const VOIDERS: readonly Role[] = ['qa_lead', 'admin'];
+const OPEN_STATUSES = ['on_hold', 'inspecting', 'awaiting_decision'];
+
+export function LotRoute() {
+  const { id } = useParams();
+  const lotId = Number(id);
+  const user = useSessionUser();
+  const lot = useLot(lotId);
+
+  if (
+    !Number.isInteger(lotId) ||
+    lotId <= 0 ||
+    (lot.isError && isApiError(lot.error) && lot.error.status === 404)
+  ) {
+    return (
+      <Alert
+        severity="info"
+        action={
+          <Button component={RouterLink} to={paths.lots.getHref()}>
+            All lots
+          </Button>
+        }
+      >
+        There is no lot {id}.
+      </Alert>
+    );
+  }
+  if (lot.isPending) {
+    return (
+      <Stack direction="row" spacing={2} sx={{ alignItems: 'center' }}>
+        <CircularProgress size={24} aria-label={`Loading lot ${lotId}`} />
+        <Typography>Loading lot {lotId}…</Typography>
+      </Stack>
+    );
+  }
+  if (lot.isError) {
+    return (
+      <Alert
+        severity="error"
+        action={
+          <Button color="inherit" onClick={() => void lot.refetch()}>
+            Try again
+          </Button>
+        }
+      >
+        Lot {lotId} could not be loaded: {errorMessage(lot.error)}
+      </Alert>
+    );
+  }
+  const data = lot.data;
+  const open = OPEN_STATUSES.includes(data.status);
+  const canRecord = open && RECORDERS.includes(user.role);
+  const sampleOptions = data.samples.map((s) => {
+    const conductor = data.product.conductors.find((c) => c.id === s.conductorId);
+    return {
+      id: s.id,
+      label: `Unit ${s.seq} · ${conductor ? `${conductor.purpose} ${conductor.gauge}` : 'conductor'}`,
+    };
+  });
+
+  return (
+    <Stack spacing={3}>
+      <LotHeader lot={data} />
+      <Grid container spacing={3}>
+        <Grid size={{ xs: 12, xl: 8 }}>
+          <Stack spacing={3}>
+            <SectionBoundary name="evaluation">
+              <EvaluationCard evaluation={data.evaluation} />
+            </SectionBoundary>
+            <SectionBoundary name="samples and readings">
+              <InspectionPanel
+                lot={data}
+                canRecord={canRecord}
+                canVoid={VOIDERS.includes(user.role)}
+              />
+            </SectionBoundary>
+            {canRecord && (
+              <SectionBoundary name="CSV import">
+                <ImportReadingsCard lotId={data.id} />
+              </SectionBoundary>
+            )}
+            <SectionBoundary name="photos">
+              <PhotosPanel
+                lotId={data.id}
+                photos={data.photos}
+                samples={sampleOptions}
+                canUpload={RECORDERS.includes(user.role)}
+              />
+            </SectionBoundary>
+          </Stack>
+        </Grid>
+        {/* Decision panel and timeline go here (a later issue): the right-hand column. */}
+        <Grid size={{ xs: 12, xl: 4 }} data-testid="lot-side-column">
+          <Typography variant="body2" color="text.secondary">
+            {data.status === 'awaiting_decision'
+              ? 'Every planned unit has a reading. The lot waits for the QA lead’s decision.'
+              : open
+                ? 'The decision is taken once every planned unit has a reading.'
+                : 'This lot has been decided.'}
+          </Typography>
+        </Grid>
+      </Grid>
+    </Stack>
+  );
+}

@@ -1,0 +1,17 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import type { ReadingRequest } from '@/features/inspection/lib/reading-form';
+import type { Reading } from '@/features/inspection/types';
+
+export const createReading = (sampleId: number, request: ReadingRequest) =>
+  api.post<Reading>(`/samples/${sampleId}/readings`, request);
+
+/** Records a reading; the lot (status, evaluation) and the lists change with it. */
+export function useCreateReading(sampleId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (request: ReadingRequest) => createReading(sampleId, request),
+    meta: { inlineErrors: true },
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['lots'] }),
+  });
+}

@@ -1,0 +1,21 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import type { Sample } from '@/features/inspection/types';
+
+export interface CreateSampleRequest {
+  conductorId: number;
+  /** Which physical unit the piece was cut from ("spool 7"), if the clerk notes it. */
+  unitRef?: string;
+}
+
+export const createSample = (lotId: number, request: CreateSampleRequest) =>
+  api.post<Sample>(`/lots/${lotId}/samples`, request);
+
+export function useCreateSample(lotId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (request: CreateSampleRequest) => createSample(lotId, request),
+    meta: { inlineErrors: true },
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['lots'] }),
+  });
+}

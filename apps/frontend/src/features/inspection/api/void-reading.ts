@@ -1,0 +1,28 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { api } from '@/lib/api-client';
+import type { Reading } from '@/features/inspection/types';
+
+export const VOID_REASON_MIN_LENGTH = 10;
+
+export const voidReadingSchema = z.object({
+  reason: z
+    .string()
+    .trim()
+    .min(VOID_REASON_MIN_LENGTH, `Say why, in at least ${VOID_REASON_MIN_LENGTH} characters.`)
+    .max(500, 'At most 500 characters.'),
+});
+export type VoidReadingInput = z.infer<typeof voidReadingSchema>;
+
+export const voidReading = (readingId: number, input: VoidReadingInput) =>
+  api.post<Reading>(`/readings/${readingId}/void`, { reason: input.reason.trim() });
+
+export function useVoidReading() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ readingId, ...input }: VoidReadingInput & { readingId: number }) =>
+      voidReading(readingId, input),
+    meta: { inlineErrors: true },
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['lots'] }),
+  });
+}

@@ -1,0 +1,95 @@
+import { Card, CardContent, Stack, Typography } from '@mui/material';
+import { useState } from 'react';
+import { AddSampleButton } from '@/features/inspection/components/add-sample-button';
+import { ConductorCaution } from '@/features/inspection/components/conductor-caution';
+import { SamplePanel } from '@/features/inspection/components/sample-panel';
+import { UnitGrid } from '@/features/inspection/components/unit-grid';
+import { conductorLabel, materialLabels, needsCaution } from '@/features/inspection/lib/labels';
+import type { Conductor, Instrument, Sample } from '@/features/inspection/types';
+import { useUnits } from '@/lib/units';
+
+interface ConductorSectionProps {
+  lotId: number;
+  conductor: Conductor;
+  samples: readonly Sample[];
+  plannedUnits: number;
+  minAreaRatio: number;
+  instruments: readonly Instrument[];
+  canRecord: boolean;
+  canVoid: boolean;
+}
+
+export function ConductorSection(props: ConductorSectionProps) {
+  const { conductor, samples } = props;
+  const { formatAreaMm2 } = useUnits();
+  const [selectedId, setSelectedId] = useState<number | null>(null);
+  const selected = samples.find((s) => s.id === selectedId) ?? samples.at(-1);
+  const label = conductorLabel(conductor);
+  const caution = needsCaution(
+    conductor,
+    props.minAreaRatio,
+    samples.flatMap((s) => s.readings),
+  );
+  const nextUnit = Math.max(0, ...samples.map((s) => s.seq)) + 1;
+
+  return (
+    <Card component="section" aria-label={`${label} conductor`}>
+      <CardContent>
+        <Stack spacing={2}>
+          <Stack
+            direction={{ xs: 'column', sm: 'row' }}
+            spacing={2}
+            sx={{ justifyContent: 'space-between' }}
+          >
+            <div>
+              <Typography variant="h4" component="h2">
+                {label}
+              </Typography>
+              <Typography color="text.secondary">
+                Sold as {materialLabels[conductor.claimedMaterial]}
+                {conductor.claimedStrands ? `, ${conductor.claimedStrands} strands` : ''} · nominal{' '}
+                {formatAreaMm2(conductor.nominalAreaMm2)} · {samples.length} of {props.plannedUnits}{' '}
+                units cut
+              </Typography>
+            </div>
+            {props.canRecord && (
+              <AddSampleButton
+                lotId={props.lotId}
+                conductorId={conductor.id}
+                conductorLabel={label}
+                nextUnit={nextUnit}
+                onAdded={(s) => setSelectedId(s.id)}
+              />
+            )}
+          </Stack>
+          <UnitGrid
+            units={props.plannedUnits}
+            samples={samples}
+            selectedSampleId={selected?.id ?? null}
+            onSelect={(s) => setSelectedId(s.id)}
+          />
+          <ConductorCaution
+            label={label}
+            undersized={caution.undersized}
+            notCopper={caution.notCopper}
+          />
+          {selected ? (
+            <SamplePanel
+              key={selected.id}
+              sample={selected}
+              conductor={conductor}
+              minAreaRatio={props.minAreaRatio}
+              instruments={props.instruments}
+              canRecord={props.canRecord}
+              canVoid={props.canVoid}
+            />
+          ) : (
+            <Typography color="text.secondary">
+              No sample of this conductor yet. Cut one from the first unit and add it here.
+            </Typography>
+          )}
+        </Stack>
+      </CardContent>
+    </Card>
+  );
+}

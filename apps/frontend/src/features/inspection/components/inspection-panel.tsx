@@ -1,0 +1,41 @@
+import { Alert, Stack } from '@mui/material';
+import { useInstruments } from '@/features/inspection/api/get-instruments';
+import { ConductorSection } from '@/features/inspection/components/conductor-section';
+import type { LotDetail } from '@/features/inspection/types';
+import { errorMessage } from '@/lib/query-client';
+
+interface InspectionPanelProps {
+  lot: LotDetail;
+  canRecord: boolean;
+  canVoid: boolean;
+}
+
+/** Per conductor of the product: the units of the plan, their samples and readings. */
+export function InspectionPanel({ lot, canRecord, canVoid }: InspectionPanelProps) {
+  const instruments = useInstruments({ active: true });
+  const conductors = [...lot.product.conductors].sort((a, b) => a.position - b.position);
+  return (
+    <Stack spacing={3}>
+      {canRecord && instruments.isError && (
+        <Alert severity="error">
+          The instrument register cannot be loaded: {errorMessage(instruments.error)}
+        </Alert>
+      )}
+      {conductors.map((conductor) => (
+        <ConductorSection
+          key={conductor.id}
+          lotId={lot.id}
+          conductor={conductor}
+          samples={lot.samples
+            .filter((s) => s.conductorId === conductor.id)
+            .sort((a, b) => a.seq - b.seq)}
+          plannedUnits={lot.samplingPlan.sampleSize}
+          minAreaRatio={lot.product.minAreaRatio}
+          instruments={instruments.data?.items ?? []}
+          canRecord={canRecord}
+          canVoid={canVoid}
+        />
+      ))}
+    </Stack>
+  );
+}

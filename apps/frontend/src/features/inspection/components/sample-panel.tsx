@@ -1,0 +1,97 @@
+import { Alert, Box, Divider, Stack, Typography } from '@mui/material';
+import { useState } from 'react';
+import { CrossSectionDrawing } from '@/features/inspection/components/cross-section-drawing';
+import { ReadingForm } from '@/features/inspection/components/reading-form';
+import { ReadingsTable } from '@/features/inspection/components/readings-table';
+import { VerdictChip } from '@/features/inspection/components/verdict-chip';
+import { VoidReadingDialog } from '@/features/inspection/components/void-reading-dialog';
+import { currentReading } from '@/features/inspection/lib/labels';
+import type { Conductor, Instrument, Sample } from '@/features/inspection/types';
+
+interface SamplePanelProps {
+  sample: Sample;
+  conductor: Conductor;
+  minAreaRatio: number;
+  instruments: readonly Instrument[];
+  canRecord: boolean;
+  canVoid: boolean;
+}
+
+/** One sample: its readings, the drawing of its current result, and the form for the next reading. */
+export function SamplePanel({
+  sample,
+  conductor,
+  minAreaRatio,
+  instruments,
+  canRecord,
+  canVoid,
+}: SamplePanelProps) {
+  const [voiding, setVoiding] = useState<number | null>(null);
+  const current = currentReading(sample.readings);
+  return (
+    <Stack spacing={2} aria-label={`Sample ${sample.seq}`}>
+      <Stack direction="row" spacing={1} sx={{ alignItems: 'center' }}>
+        <Typography variant="h5" component="h3">
+          Unit {sample.seq}
+          {sample.unitRef ? ` · ${sample.unitRef}` : ''}
+        </Typography>
+        <VerdictChip verdict={sample.verdict} />
+      </Stack>
+      <Box sx={{ overflowX: 'auto' }}>
+        <ReadingsTable
+          readings={sample.readings}
+          canVoid={canVoid}
+          onVoid={(r) => setVoiding(r.id)}
+        />
+      </Box>
+      {current && (
+        <Stack
+          direction={{ xs: 'column', md: 'row' }}
+          spacing={2}
+          sx={{ alignItems: 'flex-start' }}
+        >
+          <CrossSectionDrawing
+            gauge={conductor.gauge}
+            nominalAreaMm2={conductor.nominalAreaMm2}
+            measuredAreaMm2={current.areaMm2}
+            measuresAs={current.measuresAs}
+            notCopper={
+              current.materialMismatch ||
+              current.identifiedMaterial === 'cca' ||
+              current.identifiedMaterial === 'aluminium'
+            }
+          />
+          <Alert
+            severity={
+              current.verdict === 'conforms'
+                ? 'success'
+                : current.verdict === 'nonconforming'
+                  ? 'error'
+                  : 'warning'
+            }
+            sx={{ flex: 1 }}
+          >
+            <strong>Measures as {current.measuresAs}</strong> (server result).
+            {current.reasons.map((reason) => (
+              <Typography key={reason} variant="body2">
+                {reason}
+              </Typography>
+            ))}
+          </Alert>
+        </Stack>
+      )}
+      {canRecord && (
+        <>
+          <Divider />
+          <ReadingForm
+            sampleId={sample.id}
+            conductor={conductor}
+            minAreaRatio={minAreaRatio}
+            instruments={instruments}
+          />
+        </>
+      )}
+      <VoidReadingDialog readingId={voiding} onClose={() => setVoiding(null)} />
+    </Stack>
+  );
+}

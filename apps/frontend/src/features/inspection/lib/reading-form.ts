@@ -1,0 +1,120 @@
+import { z } from 'zod';
+import type {
+  InputField,
+  MethodDefinition,
+  ResolutionSlot,
+} from '@/features/inspection/lib/reading-methods';
+import type { Instrument, ReadingMethod } from '@/features/inspection/types';
+
+export type FieldName = InputField['name'];
+
+/** What the reading form holds: typed text per input, an instrument id (or '') per slot. */
+export interface ReadingFormValues {
+  values: Partial<Record<FieldName, string>>;
+  instruments: Partial<Record<ResolutionSlot, string>>;
+}
+
+/** "76.1" or "76,1" → 76.1; anything that is not a plain decimal number → null. */
+export function parseDecimal(text: string | undefined): number | null {
+  const trimmed = (text ?? '').trim().replace(',', '.');
+  if (!/^-?(\d+\.?\d*|\.\d+)(e-?\d+)?$/i.test(trimmed)) return null;
+  const value = Number(trimmed);
+  return Number.isFinite(value) ? value : null;
+}
+
+function fieldSchema(field: InputField) {
+  return z.string().superRefine((text, ctx) => {
+    if (text.trim() === '') {
+      ctx.addIssue({ code: 'custom', message: `Enter the ${field.label.toLowerCase()}.` });
+      return;
+    }
+    const value = parseDecimal(text);
+    if (value === null) {
+      ctx.addIssue({ code: 'custom', message: `Enter a number, in ${field.unit}.` });
+    } else if (field.integer && !Number.isInteger(value)) {
+      ctx.addIssue({ code: 'custom', message: 'Enter a whole number.' });
+    } else if (field.allowNonPositive ? value < -40 || value > 150 : value <= 0) {
+      ctx.addIssue({
+        code: 'custom',
+        // -40…150 °C: a plausibility bound for a bench reading (common practice, no source).
+        message: field.allowNonPositive
+          ? 'Enter a temperature from -40 to 150 °C.'
+          : 'Must be greater than 0.',
+      });
+    }
+  });
+}
+
+export function buildReadingSchema(definition: MethodDefinition) {
+  const values = Object.fromEntries(definition.fields.map((f) => [f.name, fieldSchema(f)]));
+  const instruments = Object.fromEntries(
+    definition.instruments.map((slot) => [
+      slot.slot,
+      slot.required
+        ? z.string().min(1, `Choose the ${slot.label.toLowerCase()} you used.`)
+        : z.string().optional(),
+    ]),
+  );
+  return z.object({ values: z.object(values), instruments: z.object(instruments) });
+}
+
+export function emptyReadingForm(definition: MethodDefinition): ReadingFormValues {
+  return {
+    values: Object.fromEntries(definition.fields.map((f) => [f.name, ''])),
+    instruments: Object.fromEntries(definition.instruments.map((s) => [s.slot, ''])),
+  };
+}
+
+/** The typed inputs in request units (resistance from mΩ to Ω), or null while any is unusable. */
+export function readingInputs(
+  definition: MethodDefinition,
+  form: ReadingFormValues,
+): Partial<Record<FieldName, number>> | null {
+  const inputs: Partial<Record<FieldName, number>> = {};
+  for (const field of definition.fields) {
+    const value = parseDecimal(form.values[field.name]);
+    if (value === null) return null;
+    inputs[field.name] = field.name === 'resistanceOhm' ? value / 1000 : value;
+  }
+  return inputs;
+}
+
+const toBaseUnit: Record<Instrument['resolutionUnit'], number> = {
+  g: 1,
+  mm: 1,
+  ohm: 1,
+  mohm: 1e-3,
+  degC: 1,
+};
+
+/** The chosen instruments' resolutions, in the units the standards library expects. */
+export function slotResolutions(
+  definition: MethodDefinition,
+  form: ReadingFormValues,
+  instruments: readonly Instrument[],
+): Partial<Record<ResolutionSlot, number>> {
+  const result: Partial<Record<ResolutionSlot, number>> = {};
+  for (const slot of definition.instruments) {
+    const chosen = instruments.find((i) => String(i.id) === form.instruments[slot.slot]);
+    if (chosen) result[slot.slot] = chosen.resolution * toBaseUnit[chosen.resolutionUnit];
+  }
+  return result;
+}
+
+export interface ReadingRequest {
+  method: ReadingMethod;
+  instrumentIds: number[];
+  [input: string]: number | number[] | string;
+}
+
+export function toReadingRequest(
+  definition: MethodDefinition,
+  form: ReadingFormValues,
+): ReadingRequest {
+  const inputs = readingInputs(definition, form);
+  if (inputs === null) throw new Error('toReadingRequest needs a valid form.');
+  const instrumentIds = definition.instruments
+    .map((slot) => Number(form.instruments[slot.slot]))
+    .filter((id) => Number.isInteger(id) && id > 0);
+  return { method: definition.method, ...inputs, instrumentIds };
+}

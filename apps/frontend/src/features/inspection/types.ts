@@ -1,0 +1,156 @@
+/** Shapes of docs/api-conventions.md the Lot page works with. */
+export type ReadingMethod = 'mass' | 'strands' | 'resistance' | 'diameter';
+export type ReadingVerdict = 'conforms' | 'nonconforming' | 'inconclusive';
+export type SampleVerdict = ReadingVerdict | 'untested';
+export type ClaimedMaterial = 'copper' | 'tinned_copper' | 'cca10' | 'cca15' | 'aluminium';
+export type IdentifiedMaterial = 'copper' | 'cca' | 'aluminium' | 'inconsistent' | 'unknown';
+export type InstrumentKind =
+  'balance' | 'micrometer' | 'caliper' | 'length_rule' | 'milliohm_meter' | 'thermometer';
+export type ResolutionUnit = 'g' | 'mm' | 'ohm' | 'mohm' | 'degC';
+
+export interface PersonRef {
+  id: number;
+  name: string;
+}
+
+export interface Conductor {
+  id: number;
+  position: number;
+  purpose: 'power' | 'ground' | 'remote' | 'speaker' | 'other';
+  gauge: string;
+  gaugeSystem: 'awg' | 'metric';
+  nominalAreaMm2: number;
+  claimedMaterial: ClaimedMaterial;
+  claimedStrands: number | null;
+}
+
+export interface Instrument {
+  id: number;
+  kind: InstrumentKind;
+  name: string;
+  serial: string;
+  resolution: number;
+  resolutionUnit: ResolutionUnit;
+  calibratedOn: string;
+  calibrationDueOn: string;
+  active: boolean;
+  calibrationStatus: 'ok' | 'due_soon' | 'overdue';
+  daysToDue: number;
+}
+
+export type InstrumentSnapshot = Pick<
+  Instrument,
+  'id' | 'kind' | 'name' | 'serial' | 'resolution' | 'resolutionUnit' | 'calibrationDueOn'
+>;
+
+export interface Reading {
+  id: number;
+  sampleId: number;
+  method: ReadingMethod;
+  inputs: Record<string, number>;
+  instruments: InstrumentSnapshot[];
+  areaMm2: number;
+  uMm2: number;
+  UMm2: number;
+  areaRatio: number;
+  measuresAs: string;
+  identifiedMaterial: IdentifiedMaterial | null;
+  materialMismatch: boolean;
+  verdict: ReadingVerdict;
+  reasons: string[];
+  lengthForConclusiveMm: number | null;
+  takenBy: PersonRef;
+  takenAt: string;
+  voided: boolean;
+  voidReason: string | null;
+  voidedBy: PersonRef | null;
+  voidedAt: string | null;
+}
+
+export interface Sample {
+  id: number;
+  seq: number;
+  unitRef: string | null;
+  conductorId: number;
+  verdict: SampleVerdict;
+  createdBy: PersonRef;
+  createdAt: string;
+  readings: Reading[];
+}
+
+export interface Evaluation {
+  samplesPlanned: number;
+  samplesTested: number;
+  nonconforming: number;
+  inconclusive: number;
+  recommendation: 'accept' | 'reject' | 'incomplete';
+  message: string;
+}
+
+export interface Photo {
+  id: number;
+  url: string;
+  thumbnailUrl: string;
+  caption: string | null;
+  sampleId: number | null;
+  sha256: string;
+  mimeType: string;
+  width: number;
+  height: number;
+  sizeBytes: number;
+  uploadedBy: PersonRef;
+  createdAt: string;
+}
+
+export type LotStatus =
+  | 'on_hold'
+  | 'inspecting'
+  | 'awaiting_decision'
+  | 'accepted'
+  | 'accepted_on_concession'
+  | 'rejected'
+  | 'returned';
+
+export interface LotDetail {
+  id: number;
+  status: LotStatus;
+  poNumber: string;
+  packingSlip: string | null;
+  supplierLotCode: string | null;
+  quantity: number;
+  unit: string;
+  receivedAt: string;
+  receivedBy: PersonRef;
+  supplier: {
+    id: number;
+    name: string;
+    code: string;
+    status: 'approved' | 'probation' | 'suspended';
+  };
+  samplingPlan: {
+    severity: 'normal' | 'tightened' | 'reduced';
+    level: string;
+    aql: string;
+    codeLetter: string;
+    sampleSize: number;
+    accept: number;
+    reject: number;
+    inspectAll: boolean;
+  };
+  version: number;
+  notes: string | null;
+  supplierWarning: string | null;
+  product: {
+    id: number;
+    sku: string;
+    description: string;
+    kind: 'spool' | 'kit';
+    minAreaRatio: number;
+    conductors: Conductor[];
+    warnings: string[];
+  };
+  samples: Sample[];
+  photos: Photo[];
+  evaluation: Evaluation;
+  ncrNumber: string | null;
+}

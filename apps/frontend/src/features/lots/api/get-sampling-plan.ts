@@ -1,0 +1,30 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import type { SamplingPlanAnswer } from '@/features/lots/types';
+
+export const samplingPlanKey = (productId: number, quantity: number) =>
+  ['products', 'sampling-plan', productId, quantity] as const;
+
+export const getSamplingPlan = (productId: number, quantity: number, signal?: AbortSignal) =>
+  api.get<SamplingPlanAnswer>(
+    `/products/${productId}/sampling-plan?quantity=${encodeURIComponent(quantity)}`,
+    signal,
+  );
+
+export const samplingPlanQueryOptions = (productId: number, quantity: number) =>
+  queryOptions({
+    queryKey: samplingPlanKey(productId, quantity),
+    queryFn: ({ signal }) => getSamplingPlan(productId, quantity, signal),
+    // The form shows its own preview and the server's error beside it.
+    meta: { inlineErrors: true },
+  });
+
+/** The server's plan for a lot size; off until there is a product and a whole quantity ≥ 2. */
+export function useSamplingPlan(productId: number | null, quantity: number | null) {
+  const enabled =
+    productId !== null && quantity !== null && Number.isInteger(quantity) && quantity >= 2;
+  return useQuery({
+    ...samplingPlanQueryOptions(productId ?? 0, quantity ?? 0),
+    enabled,
+  });
+}

@@ -1,0 +1,87 @@
+import { Alert, Card, CardContent, Grid, Stack, Typography } from '@mui/material';
+import { LotStatusChip } from '@/features/lots/components/lot-status-chip';
+import { SamplingPlanSummary } from '@/features/lots/components/sampling-plan-summary';
+import { SupplierStatusAlert } from '@/features/lots/components/supplier-status-alert';
+import type { LotSummary } from '@/features/lots/types';
+
+const dateTime = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+
+function Fact({ label, value }: { label: string; value: string }) {
+  return (
+    <div>
+      <Typography variant="caption" color="text.secondary">
+        {label}
+      </Typography>
+      <Typography>{value}</Typography>
+    </div>
+  );
+}
+
+interface LotHeaderProps {
+  lot: LotSummary & { notes?: string | null; supplierWarning?: string | null };
+}
+
+export function LotHeader({ lot }: LotHeaderProps) {
+  return (
+    <Stack spacing={2}>
+      <Stack direction="row" spacing={2} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
+        <Typography variant="h1">Lot {lot.id}</Typography>
+        <LotStatusChip status={lot.status} size="medium" />
+      </Stack>
+      {lot.status === 'on_hold' && (
+        <Alert severity="warning" variant="filled" role="status">
+          <strong>On hold.</strong> Nothing from this lot may be used or shipped until it is
+          inspected and a QA lead decides. Cut the samples the plan asks for and record their
+          readings.
+        </Alert>
+      )}
+      {lot.supplierWarning ? (
+        <Alert severity="error">{lot.supplierWarning}</Alert>
+      ) : (
+        <SupplierStatusAlert supplier={lot.supplier} />
+      )}
+      <Card>
+        <CardContent>
+          <Grid container spacing={3}>
+            <Grid size={{ xs: 12, md: 6 }}>
+              <Grid container spacing={2}>
+                <Grid size={6}>
+                  <Fact label="PO number" value={lot.poNumber} />
+                </Grid>
+                <Grid size={6}>
+                  <Fact label="Packing slip" value={lot.packingSlip ?? '—'} />
+                </Grid>
+                <Grid size={6}>
+                  <Fact label="Supplier" value={`${lot.supplier.name} (${lot.supplier.code})`} />
+                </Grid>
+                <Grid size={6}>
+                  <Fact label="Supplier lot code" value={lot.supplierLotCode ?? '—'} />
+                </Grid>
+                <Grid size={12}>
+                  <Fact label="Product" value={`${lot.product.sku} — ${lot.product.description}`} />
+                </Grid>
+                <Grid size={6}>
+                  <Fact label="Quantity" value={`${lot.quantity} ${lot.unit}`} />
+                </Grid>
+                <Grid size={6}>
+                  <Fact
+                    label="Received"
+                    value={`${dateTime.format(new Date(lot.receivedAt))} by ${lot.receivedBy.name}`}
+                  />
+                </Grid>
+                {lot.notes && (
+                  <Grid size={12}>
+                    <Fact label="Notes" value={lot.notes} />
+                  </Grid>
+                )}
+              </Grid>
+            </Grid>
+            <Grid size={{ xs: 12, md: 6 }}>
+              <SamplingPlanSummary plan={lot.samplingPlan} unit={lot.unit} />
+            </Grid>
+          </Grid>
+        </CardContent>
+      </Card>
+    </Stack>
+  );
+}

@@ -1,0 +1,124 @@
+import { Chip, MenuItem, Stack, TextField } from '@mui/material';
+import { useEffect, useState } from 'react';
+import { useProductOptions } from '@/features/lots/api/get-product-options';
+import { useSupplierOptions } from '@/features/lots/api/get-supplier-options';
+import { lotStatusLabels } from '@/features/lots/lib/lot-status';
+import { useDebouncedValue } from '@/features/lots/lib/use-debounced-value';
+import { LOT_STATUSES, type LotStatus } from '@/features/lots/types';
+
+export const LOT_FILTERS = [
+  'status',
+  'supplierId',
+  'productId',
+  'receivedFrom',
+  'receivedTo',
+  'q',
+] as const;
+export type LotFilterName = (typeof LOT_FILTERS)[number];
+
+interface LotsFiltersProps {
+  filters: Record<LotFilterName, string>;
+  setFilter: (name: LotFilterName, value: string) => void;
+}
+
+export const parseStatuses = (text: string): LotStatus[] =>
+  text.split(',').filter((s): s is LotStatus => (LOT_STATUSES as readonly string[]).includes(s));
+
+export function LotsFilters({ filters, setFilter }: LotsFiltersProps) {
+  const statuses = parseStatuses(filters.status);
+  const supplierId = filters.supplierId ? Number(filters.supplierId) : null;
+  const suppliers = useSupplierOptions('');
+  const products = useProductOptions(supplierId, '');
+  const [text, setText] = useState(filters.q);
+  const debounced = useDebouncedValue(text, 400);
+  useEffect(() => {
+    if (debounced !== filters.q) setFilter('q', debounced.trim());
+  }, [debounced, filters.q, setFilter]);
+
+  const toggle = (status: LotStatus) => {
+    const next = statuses.includes(status)
+      ? statuses.filter((s) => s !== status)
+      : [...statuses, status];
+    setFilter('status', next.join(','));
+  };
+
+  return (
+    <Stack spacing={2}>
+      <Stack
+        direction="row"
+        spacing={1}
+        useFlexGap
+        sx={{ flexWrap: 'wrap' }}
+        role="group"
+        aria-label="Status"
+      >
+        {LOT_STATUSES.map((status) => (
+          <Chip
+            key={status}
+            label={lotStatusLabels[status]}
+            color={statuses.includes(status) ? 'primary' : 'default'}
+            variant={statuses.includes(status) ? 'filled' : 'outlined'}
+            onClick={() => toggle(status)}
+            aria-pressed={statuses.includes(status)}
+          />
+        ))}
+      </Stack>
+      <Stack direction={{ xs: 'column', md: 'row' }} spacing={2}>
+        <TextField
+          label="Search"
+          placeholder="PO, packing slip, lot code, SKU, supplier"
+          value={text}
+          onChange={(e) => setText(e.target.value)}
+          sx={{ minWidth: 260 }}
+        />
+        <TextField
+          select
+          label="Supplier"
+          value={filters.supplierId}
+          onChange={(e) => {
+            setFilter('supplierId', e.target.value);
+            setFilter('productId', '');
+          }}
+          sx={{ minWidth: 200 }}
+        >
+          <MenuItem value="">All suppliers</MenuItem>
+          {(suppliers.data?.items ?? []).map((s) => (
+            <MenuItem key={s.id} value={String(s.id)}>
+              {s.name}
+            </MenuItem>
+          ))}
+        </TextField>
+        <TextField
+          select
+          label="Product"
+          value={filters.productId}
+          disabled={supplierId === null}
+          helperText={supplierId === null ? 'Choose a supplier first.' : undefined}
+          onChange={(e) => setFilter('productId', e.target.value)}
+          sx={{ minWidth: 200 }}
+        >
+          <MenuItem value="">All products</MenuItem>
+          {(products.data?.items ?? []).map((p) => (
+            <MenuItem key={p.id} value={String(p.id)}>
+              {p.sku}
+            </MenuItem>
+          ))}
+        </TextField>
+        <TextField
+          type="date"
+          label="Received from"
+          value={filters.receivedFrom}
+          onChange={(e) => setFilter('receivedFrom', e.target.value)}
+          slotProps={{ inputLabel: { shrink: true } }}
+        />
+        <TextField
+          type="date"
+          label="Received to"
+          value={filters.receivedTo}
+          onChange={(e) => setFilter('receivedTo', e.target.value)}
+          slotProps={{ inputLabel: { shrink: true } }}
+        />
+      </Stack>
+    </Stack>
+  );
+}

@@ -1,0 +1,168 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Alert, Button, Grid, MenuItem, Stack, TextField } from '@mui/material';
+import { useState } from 'react';
+import { Controller, useForm } from 'react-hook-form';
+import {
+  CREATE_LOT_FIELDS,
+  createLotSchema,
+  LOT_UNITS,
+  toCreateLotRequest,
+  useCreateLot,
+  type CreateLotForm,
+} from '@/features/lots/api/create-lot';
+import { PlanPanel } from '@/features/lots/components/plan-panel';
+import { ProductAutocomplete } from '@/features/lots/components/product-autocomplete';
+import { ProductDetails } from '@/features/lots/components/product-details';
+import { SupplierAutocomplete } from '@/features/lots/components/supplier-autocomplete';
+import { SupplierStatusAlert } from '@/features/lots/components/supplier-status-alert';
+import type { LotSummary, ProductOption, SupplierOption } from '@/features/lots/types';
+import { splitServerErrors } from '@/lib/server-field-errors';
+
+const EMPTY: CreateLotForm = {
+  supplierId: 0,
+  productId: 0,
+  poNumber: '',
+  packingSlip: '',
+  supplierLotCode: '',
+  quantity: '',
+  unit: 'spools',
+  notes: '',
+};
+
+export function ReceiveLotForm({ onReceived }: { onReceived: (lot: LotSummary) => void }) {
+  const create = useCreateLot();
+  const [supplier, setSupplier] = useState<SupplierOption | null>(null);
+  const [product, setProduct] = useState<ProductOption | null>(null);
+  const form = useForm<CreateLotForm>({
+    resolver: zodResolver(createLotSchema),
+    mode: 'onChange',
+    defaultValues: EMPTY,
+  });
+  const { errors, isSubmitting } = form.formState;
+  const quantityText = form.watch('quantity');
+  const unit = form.watch('unit');
+  const formErrors = create.isError
+    ? splitServerErrors(create.error, CREATE_LOT_FIELDS).formErrors
+    : [];
+
+  const chooseSupplier = (next: SupplierOption | null) => {
+    setSupplier(next);
+    setProduct(null);
+    form.setValue('supplierId', next?.id ?? 0, { shouldValidate: true });
+    form.setValue('productId', 0);
+  };
+  const chooseProduct = (next: ProductOption | null) => {
+    setProduct(next);
+    form.setValue('productId', next?.id ?? 0, { shouldValidate: true });
+    if (next)
+      form.setValue('unit', next.kind === 'kit' ? 'kits' : 'spools', { shouldValidate: true });
+  };
+
+  const onSubmit = form.handleSubmit(async (values) => {
+    try {
+      onReceived(await create.mutateAsync(toCreateLotRequest(values)));
+    } catch (error) {
+      const { fieldErrors } = splitServerErrors(error, CREATE_LOT_FIELDS);
+      for (const field of CREATE_LOT_FIELDS) {
+        const message = fieldErrors[field];
+        if (message) form.setError(field, { type: 'server', message });
+      }
+    }
+  });
+
+  const text = (
+    name: 'poNumber' | 'packingSlip' | 'supplierLotCode',
+    label: string,
+    required = false,
+  ) => (
+    <TextField
+      label={label}
+      required={required}
+      fullWidth
+      error={!!errors[name]}
+      helperText={errors[name]?.message}
+      {...form.register(name)}
+    />
+  );
+
+  return (
+    <form noValidate onSubmit={onSubmit} aria-label="Receive a delivery">
+      <Grid container spacing={3}>
+        <Grid size={{ xs: 12, md: 7 }}>
+          <Stack spacing={2}>
+            {formErrors.length > 0 && <Alert severity="error">{formErrors.join(' ')}</Alert>}
+            <SupplierAutocomplete
+              value={supplier}
+              onChange={chooseSupplier}
+              error={errors.supplierId?.message}
+            />
+            {supplier && <SupplierStatusAlert supplier={supplier} />}
+            <ProductAutocomplete
+              supplierId={supplier?.id ?? null}
+              value={product}
+              onChange={chooseProduct}
+              error={errors.productId?.message}
+            />
+            {product && <ProductDetails product={product} />}
+            {text('poNumber', 'PO number', true)}
+            <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
+              {text('packingSlip', 'Packing-slip number')}
+              {text('supplierLotCode', 'Supplier lot code')}
+            </Stack>
+            <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
+              <TextField
+                label="Quantity received"
+                required
+                fullWidth
+                inputMode="numeric"
+                error={!!errors.quantity}
+                helperText={
+                  errors.quantity?.message ?? 'Units on the packing slip; the plan follows from it.'
+                }
+                {...form.register('quantity')}
+              />
+              <Controller
+                control={form.control}
+                name="unit"
+                render={({ field, fieldState }) => (
+                  <TextField
+                    select
+                    label="Unit"
+                    fullWidth
+                    {...field}
+                    error={!!fieldState.error}
+                    helperText={fieldState.error?.message}
+                  >
+                    {LOT_UNITS.map((u) => (
+                      <MenuItem key={u} value={u}>
+                        {u}
+                      </MenuItem>
+                    ))}
+                  </TextField>
+                )}
+              />
+            </Stack>
+            <TextField
+              label="Notes"
+              multiline
+              minRows={2}
+              error={!!errors.notes}
+              helperText={
+                errors.notes?.message ?? 'Damage, short delivery, anything the QA lead should know.'
+              }
+              {...form.register('notes')}
+            />
+            <div>
+              <Button type="submit" variant="contained" size="large" loading={isSubmitting}>
+                Receive and hold the lot
+              </Button>
+            </div>
+          </Stack>
+        </Grid>
+        <Grid size={{ xs: 12, md: 5 }}>
+          <PlanPanel product={product} quantityText={quantityText} unit={unit} />
+        </Grid>
+      </Grid>
+    </form>
+  );
+}

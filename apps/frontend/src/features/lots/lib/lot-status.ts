@@ -1,0 +1,24 @@
+import type { LotStatus } from '@/features/lots/types';
+
+export const lotStatusLabels: Record<LotStatus, string> = {
+  on_hold: 'On hold',
+  inspecting: 'Inspecting',
+  awaiting_decision: 'Awaiting decision',
+  accepted: 'Accepted',
+  accepted_on_concession: 'Accepted on concession',
+  rejected: 'Rejected',
+  returned: 'Returned',
+};
+
+export type StatusColour = 'default' | 'info' | 'warning' | 'success' | 'error' | 'secondary';
+
+/** Held and undecided lots stand out; accepted green, rejected red. */
+export const lotStatusColours: Record<LotStatus, StatusColour> = {
+  on_hold: 'warning',
+  inspecting: 'info',
+  awaiting_decision: 'secondary',
+  accepted: 'success',
+  accepted_on_concession: 'success',
+  rejected: 'error',
+  returned: 'default',
+};

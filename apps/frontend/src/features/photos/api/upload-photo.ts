@@ -1,0 +1,74 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { ApiError, type ApiErrorBody } from '@/lib/api-client';
+import type { Photo } from '@/features/photos/types';
+
+/** Same limits as the server (issue 4): JPEG, PNG or WebP, at most 15 MB. */
+export const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const;
+export const PHOTO_MAX_BYTES = 15 * 1024 * 1024;
+
+/** A first check in the browser so a wrong file is refused before it is sent; the server checks the bytes. */
+export function photoFileProblem(file: File): string | null {
+  if (!(PHOTO_TYPES as readonly string[]).includes(file.type)) {
+    return `${file.name} is not a JPEG, PNG or WebP image.`;
+  }
+  if (file.size > PHOTO_MAX_BYTES) {
+    return `${file.name} is ${(file.size / 1024 / 1024).toFixed(1)} MB; photos may be at most 15 MB.`;
+  }
+  if (file.size === 0) return `${file.name} is empty.`;
+  return null;
+}
+
+export interface UploadPhotoInput {
+  file: File;
+  sampleId?: number;
+  caption?: string;
+  /** Fraction sent, 0…1. */
+  onProgress?: (fraction: number) => void;
+}
+
+function parse(text: string): unknown {
+  try {
+    return text ? (JSON.parse(text) as unknown) : undefined;
+  } catch {
+    return undefined;
+  }
+}
+
+/** Multipart upload with XMLHttpRequest, the one browser API that reports upload progress. */
+export function uploadPhoto(lotId: number, input: UploadPhotoInput): Promise<Photo> {
+  const form = new FormData();
+  form.append('file', input.file);
+  if (input.sampleId !== undefined) form.append('sampleId', String(input.sampleId));
+  if (input.caption?.trim()) form.append('caption', input.caption.trim());
+  return new Promise((resolve, reject) => {
+    const xhr = new XMLHttpRequest();
+    xhr.open('POST', `/api/lots/${lotId}/photos`);
+    xhr.withCredentials = true;
+    xhr.setRequestHeader('Accept', 'application/json');
+    xhr.upload.onprogress = (event) => {
+      if (event.lengthComputable) input.onProgress?.(event.loaded / event.total);
+    };
+    xhr.onload = () => {
+      const body = parse(xhr.responseText);
+      if (xhr.status >= 200 && xhr.status < 300) {
+        resolve(body as Photo);
+        return;
+      }
+      const errorBody =
+        body && typeof body === 'object' && 'statusCode' in body ? (body as ApiErrorBody) : null;
+      reject(new ApiError(xhr.status, errorBody, xhr.statusText || 'The upload failed.'));
+    };
+    xhr.onerror = () =>
+      reject(new TypeError('The server cannot be reached. Check the connection.'));
+    xhr.send(form);
+  });
+}
+
+export function useUploadPhoto(lotId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: UploadPhotoInput) => uploadPhoto(lotId, input),
+    meta: { inlineErrors: true },
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['lots', 'detail', lotId] }),
+  });
+}
