@@ -38,9 +38,11 @@ function sizeRank(column: string, system: 'awg' | 'metric'): SqlPart {
     system === 'awg'
       ? AWG_SIZES.map((g) => ({ label: g.label, rank: -(g.awg ?? 0) }))
       : METRIC_SIZES.map((g, i) => ({ label: g.label, rank: i }));
+  // Ranks are our own integers, written as literals: a bound THEN value would be typed
+  // text by PostgreSQL and the difference of two would fail.
   return {
-    sql: `CASE ${column} ${sizes.map(() => 'WHEN ? THEN ?').join(' ')} ELSE NULL END`,
-    bindings: sizes.flatMap((s) => [s.label, s.rank]),
+    sql: `CASE ${column} ${sizes.map((s) => `WHEN ? THEN ${Math.trunc(s.rank)}`).join(' ')} ELSE NULL END`,
+    bindings: sizes.map((s) => s.label),
   };
 }
 
