@@ -1,0 +1,116 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  IsArray,
+  IsIn,
+  IsInt,
+  IsNumber,
+  IsOptional,
+  IsPositive,
+  Max,
+  Min,
+  ValidateIf,
+} from 'class-validator';
+import { READING_METHODS, type ReadingMethod } from '../entities/reading.entity';
+
+const NUMBER = { allowNaN: false, allowInfinity: false } as const;
+const uses =
+  (...methods: ReadingMethod[]) =>
+  (o: { method?: unknown }) =>
+    methods.includes(o.method as ReadingMethod);
+
+/** Which input fields each method reads; anything else in the body is refused. */
+export const METHOD_FIELDS: Record<ReadingMethod, readonly string[]> = {
+  mass: ['massG', 'lengthMm', 'strandingIncrement'],
+  strands: ['count', 'strandDiameterMm'],
+  resistance: ['resistanceOhm', 'lengthMm', 'temperatureC', 'strandingIncrement'],
+  diameter: ['diameterMm'],
+};
+export const INPUT_FIELDS = [
+  'massG',
+  'lengthMm',
+  'count',
+  'strandDiameterMm',
+  'resistanceOhm',
+  'temperatureC',
+  'diameterMm',
+  'strandingIncrement',
+] as const;
+
+/**
+ * One reading by one method. The fields a method needs are required for it only
+ * (ValidateIf); the server recomputes every result from them.
+ */
+export class CreateReadingDto {
+  @ApiProperty({ enum: READING_METHODS })
+  @IsIn(READING_METHODS, { message: `method must be one of ${READING_METHODS.join(', ')}` })
+  readonly method: ReadingMethod;
+
+  @ApiPropertyOptional({ description: 'mass: stripped conductor mass, g', example: 76.1 })
+  @ValidateIf(uses('mass'))
+  @IsNumber(NUMBER, { message: 'massG must be a number of grams' })
+  @IsPositive({ message: 'massG must be greater than 0 g' })
+  readonly massG?: number;
+
+  @ApiPropertyOptional({ description: 'mass and resistance: specimen length, mm', example: 1000 })
+  @ValidateIf(uses('mass', 'resistance'))
+  @IsNumber(NUMBER, { message: 'lengthMm must be a number of millimetres' })
+  @Min(10, { message: 'lengthMm must be at least 10 mm' })
+  @Max(100_000, { message: 'lengthMm must be at most 100000 mm (100 m)' })
+  readonly lengthMm?: number;
+
+  @ApiPropertyOptional({ description: 'strands: number of strands counted', example: 420 })
+  @ValidateIf(uses('strands'))
+  @IsInt({ message: 'count must be a whole number of strands' })
+  @Min(1, { message: 'count must be at least 1 strand' })
+  @Max(100_000, { message: 'count must be at most 100000 strands' })
+  readonly count?: number;
+
+  @ApiPropertyOptional({ description: 'strands: diameter of one strand, mm', example: 0.254 })
+  @ValidateIf(uses('strands'))
+  @IsNumber(NUMBER, { message: 'strandDiameterMm must be a number of millimetres' })
+  @IsPositive({ message: 'strandDiameterMm must be greater than 0 mm' })
+  @Max(20, { message: 'strandDiameterMm must be at most 20 mm' })
+  readonly strandDiameterMm?: number;
+
+  @ApiPropertyOptional({ description: 'resistance: four-wire DC resistance, ohm', example: 0.0008 })
+  @ValidateIf(uses('resistance'))
+  @IsNumber(NUMBER, { message: 'resistanceOhm must be a number of ohms' })
+  @IsPositive({ message: 'resistanceOhm must be greater than 0 ohm' })
+  readonly resistanceOhm?: number;
+
+  @ApiPropertyOptional({ description: 'resistance: conductor temperature, °C', example: 21.5 })
+  @ValidateIf(uses('resistance'))
+  @IsNumber(NUMBER, { message: 'temperatureC must be a number of degrees Celsius' })
+  @Min(-40, { message: 'temperatureC must be at least -40 °C' })
+  @Max(100, { message: 'temperatureC must be at most 100 °C' })
+  readonly temperatureC?: number;
+
+  @ApiPropertyOptional({
+    description: 'diameter: diameter of a solid conductor, mm',
+    example: 5.19,
+  })
+  @ValidateIf(uses('diameter'))
+  @IsNumber(NUMBER, { message: 'diameterMm must be a number of millimetres' })
+  @IsPositive({ message: 'diameterMm must be greater than 0 mm' })
+  @Max(100, { message: 'diameterMm must be at most 100 mm' })
+  readonly diameterMm?: number;
+
+  @ApiPropertyOptional({
+    description: 'mass and resistance: stranding increment k (0.02 = ASTM B496 2 %)',
+    example: 0.02,
+  })
+  @IsOptional()
+  @IsNumber(NUMBER, { message: 'strandingIncrement must be a number such as 0.02' })
+  @Min(0, { message: 'strandingIncrement must be at least 0 (0 for a solid conductor)' })
+  @Max(0.5, { message: 'strandingIncrement must be at most 0.5 (it is a fraction: 0.02 = 2 %)' })
+  readonly strandingIncrement?: number;
+
+  @ApiProperty({ type: [Number], description: 'Registered instruments used', example: [1, 3] })
+  @IsArray({ message: 'instrumentIds must be a list of instrument ids' })
+  @ArrayMinSize(1, { message: 'instrumentIds must name at least the main instrument used' })
+  @ArrayMaxSize(6, { message: 'instrumentIds must name at most 6 instruments' })
+  @IsInt({ each: true, message: 'instrumentIds must hold whole-number instrument ids' })
+  readonly instrumentIds: number[];
+}

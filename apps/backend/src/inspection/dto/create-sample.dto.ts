@@ -1,0 +1,21 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { IsInt, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
+
+export class CreateSampleDto {
+  @ApiProperty({ description: 'Conductor of the lot’s product the sample is cut for' })
+  @IsInt({ message: 'conductorId must be a whole-number conductor id' })
+  readonly conductorId: number;
+
+  @ApiPropertyOptional({ description: 'Spool number, kit serial … the unit it was cut from' })
+  @IsOptional()
+  @IsString({ message: 'unitRef must be text' })
+  @MaxLength(64, { message: 'unitRef must be at most 64 characters' })
+  readonly unitRef?: string;
+
+  @ApiPropertyOptional({ description: 'Unit number 1..n of the plan; next free unit if omitted' })
+  @IsOptional()
+  @IsInt({ message: 'seq must be a whole unit number of at least 1' })
+  @Min(1, { message: 'seq must be a whole unit number of at least 1' })
+  @Max(100_000, { message: 'seq must be at most 100000' })
+  readonly seq?: number;
+}

@@ -1,0 +1,12 @@
+import { ApiProperty } from '@nestjs/swagger';
+import { Transform } from 'class-transformer';
+import { IsString, MaxLength, MinLength } from 'class-validator';
+
+export class VoidReadingDto {
+  @ApiProperty({ description: 'Why the reading is wrong (at least 10 characters)' })
+  @Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value))
+  @IsString({ message: 'reason must be text' })
+  @MinLength(10, { message: 'reason must be at least 10 characters: say why the reading is wrong' })
+  @MaxLength(2000, { message: 'reason must be at most 2000 characters' })
+  readonly reason: string;
+}

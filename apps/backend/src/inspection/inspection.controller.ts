@@ -1,0 +1,49 @@
+import { Body, Controller, HttpCode, Param, ParseIntPipe, Post } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import { CurrentUser, Roles } from '../auth/decorators';
+import type { RequestUser } from '../auth/request-user';
+import { CreateReadingDto } from './dto/create-reading.dto';
+import { CreateSampleDto } from './dto/create-sample.dto';
+import { VoidReadingDto } from './dto/void-reading.dto';
+import { ReadingsService } from './readings.service';
+import { SamplesService } from './samples.service';
+
+@ApiTags('inspection')
+@Controller()
+export class InspectionController {
+  constructor(
+    private readonly samples: SamplesService,
+    private readonly readings: ReadingsService,
+  ) {}
+
+  @Post('lots/:id/samples')
+  @Roles('clerk', 'qa_lead', 'admin')
+  createSample(
+    @Param('id', ParseIntPipe) lotId: number,
+    @Body() dto: CreateSampleDto,
+    @CurrentUser() actor: RequestUser,
+  ) {
+    return this.samples.create(lotId, dto, actor);
+  }
+
+  @Post('samples/:id/readings')
+  @Roles('clerk', 'qa_lead', 'admin')
+  createReading(
+    @Param('id', ParseIntPipe) sampleId: number,
+    @Body() dto: CreateReadingDto,
+    @CurrentUser() actor: RequestUser,
+  ) {
+    return this.readings.create(sampleId, dto, actor);
+  }
+
+  @Post('readings/:id/void')
+  @HttpCode(200)
+  @Roles('qa_lead', 'admin')
+  voidReading(
+    @Param('id', ParseIntPipe) id: number,
+    @Body() dto: VoidReadingDto,
+    @CurrentUser() actor: RequestUser,
+  ) {
+    return this.readings.void(id, dto, actor);
+  }
+}

@@ -1,0 +1,102 @@
+import { UnprocessableEntityException } from '@nestjs/common';
+import type { Instrument, InstrumentKind } from '../instruments/entities/instrument.entity';
+import type { InstrumentSnapshot, ReadingMethod } from './entities/reading.entity';
+
+/** Resolutions handed to the standards library, in the method's units (g, mm, Ω, °C). */
+export interface MethodResolutions {
+  massResolutionG?: number;
+  lengthResolutionMm?: number;
+  diameterResolutionMm?: number;
+  resistanceResolutionOhm?: number;
+  temperatureResolutionC?: number;
+}
+
+/**
+ * Which instruments each method uses: the first group must be present (one of its kinds),
+ * the rest are optional. A length rule left out defaults to 1 mm divisions (ASTM B263),
+ * a thermometer to 0.1 °C (standards library default; common practice, no source).
+ */
+const METHOD_INSTRUMENTS: Record<
+  ReadingMethod,
+  { main: InstrumentKind[]; optional: InstrumentKind[] }
+> = {
+  mass: { main: ['balance'], optional: ['length_rule'] },
+  strands: { main: ['micrometer', 'caliper'], optional: [] },
+  diameter: { main: ['micrometer', 'caliper'], optional: [] },
+  resistance: { main: ['milliohm_meter'], optional: ['length_rule', 'thermometer'] },
+};
+
+const KIND_WORDS: Record<InstrumentKind, string> = {
+  balance: 'balance',
+  micrometer: 'micrometer',
+  caliper: 'caliper',
+  length_rule: 'length rule',
+  milliohm_meter: 'milliohm meter',
+  thermometer: 'thermometer',
+};
+
+/** Converts a resolution to the method's unit; milliohm meters may read in mΩ (÷ 1000). */
+function inUnit(i: Instrument, wanted: 'g' | 'mm' | 'ohm' | 'degC'): number {
+  if (i.resolutionUnit === wanted) return i.resolution;
+  if (wanted === 'ohm' && i.resolutionUnit === 'mohm') return i.resolution / 1000;
+  throw new UnprocessableEntityException(
+    `The ${KIND_WORDS[i.kind]} '${i.name}' (serial ${i.serial}) has its resolution in ${i.resolutionUnit}; expected ${wanted}. Correct it in the instrument register.`,
+  );
+}
+
+/**
+ * Checks that the instruments fit the method (the main one present, no kind twice, none
+ * foreign to the method) and returns their resolutions. Throws 422 with a clerk's sentence.
+ */
+export function resolutionsFor(
+  method: ReadingMethod,
+  instruments: Instrument[],
+): MethodResolutions {
+  const { main, optional } = METHOD_INSTRUMENTS[method];
+  const problems: string[] = [];
+  const byKind = new Map<InstrumentKind, Instrument>();
+  for (const i of instruments) {
+    if (![...main, ...optional].includes(i.kind)) {
+      problems.push(`a ${KIND_WORDS[i.kind]} ('${i.name}') is not used by the ${method} method`);
+    } else if (byKind.has(i.kind)) {
+      problems.push(`name one ${KIND_WORDS[i.kind]} only`);
+    } else byKind.set(i.kind, i);
+  }
+  const mainFound = main.filter((k) => byKind.has(k));
+  if (mainFound.length === 0) {
+    problems.push(
+      `the ${method} method needs a ${main.map((k) => KIND_WORDS[k]).join(' or ')} among the instruments`,
+    );
+  } else if (mainFound.length > 1) {
+    problems.push(`name a ${main.map((k) => KIND_WORDS[k]).join(' or a ')}, not both`);
+  }
+  if (problems.length) {
+    const text = problems.join('; ');
+    throw new UnprocessableEntityException(`${text[0].toUpperCase()}${text.slice(1)}.`);
+  }
+  const get = (k: InstrumentKind) => byKind.get(k);
+  const r: MethodResolutions = {};
+  const balance = get('balance');
+  if (balance) r.massResolutionG = inUnit(balance, 'g');
+  const rule = get('length_rule');
+  if (rule) r.lengthResolutionMm = inUnit(rule, 'mm');
+  const gauge = get('micrometer') ?? get('caliper');
+  if (gauge) r.diameterResolutionMm = inUnit(gauge, 'mm');
+  const meter = get('milliohm_meter');
+  if (meter) r.resistanceResolutionOhm = inUnit(meter, 'ohm');
+  const thermometer = get('thermometer');
+  if (thermometer) r.temperatureResolutionC = inUnit(thermometer, 'degC');
+  return r;
+}
+
+export function snapshot(i: Instrument): InstrumentSnapshot {
+  return {
+    id: i.id,
+    kind: i.kind,
+    name: i.name,
+    serial: i.serial,
+    resolution: i.resolution,
+    resolutionUnit: i.resolutionUnit,
+    calibrationDueOn: i.calibrationDueOn,
+  };
+}

@@ -1,0 +1,17 @@
+import { Controller, Get, Param, ParseIntPipe } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import { Roles } from '../auth/decorators';
+import { ALL_ROLES } from '../auth/roles';
+import { LotDetailService } from './lot-detail.service';
+
+@ApiTags('lots')
+@Controller('lots')
+export class LotDetailController {
+  constructor(private readonly lots: LotDetailService) {}
+
+  @Get(':id')
+  @Roles(...ALL_ROLES)
+  detail(@Param('id', ParseIntPipe) id: number) {
+    return this.lots.detail(id);
+  }
+}

@@ -1,0 +1,69 @@
+import { Injectable } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/core';
+import { Decision } from '../decisions/entities/decision.entity';
+import { Nonconformance } from '../decisions/entities/nonconformance.entity';
+import { Lot } from '../lots/entities/lot.entity';
+import { Photo } from '../photos/entities/photo.entity';
+import { photoView } from '../photos/photo-view';
+import { LotEvaluationService } from './lot-evaluation';
+import { lotSummary, productView, supplierWarning } from './lot-summary-local';
+import { sampleView } from './views';
+
+/** LotDetail of docs/api-conventions.md: the lot with all its evidence and its evaluation. */
+@Injectable()
+export class LotDetailService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly evaluation: LotEvaluationService,
+  ) {}
+
+  async detail(id: number) {
+    const lot = await this.em.findOneOrFail(
+      Lot,
+      { id },
+      {
+        populate: [
+          'supplier',
+          'receivedBy',
+          'product.conductors',
+          'samples.conductor',
+          'samples.createdBy',
+          'samples.readings.takenBy',
+          'samples.readings.voidedBy',
+        ],
+      },
+    );
+    const [photos, decisions, ncr] = await Promise.all([
+      this.em.find(Photo, { lot }, { populate: ['uploadedBy', 'sample'], orderBy: { id: 'asc' } }),
+      this.em.find(
+        Decision,
+        { lot },
+        { populate: ['decidedBy'], orderBy: { decidedAt: 'desc', id: 'desc' } },
+      ),
+      this.em.findOne(Nonconformance, { lot }, { orderBy: { id: 'desc' }, populate: ['decision'] }),
+    ]);
+    const samples = [...lot.samples.getItems()].sort(
+      (a, b) => a.conductor.position - b.conductor.position || a.seq - b.seq,
+    );
+    return {
+      ...lotSummary(lot),
+      notes: lot.notes,
+      supplierWarning: supplierWarning(lot.supplier),
+      product: productView(lot.product, lot.supplier),
+      samples: samples.map(sampleView),
+      photos: photos.map(photoView),
+      evaluation: this.evaluation.evaluateLoaded(lot),
+      decisions: decisions.map((d) => ({
+        id: d.id,
+        outcome: d.outcome,
+        recommendation: d.recommendation,
+        reason: d.reason,
+        decidedBy: { id: d.decidedBy.id, name: d.decidedBy.name },
+        decidedAt: d.decidedAt,
+        lotVersion: d.lotVersion,
+        ncrNumber: ncr && ncr.decision.id === d.id ? ncr.number : null,
+      })),
+      ncrNumber: ncr?.number ?? null,
+    };
+  }
+}

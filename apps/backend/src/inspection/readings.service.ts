@@ -1,0 +1,154 @@
+import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/core';
+import type { MaterialId } from '@gaugeproof/standards';
+import { AuditService } from '../audit/audit.service';
+import type { RequestUser } from '../auth/request-user';
+import type { Instrument } from '../instruments/entities/instrument.entity';
+import { User } from '../users/entities/user.entity';
+import { CreateReadingDto, INPUT_FIELDS, METHOD_FIELDS } from './dto/create-reading.dto';
+import { VoidReadingDto } from './dto/void-reading.dto';
+import { Reading } from './entities/reading.entity';
+import { Sample } from './entities/sample.entity';
+import { resolutionsFor, snapshot } from './instrument-resolutions';
+import { assertLotOpen, LotStatusService } from './lot-status';
+import { computeReading, type ReadingInputs } from './reading-compute';
+import { assertUsableInstruments } from '../instruments/instruments.service';
+import { readingView } from './views';
+
+/** The inputs of the reading's method; 400 naming any field another method uses. */
+export function methodInputs(dto: CreateReadingDto): ReadingInputs {
+  const allowed = METHOD_FIELDS[dto.method];
+  const foreign = INPUT_FIELDS.filter((f) => dto[f] !== undefined && !allowed.includes(f));
+  if (foreign.length) {
+    throw new BadRequestException(
+      foreign.map((f) => `${f} is not used by the ${dto.method} method`),
+    );
+  }
+  const inputs: ReadingInputs = {};
+  for (const f of allowed) {
+    const v = dto[f as (typeof INPUT_FIELDS)[number]];
+    if (v !== undefined) inputs[f as keyof ReadingInputs] = v;
+  }
+  return inputs;
+}
+
+@Injectable()
+export class ReadingsService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly audit: AuditService,
+    private readonly lotStatus: LotStatusService,
+  ) {}
+
+  async create(sampleId: number, dto: CreateReadingDto, actor: RequestUser) {
+    const inputs = methodInputs(dto);
+    return this.em.transactional(async (tx) => {
+      const sample = await tx.findOneOrFail(
+        Sample,
+        { id: sampleId },
+        { populate: ['lot.product', 'conductor'] },
+      );
+      assertLotOpen(sample.lot);
+      const instruments = await assertUsableInstruments(tx, dto.instrumentIds, new Date());
+      const reading = await this.record(tx, sample, dto.method, inputs, instruments, actor);
+      await this.lotStatus.refresh(tx, sample.lot, actor);
+      return readingView(reading);
+    });
+  }
+
+  /**
+   * Computes and stores one reading on a sample, audited, and flushes it; the caller then
+   * refreshes the lot status. Shared by the route and the CSV import.
+   */
+  async record(
+    em: EntityManager,
+    sample: Sample,
+    method: CreateReadingDto['method'],
+    inputs: ReadingInputs,
+    instruments: Instrument[],
+    actor: RequestUser,
+  ): Promise<Reading> {
+    const siblings = await em.find(
+      Reading,
+      { sample, voided: false },
+      { orderBy: { takenAt: 'desc', id: 'desc' } },
+    );
+    const computed = computeReading({
+      method,
+      inputs,
+      resolutions: resolutionsFor(method, instruments),
+      gaugeLabel: sample.conductor.gaugeLabel,
+      claimedMaterial: sample.conductor.claimedMaterial as MaterialId,
+      minAreaRatio: sample.lot.product.minAreaRatio,
+      siblings: siblings.map((r) => ({
+        method: r.method,
+        inputs: r.inputs as ReadingInputs,
+        areaMm2: r.areaMm2,
+      })),
+    });
+    const reading = em.create(Reading, {
+      sample,
+      method,
+      inputs: inputs as Record<string, number>,
+      instruments: instruments.map(snapshot),
+      ...computed,
+      takenBy: await em.findOneOrFail(User, { id: actor.id }),
+    });
+    em.persist(reading);
+    await em.flush();
+    this.audit.record(em, actor, {
+      action: 'reading.create',
+      entityType: 'reading',
+      entityId: reading.id,
+      lotId: sample.lot.id,
+      after: auditShape(reading),
+    });
+    return reading;
+  }
+
+  async void(id: number, dto: VoidReadingDto, actor: RequestUser) {
+    return this.em.transactional(async (tx) => {
+      const reading = await tx.findOneOrFail(
+        Reading,
+        { id },
+        { populate: ['sample.lot', 'takenBy', 'voidedBy'] },
+      );
+      if (reading.voided) {
+        throw new ConflictException(
+          `This reading was already voided on ${reading.voidedAt?.toISOString().slice(0, 10)}: ${reading.voidReason}`,
+        );
+      }
+      const before = auditShape(reading);
+      reading.voided = true;
+      reading.voidReason = dto.reason;
+      reading.voidedBy = await tx.findOneOrFail(User, { id: actor.id });
+      reading.voidedAt = new Date();
+      await tx.flush();
+      this.audit.record(tx, actor, {
+        action: 'reading.void',
+        entityType: 'reading',
+        entityId: reading.id,
+        lotId: reading.sample.lot.id,
+        before,
+        after: auditShape(reading),
+      });
+      await this.lotStatus.refresh(tx, reading.sample.lot, actor);
+      return readingView(reading);
+    });
+  }
+}
+
+function auditShape(r: Reading): Record<string, unknown> {
+  return {
+    sampleId: r.sample.id,
+    method: r.method,
+    inputs: r.inputs,
+    instrumentIds: r.instruments.map((i) => i.id),
+    areaMm2: r.areaMm2,
+    measuresAs: r.measuresAs,
+    identifiedMaterial: r.identifiedMaterial,
+    verdict: r.verdict,
+    voided: r.voided,
+    voidReason: r.voidReason,
+  };
+}
