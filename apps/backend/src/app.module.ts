@@ -14,6 +14,8 @@ import { ormOptions } from './database/orm-options';
 import { HealthModule } from './health/health.module';
 import { UsersModule } from './users/users.module';
 import { InspectionModule } from './inspection/inspection.module';
+import { PhotosModule } from './photos/photos.module';
+import { StorageModule } from './storage/storage.module';
 import { ScorecardsModule } from './scorecards/scorecards.module';
 import { InstrumentsModule } from './instruments/instruments.module';
 import { SuppliersModule } from './suppliers/suppliers.module';
@@ -29,6 +31,8 @@ const DOMAIN_MODULES = [
   SuppliersModule,
   ProductsModule,
   InspectionModule,
+  StorageModule,
+  PhotosModule,
   ScorecardsModule,
 ];
 

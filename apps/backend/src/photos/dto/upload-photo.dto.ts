@@ -1,0 +1,18 @@
+import { ApiPropertyOptional } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import { IsInt, IsOptional, IsString, MaxLength } from 'class-validator';
+
+/** The text fields of the multipart upload; the image itself is the `file` field. */
+export class UploadPhotoDto {
+  @ApiPropertyOptional({ description: 'Sample of this lot the photo shows' })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt({ message: 'sampleId must be a whole-number sample id' })
+  readonly sampleId?: number;
+
+  @ApiPropertyOptional({ maxLength: 300 })
+  @IsOptional()
+  @IsString({ message: 'caption must be text' })
+  @MaxLength(300, { message: 'caption must be at most 300 characters' })
+  readonly caption?: string;
+}

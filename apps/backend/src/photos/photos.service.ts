@@ -1,0 +1,116 @@
+import { Injectable, UnprocessableEntityException, BadRequestException } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/core';
+import { createHash, randomUUID } from 'node:crypto';
+import type { Readable } from 'node:stream';
+import { AuditService } from '../audit/audit.service';
+import type { RequestUser } from '../auth/request-user';
+import { Sample } from '../inspection/entities/sample.entity';
+import { Lot } from '../lots/entities/lot.entity';
+import { StorageService } from '../storage/storage.service';
+import { User } from '../users/entities/user.entity';
+import { UploadPhotoDto } from './dto/upload-photo.dto';
+import { Photo } from './entities/photo.entity';
+import { checkImage } from './image-check';
+import type { ImageType } from './image-header';
+import { photoView } from './photo-view';
+
+const EXTENSIONS: Record<ImageType, string> = {
+  'image/jpeg': 'jpg',
+  'image/png': 'png',
+  'image/webp': 'webp',
+};
+const typeOfKey = (key: string): ImageType =>
+  (Object.entries(EXTENSIONS).find(([, ext]) => key.endsWith(`.${ext}`))?.[0] ??
+    'image/jpeg') as ImageType;
+
+@Injectable()
+export class PhotosService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly audit: AuditService,
+    private readonly storage: StorageService,
+  ) {}
+
+  /**
+   * Checks the image, stores original and thumbnail under generated names, then the row and
+   * its audit event in one transaction; if anything fails after a write, the files go too.
+   */
+  async upload(
+    lotId: number,
+    file: Express.Multer.File | undefined,
+    dto: UploadPhotoDto,
+    actor: RequestUser,
+  ) {
+    if (!file) {
+      throw new BadRequestException(['file is required: attach a JPEG, PNG or WebP photo']);
+    }
+    const lot = await this.em.findOneOrFail(Lot, { id: lotId });
+    if (dto.sampleId !== undefined) {
+      const sample = await this.em.findOne(Sample, { id: dto.sampleId, lot });
+      if (!sample) {
+        throw new UnprocessableEntityException(
+          `Sample #${dto.sampleId} is not a sample of this lot.`,
+        );
+      }
+    }
+    const image = await checkImage(file.buffer);
+    const name = randomUUID();
+    const ext = EXTENSIONS[image.mimeType];
+    const originalKey = `photos/${name}.${ext}`;
+    const thumbnailKey = image.thumbnail
+      ? `photos/${name}-thumb.${EXTENSIONS[image.thumbnail.mimeType]}`
+      : originalKey;
+    const written: string[] = [];
+    try {
+      await this.storage.put(originalKey, file.buffer);
+      written.push(originalKey);
+      if (image.thumbnail) {
+        await this.storage.put(thumbnailKey, image.thumbnail.data);
+        written.push(thumbnailKey);
+      }
+      const photo = await this.em.transactional(async (tx) => {
+        const p = tx.create(Photo, {
+          lot: tx.getReference(Lot, lot.id),
+          sample: dto.sampleId === undefined ? null : tx.getReference(Sample, dto.sampleId),
+          caption: dto.caption?.trim() || null,
+          storageKey: originalKey,
+          thumbnailKey,
+          mimeType: image.mimeType,
+          sizeBytes: file.size,
+          sha256: createHash('sha256').update(file.buffer).digest('hex'),
+          width: image.width,
+          height: image.height,
+          uploadedBy: await tx.findOneOrFail(User, { id: actor.id }),
+        });
+        tx.persist(p);
+        await tx.flush();
+        this.audit.record(tx, actor, {
+          action: 'photo.create',
+          entityType: 'photo',
+          entityId: p.id,
+          lotId: lot.id,
+          after: { sampleId: dto.sampleId ?? null, sha256: p.sha256, mimeType: p.mimeType },
+        });
+        return p;
+      });
+      return photoView(photo);
+    } catch (e) {
+      await Promise.all(written.map((k) => this.storage.delete(k).catch(() => undefined)));
+      throw e;
+    }
+  }
+
+  async open(
+    id: number,
+    which: 'original' | 'thumbnail',
+  ): Promise<{ stream: Readable; mimeType: ImageType; name: string }> {
+    const photo = await this.em.findOneOrFail(Photo, { id });
+    const key = which === 'original' ? photo.storageKey : photo.thumbnailKey;
+    const mimeType = typeOfKey(key);
+    return {
+      stream: await this.storage.get(key),
+      mimeType,
+      name: `photo-${photo.id}${which === 'thumbnail' ? '-thumb' : ''}.${EXTENSIONS[mimeType]}`,
+    };
+  }
+}
