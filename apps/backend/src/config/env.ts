@@ -19,7 +19,21 @@ export interface AppConfig {
   publicUrl: string;
   logLevel: string;
   frontendDist: string;
+  /** Where photos go: the local UPLOAD_DIR, or an S3 bucket shared by several servers. */
+  storage: StorageConfig;
 }
+
+export type StorageConfig =
+  | { kind: 'local' }
+  | {
+      kind: 's3';
+      bucket: string;
+      region: string;
+      endpoint?: string;
+      accessKeyId?: string;
+      secretAccessKey?: string;
+      forcePathStyle: boolean;
+    };
 
 export class ConfigError extends Error {
   constructor(readonly problems: string[]) {
@@ -72,7 +86,27 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   if (!['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'].includes(logLevel)) {
     problems.push(`LOG_LEVEL must be one of fatal, error, warn, info, debug, trace, silent`);
   }
+  const bucket = env.S3_BUCKET?.trim();
+  if (bucket && !/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/.test(bucket)) {
+    problems.push(
+      'S3_BUCKET must be a valid bucket name (lower-case letters, digits, dots, dashes)',
+    );
+  }
+  if (env.S3_ENDPOINT && !/^https?:\/\//.test(env.S3_ENDPOINT)) {
+    problems.push('S3_ENDPOINT must start with http:// or https://');
+  }
   if (problems.length > 0) throw new ConfigError(problems);
+  const storage: StorageConfig = bucket
+    ? {
+        kind: 's3',
+        bucket,
+        region: env.S3_REGION || 'us-east-1',
+        endpoint: env.S3_ENDPOINT || undefined,
+        accessKeyId: env.S3_ACCESS_KEY_ID || undefined,
+        secretAccessKey: env.S3_SECRET_ACCESS_KEY || undefined,
+        forcePathStyle: (env.S3_FORCE_PATH_STYLE ?? 'true') !== 'false',
+      }
+    : { kind: 'local' };
   const publicUrl = (env.PUBLIC_URL || `http://localhost:${port}`).replace(/\/$/, '');
   return {
     port,
@@ -90,5 +124,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     publicUrl,
     logLevel,
     frontendDist: fromRepo('apps/frontend/dist'),
+    storage,
   };
 }
