@@ -20,6 +20,7 @@ import { ScorecardsModule } from './scorecards/scorecards.module';
 import { InstrumentsModule } from './instruments/instruments.module';
 import { SuppliersModule } from './suppliers/suppliers.module';
 import { ProductsModule } from './products/products.module';
+import { LotsModule } from './lots/lots.module';
 
 /** Domain modules; each later domain adds its module here. */
 const DOMAIN_MODULES = [
@@ -30,6 +31,7 @@ const DOMAIN_MODULES = [
   InstrumentsModule,
   SuppliersModule,
   ProductsModule,
+  LotsModule,
   InspectionModule,
   StorageModule,
   PhotosModule,

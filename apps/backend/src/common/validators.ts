@@ -1,4 +1,5 @@
 import { ValidateBy, type ValidationOptions } from 'class-validator';
+import { isCalendarDate } from './calendar';
 
 /**
  * A whole number from `min` to `max`, checked as one rule so a bad value gets one message
@@ -14,6 +15,19 @@ export function IsWholeNumber(min: number, max: number, options: ValidationOptio
           typeof value === 'number' && Number.isInteger(value) && value >= min && value <= max,
       },
     },
+    options,
+  );
+}
+
+/** A record id: a whole number from 1 (one message whatever is wrong). */
+export function IsId(options: ValidationOptions) {
+  return IsWholeNumber(1, 2_147_483_647, options);
+}
+
+/** A real calendar date written YYYY-MM-DD (no 2026-02-30). */
+export function IsCalendarDate(options: ValidationOptions) {
+  return ValidateBy(
+    { name: 'isCalendarDate', validator: { validate: (value: unknown) => isCalendarDate(value) } },
     options,
   );
 }

@@ -5,14 +5,13 @@ import {
   ArrayMinSize,
   IsArray,
   IsIn,
-  IsInt,
   IsString,
   Matches,
   MaxLength,
-  Min,
   MinLength,
   ValidateNested,
 } from 'class-validator';
+import { IsId } from '../../common/validators';
 import { PRODUCT_KINDS, type ProductKind } from '../entities/product.entity';
 import { ConductorDto } from './conductor.dto';
 import { ProductPolicyDto } from './product-policy.dto';
@@ -20,8 +19,7 @@ import { ProductPolicyDto } from './product-policy.dto';
 export class CreateProductDto extends ProductPolicyDto {
   @ApiProperty()
   @Type(() => Number)
-  @IsInt({ message: 'supplierId must be the id of a supplier' })
-  @Min(1, { message: 'supplierId must be the id of a supplier' })
+  @IsId({ message: 'supplierId must be the id of a supplier' })
   readonly supplierId: number;
 
   @ApiProperty({ example: 'PC-4-50R' })

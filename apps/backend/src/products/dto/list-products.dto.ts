@@ -1,6 +1,7 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform, Type } from 'class-transformer';
-import { IsBoolean, IsIn, IsInt, IsOptional, IsString, MaxLength, Min } from 'class-validator';
+import { IsBoolean, IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
+import { IsId } from '../../common/validators';
 import { ListQueryDto, queryBoolean } from '../../common/paging';
 import { PRODUCT_KINDS, type ProductKind } from '../entities/product.entity';
 
@@ -8,8 +9,7 @@ export class ListProductsDto extends ListQueryDto {
   @ApiPropertyOptional()
   @IsOptional()
   @Type(() => Number)
-  @IsInt({ message: 'supplierId must be the id of a supplier' })
-  @Min(1, { message: 'supplierId must be the id of a supplier' })
+  @IsId({ message: 'supplierId must be the id of a supplier' })
   readonly supplierId?: number;
 
   @ApiPropertyOptional({ enum: PRODUCT_KINDS })

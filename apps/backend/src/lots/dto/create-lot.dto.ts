@@ -1,0 +1,48 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { IsOptional, IsString, MaxLength, MinLength, ValidateIf } from 'class-validator';
+import { IsId, IsWholeNumber } from '../../common/validators';
+import { LOT_QUANTITY_MAX, lotQuantityMessage } from '../../products/dto/sampling-plan-query.dto';
+
+export class CreateLotDto {
+  @ApiProperty()
+  @IsId({ message: 'productId must be the id of a product' })
+  readonly productId: number;
+
+  @ApiProperty({ example: 'PO-2026-0412' })
+  @IsString({ message: 'poNumber is required' })
+  @MinLength(1, { message: 'poNumber is required' })
+  @MaxLength(64, { message: 'poNumber must be at most 64 characters' })
+  readonly poNumber: string;
+
+  @ApiPropertyOptional({ nullable: true })
+  @IsOptional()
+  @ValidateIf((_o, v) => v !== null)
+  @IsString()
+  @MaxLength(64, { message: 'packingSlip must be at most 64 characters' })
+  readonly packingSlip?: string | null;
+
+  @ApiPropertyOptional({ nullable: true })
+  @IsOptional()
+  @ValidateIf((_o, v) => v !== null)
+  @IsString()
+  @MaxLength(64, { message: 'supplierLotCode must be at most 64 characters' })
+  readonly supplierLotCode?: string | null;
+
+  /** Units in the lot; the sampling tables start at 2 (MIL-STD-105E Table I). */
+  @ApiProperty({ minimum: 2, example: 40 })
+  @IsWholeNumber(2, LOT_QUANTITY_MAX, { message: lotQuantityMessage })
+  readonly quantity: number;
+
+  @ApiProperty({ example: 'spools', description: 'spools, kits … as on the packing slip' })
+  @IsString({ message: 'unit is required' })
+  @MinLength(1, { message: 'unit is required' })
+  @MaxLength(16, { message: 'unit must be at most 16 characters' })
+  readonly unit: string;
+
+  @ApiPropertyOptional({ nullable: true })
+  @IsOptional()
+  @ValidateIf((_o, v) => v !== null)
+  @IsString()
+  @MaxLength(4000, { message: 'notes must be at most 4000 characters' })
+  readonly notes?: string | null;
+}

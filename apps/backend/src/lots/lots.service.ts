@@ -1,0 +1,149 @@
+import { BadRequestException, Injectable, UnprocessableEntityException } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/core';
+import type { QueryBuilder, SqlEntityManager } from '@mikro-orm/sqlite';
+import { AuditService } from '../audit/audit.service';
+import type { RequestUser } from '../auth/request-user';
+import { addDays } from '../common/calendar';
+import { likePattern, paging, parseSort, type Page } from '../common/paging';
+import { InspectionState } from '../products/entities/inspection-state.entity';
+import { Product } from '../products/entities/product.entity';
+import { planForLot } from '../products/sampling-plan';
+import { User } from '../users/entities/user.entity';
+import { CreateLotDto } from './dto/create-lot.dto';
+import { LotFiltersDto } from './dto/list-lots.dto';
+import { Lot } from './entities/lot.entity';
+import { lotSummary, supplierWarning, type LotSummary } from './lot-summary';
+import { lotsCsv } from './lots-csv';
+
+const SORTS = ['receivedAt', 'poNumber', 'status', 'supplier', 'quantity'] as const;
+const SORT_COLUMNS: Record<(typeof SORTS)[number], string> = {
+  receivedAt: 'l.receivedAt',
+  poNumber: 'l.poNumber',
+  status: 'l.status',
+  supplier: 's.name',
+  quantity: 'l.quantity',
+};
+/** An export is for a spreadsheet; beyond this, narrow the filters (common practice, no source). */
+export const LOT_EXPORT_MAX_ROWS = 50_000;
+
+const blankToNull = (v: string | null | undefined) => (v?.trim() ? v.trim() : null);
+
+@Injectable()
+export class LotsService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly audit: AuditService,
+  ) {}
+
+  async create(dto: CreateLotDto, actor: RequestUser) {
+    const product = await this.em.findOne(
+      Product,
+      { id: dto.productId },
+      { populate: ['supplier'] },
+    );
+    if (!product) throw new BadRequestException(['productId must be the id of a product']);
+    if (!product.active) {
+      throw new UnprocessableEntityException(
+        `${product.sku} of ${product.supplier.name} is no longer an active product; reactivate it or receive the delivery against the right product.`,
+      );
+    }
+    const state = await this.em.findOne(InspectionState, { product });
+    const plan = planForLot(product, state, dto.quantity);
+    if (!plan.samplingPlan) throw new UnprocessableEntityException(plan.message);
+    const samplingPlan = plan.samplingPlan;
+    return this.em.transactional(async (em) => {
+      const lot = em.create(Lot, {
+        product,
+        supplier: product.supplier,
+        poNumber: dto.poNumber.trim(),
+        packingSlip: blankToNull(dto.packingSlip),
+        supplierLotCode: blankToNull(dto.supplierLotCode),
+        quantity: dto.quantity,
+        unit: dto.unit.trim(),
+        receivedBy: await em.findOneOrFail(User, { id: actor.id }),
+        status: 'on_hold',
+        samplingPlan,
+        notes: blankToNull(dto.notes),
+        version: 1,
+      });
+      await em.flush();
+      const summary = lotSummary(lot);
+      this.audit.record(em, actor, {
+        action: 'lot.create',
+        entityType: 'lot',
+        entityId: lot.id,
+        lotId: lot.id,
+        after: { ...summary, notes: lot.notes },
+      });
+      return { ...summary, notes: lot.notes, supplierWarning: supplierWarning(product.supplier) };
+    });
+  }
+
+  async list(q: LotFiltersDto): Promise<Page<LotSummary>> {
+    const { page, pageSize, offset } = paging(q);
+    const qb = this.filtered(q);
+    const total = await qb.clone().getCount('l.id');
+    const rows = await this.sorted(qb, q).limit(pageSize).offset(offset).getResultList();
+    return { items: await this.summaries(rows), total, page, pageSize };
+  }
+
+  /** The list's CSV with the same filters and sort, audited as an export. */
+  async exportCsv(q: LotFiltersDto, actor: RequestUser): Promise<string> {
+    const qb = this.filtered(q);
+    const total = await qb.clone().getCount('l.id');
+    if (total > LOT_EXPORT_MAX_ROWS) {
+      throw new UnprocessableEntityException(
+        `${total} lots match; narrow the filters to at most ${LOT_EXPORT_MAX_ROWS} for one export.`,
+      );
+    }
+    const rows = await this.sorted(qb, q).getResultList();
+    const csv = lotsCsv(await this.summaries(rows));
+    const { page: _p, pageSize: _s, ...filters } = q;
+    this.audit.record(this.em, actor, {
+      action: 'lot.export',
+      entityType: 'lot',
+      after: { filters: { ...filters }, rows: rows.length },
+    });
+    await this.em.flush();
+    return csv;
+  }
+
+  private filtered(q: LotFiltersDto): QueryBuilder<Lot> {
+    if (q.receivedFrom && q.receivedTo && q.receivedTo < q.receivedFrom) {
+      throw new BadRequestException(['receivedTo must not be before receivedFrom']);
+    }
+    const qb = (this.em as SqlEntityManager)
+      .createQueryBuilder(Lot, 'l')
+      .select('l.*')
+      .join('l.product', 'p')
+      .join('l.supplier', 's');
+    if (q.status?.length) qb.andWhere({ status: { $in: q.status } });
+    if (q.supplierId) qb.andWhere({ supplier: q.supplierId });
+    if (q.productId) qb.andWhere({ product: q.productId });
+    if (q.receivedFrom) {
+      qb.andWhere({ receivedAt: { $gte: new Date(`${q.receivedFrom}T00:00:00Z`) } });
+    }
+    if (q.receivedTo) {
+      qb.andWhere({ receivedAt: { $lt: new Date(`${addDays(q.receivedTo, 1)}T00:00:00Z`) } });
+    }
+    if (q.q?.trim()) {
+      const p = likePattern(q.q);
+      const like = (col: string) => `lower(coalesce(${col}, '')) like ? escape '\\'`;
+      qb.andWhere(
+        `(${[like('l.po_number'), like('l.packing_slip'), like('l.supplier_lot_code'), like('p.sku'), like('s.name')].join(' or ')})`,
+        [p, p, p, p, p],
+      );
+    }
+    return qb;
+  }
+
+  private sorted(qb: QueryBuilder<Lot>, q: LotFiltersDto): QueryBuilder<Lot> {
+    const [field, dir] = parseSort(q.sort, SORTS, ['receivedAt', 'desc']);
+    return qb.orderBy({ [SORT_COLUMNS[field]]: dir, 'l.id': dir });
+  }
+
+  private async summaries(rows: Lot[]): Promise<LotSummary[]> {
+    await this.em.populate(rows, ['product', 'supplier', 'receivedBy']);
+    return rows.map(lotSummary);
+  }
+}
