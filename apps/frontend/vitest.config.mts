@@ -13,5 +13,7 @@ export default defineConfig({
     setupFiles: ['./src/test/setup.ts'],
     include: ['src/**/*.test.{ts,tsx}'],
     css: false,
+    // MUI under jsdom is slow to first render; other builds share this machine.
+    testTimeout: 20_000,
   },
 });

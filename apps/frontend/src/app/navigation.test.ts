@@ -6,11 +6,20 @@ import { ROLES } from '@/lib/roles';
 const labelsFor = (role: (typeof ROLES)[number]) => navItemsFor(role).map((item) => item.label);
 
 describe('navigation by role', () => {
-  it('shows Users to admin only', () => {
-    expect(labelsFor('admin')).toEqual(['Today', 'Users']);
-    expect(labelsFor('clerk')).toEqual(['Today']);
-    expect(labelsFor('qa_lead')).toEqual(['Today']);
-    expect(labelsFor('purchasing')).toEqual(['Today']);
+  it('shows Users to admin only, and admin everything', () => {
+    expect(labelsFor('admin')).toEqual(navItems.map((item) => item.label));
+    expect(labelsFor('admin')).toContain('Users');
+    for (const role of ROLES.filter((r) => r !== 'admin')) {
+      expect(labelsFor(role)).not.toContain('Users');
+      expect(labelsFor(role)).toContain('Today');
+    }
+  });
+
+  it('lists exactly the items whose roles include the role, in order', () => {
+    for (const role of ROLES) {
+      const expected = navItems.filter((item) => item.roles.includes(role)).map((i) => i.label);
+      expect(labelsFor(role)).toEqual(expected);
+    }
   });
 
   it('never shows an item to a role it does not list', () => {
@@ -37,8 +46,8 @@ describe('role home', () => {
     for (const role of ROLES) expect(canOpen(role, homePathFor(role))).toBe(true);
   });
 
-  it('sends purchasing to Today for now', () => {
-    expect(homePathFor('purchasing')).toBe(paths.today.path);
+  it('sends purchasing to Scorecards and the others to Today', () => {
+    expect(homePathFor('purchasing')).toBe(paths.scorecards.path);
     expect(homePathFor('clerk')).toBe(paths.today.path);
   });
 });

@@ -38,7 +38,10 @@ export const theme = createTheme({
   components: {
     MuiAppBar: {
       defaultProps: { elevation: 0 },
-      styleOverrides: { root: { backgroundColor: ink, borderBottom: `3px solid ${copper}` } },
+      // Papers are outlined by default; the bar keeps only its copper rule.
+      styleOverrides: {
+        root: { backgroundColor: ink, border: 'none', borderBottom: `3px solid ${copper}` },
+      },
     },
     MuiButton: { defaultProps: { disableElevation: true } },
     MuiPaper: { defaultProps: { variant: 'outlined' } },

@@ -33,11 +33,30 @@ describe('query client error hooks', () => {
     expect(onUnauthorized).not.toHaveBeenCalled();
   });
 
-  it('toasts other errors with the server message', async () => {
+  it('leaves a first-load error to the screen but toasts a failed refresh', async () => {
     const client = createQueryClient({ onUnauthorized: vi.fn() });
-    await client
-      .fetchQuery({ queryKey: ['y'], queryFn: () => Promise.reject(apiError(403)) })
-      .catch(() => {});
+    const before = toasts.snapshot().length;
+    const fail = () => Promise.reject(apiError(403));
+    await client.fetchQuery({ queryKey: ['y'], queryFn: fail }).catch(() => {});
+    expect(toasts.snapshot()).toHaveLength(before);
+
+    client.setQueryData(['z'], 'on screen');
+    await client.fetchQuery({ queryKey: ['z'], queryFn: fail, staleTime: 0 }).catch(() => {});
     expect(toasts.snapshot().at(-1)).toMatchObject({ message: 'failed 403', severity: 'error' });
+  });
+
+  it('toasts a failed mutation unless the form shows it inline', async () => {
+    const client = createQueryClient({ onUnauthorized: vi.fn() });
+    const run = (meta?: { inlineErrors: boolean }) =>
+      client
+        .getMutationCache()
+        .build(client, { mutationFn: () => Promise.reject(apiError(409)), meta })
+        .execute(undefined)
+        .catch(() => {});
+    const before = toasts.snapshot().length;
+    await run({ inlineErrors: true });
+    expect(toasts.snapshot()).toHaveLength(before);
+    await run();
+    expect(toasts.snapshot()).toHaveLength(before + 1);
   });
 });

@@ -8,6 +8,8 @@ export interface RequestMeta extends Record<string, unknown> {
   ignoreUnauthorized?: boolean;
   /** The screen shows this error itself (forms with field messages); no toast. */
   inlineErrors?: boolean;
+  /** Toast a query's error even on first load (most lists show it inline instead). */
+  toastErrors?: boolean;
 }
 
 declare module '@tanstack/react-query' {
@@ -30,18 +32,23 @@ export interface QueryClientHandlers {
 }
 
 export function createQueryClient(handlers: QueryClientHandlers): QueryClient {
-  const handleError = (error: unknown, meta: RequestMeta | undefined): void => {
+  const handleError = (error: unknown, meta: RequestMeta | undefined, toast: boolean): void => {
     if (isApiError(error) && error.status === 401 && !meta?.ignoreUnauthorized) {
       handlers.onUnauthorized(queryClient);
       return;
     }
-    if (!meta?.inlineErrors) toasts.error(errorMessage(error));
+    if (toast && !meta?.inlineErrors) toasts.error(errorMessage(error));
   };
 
   const queryClient: QueryClient = new QueryClient({
-    queryCache: new QueryCache({ onError: (error, query) => handleError(error, query.meta) }),
+    queryCache: new QueryCache({
+      // A first load that fails shows its error state in place; a refresh that fails
+      // behind data already on screen would go unnoticed, so that one is toasted.
+      onError: (error, query) =>
+        handleError(error, query.meta, query.state.data !== undefined || !!query.meta?.toastErrors),
+    }),
     mutationCache: new MutationCache({
-      onError: (error, _variables, _context, mutation) => handleError(error, mutation.meta),
+      onError: (error, _variables, _context, mutation) => handleError(error, mutation.meta, true),
     }),
     defaultOptions: {
       queries: {

@@ -63,7 +63,13 @@ export function AppShell() {
           open
           sx={{
             display: { xs: 'none', md: 'block' },
-            '& .MuiDrawer-paper': { width: drawerWidth },
+            // Papers are outlined by default; a docked drawer needs only its right edge.
+            '& .MuiDrawer-paper': {
+              width: drawerWidth,
+              borderTop: 0,
+              borderLeft: 0,
+              borderBottom: 0,
+            },
           }}
         >
           <SideNav />

@@ -1,5 +1,5 @@
 import { Alert, Box, Paper, Typography } from '@mui/material';
-import { Navigate, useNavigate, useSearchParams } from 'react-router-dom';
+import { Navigate, useSearchParams } from 'react-router-dom';
 import { afterSignInPath } from '@/app/navigation';
 import { shellColors } from '@/app/theme';
 import { useAuth } from '@/features/auth/auth-context';
@@ -7,7 +7,6 @@ import { SignInForm } from '@/features/auth/components/sign-in-form';
 
 export function SignInRoute() {
   const { user } = useAuth();
-  const navigate = useNavigate();
   const [params] = useSearchParams();
   const redirectTo = params.get('redirectTo');
 
@@ -42,11 +41,8 @@ export function SignInRoute() {
             Sign in to continue where you were.
           </Alert>
         )}
-        <SignInForm
-          onSignedIn={(signedIn) =>
-            navigate(afterSignInPath(signedIn.role, redirectTo), { replace: true })
-          }
-        />
+        {/* Once signed in, the user is set and the redirect above takes over. */}
+        <SignInForm />
       </Paper>
     </Box>
   );

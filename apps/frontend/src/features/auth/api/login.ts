@@ -29,8 +29,9 @@ export function useLogin() {
     // A 401 here means wrong credentials; the form shows it.
     meta: { ignoreUnauthorized: true, inlineErrors: true },
     onSuccess: ({ user }) => {
-      // Nothing cached for a previous user may leak into this session.
-      queryClient.clear();
+      // Nothing cached for a previous user may leak into this session. (Not clear():
+      // that would also drop the session query the auth context is watching.)
+      queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== 'auth' });
       queryClient.setQueryData(meQueryKey, user);
     },
   });

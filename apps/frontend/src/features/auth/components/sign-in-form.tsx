@@ -12,7 +12,7 @@ export function signInErrorMessage(error: unknown): string {
   return 'Signing in is not possible right now. Try again in a moment.';
 }
 
-export function SignInForm({ onSignedIn }: { onSignedIn: (user: SessionUser) => void }) {
+export function SignInForm({ onSignedIn }: { onSignedIn?: (user: SessionUser) => void }) {
   const login = useLogin();
   const { register, handleSubmit, formState } = useForm<LoginInput>({
     resolver: zodResolver(loginSchema),
@@ -22,7 +22,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (user: SessionUser) => 
   const { errors } = formState;
 
   const onSubmit = handleSubmit((input) =>
-    login.mutate(input, { onSuccess: ({ user }) => onSignedIn(user) }),
+    login.mutate(input, { onSuccess: ({ user }) => onSignedIn?.(user) }),
   );
 
   return (

@@ -30,7 +30,7 @@ export function UsersPanel({ currentUserId }: { currentUserId: number }) {
   );
 
   return (
-    <Paper>
+    <Paper variant="outlined">
       <Stack direction="row" sx={{ p: 2, alignItems: 'center', justifyContent: 'space-between' }}>
         <Typography variant="h4" component="h2">
           People

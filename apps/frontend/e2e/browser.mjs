@@ -1,0 +1,59 @@
+// Shared helpers for the browser tests: Debian's chromium through playwright-core.
+import { mkdtemp, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium } from 'playwright-core';
+
+export const BASE_URL = process.env.BASE_URL ?? 'http://localhost:3000';
+export const SCREENSHOT_DIR =
+  process.env.SCREENSHOT_DIR ?? join(process.cwd(), 'test-output/screenshots');
+export const DEMO_PASSWORD = 'gaugeproof-demo';
+
+/** A fresh browser profile per launch, removed again by close(). */
+export async function launchBrowser() {
+  const freshDir = await mkdtemp(join(tmpdir(), 'gaugeproof-chromium-'));
+  const context = await chromium.launchPersistentContext(freshDir, {
+    executablePath: '/usr/bin/chromium',
+    headless: true,
+    viewport: { width: 1280, height: 800 },
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+  return {
+    context,
+    async close() {
+      await context.close();
+      await rm(freshDir, { recursive: true, force: true });
+    },
+  };
+}
+
+export const url = (path) => new URL(path, BASE_URL).toString();
+
+/** Fills and sends the sign-in form; starts from the sign-in page unless already on it. */
+export async function signIn(page, email, password = DEMO_PASSWORD) {
+  if (new URL(page.url(), BASE_URL).pathname !== '/sign-in') {
+    await page.goto(url('/sign-in'));
+  }
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}
+
+export async function screenshot(page, name) {
+  await page.screenshot({ path: join(SCREENSHOT_DIR, `${name}.png`), fullPage: true });
+}
+
+/** Labels of the side navigation, in order. */
+export async function navLabels(page) {
+  const nav = page.getByTestId('side-nav').filter({ visible: true });
+  await nav.first().waitFor();
+  return nav.first().locator('.MuiListItemText-primary').allTextContents();
+}
