@@ -1,0 +1,266 @@
+import { mkdtempSync, readdirSync, rmSync, existsSync } from 'node:fs';
+import { request as httpRequest } from 'node:http';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import sqlite3 from 'sqlite3';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_PASSWORD } from '../src/seed/seed-users';
+import { ChildServer, freePort } from './helpers/child-server';
+
+/**
+ * Crash safety: the production server is killed with SIGKILL in the middle of a burst of
+ * reading creations and decisions, five times. After each restart every request that got
+ * a success answer is stored, none twice, and SQLite's integrity check says ok.
+ */
+const ROUNDS = 5;
+const READINGS_PER_BURST = 40;
+// 4 AWG copper: 21.15 mm² × 8.89 g/cm³ × 1 m × 1.02 ≈ 191.8 g (ASTM B258 area, IACS
+// density, ASTM B496 2 % increment); 195 g conforms.
+const GOOD_MASS_G = 195;
+
+const dir = mkdtempSync(join(tmpdir(), 'gp-crash-'));
+const dbPath = join(dir, 'crash.sqlite');
+const uploadDir = join(dir, 'uploads');
+let server: ChildServer;
+let token = '';
+let productId = 0;
+let conductorId = 0;
+let balanceId = 0;
+let readingSampleId = 0;
+let readingLotId = 0;
+
+async function api<T = Record<string, unknown>>(method: string, path: string, body?: unknown) {
+  const res = await fetch(`${server.url}${path}`, {
+    method,
+    headers: { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+  const text = await res.text();
+  return { status: res.status, body: (text ? JSON.parse(text) : {}) as T };
+}
+
+async function must<T = Record<string, unknown>>(method: string, path: string, body?: unknown) {
+  const res = await api<T>(method, path, body);
+  if (res.status >= 300)
+    throw new Error(`${method} ${path}: ${res.status} ${JSON.stringify(res.body)}`);
+  return res.body;
+}
+
+async function signIn() {
+  const res = await fetch(`${server.url}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email: 'admin@demo.example', password: DEMO_PASSWORD }),
+  });
+  token = ((await res.json()) as { accessToken: string }).accessToken;
+}
+
+function day(offset: number): string {
+  return new Date(Date.now() + offset * 86_400_000).toISOString().slice(0, 10);
+}
+
+async function newLot(quantity: number): Promise<number> {
+  const lot = await must<{ id: number }>('POST', '/api/lots', {
+    productId,
+    poNumber: `PO-CRASH-${Date.now()}`,
+    quantity,
+    unit: 'spools',
+  });
+  return lot.id;
+}
+
+async function addReading(sampleId: number, massG: number) {
+  return api<{ id: number }>('POST', `/api/samples/${sampleId}/readings`, {
+    method: 'mass',
+    massG,
+    lengthMm: 1000,
+    instrumentIds: [balanceId],
+  });
+}
+
+/** A lot of 2 units, both measured: awaiting a decision. */
+async function lotAwaitingDecision(): Promise<{ id: number; version: number }> {
+  const id = await newLot(2);
+  for (const seq of [1, 2]) {
+    const sample = await must<{ id: number }>('POST', `/api/lots/${id}/samples`, {
+      conductorId,
+      seq,
+    });
+    const r = await addReading(sample.id, GOOD_MASS_G);
+    if (r.status !== 201) throw new Error(`reading: ${r.status} ${JSON.stringify(r.body)}`);
+  }
+  const lot = await must<{ status: string; version: number }>('GET', `/api/lots/${id}`);
+  expect(lot.status).toBe('awaiting_decision');
+  return { id, version: lot.version };
+}
+
+function integrity(): Promise<string> {
+  return new Promise((resolve, reject) => {
+    const db = new sqlite3.Database(dbPath, sqlite3.OPEN_READONLY, (err) => {
+      if (err) return reject(err);
+      db.get('PRAGMA integrity_check', (e, row: { integrity_check: string }) =>
+        db.close(() => (e ? reject(e) : resolve(row.integrity_check))),
+      );
+    });
+  });
+}
+
+beforeAll(async () => {
+  server = new ChildServer(await freePort(), {
+    DB_PATH: dbPath,
+    UPLOAD_DIR: uploadDir,
+    JWT_SECRET: 'crash-test-secret-0123456789',
+    SEED_DEMO: 'true',
+  });
+  await server.start();
+  await signIn();
+  const supplier = await must<{ id: number }>('POST', '/api/suppliers', {
+    name: 'Crashtest Wire Works',
+    code: 'CRASH1',
+    contactEmail: 'quality@crashtest.example',
+  });
+  const product = await must<{ id: number; conductors: { id: number }[] }>(
+    'POST',
+    '/api/products',
+    {
+      supplierId: supplier.id,
+      sku: 'CR-4-RED',
+      kind: 'spool',
+      description: '4 AWG power cable, red, 50 m spool',
+      inspectionLevel: 'S-3',
+      aql: '1.0',
+      conductors: [{ purpose: 'power', gauge: '4 AWG', claimedMaterial: 'copper' }],
+    },
+  );
+  productId = product.id;
+  conductorId = product.conductors[0].id;
+  const balance = await must<{ id: number }>('POST', '/api/instruments', {
+    kind: 'balance',
+    name: 'Crash bench balance',
+    serial: 'CR-BAL-1',
+    resolution: 0.01,
+    resolutionUnit: 'g',
+    calibratedOn: day(-30),
+    calibrationDueOn: day(300),
+  });
+  balanceId = balance.id;
+  readingLotId = await newLot(1000);
+  const sample = await must<{ id: number }>('POST', `/api/lots/${readingLotId}/samples`, {
+    conductorId,
+  });
+  readingSampleId = sample.id;
+}, 120_000);
+
+afterAll(async () => {
+  await server?.kill();
+  rmSync(dir, { recursive: true, force: true });
+});
+
+describe('crash safety', () => {
+  it(`keeps every answered write through ${ROUNDS} SIGKILLs mid-burst`, async () => {
+    const confirmedReadings = new Map<number, number>(); // reading id → massG
+    const sentMasses = new Set<number>();
+    const confirmedDecisions = new Map<number, number>(); // lot id → decision id
+    for (let round = 0; round < ROUNDS; round++) {
+      const lots = [await lotAwaitingDecision(), await lotAwaitingDecision()];
+      let answered = 0;
+      let killed = false;
+      const jobs: (() => Promise<void>)[] = [];
+      for (let i = 0; i < READINGS_PER_BURST; i++) {
+        const massG = Number((150 + round + i * 0.01).toFixed(2));
+        sentMasses.add(massG);
+        jobs.push(async () => {
+          const r = await addReading(readingSampleId, massG);
+          if (r.status === 201) {
+            confirmedReadings.set(r.body.id, massG);
+            answered++;
+          }
+        });
+        if (i === 10 || i === 20) {
+          const lot = lots[i === 10 ? 0 : 1];
+          jobs.push(async () => {
+            const d = await api<{ id: number; decision?: { id: number } }>(
+              'POST',
+              `/api/lots/${lot.id}/decisions`,
+              {
+                outcome: 'accept',
+                reason: 'All sampled units conform to the label',
+                version: lot.version,
+              },
+            );
+            if (d.status === 201) {
+              confirmedDecisions.set(lot.id, d.body.decision?.id ?? d.body.id);
+              answered++;
+            }
+          });
+        }
+      }
+      // Four requests in flight at a time; the kill lands once about a third have answered.
+      const queue = [...jobs];
+      const workers = Array.from({ length: 4 }, async () => {
+        while (queue.length > 0) {
+          const job = queue.shift()!;
+          await job().catch(() => undefined); // connections cut by the kill
+          if (!killed && answered >= jobs.length / 3) {
+            killed = true;
+            await server.kill('SIGKILL');
+          }
+        }
+      });
+      await Promise.all(workers);
+      if (!killed) await server.kill('SIGKILL');
+      expect(answered).toBeGreaterThan(0);
+
+      await server.start();
+      expect(await integrity()).toBe('ok');
+      const lot = await must<{
+        samples: { id: number; readings: { id: number; inputs: { massG: number } }[] }[];
+      }>('GET', `/api/lots/${readingLotId}`);
+      const stored = lot.samples.find((s) => s.id === readingSampleId)!.readings;
+      const ids = new Set(stored.map((r) => r.id));
+      for (const id of confirmedReadings.keys()) expect(ids.has(id), `reading ${id}`).toBe(true);
+      const masses = stored.map((r) => r.inputs.massG);
+      expect(new Set(masses).size, 'no reading stored twice').toBe(masses.length);
+      for (const m of masses) expect(sentMasses.has(m)).toBe(true);
+      for (const l of lots) {
+        const detail = await must<{ decisions: { id: number }[] }>('GET', `/api/lots/${l.id}`);
+        expect(detail.decisions.length).toBeLessThanOrEqual(1);
+        if (confirmedDecisions.has(l.id)) expect(detail.decisions.length).toBe(1);
+      }
+    }
+    expect(confirmedReadings.size).toBeGreaterThan(ROUNDS);
+  }, 300_000);
+
+  it('leaves no file and no row when an upload is cut off mid-stream', async () => {
+    const boundary = 'gaugeproofboundary';
+    const head = Buffer.from(
+      `--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="cut.png"\r\nContent-Type: image/png\r\n\r\n`,
+    );
+    const pngStart = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+    await new Promise<void>((resolve) => {
+      const req = httpRequest(`${server.url}/api/lots/${readingLotId}/photos`, {
+        method: 'POST',
+        headers: {
+          Authorization: `Bearer ${token}`,
+          'Content-Type': `multipart/form-data; boundary=${boundary}`,
+          'Content-Length': String(head.length + 2_000_000),
+        },
+      });
+      req.on('error', () => resolve());
+      req.write(head);
+      req.write(pngStart);
+      req.write(Buffer.alloc(200_000, 7));
+      setTimeout(() => {
+        req.destroy();
+        resolve();
+      }, 300);
+    });
+    await new Promise((r) => setTimeout(r, 1000));
+    const lot = await must<{ photos: unknown[] }>('GET', `/api/lots/${readingLotId}`);
+    expect(lot.photos).toEqual([]);
+    const files = existsSync(uploadDir)
+      ? readdirSync(uploadDir, { recursive: true, withFileTypes: true }).filter((d) => d.isFile())
+      : [];
+    expect(files.map((f) => f.name)).toEqual([]);
+  });
+});
