@@ -22,9 +22,11 @@ export function CrossSectionDrawing(props: CrossSectionDrawingProps) {
   const cell = 2 * MAX_R + 2 * PAD;
   const cy = PAD + MAX_R;
   const width = 2 * cell;
-  const height = cell + 56;
-  const labelled = `${props.gauge} label ${formatAreaMm2(g.labelled.areaMm2)}`;
-  const measured = `measured ${formatAreaMm2(g.measured.areaMm2)} (≈ ${props.measuresAs})`;
+  const height = cell + 70;
+  const labelledArea = formatAreaMm2(g.labelled.areaMm2);
+  const measuredArea = formatAreaMm2(g.measured.areaMm2);
+  const labelled = `${props.gauge} label ${labelledArea}`;
+  const measured = `measured ${measuredArea} (≈ ${props.measuresAs})`;
   const title = `Cross-sections to scale: ${labelled}; ${measured}.`;
 
   return (
@@ -55,11 +57,17 @@ export function CrossSectionDrawing(props: CrossSectionDrawingProps) {
           stroke="#5d4037"
           strokeWidth={1}
         />
-        <text x={cell / 2} y={cell + 4} textAnchor="middle" fontSize={12}>
-          {labelled}
+        <text x={cell / 2} y={cell + 6} textAnchor="middle" fontSize={12}>
+          <tspan x={cell / 2}>{props.gauge} label</tspan>
+          <tspan x={cell / 2} dy={15}>
+            {labelledArea}
+          </tspan>
         </text>
-        <text x={cell + cell / 2} y={cell + 4} textAnchor="middle" fontSize={12} fontWeight={700}>
-          {measured}
+        <text x={cell + cell / 2} y={cell + 6} textAnchor="middle" fontSize={12} fontWeight={700}>
+          <tspan x={cell + cell / 2}>measured {measuredArea}</tspan>
+          <tspan x={cell + cell / 2} dy={15}>
+            ≈ {props.measuresAs}
+          </tspan>
         </text>
         <line
           x1={PAD}

@@ -78,10 +78,10 @@ export function ReadingsTable({ readings, canVoid, onVoid }: ReadingsTableProps)
               data-voided={r.voided || undefined}
             >
               <TableCell>{methodLabels[r.method]}</TableCell>
-              <TableCell>
-                {Object.entries(r.inputs)
-                  .map(([k, v]) => inputText(units, k, v))
-                  .join(', ')}
+              <TableCell sx={{ whiteSpace: 'nowrap' }}>
+                {Object.entries(r.inputs).map(([k, v]) => (
+                  <div key={k}>{inputText(units, k, v)}</div>
+                ))}
               </TableCell>
               <TableCell sx={{ whiteSpace: 'nowrap' }}>
                 {units.formatAreaMm2(r.areaMm2)} ± {units.formatAreaMm2(r.UMm2)}

@@ -63,7 +63,7 @@ export function PlanPanel({ product, quantityText, unit }: PlanPanelProps) {
           </Alert>
         )}
         {answer?.message && !discontinued && (
-          <Alert severity="warning" sx={{ mb: 1 }}>
+          <Alert severity={answer.severity === 'normal' ? 'info' : 'warning'} sx={{ mb: 1 }}>
             {answer.message}
           </Alert>
         )}
