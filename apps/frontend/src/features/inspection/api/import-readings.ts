@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { ApiError, type ApiErrorBody } from '@/lib/api-client';
 
 export interface ImportRowError {
-  /** 1-based data row of the file (the header is row 0), or null for the file as a whole. */
+  /** Spreadsheet row (the header is row 1, the first reading row 2), or null for the whole file. */
   row: number | null;
   column: string | null;
   message: string;
@@ -10,6 +10,7 @@ export interface ImportRowError {
 
 export interface ImportResult {
   imported: number;
+  readings: unknown[];
 }
 
 /** Thrown on 422: the file was refused as a whole, nothing was saved. */

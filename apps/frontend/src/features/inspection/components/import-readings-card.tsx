@@ -36,8 +36,15 @@ export function ImportReadingsCard({ lotId }: { lotId: number }) {
             Import readings from CSV
           </Typography>
           <Typography variant="body2" color="text.secondary">
-            One row per reading: sample, conductor, method and its values, as a bench logger exports
-            them. The file is taken whole or not at all.
+            One row per reading, as a bench logger exports them, with a header row naming the
+            columns: <code>unit, conductor, method, instruments</code> (serials separated by ;) and
+            the method&apos;s values{' '}
+            <code>
+              massG, lengthMm, count, strandDiameterMm, resistanceOhm, temperatureC, diameterMm
+            </code>
+            ; optional <code>unitRef</code>. Conductor is a purpose (power, ground…) or its number
+            on the product. The file is taken whole or not at all, and the server recomputes every
+            result.
           </Typography>
           <div>
             <Button
