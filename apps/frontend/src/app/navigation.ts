@@ -3,8 +3,14 @@ import Inventory2Outlined from '@mui/icons-material/Inventory2Outlined';
 import LocalShippingOutlined from '@mui/icons-material/LocalShippingOutlined';
 import ManageAccountsOutlined from '@mui/icons-material/ManageAccountsOutlined';
 import TodayOutlined from '@mui/icons-material/TodayOutlined';
+import CableOutlined from '@mui/icons-material/CableOutlined';
+import MenuBookOutlined from '@mui/icons-material/MenuBookOutlined';
+import SpeedOutlined from '@mui/icons-material/SpeedOutlined';
+import StorefrontOutlined from '@mui/icons-material/StorefrontOutlined';
 import { paths } from '@/config/paths';
-import type { Role } from '@/lib/roles';
+import { ROLES, type Role } from '@/lib/roles';
+
+const ALL = ROLES;
 
 export interface NavItem {
   label: string;
@@ -41,6 +47,10 @@ export const navItems: readonly NavItem[] = [
     icon: Inventory2Outlined,
     roles: ['clerk', 'qa_lead', 'purchasing', 'admin'],
   },
+  { label: 'Suppliers', path: paths.suppliers.path, icon: StorefrontOutlined, roles: ALL },
+  { label: 'Products', path: paths.products.path, icon: CableOutlined, roles: ALL },
+  { label: 'Instruments', path: paths.instruments.path, icon: SpeedOutlined, roles: ALL }, // clerk: read only
+  { label: 'Reference', path: paths.reference.path, icon: MenuBookOutlined, roles: ALL },
   { label: 'Users', path: paths.users.path, icon: ManageAccountsOutlined, roles: ['admin'] },
 ];
 

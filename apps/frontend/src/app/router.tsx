@@ -11,6 +11,10 @@ import { LotRoute } from '@/app/routes/lot';
 import { LotsRoute } from '@/app/routes/lots';
 import { ReceivingRoute } from '@/app/routes/receiving';
 import { UsersRoute } from '@/app/routes/users';
+import { InstrumentsRoute } from '@/app/routes/instruments';
+import { ProductsRoute } from '@/app/routes/products';
+import { ReferenceRoute } from '@/app/routes/reference';
+import { SuppliersRoute } from '@/app/routes/suppliers';
 import { paths } from '@/config/paths';
 import { useSessionUser } from '@/features/auth/auth-context';
 
@@ -59,6 +63,38 @@ const shellRoutes: RouteObject[] = [
     element: (
       <RoleGate>
         <LotRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.suppliers.path,
+    element: (
+      <RoleGate>
+        <SuppliersRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.products.path,
+    element: (
+      <RoleGate>
+        <ProductsRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.instruments.path,
+    element: (
+      <RoleGate>
+        <InstrumentsRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.reference.path,
+    element: (
+      <RoleGate>
+        <ReferenceRoute />
       </RoleGate>
     ),
   },

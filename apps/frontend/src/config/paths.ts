@@ -8,6 +8,10 @@ export const paths = {
   },
   today: { path: '/today', getHref: () => '/today' },
   users: { path: '/users', getHref: () => '/users' },
+  suppliers: { path: '/suppliers', getHref: () => '/suppliers' },
+  products: { path: '/products', getHref: () => '/products' },
+  instruments: { path: '/instruments', getHref: () => '/instruments' },
+  reference: { path: '/reference', getHref: () => '/reference' },
   receiving: { path: '/receiving', getHref: () => '/receiving' },
   lots: {
     path: '/lots',

@@ -1,0 +1,67 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { api } from '@/lib/api-client';
+import { instrumentsKeys } from '@/features/instruments/api/get-instruments';
+import {
+  INSTRUMENT_KINDS,
+  RESOLUTION_UNITS,
+  UNITS_BY_KIND,
+  type Instrument,
+} from '@/features/instruments/types';
+
+const DATE = /^\d{4}-\d{2}-\d{2}$/;
+const realDate = (v: string) => DATE.test(v) && !Number.isNaN(Date.parse(`${v}T00:00:00Z`));
+
+export const instrumentSchema = z
+  .object({
+    kind: z.enum(INSTRUMENT_KINDS, 'Choose the kind of instrument.'),
+    name: z.string().trim().min(1, 'Enter a name, e.g. “Bench balance B-2”.').max(120),
+    serial: z.string().trim().min(1, 'Enter the serial number.').max(64),
+    resolution: z.string().refine((v) => {
+      const n = Number(v);
+      return v.trim() !== '' && Number.isFinite(n) && n > 0;
+    }, 'The smallest step it shows, a number greater than 0.'),
+    resolutionUnit: z.enum(RESOLUTION_UNITS, 'Choose the unit.'),
+    calibratedOn: z.string().refine(realDate, 'Enter the calibration date.'),
+    calibrationDueOn: z.string().refine(realDate, 'Enter the date the next calibration is due.'),
+  })
+  .superRefine((v, ctx) => {
+    if (!(UNITS_BY_KIND[v.kind] as readonly string[]).includes(v.resolutionUnit)) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['resolutionUnit'],
+        message: `This kind reads in ${UNITS_BY_KIND[v.kind].join(' or ')}.`,
+      });
+    }
+    if (realDate(v.calibratedOn) && realDate(v.calibrationDueOn)) {
+      if (v.calibrationDueOn <= v.calibratedOn) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['calibrationDueOn'],
+          message: 'The due date must come after the calibration date.',
+        });
+      }
+    }
+  });
+export type InstrumentInput = z.infer<typeof instrumentSchema>;
+
+export type InstrumentBody = Omit<InstrumentInput, 'resolution'> & { resolution: number };
+
+export const toInstrumentBody = (input: InstrumentInput): InstrumentBody => ({
+  ...input,
+  name: input.name.trim(),
+  serial: input.serial.trim(),
+  resolution: Number(input.resolution),
+});
+
+export const createInstrument = (body: InstrumentBody) =>
+  api.post<Instrument>('/instruments', body);
+
+export function useCreateInstrument() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createInstrument,
+    meta: { inlineErrors: true },
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: instrumentsKeys.all }),
+  });
+}

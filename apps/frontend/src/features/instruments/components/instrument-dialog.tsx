@@ -1,0 +1,166 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import {
+  Alert,
+  Button,
+  Dialog,
+  DialogActions,
+  DialogContent,
+  DialogTitle,
+  MenuItem,
+  Stack,
+  TextField,
+} from '@mui/material';
+import { Controller, useForm, useWatch } from 'react-hook-form';
+import {
+  instrumentSchema,
+  toInstrumentBody,
+  useCreateInstrument,
+  type InstrumentInput,
+} from '@/features/instruments/api/create-instrument';
+import { instrumentPatch, useUpdateInstrument } from '@/features/instruments/api/update-instrument';
+import {
+  INSTRUMENT_KINDS,
+  UNITS_BY_KIND,
+  kindLabels,
+  unitLabels,
+  type Instrument,
+} from '@/features/instruments/types';
+import { splitServerErrors } from '@/lib/server-field-errors';
+import { toasts } from '@/lib/toast-store';
+
+const FIELDS = [
+  'kind',
+  'name',
+  'serial',
+  'resolution',
+  'resolutionUnit',
+  'calibratedOn',
+  'calibrationDueOn',
+] as const;
+const EMPTY: InstrumentInput = {
+  kind: 'balance',
+  name: '',
+  serial: '',
+  resolution: '',
+  resolutionUnit: 'g',
+  calibratedOn: '',
+  calibrationDueOn: '',
+};
+const toInput = (i: Instrument): InstrumentInput => ({
+  kind: i.kind,
+  name: i.name,
+  serial: i.serial,
+  resolution: String(i.resolution),
+  resolutionUnit: i.resolutionUnit,
+  calibratedOn: i.calibratedOn,
+  calibrationDueOn: i.calibrationDueOn,
+});
+
+export function InstrumentDialog(props: { instrument: Instrument | null; onClose: () => void }) {
+  const { instrument, onClose } = props;
+  const create = useCreateInstrument();
+  const update = useUpdateInstrument();
+  const mutation = instrument ? update : create;
+  const form = useForm<InstrumentInput>({
+    resolver: zodResolver(instrumentSchema),
+    mode: 'onChange',
+    defaultValues: instrument ? toInput(instrument) : EMPTY,
+  });
+  const { errors, isSubmitting } = form.formState;
+  const kind = useWatch({ control: form.control, name: 'kind' });
+  const formErrors = mutation.isError ? splitServerErrors(mutation.error, FIELDS).formErrors : [];
+
+  const onSubmit = form.handleSubmit(async (input) => {
+    const body = toInstrumentBody(input);
+    try {
+      const saved = instrument
+        ? await update.mutateAsync({ id: instrument.id, patch: instrumentPatch(instrument, body) })
+        : await create.mutateAsync(body);
+      toasts.success(`${saved.name} saved.`);
+      onClose();
+    } catch (error) {
+      const { fieldErrors } = splitServerErrors(error, FIELDS);
+      for (const field of FIELDS) {
+        const message = fieldErrors[field];
+        if (message) form.setError(field, { type: 'server', message });
+      }
+    }
+  });
+
+  const title = instrument ? `Edit ${instrument.name}` : 'New instrument';
+  const select = (name: 'kind' | 'resolutionUnit', label: string, options: readonly string[]) => (
+    <Controller
+      control={form.control}
+      name={name}
+      render={({ field, fieldState }) => (
+        <TextField
+          select
+          label={label}
+          {...field}
+          onChange={(event) => {
+            field.onChange(event);
+            if (name === 'kind') {
+              const units = UNITS_BY_KIND[event.target.value as Instrument['kind']];
+              form.setValue('resolutionUnit', units[0], { shouldValidate: true });
+            }
+          }}
+          error={!!fieldState.error}
+          helperText={fieldState.error?.message}
+          sx={{ flex: 1 }}
+        >
+          {options.map((o) => (
+            <MenuItem key={o} value={o}>
+              {name === 'kind'
+                ? kindLabels[o as Instrument['kind']]
+                : unitLabels[o as Instrument['resolutionUnit']]}
+            </MenuItem>
+          ))}
+        </TextField>
+      )}
+    />
+  );
+  const text = (name: (typeof FIELDS)[number], label: string, extra: object = {}) => (
+    <TextField
+      label={label}
+      error={!!errors[name]}
+      helperText={errors[name]?.message}
+      sx={{ flex: 1 }}
+      {...extra}
+      {...form.register(name)}
+    />
+  );
+
+  return (
+    <Dialog open onClose={onClose} fullWidth maxWidth="sm">
+      <form noValidate onSubmit={onSubmit} aria-label={title}>
+        <DialogTitle>{title}</DialogTitle>
+        <DialogContent>
+          {formErrors.length > 0 && <Alert severity="error">{formErrors.join(' ')}</Alert>}
+          {select('kind', 'Kind', INSTRUMENT_KINDS)}
+          {text('name', 'Name')}
+          {text('serial', 'Serial number')}
+          <Stack direction="row" spacing={1}>
+            {text('resolution', 'Resolution', { inputMode: 'decimal' })}
+            {select('resolutionUnit', 'Unit', UNITS_BY_KIND[kind])}
+          </Stack>
+          <Stack direction="row" spacing={1}>
+            {text('calibratedOn', 'Calibrated on', {
+              type: 'date',
+              slotProps: { inputLabel: { shrink: true } },
+            })}
+            {text('calibrationDueOn', 'Calibration due', {
+              type: 'date',
+              slotProps: { inputLabel: { shrink: true } },
+            })}
+          </Stack>
+        </DialogContent>
+        <DialogActions>
+          <Button onClick={onClose}>Cancel</Button>
+          <Button type="submit" variant="contained" loading={isSubmitting}>
+            {instrument ? 'Save' : 'Add instrument'}
+          </Button>
+        </DialogActions>
+      </form>
+    </Dialog>
+  );
+}

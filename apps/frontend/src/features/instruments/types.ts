@@ -1,0 +1,55 @@
+export const INSTRUMENT_KINDS = [
+  'balance',
+  'micrometer',
+  'caliper',
+  'length_rule',
+  'milliohm_meter',
+  'thermometer',
+] as const;
+export type InstrumentKind = (typeof INSTRUMENT_KINDS)[number];
+
+export const RESOLUTION_UNITS = ['g', 'mm', 'ohm', 'mohm', 'degC'] as const;
+export type ResolutionUnit = (typeof RESOLUTION_UNITS)[number];
+
+export type CalibrationStatus = 'ok' | 'due_soon' | 'overdue';
+
+export interface Instrument {
+  id: number;
+  kind: InstrumentKind;
+  name: string;
+  serial: string;
+  resolution: number;
+  resolutionUnit: ResolutionUnit;
+  calibratedOn: string;
+  calibrationDueOn: string;
+  active: boolean;
+  calibrationStatus: CalibrationStatus;
+  daysToDue: number;
+}
+
+export const kindLabels: Record<InstrumentKind, string> = {
+  balance: 'Balance',
+  micrometer: 'Micrometer',
+  caliper: 'Caliper',
+  length_rule: 'Length rule',
+  milliohm_meter: 'Milliohm meter',
+  thermometer: 'Thermometer',
+};
+
+export const unitLabels: Record<ResolutionUnit, string> = {
+  g: 'g',
+  mm: 'mm',
+  ohm: 'Ω',
+  mohm: 'mΩ',
+  degC: '°C',
+};
+
+/** What each kind of instrument reads in (the server's rule; common practice, no source). */
+export const UNITS_BY_KIND: Record<InstrumentKind, readonly ResolutionUnit[]> = {
+  balance: ['g'],
+  micrometer: ['mm'],
+  caliper: ['mm'],
+  length_rule: ['mm'],
+  milliohm_meter: ['ohm', 'mohm'],
+  thermometer: ['degC'],
+};

@@ -1,0 +1,129 @@
+import { AQLS, INSPECTION_LEVELS } from '@gaugeproof/standards';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { api } from '@/lib/api-client';
+import { productsKeys } from '@/features/products/api/get-products';
+import { previewGauge } from '@/features/products/product-rules';
+import {
+  CLAIMED_MATERIALS,
+  CONDUCTOR_PURPOSES,
+  PRODUCT_KINDS,
+  type Product,
+} from '@/features/products/types';
+
+const optionalNumber = (test: (n: number) => boolean, message: string) =>
+  z
+    .string()
+    .trim()
+    .refine((v) => v === '' || (v !== '' && test(Number(v))), message);
+
+export const conductorSchema = z.object({
+  purpose: z.enum(CONDUCTOR_PURPOSES, 'Choose what the conductor is for.'),
+  gauge: z.string().superRefine((value, ctx) => {
+    const preview = previewGauge(value);
+    if (!preview.ok) ctx.addIssue({ code: 'custom', message: preview.message });
+  }),
+  claimedMaterial: z.enum(CLAIMED_MATERIALS, 'Choose the material the label claims.'),
+  claimedStrands: optionalNumber(
+    (n) => Number.isInteger(n) && n >= 1 && n <= 100_000,
+    'A whole number of strands, or leave empty.',
+  ),
+});
+
+/** The product form (create and edit). Numbers stay text until sent. */
+export const productSchema = z.object({
+  supplierId: z.string().min(1, 'Choose the supplier.'),
+  sku: z.string().trim().min(1, 'Enter the SKU.').max(64, 'At most 64 characters.'),
+  kind: z.enum(PRODUCT_KINDS, 'Choose spool or kit.'),
+  description: z
+    .string()
+    .trim()
+    .min(1, 'Describe the product, e.g. “4 AWG power cable, red, 30 m spool”.')
+    .max(300, 'At most 300 characters.'),
+  lengthPerUnitM: optionalNumber(
+    (n) => Number.isFinite(n) && n > 0 && n <= 10_000,
+    'A length in metres greater than 0, or leave empty.',
+  ),
+  inspectionLevel: z.enum(INSPECTION_LEVELS, 'Choose an inspection level.'),
+  aql: z.enum(AQLS, 'Choose an AQL from the tables.'),
+  // Policy per product, default 98 % (ASTM B496 area acceptance; REFERENCE §3).
+  minAreaRatioPercent: z
+    .string()
+    .trim()
+    .refine((v) => {
+      const n = Number(v);
+      return v !== '' && Number.isFinite(n) && n >= 50 && n <= 100;
+    }, 'A percentage from 50 to 100.'),
+  conductors: z.array(conductorSchema).min(1, 'Add at least one conductor.'),
+});
+export type ProductInput = z.infer<typeof productSchema>;
+export type ConductorInput = z.infer<typeof conductorSchema>;
+
+export const EMPTY_CONDUCTOR: ConductorInput = {
+  purpose: 'power',
+  gauge: '',
+  claimedMaterial: 'copper',
+  claimedStrands: '',
+};
+
+export const EMPTY_PRODUCT: ProductInput = {
+  supplierId: '',
+  sku: '',
+  kind: 'spool',
+  description: '',
+  lengthPerUnitM: '',
+  inspectionLevel: 'S-3', // samples are destroyed: a special level of ISO 2859-1 (issue 4)
+  aql: '1.0',
+  minAreaRatioPercent: '98',
+  conductors: [EMPTY_CONDUCTOR],
+};
+
+export interface ProductBody {
+  supplierId: number;
+  sku: string;
+  kind: Product['kind'];
+  description: string;
+  lengthPerUnitM: number | null;
+  inspectionLevel: string;
+  aql: string;
+  minAreaRatio: number;
+  conductors: {
+    purpose: ConductorInput['purpose'];
+    gauge: string;
+    claimedMaterial: ConductorInput['claimedMaterial'];
+    claimedStrands: number | null;
+  }[];
+}
+
+export function toProductBody(input: ProductInput): ProductBody {
+  return {
+    supplierId: Number(input.supplierId),
+    sku: input.sku.trim(),
+    kind: input.kind,
+    description: input.description.trim(),
+    lengthPerUnitM: input.lengthPerUnitM === '' ? null : Number(input.lengthPerUnitM),
+    inspectionLevel: input.inspectionLevel,
+    aql: input.aql,
+    minAreaRatio: Number(input.minAreaRatioPercent) / 100,
+    conductors: input.conductors.map((c) => {
+      const preview = previewGauge(c.gauge);
+      return {
+        purpose: c.purpose,
+        gauge: preview.ok ? preview.gauge.label : c.gauge.trim(),
+        claimedMaterial: c.claimedMaterial,
+        claimedStrands: c.claimedStrands === '' ? null : Number(c.claimedStrands),
+      };
+    }),
+  };
+}
+
+export const createProduct = (body: ProductBody) => api.post<Product>('/products', body);
+
+export function useCreateProduct() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createProduct,
+    meta: { inlineErrors: true },
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: productsKeys.all }),
+  });
+}

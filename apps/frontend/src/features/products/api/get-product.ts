@@ -1,0 +1,16 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import { productsKeys } from '@/features/products/api/get-products';
+import type { Product } from '@/features/products/types';
+
+export const getProduct = (id: number, signal?: AbortSignal) =>
+  api.get<Product>(`/products/${id}`, signal);
+
+export const productQueryOptions = (id: number) =>
+  queryOptions({
+    queryKey: productsKeys.detail(id),
+    queryFn: ({ signal }) => getProduct(id, signal),
+  });
+
+export const useProduct = (id: number | null) =>
+  useQuery({ ...productQueryOptions(id ?? 0), enabled: id !== null });

@@ -1,0 +1,26 @@
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import type { Page } from '@/components/data-table/data-table';
+import { toQueryString } from '@/components/data-table/use-list-params';
+import { api } from '@/lib/api-client';
+import type { Product } from '@/features/products/types';
+
+/** Query parameters of GET /api/products: page, pageSize, sort, q, supplierId, kind. */
+export type ProductListParams = Record<string, string>;
+
+export const productsKeys = {
+  all: ['products'] as const,
+  list: (params: ProductListParams) => [...productsKeys.all, 'list', params] as const,
+  detail: (id: number) => [...productsKeys.all, 'detail', id] as const,
+};
+
+export const getProducts = (params: ProductListParams, signal?: AbortSignal) =>
+  api.get<Page<Product>>(`/products${toQueryString(params)}`, signal);
+
+export const productsQueryOptions = (params: ProductListParams) =>
+  queryOptions({
+    queryKey: productsKeys.list(params),
+    queryFn: ({ signal }) => getProducts(params, signal),
+    placeholderData: keepPreviousData,
+  });
+
+export const useProducts = (params: ProductListParams) => useQuery(productsQueryOptions(params));

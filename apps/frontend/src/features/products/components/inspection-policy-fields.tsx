@@ -1,0 +1,74 @@
+import { AQLS, INSPECTION_LEVELS } from '@gaugeproof/standards';
+import { InputAdornment, MenuItem, Stack, TextField } from '@mui/material';
+import { Controller, type Control } from 'react-hook-form';
+import type { ProductInput } from '@/features/products/api/create-product';
+
+/** Inspection policy: ISO 2859-1 level and AQL, and the minimum area ratio. */
+export function InspectionPolicyFields({ control }: { control: Control<ProductInput> }) {
+  return (
+    <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1}>
+      <Controller
+        control={control}
+        name="inspectionLevel"
+        render={({ field, fieldState }) => (
+          <TextField
+            select
+            label="Inspection level"
+            {...field}
+            error={!!fieldState.error}
+            helperText={
+              fieldState.error?.message ??
+              (field.value.startsWith('S-')
+                ? 'Special level: samples are destroyed.'
+                : 'General level: more samples are cut.')
+            }
+            sx={{ flex: 1 }}
+          >
+            {INSPECTION_LEVELS.map((level) => (
+              <MenuItem key={level} value={level}>
+                {level}
+              </MenuItem>
+            ))}
+          </TextField>
+        )}
+      />
+      <Controller
+        control={control}
+        name="aql"
+        render={({ field, fieldState }) => (
+          <TextField
+            select
+            label="AQL"
+            {...field}
+            error={!!fieldState.error}
+            helperText={fieldState.error?.message ?? 'Percent nonconforming (ISO 2859-1).'}
+            sx={{ flex: 1 }}
+          >
+            {AQLS.map((aql) => (
+              <MenuItem key={aql} value={aql}>
+                {aql}
+              </MenuItem>
+            ))}
+          </TextField>
+        )}
+      />
+      <Controller
+        control={control}
+        name="minAreaRatioPercent"
+        render={({ field, fieldState }) => (
+          <TextField
+            label="Minimum area"
+            inputMode="decimal"
+            {...field}
+            error={!!fieldState.error}
+            helperText={fieldState.error?.message ?? 'Of nominal; ASTM B496 uses 98 %.'}
+            slotProps={{
+              input: { endAdornment: <InputAdornment position="end">%</InputAdornment> },
+            }}
+            sx={{ flex: 1 }}
+          />
+        )}
+      />
+    </Stack>
+  );
+}

@@ -1,0 +1,106 @@
+import { MenuItem, Stack, TextField } from '@mui/material';
+import { Controller, useWatch, type Control } from 'react-hook-form';
+import type { ProductInput } from '@/features/products/api/create-product';
+import { useSupplierOptions } from '@/features/products/api/get-supplier-options';
+import { PRODUCT_KINDS, kindLabels } from '@/features/products/types';
+import { useUnits } from '@/lib/units';
+
+function LengthHelper({ control }: { control: Control<ProductInput> }) {
+  const { system, formatLengthMm } = useUnits();
+  const value = Number(useWatch({ control, name: 'lengthPerUnitM' }));
+  if (system === 'metric' || !(value > 0)) return <>Cable per spool or per kit, in metres.</>;
+  return <>= {formatLengthMm(value * 1000)}</>;
+}
+
+/** Supplier, SKU, kind, description and length per unit. */
+/** `locked`: editing, when supplier, SKU and kind stay as created (lots are filed under them). */
+export function ProductMainFields(props: { control: Control<ProductInput>; locked: boolean }) {
+  const { control, locked } = props;
+  const suppliers = useSupplierOptions();
+  return (
+    <>
+      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1}>
+        <Controller
+          control={control}
+          name="supplierId"
+          render={({ field, fieldState }) => (
+            <TextField
+              select
+              label="Supplier"
+              {...field}
+              disabled={locked}
+              error={!!fieldState.error || suppliers.isError}
+              helperText={
+                fieldState.error?.message ??
+                (suppliers.isError ? 'The suppliers could not be loaded.' : undefined)
+              }
+              sx={{ flex: 2 }}
+            >
+              {(suppliers.data ?? []).map((s) => (
+                <MenuItem key={s.id} value={String(s.id)}>
+                  {s.name} ({s.code}){s.status === 'suspended' ? ' — suspended' : ''}
+                </MenuItem>
+              ))}
+            </TextField>
+          )}
+        />
+        <Controller
+          control={control}
+          name="sku"
+          render={({ field, fieldState }) => (
+            <TextField
+              label="SKU"
+              {...field}
+              disabled={locked}
+              error={!!fieldState.error}
+              helperText={fieldState.error?.message}
+              sx={{ flex: 1 }}
+            />
+          )}
+        />
+        <Controller
+          control={control}
+          name="kind"
+          render={({ field }) => (
+            <TextField select label="Kind" {...field} disabled={locked} sx={{ flex: 1 }}>
+              {PRODUCT_KINDS.map((k) => (
+                <MenuItem key={k} value={k}>
+                  {kindLabels[k]}
+                </MenuItem>
+              ))}
+            </TextField>
+          )}
+        />
+      </Stack>
+      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1}>
+        <Controller
+          control={control}
+          name="description"
+          render={({ field, fieldState }) => (
+            <TextField
+              label="Description"
+              {...field}
+              error={!!fieldState.error}
+              helperText={fieldState.error?.message}
+              sx={{ flex: 3 }}
+            />
+          )}
+        />
+        <Controller
+          control={control}
+          name="lengthPerUnitM"
+          render={({ field, fieldState }) => (
+            <TextField
+              label="Length per unit (m)"
+              inputMode="decimal"
+              {...field}
+              error={!!fieldState.error}
+              helperText={fieldState.error?.message ?? <LengthHelper control={control} />}
+              sx={{ flex: 1 }}
+            />
+          )}
+        />
+      </Stack>
+    </>
+  );
+}

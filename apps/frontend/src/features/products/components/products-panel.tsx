@@ -1,0 +1,90 @@
+import AddOutlined from '@mui/icons-material/AddOutlined';
+import { Button, MenuItem, Paper, Stack, TextField } from '@mui/material';
+import { useEffect, useState } from 'react';
+import { useListParams } from '@/components/data-table/use-list-params';
+import { useProducts } from '@/features/products/api/get-products';
+import { useSupplierOptions } from '@/features/products/api/get-supplier-options';
+import { ProductDialog } from '@/features/products/components/product-dialog';
+import { ProductsTable } from '@/features/products/components/products-table';
+import { PRODUCT_KINDS, kindLabels, type Product } from '@/features/products/types';
+
+export function ProductsPanel({ canWrite }: { canWrite: boolean }) {
+  const list = useListParams({
+    filters: ['q', 'supplierId', 'kind'],
+    defaultSort: { field: 'sku', direction: 'asc' },
+  });
+  const products = useProducts(list.query);
+  const suppliers = useSupplierOptions();
+  const [editing, setEditing] = useState<Product | 'new' | null>(null);
+  const [search, setSearch] = useState(list.filters.q);
+  const { setFilter } = list;
+  const urlQ = list.filters.q;
+
+  useEffect(() => {
+    if (search === urlQ) return;
+    const timer = setTimeout(() => setFilter('q', search.trim()), 300);
+    return () => clearTimeout(timer);
+  }, [search, urlQ, setFilter]);
+
+  const filtered = Boolean(list.filters.q || list.filters.supplierId || list.filters.kind);
+  return (
+    <Paper variant="outlined" sx={{ p: 2 }}>
+      <Stack direction={{ xs: 'column', md: 'row' }} spacing={2} sx={{ mb: 1 }}>
+        <TextField
+          label="Search SKU or description"
+          value={search}
+          onChange={(event) => setSearch(event.target.value)}
+          sx={{ flex: 1, mt: 0 }}
+        />
+        <TextField
+          select
+          label="Supplier"
+          value={list.filters.supplierId}
+          onChange={(event) => list.setFilter('supplierId', event.target.value)}
+          sx={{ minWidth: 200, mt: 0 }}
+        >
+          <MenuItem value="">All</MenuItem>
+          {(suppliers.data ?? []).map((s) => (
+            <MenuItem key={s.id} value={String(s.id)}>
+              {s.name}
+            </MenuItem>
+          ))}
+        </TextField>
+        <TextField
+          select
+          label="Kind"
+          value={list.filters.kind}
+          onChange={(event) => list.setFilter('kind', event.target.value)}
+          sx={{ minWidth: 140, mt: 0 }}
+        >
+          <MenuItem value="">All</MenuItem>
+          {PRODUCT_KINDS.map((k) => (
+            <MenuItem key={k} value={k}>
+              {kindLabels[k]}
+            </MenuItem>
+          ))}
+        </TextField>
+        {canWrite && (
+          <Button variant="contained" startIcon={<AddOutlined />} onClick={() => setEditing('new')}>
+            New product
+          </Button>
+        )}
+      </Stack>
+      <ProductsTable
+        {...list.tableProps}
+        data={products.data}
+        loading={products.isFetching}
+        error={products.error}
+        onRetry={() => void products.refetch()}
+        emptyMessage={filtered ? 'No product matches these filters.' : 'No products yet.'}
+        onEdit={canWrite ? setEditing : undefined}
+      />
+      {editing && (
+        <ProductDialog
+          product={editing === 'new' ? null : editing}
+          onClose={() => setEditing(null)}
+        />
+      )}
+    </Paper>
+  );
+}

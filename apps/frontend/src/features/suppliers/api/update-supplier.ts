@@ -1,0 +1,28 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import type { SupplierBody } from '@/features/suppliers/api/create-supplier';
+import { suppliersKeys } from '@/features/suppliers/api/get-suppliers';
+import type { Supplier } from '@/features/suppliers/types';
+
+export type SupplierPatch = Partial<SupplierBody>;
+
+export const updateSupplier = ({ id, patch }: { id: number; patch: SupplierPatch }) =>
+  api.patch<Supplier>(`/suppliers/${id}`, patch);
+
+/** Only what changed goes to the server (and into the audit trail). */
+export function supplierPatch(supplier: Supplier, body: SupplierBody): SupplierPatch {
+  const patch: SupplierPatch = {};
+  for (const key of ['name', 'code', 'contactEmail', 'status', 'notes'] as const) {
+    if (body[key] !== supplier[key]) Object.assign(patch, { [key]: body[key] });
+  }
+  return patch;
+}
+
+export function useUpdateSupplier() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateSupplier,
+    meta: { inlineErrors: true },
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: suppliersKeys.all }),
+  });
+}

@@ -1,0 +1,83 @@
+import AddBusinessOutlined from '@mui/icons-material/AddBusinessOutlined';
+import { Button, MenuItem, Paper, Stack, TextField } from '@mui/material';
+import { useEffect, useState } from 'react';
+import { useListParams } from '@/components/data-table/use-list-params';
+import { useSuppliers } from '@/features/suppliers/api/get-suppliers';
+import { SupplierDialog } from '@/features/suppliers/components/supplier-dialog';
+import { SuppliersTable } from '@/features/suppliers/components/suppliers-table';
+import { SUPPLIER_STATUSES, supplierStatusLabels, type Supplier } from '@/features/suppliers/types';
+
+/** The supplier list with its filters; `canWrite` shows the create and edit commands. */
+export function SuppliersPanel({ canWrite }: { canWrite: boolean }) {
+  const list = useListParams({
+    filters: ['q', 'status'],
+    defaultSort: { field: 'name', direction: 'asc' },
+  });
+  const suppliers = useSuppliers(list.query);
+  const [editing, setEditing] = useState<Supplier | 'new' | null>(null);
+  const [search, setSearch] = useState(list.filters.q);
+  const { setFilter } = list;
+  const urlQ = list.filters.q;
+
+  // Type freely; the request waits until typing pauses.
+  useEffect(() => {
+    if (search === urlQ) return;
+    const timer = setTimeout(() => setFilter('q', search.trim()), 300);
+    return () => clearTimeout(timer);
+  }, [search, urlQ, setFilter]);
+
+  return (
+    <Paper variant="outlined" sx={{ p: 2 }}>
+      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2} sx={{ mb: 1 }}>
+        <TextField
+          label="Search name or code"
+          value={search}
+          onChange={(event) => setSearch(event.target.value)}
+          sx={{ flex: 1, mt: 0 }}
+        />
+        <TextField
+          select
+          label="Status"
+          value={list.filters.status}
+          onChange={(event) => list.setFilter('status', event.target.value)}
+          sx={{ minWidth: 180, mt: 0 }}
+        >
+          <MenuItem value="">All</MenuItem>
+          {SUPPLIER_STATUSES.map((status) => (
+            <MenuItem key={status} value={status}>
+              {supplierStatusLabels[status]}
+            </MenuItem>
+          ))}
+        </TextField>
+        {canWrite && (
+          <Button
+            variant="contained"
+            startIcon={<AddBusinessOutlined />}
+            onClick={() => setEditing('new')}
+          >
+            New supplier
+          </Button>
+        )}
+      </Stack>
+      <SuppliersTable
+        {...list.tableProps}
+        data={suppliers.data}
+        loading={suppliers.isFetching}
+        error={suppliers.error}
+        onRetry={() => void suppliers.refetch()}
+        emptyMessage={
+          list.filters.q || list.filters.status
+            ? 'No supplier matches these filters.'
+            : 'No suppliers yet.'
+        }
+        onEdit={canWrite ? setEditing : undefined}
+      />
+      {editing && (
+        <SupplierDialog
+          supplier={editing === 'new' ? null : editing}
+          onClose={() => setEditing(null)}
+        />
+      )}
+    </Paper>
+  );
+}
