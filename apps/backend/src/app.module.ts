@@ -9,6 +9,7 @@ import type { IncomingMessage } from 'node:http';
 import { AuditModule } from './audit/audit.module';
 import { AuthModule } from './auth/auth.module';
 import { ConfigModule } from './config/config.module';
+import { ExportsModule } from './exports/exports.module';
 import type { AppConfig } from './config/env';
 import { ormOptions } from './database/orm-options';
 import { HealthModule } from './health/health.module';
@@ -36,6 +37,7 @@ const DOMAIN_MODULES = [
   StorageModule,
   PhotosModule,
   ScorecardsModule,
+  ExportsModule,
 ];
 
 function requestId(req: IncomingMessage): string {

@@ -1,0 +1,131 @@
+import { Injectable } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/core';
+import type { Knex, SqlEntityManager } from '@mikro-orm/sqlite';
+
+/** Readings per page of the export (our choice: small enough to keep memory flat). */
+export const EXPORT_PAGE_SIZE = 1000;
+
+export interface ExportedReading {
+  id: number;
+  lotId: number;
+  poNumber: string;
+  sku: string;
+  receivedAt: Date;
+  seq: number;
+  unitRef: string | null;
+  purpose: string;
+  gaugeLabel: string;
+  method: string;
+  inputs: Record<string, number>;
+  areaMm2: number;
+  expandedUMm2: number;
+  areaRatio: number;
+  measuresAs: string;
+  identifiedMaterial: string | null;
+  verdict: string;
+  takenAt: Date;
+  voided: boolean;
+  voidReason: string | null;
+}
+
+export interface ExportRange {
+  /** Inclusive start instant of the lots' received date, or null for no lower bound. */
+  start: Date | null;
+  /** Exclusive end instant, or null. */
+  end: Date | null;
+}
+
+type Row = Record<string, unknown>;
+
+/** Columns come back as numbers or Dates (SQLite: epoch ms), JSON as text or objects. */
+const toDate = (v: unknown): Date => (v instanceof Date ? v : new Date(Number(v)));
+const toJson = (v: unknown): Record<string, number> =>
+  typeof v === 'string' ? (JSON.parse(v) as Record<string, number>) : (v as Record<string, number>);
+
+/**
+ * One supplier's readings in pages, keyset by reading id. Each page first takes the next
+ * ids through the indexes only (lots by supplier, samples by lot, readings by sample),
+ * then reads those rows: the wide reading rows of other suppliers are never touched.
+ */
+@Injectable()
+export class ReadingsExportQuery {
+  constructor(private readonly em: EntityManager) {}
+
+  private get knex(): Knex {
+    return (this.em as SqlEntityManager).getKnex();
+  }
+
+  private date(d: Date): Knex.Value {
+    return this.em.getPlatform().processDateProperty(d) as Knex.Value;
+  }
+
+  async page(supplierId: number, range: ExportRange, afterId: number): Promise<ExportedReading[]> {
+    const k = this.knex;
+    const ids = k('lots as l')
+      .join('samples as s', 's.lot_id', 'l.id')
+      .join('readings as r', 'r.sample_id', 's.id')
+      .where('l.supplier_id', supplierId)
+      .andWhere('r.id', '>', afterId)
+      .select('r.id')
+      .orderBy('r.id')
+      .limit(EXPORT_PAGE_SIZE);
+    if (range.start) ids.andWhere('l.received_at', '>=', this.date(range.start));
+    if (range.end) ids.andWhere('l.received_at', '<', this.date(range.end));
+    const idRows: Row[] = await ids;
+    if (idRows.length === 0) return [];
+    const rows: Row[] = await k('readings as r')
+      .join('samples as s', 's.id', 'r.sample_id')
+      .join('lots as l', 'l.id', 's.lot_id')
+      .join('products as p', 'p.id', 'l.product_id')
+      .join('conductor_specs as cs', 'cs.id', 's.conductor_id')
+      .whereIn(
+        'r.id',
+        idRows.map((r) => Number(r.id)),
+      )
+      .orderBy('r.id')
+      .select(
+        'r.id',
+        'l.id as lot_id',
+        'l.po_number',
+        'p.sku',
+        'l.received_at',
+        's.seq',
+        's.unit_ref',
+        'cs.purpose',
+        'cs.gauge_label',
+        'r.method',
+        'r.inputs',
+        'r.area_mm2',
+        'r.expanded_umm2',
+        'r.area_ratio',
+        'r.measures_as',
+        'r.identified_material',
+        'r.verdict',
+        'r.taken_at',
+        'r.voided',
+        'r.void_reason',
+      );
+    return rows.map((r) => ({
+      id: Number(r.id),
+      lotId: Number(r.lot_id),
+      poNumber: String(r.po_number),
+      sku: String(r.sku),
+      receivedAt: toDate(r.received_at),
+      seq: Number(r.seq),
+      unitRef: (r.unit_ref as string | null) ?? null,
+      purpose: String(r.purpose),
+      gaugeLabel: String(r.gauge_label),
+      method: String(r.method),
+      inputs: toJson(r.inputs),
+      areaMm2: Number(r.area_mm2),
+      expandedUMm2: Number(r.expanded_umm2),
+      areaRatio: Number(r.area_ratio),
+      measuresAs: String(r.measures_as),
+      identifiedMaterial: (r.identified_material as string | null) ?? null,
+      verdict: String(r.verdict),
+      takenAt: toDate(r.taken_at),
+      voided: r.voided === true || Number(r.voided) === 1,
+      voidReason: (r.void_reason as string | null) ?? null,
+    }));
+  }
+}
