@@ -197,3 +197,27 @@ describe('InstrumentsService.assertUsable', () => {
     await expect(service.assertUsable([424242], new Date())).rejects.toMatchObject({ status: 422 });
   });
 });
+
+describe('demo instrument register', () => {
+  it('holds one instrument of each kind, one overdue and one due within 14 days', async () => {
+    const res = await call(t, DEMO.clerk, 'get', '/api/instruments?pageSize=100');
+    const demo = res.body.items.filter((i: { serial: string }) => i.serial.startsWith('GP-'));
+    expect(demo.map((i: { kind: string }) => i.kind).sort()).toEqual([
+      'balance',
+      'caliper',
+      'length_rule',
+      'micrometer',
+      'milliohm_meter',
+      'thermometer',
+    ]);
+    const status = (s: string) =>
+      demo.filter((i: { calibrationStatus: string }) => i.calibrationStatus === s);
+    expect(status('overdue')).toHaveLength(1);
+    expect(status('due_soon')).toHaveLength(1);
+    expect(demo.find((i: { kind: string }) => i.kind === 'balance')).toMatchObject({
+      resolution: 0.01,
+      resolutionUnit: 'g',
+      calibrationStatus: 'ok',
+    });
+  });
+});

@@ -202,7 +202,7 @@ describe('GET /api/lots', () => {
       t,
       DEMO.clerk,
       'get',
-      '/api/lots?status=inspecting,awaiting_decision',
+      `/api/lots?status=inspecting,awaiting_decision&productId=${spoolId}`,
     );
     expect(byStatus.body.items.map((l: { poNumber: string }) => l.poNumber)).toEqual(['PO-LIST-1']);
     const bySupplier = await call(t, DEMO.clerk, 'get', `/api/lots?supplierId=${suspended.id}`);
@@ -215,7 +215,7 @@ describe('GET /api/lots', () => {
       t,
       DEMO.clerk,
       'get',
-      '/api/lots?receivedFrom=2026-01-15&receivedTo=2026-01-15',
+      `/api/lots?receivedFrom=2026-01-15&receivedTo=2026-01-15&productId=${spoolId}`,
     );
     expect(byDay.body.items.map((l: { poNumber: string }) => l.poNumber)).toEqual(['PO-LIST-1']);
     const recent = await call(

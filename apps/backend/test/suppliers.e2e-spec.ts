@@ -169,3 +169,21 @@ describe('PATCH /api/suppliers/:id', () => {
     expect(event.after).toMatchObject({ status: 'suspended', contactEmail: null });
   });
 });
+
+describe('demo catalog', () => {
+  it('has invented suppliers in every status and products whose kit warns about its ground', async () => {
+    const res = await call(t, DEMO.clerk, 'get', '/api/suppliers?q=.example&pageSize=100');
+    const statuses = new Set(res.body.items.map((s: { status: string }) => s.status));
+    expect([...statuses].sort()).toEqual(['approved', 'probation', 'suspended']);
+    const kits = await call(t, DEMO.clerk, 'get', '/api/products?kind=kit&pageSize=100');
+    const warned = kits.body.items.filter((p: { warnings: string[] }) => p.warnings.length > 0);
+    expect(warned.map((p: { warnings: string[] }) => p.warnings[0])).toContain(
+      'Power is 4 AWG but ground is 8 AWG: ground should be sized like power (common practice).',
+    );
+    const metric = await call(t, DEMO.clerk, 'get', '/api/products?q=25%20mm');
+    expect(metric.body.items[0].conductors[0]).toMatchObject({
+      gauge: '25 mm²',
+      gaugeSystem: 'metric',
+    });
+  });
+});

@@ -1,5 +1,6 @@
 import type { EntityManager } from '@mikro-orm/core';
 import { User } from '../users/entities/user.entity';
+import { seedCatalog } from './seed-catalog';
 import { seedUsers } from './seed-users';
 
 /**
@@ -10,5 +11,6 @@ export async function seedDemo(em: EntityManager): Promise<void> {
   if ((await em.count(User)) > 0) return;
   await em.transactional(async (tx) => {
     await seedUsers(tx);
+    await seedCatalog(tx);
   });
 }
