@@ -89,7 +89,12 @@ async function main() {
   try {
     await waitForHealth(baseUrl, server);
     console.log(`server ready at ${baseUrl} (log: ${serverLog})`);
-    const files = (await readdir(e2eDir)).filter((f) => f.endsWith('.e2e.mjs')).sort();
+    // `node e2e/run.mjs auth` runs only the files whose names contain "auth".
+    const only = process.argv.slice(2);
+    const files = (await readdir(e2eDir))
+      .filter((f) => f.endsWith('.e2e.mjs'))
+      .filter((f) => only.length === 0 || only.some((word) => f.includes(word)))
+      .sort();
     const tests = spawn(
       process.execPath,
       ['--test', '--test-concurrency=1', ...files.map((f) => join(e2eDir, f))],
