@@ -63,7 +63,7 @@ describe('GET /api/suppliers/:id/readings/export.csv', () => {
     expect((await get(DEMO.buyer, url(small.supplierId, '?from=1.1.2026'))).status).toBe(400);
   });
 
-  it('streams every reading of the supplier, voided ones too, in more than one page', async () => {
+  it('streams every reading of the supplier, voided ones too, in more than one page, lot by lot', async () => {
     const res = await get(DEMO.buyer, url(big.supplierId));
     expect(res.status).toBe(200);
     expect(res.headers['transfer-encoding']).toBe('chunked');

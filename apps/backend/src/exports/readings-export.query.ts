@@ -42,10 +42,18 @@ const toDate = (v: unknown): Date => (v instanceof Date ? v : new Date(Number(v)
 const toJson = (v: unknown): Record<string, number> =>
   typeof v === 'string' ? (JSON.parse(v) as Record<string, number>) : (v as Record<string, number>);
 
+/** Where the previous page ended: the last lot and reading written. */
+export interface ExportCursor {
+  lotId: number;
+  readingId: number;
+}
+
 /**
- * One supplier's readings in pages, keyset by reading id. Each page first takes the next
- * ids through the indexes only (lots by supplier, samples by lot, readings by sample),
- * then reads those rows: the wide reading rows of other suppliers are never touched.
+ * One supplier's readings in pages, in lot order then reading id, keyset on (lot id,
+ * reading id). Each page first takes the next ids through the indexes only (lots by
+ * supplier in id order, samples by lot, readings by sample): a page costs the same at the
+ * end of the file as at its start, and the wide reading rows of other suppliers are never
+ * touched. Then it reads those rows.
  */
 @Injectable()
 export class ReadingsExportQuery {
@@ -59,15 +67,20 @@ export class ReadingsExportQuery {
     return this.em.getPlatform().processDateProperty(d) as Knex.Value;
   }
 
-  async page(supplierId: number, range: ExportRange, afterId: number): Promise<ExportedReading[]> {
+  async page(
+    supplierId: number,
+    range: ExportRange,
+    after: ExportCursor,
+  ): Promise<ExportedReading[]> {
     const k = this.knex;
     const ids = k('lots as l')
       .join('samples as s', 's.lot_id', 'l.id')
       .join('readings as r', 'r.sample_id', 's.id')
       .where('l.supplier_id', supplierId)
-      .andWhere('r.id', '>', afterId)
+      .andWhere('l.id', '>=', after.lotId)
+      .andWhere((w) => w.where('l.id', '>', after.lotId).orWhere('r.id', '>', after.readingId))
       .select('r.id')
-      .orderBy('r.id')
+      .orderBy([{ column: 'l.id' }, { column: 'r.id' }])
       .limit(EXPORT_PAGE_SIZE);
     if (range.start) ids.andWhere('l.received_at', '>=', this.date(range.start));
     if (range.end) ids.andWhere('l.received_at', '<', this.date(range.end));
@@ -82,7 +95,7 @@ export class ReadingsExportQuery {
         'r.id',
         idRows.map((r) => Number(r.id)),
       )
-      .orderBy('r.id')
+      .orderBy([{ column: 'l.id' }, { column: 'r.id' }])
       .select(
         'r.id',
         'l.id as lot_id',

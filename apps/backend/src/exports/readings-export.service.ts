@@ -25,7 +25,7 @@ function rangeOf(from?: string, to?: string): ExportRange {
   };
 }
 
-/** Every reading of a supplier's lots, voided ones included, streamed page by page. */
+/** Every reading of a supplier's lots, voided ones included, lot by lot, streamed in pages. */
 @Injectable()
 export class ReadingsExportService {
   constructor(
@@ -67,12 +67,13 @@ export class ReadingsExportService {
 
   private async *chunks(supplierId: number, range: ExportRange): AsyncGenerator<string> {
     yield csvHeader();
-    let after = 0;
+    let after = { lotId: 0, readingId: 0 };
     for (;;) {
       const page = await this.query.page(supplierId, range, after);
       if (page.length === 0) return;
       yield csvLines(page);
-      after = page[page.length - 1].id;
+      const last = page[page.length - 1];
+      after = { lotId: last.lotId, readingId: last.id };
     }
   }
 }
