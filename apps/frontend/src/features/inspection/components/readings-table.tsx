@@ -92,7 +92,7 @@ export function ReadingsTable({ readings, canVoid, onVoid }: ReadingsTableProps)
                 {r.identifiedMaterial ? identifiedLabels[r.identifiedMaterial] : '—'}
                 {r.materialMismatch ? ' (not as sold)' : ''}
               </TableCell>
-              <TableCell>
+              <TableCell sx={r.voided ? { opacity: 0.45 } : undefined}>
                 <VerdictChip verdict={r.verdict} />
               </TableCell>
               <TableCell>
