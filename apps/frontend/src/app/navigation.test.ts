@@ -46,8 +46,8 @@ describe('role home', () => {
     for (const role of ROLES) expect(canOpen(role, homePathFor(role))).toBe(true);
   });
 
-  it('sends purchasing to Today for now', () => {
-    expect(homePathFor('purchasing')).toBe(paths.today.path);
+  it('sends purchasing to Scorecards and the others to Today', () => {
+    expect(homePathFor('purchasing')).toBe(paths.scorecards.path);
     expect(homePathFor('clerk')).toBe(paths.today.path);
   });
 });

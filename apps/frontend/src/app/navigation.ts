@@ -7,6 +7,7 @@ import CableOutlined from '@mui/icons-material/CableOutlined';
 import MenuBookOutlined from '@mui/icons-material/MenuBookOutlined';
 import SpeedOutlined from '@mui/icons-material/SpeedOutlined';
 import StorefrontOutlined from '@mui/icons-material/StorefrontOutlined';
+import InsightsOutlined from '@mui/icons-material/InsightsOutlined';
 import { paths } from '@/config/paths';
 import { ROLES, type Role } from '@/lib/roles';
 
@@ -51,6 +52,12 @@ export const navItems: readonly NavItem[] = [
   { label: 'Products', path: paths.products.path, icon: CableOutlined, roles: ALL },
   { label: 'Instruments', path: paths.instruments.path, icon: SpeedOutlined, roles: ALL }, // clerk: read only
   { label: 'Reference', path: paths.reference.path, icon: MenuBookOutlined, roles: ALL },
+  {
+    label: 'Scorecards',
+    path: paths.scorecards.path,
+    icon: InsightsOutlined,
+    roles: ['purchasing', 'qa_lead', 'admin'],
+  },
   { label: 'Users', path: paths.users.path, icon: ManageAccountsOutlined, roles: ['admin'] },
 ];
 
@@ -72,7 +79,7 @@ export function canOpen(role: Role, pathname: string): boolean {
 export function homePathFor(role: Role): string {
   switch (role) {
     case 'purchasing':
-      return paths.today.getHref(); // Scorecards once that screen exists.
+      return paths.scorecards.getHref();
     case 'clerk':
     case 'qa_lead':
     case 'admin':

@@ -11,6 +11,8 @@ import { LotRoute } from '@/app/routes/lot';
 import { LotsRoute } from '@/app/routes/lots';
 import { ReceivingRoute } from '@/app/routes/receiving';
 import { UsersRoute } from '@/app/routes/users';
+import { ScorecardsRoute } from '@/app/routes/scorecards';
+import { SupplierScorecardRoute } from '@/app/routes/supplier-scorecard';
 import { InstrumentsRoute } from '@/app/routes/instruments';
 import { ProductsRoute } from '@/app/routes/products';
 import { ReferenceRoute } from '@/app/routes/reference';
@@ -95,6 +97,22 @@ const shellRoutes: RouteObject[] = [
     element: (
       <RoleGate>
         <ReferenceRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.scorecards.path,
+    element: (
+      <RoleGate>
+        <ScorecardsRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.supplierScorecard.path,
+    element: (
+      <RoleGate>
+        <SupplierScorecardRoute />
       </RoleGate>
     ),
   },

@@ -18,4 +18,9 @@ export const paths = {
     getHref: (status?: string) => (status ? `/lots?status=${encodeURIComponent(status)}` : '/lots'),
   },
   lot: { path: '/lots/:id', getHref: (id: number | string) => `/lots/${id}` },
+  scorecards: { path: '/scorecards', getHref: () => '/scorecards' },
+  supplierScorecard: {
+    path: '/scorecards/:supplierId',
+    getHref: (id: number | string) => `/scorecards/${id}`,
+  },
 } as const;

@@ -1,0 +1,125 @@
+import { Link, Stack, Tooltip, Typography } from '@mui/material';
+import { useMemo } from 'react';
+import { Link as RouterLink, useNavigate } from 'react-router-dom';
+import {
+  createDataTableColumnHelper,
+  DataTable,
+  type DataTableColumns,
+} from '@/components/data-table/data-table';
+import { useListParams } from '@/components/data-table/use-list-params';
+import { paths } from '@/config/paths';
+import { useScorecards } from '@/features/scorecards/api/get-scorecards';
+import { SupplierStatusChip } from '@/features/scorecards/components/supplier-status-chip';
+import TrendSparkline from '@/features/scorecards/components/trend-sparkline';
+import { formatMoney, formatPercent, formatWhole, NONE } from '@/features/scorecards/lib/format';
+import { rankRows } from '@/features/scorecards/lib/rank-rows';
+import type { DateRange, ScorecardRow } from '@/features/scorecards/types';
+
+const col = createDataTableColumnHelper<ScorecardRow>();
+const sortable = { enableSorting: true };
+
+const scorecardHref = (supplierId: number, range: DateRange) =>
+  `${paths.supplierScorecard.getHref(supplierId)}?from=${range.from}&to=${range.to}`;
+
+const columnsFor = (range: DateRange): DataTableColumns<ScorecardRow> =>
+  col.columns([
+    col.accessor('name', {
+      header: 'Supplier',
+      ...sortable,
+      cell: ({ row }) => (
+        <Stack spacing={0.5} sx={{ minWidth: 180, alignItems: 'flex-start' }}>
+          <Link
+            component={RouterLink}
+            to={scorecardHref(row.original.supplierId, range)}
+            onClick={(e) => e.stopPropagation()}
+            sx={{ fontWeight: 600 }}
+          >
+            {row.original.name}
+          </Link>
+          <Stack direction="row" spacing={1} sx={{ alignItems: 'center' }}>
+            <Typography variant="caption" color="text.secondary">
+              {row.original.code}
+            </Typography>
+            <SupplierStatusChip status={row.original.status} />
+          </Stack>
+        </Stack>
+      ),
+    }),
+    col.accessor('lotsReceived', { header: 'Lots', ...sortable }),
+    col.accessor('acceptanceRate', {
+      header: 'Accepted',
+      ...sortable,
+      cell: ({ row }) => (
+        <Tooltip
+          title={`${row.original.lotsAccepted} accepted, ${row.original.lotsAcceptedOnConcession} on concession, ${row.original.lotsRejected} rejected, ${row.original.lotsPending} undecided`}
+        >
+          <span>{formatPercent(row.original.acceptanceRate)}</span>
+        </Tooltip>
+      ),
+    }),
+    col.display({
+      id: 'trend',
+      header: 'Trend',
+      cell: ({ row }) => <TrendSparkline trend={row.original.trend} name={row.original.name} />,
+    }),
+    col.accessor('dppm', {
+      header: 'Nonconf. ppm',
+      ...sortable,
+      cell: ({ getValue }) => formatWhole(getValue()),
+    }),
+    col.accessor('meanAreaRatio', {
+      header: 'Mean area',
+      ...sortable,
+      cell: ({ getValue }) => formatPercent(getValue()),
+    }),
+    col.accessor('lowestAreaRatio', {
+      header: 'Lowest',
+      ...sortable,
+      cell: ({ getValue }) => formatPercent(getValue()),
+    }),
+    col.accessor('materialMismatches', { header: 'CCA / Al found' }),
+    col.accessor('worstSizesShort', {
+      header: 'Sizes short',
+      cell: ({ getValue }) => getValue() ?? NONE,
+    }),
+    col.accessor('openCorrectiveActions', {
+      header: 'Open SCARs',
+      ...sortable,
+      cell: ({ row }) =>
+        row.original.overdueCorrectiveActions > 0
+          ? `${row.original.openCorrectiveActions} (${row.original.overdueCorrectiveActions} overdue)`
+          : row.original.openCorrectiveActions,
+    }),
+    col.accessor('chargebacks', {
+      header: 'Chargebacks',
+      ...sortable,
+      cell: ({ getValue }) => formatMoney(getValue()),
+    }),
+  ]);
+
+/** Suppliers ranked worst first (the server's order) unless a column is sorted. */
+export default function ScorecardRankingTable({ range }: { range: DateRange }) {
+  const navigate = useNavigate();
+  const list = useListParams({ filters: [] });
+  const query = useScorecards(range);
+  const columns = useMemo(() => columnsFor(range), [range]);
+  const data = useMemo(
+    () =>
+      query.data ? rankRows(query.data.items, list.sort, list.page, list.pageSize) : undefined,
+    [query.data, list.sort, list.page, list.pageSize],
+  );
+  return (
+    <DataTable
+      label="Supplier ranking"
+      columns={columns}
+      data={data}
+      loading={query.isFetching}
+      error={query.error}
+      onRetry={() => void query.refetch()}
+      emptyMessage="No supplier is registered yet."
+      getRowId={(row) => String(row.supplierId)}
+      onRowClick={(row) => navigate(scorecardHref(row.supplierId, range))}
+      {...list.tableProps}
+    />
+  );
+}

@@ -1,0 +1,39 @@
+/** Display helpers for scorecard figures; the API sends ratios as fractions. */
+
+const percent1 = new Intl.NumberFormat('en-US', {
+  style: 'percent',
+  minimumFractionDigits: 1,
+  maximumFractionDigits: 1,
+});
+const whole = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
+const money = new Intl.NumberFormat('en-US', {
+  minimumFractionDigits: 2,
+  maximumFractionDigits: 2,
+});
+
+export const NONE = '—';
+
+export const formatPercent = (value: number | null) =>
+  value === null ? NONE : percent1.format(value);
+export const formatWhole = (value: number | null) => (value === null ? NONE : whole.format(value));
+export const formatMoney = (value: number) => money.format(value);
+export const formatDays = (value: number | null) =>
+  value === null ? NONE : `${value.toFixed(1)} d`;
+
+/** `2026-03` → `Mar 2026` */
+export function formatMonth(month: string): string {
+  const [y, m] = month.split('-').map(Number);
+  return new Date(Date.UTC(y, m - 1, 1)).toLocaleDateString('en-US', {
+    month: 'short',
+    year: 'numeric',
+    timeZone: 'UTC',
+  });
+}
+
+export const purposeLabels: Record<string, string> = {
+  power: 'Power',
+  ground: 'Ground',
+  remote: 'Remote turn-on',
+  speaker: 'Speaker',
+  other: 'Other',
+};

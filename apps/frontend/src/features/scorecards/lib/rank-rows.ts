@@ -1,0 +1,45 @@
+import type { ListSort } from '@/components/data-table/use-list-params';
+import type { ScorecardRow } from '@/features/scorecards/types';
+
+/** Columns the ranking sorts by; the server already sends the rows worst first. */
+export const RANK_SORT_FIELDS = [
+  'name',
+  'lotsReceived',
+  'acceptanceRate',
+  'dppm',
+  'meanAreaRatio',
+  'lowestAreaRatio',
+  'openCorrectiveActions',
+  'chargebacks',
+] as const;
+type RankField = (typeof RANK_SORT_FIELDS)[number];
+
+const isRankField = (field: string): field is RankField =>
+  (RANK_SORT_FIELDS as readonly string[]).includes(field);
+
+/**
+ * Sorts and pages the ranking in the browser: the API answers one row per supplier (a
+ * shop has tens, not thousands), so there is nothing to page on the server. Unknown
+ * values (null) go last in either direction; ties keep the server's worst-first order.
+ */
+export function rankRows(
+  rows: readonly ScorecardRow[],
+  sort: ListSort | null,
+  page: number,
+  pageSize: number,
+): { items: ScorecardRow[]; total: number } {
+  const ordered = [...rows];
+  if (sort && isRankField(sort.field)) {
+    const field = sort.field;
+    const dir = sort.direction === 'asc' ? 1 : -1;
+    ordered.sort((a, b) => {
+      const x = a[field];
+      const y = b[field];
+      if (x === null || y === null) return x === y ? 0 : x === null ? 1 : -1;
+      if (typeof x === 'string' && typeof y === 'string') return dir * x.localeCompare(y);
+      return dir * (Number(x) - Number(y));
+    });
+  }
+  const start = (page - 1) * pageSize;
+  return { items: ordered.slice(start, start + pageSize), total: rows.length };
+}
