@@ -298,7 +298,9 @@ describe('GET /api/products/:id/sampling-plan', () => {
           inspectAll: false,
         },
       });
-      expect(res.body.message).toMatch(/^Normal inspection: cut 80 of the/);
+      expect(res.body.message).toBe(
+        `Normal inspection: cut 80 of the ${quantity} units (code letter J, level II, AQL 1.0); accept with up to 2 nonconforming, reject at 3.`,
+      );
     }
   });
 

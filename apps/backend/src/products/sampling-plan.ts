@@ -27,6 +27,9 @@ export function discontinuedMessage(product: Product, reason: string | null): st
   );
 }
 
+const acceptWords = (ac: number) =>
+  ac === 0 ? 'accept only with no nonconforming unit' : `accept with up to ${ac} nonconforming`;
+
 /**
  * The sampling plan a lot of `quantity` units gets today: the product's level and AQL at
  * the stream's current severity (MIL-STD-105E / ANSI/ASQ Z1.4 through the standards library).
@@ -66,6 +69,6 @@ export function planForLot(
     : `cut ${plan.sampleSize} of the ${quantity} units`;
   const message =
     `${SEVERITY_WORDS[plan.severity]}: ${cut} (code letter ${plan.codeLetter}, level ${plan.level}, AQL ${plan.aql}); ` +
-    `accept with ${plan.accept} or fewer nonconforming, reject at ${plan.reject}.`;
+    `${acceptWords(plan.accept)}, reject at ${plan.reject}.`;
   return { samplingPlan: stored, severity, discontinued: false, message };
 }
