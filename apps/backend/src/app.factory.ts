@@ -8,6 +8,7 @@ import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
 import { AppModule } from './app.module';
 import { AllExceptionsFilter } from './common/all-exceptions.filter';
+import { BodyDepthInterceptor } from './common/body-depth.interceptor';
 import type { AppConfig } from './config/env';
 import { seedDemo } from './seed/seed-demo';
 
@@ -38,6 +39,7 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
   app.useGlobalPipes(
     new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }),
   );
+  app.useGlobalInterceptors(new BodyDepthInterceptor());
   app.useGlobalFilters(new AllExceptionsFilter());
   app.enableShutdownHooks();
 

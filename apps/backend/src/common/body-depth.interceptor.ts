@@ -1,0 +1,43 @@
+import {
+  BadRequestException,
+  CallHandler,
+  ExecutionContext,
+  Injectable,
+  NestInterceptor,
+} from '@nestjs/common';
+import type { Observable } from 'rxjs';
+
+/** No request body of ours nests deeper than a handful of levels. */
+export const MAX_BODY_DEPTH = 16;
+
+/** Depth of a parsed JSON value, measured without recursion so no input can overflow it. */
+export function jsonDepth(value: unknown, limit = Infinity): number {
+  let max = 0;
+  const stack: [unknown, number][] = [[value, 0]];
+  while (stack.length > 0) {
+    const [v, d] = stack.pop()!;
+    if (v === null || typeof v !== 'object') continue;
+    const depth = d + 1;
+    if (depth > max) max = depth;
+    if (max > limit) return max;
+    for (const child of Object.values(v as Record<string, unknown>)) stack.push([child, depth]);
+  }
+  return max;
+}
+
+/**
+ * Refuses bodies nested deeper than MAX_BODY_DEPTH before validation runs: class-transformer
+ * recurses per level and would overflow the stack on a deep enough document.
+ */
+@Injectable()
+export class BodyDepthInterceptor implements NestInterceptor {
+  intercept(ctx: ExecutionContext, next: CallHandler): Observable<unknown> {
+    const body: unknown = ctx.switchToHttp().getRequest<{ body?: unknown }>().body;
+    if (jsonDepth(body, MAX_BODY_DEPTH) > MAX_BODY_DEPTH) {
+      throw new BadRequestException(
+        `Request body is nested too deeply (more than ${MAX_BODY_DEPTH} levels)`,
+      );
+    }
+    return next.handle();
+  }
+}
