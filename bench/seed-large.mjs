@@ -15,21 +15,26 @@ import { Writer } from './seed/writer.mjs';
 const require = createRequire(import.meta.url);
 const DAY = 86_400_000;
 
-async function migrate(dbPath) {
+async function migrate(dbPath, log) {
   const dist = resolve(import.meta.dirname, '../apps/backend/dist/database/sqlite.config.js');
   if (!existsSync(dist)) throw new Error('apps/backend/dist is missing: run `npm run build` first');
   require('reflect-metadata');
   const { MikroORM } = require('@mikro-orm/core');
   const { sqliteOptions } = require(dist);
-  const orm = await MikroORM.init(sqliteOptions(dbPath));
-  await orm.getMigrator().up();
+  const options = sqliteOptions(dbPath);
+  const orm = await MikroORM.init({
+    ...options,
+    migrations: { ...options.migrations, silent: true },
+  });
+  const applied = await orm.getMigrator().up();
+  log(`  migrations applied: ${applied.map((m) => m.name).join(', ')}`);
   await orm.close(true);
 }
 
-export async function seedLarge({ db: dbPath, suppliers, lots, years, seed }) {
+export async function seedLarge({ db: dbPath, suppliers, lots, years, seed, log = console.log }) {
   const started = performance.now();
   for (const suffix of ['', '-wal', '-shm']) rmSync(dbPath + suffix, { force: true });
-  await migrate(dbPath);
+  await migrate(dbPath, log);
   const migratedAt = performance.now();
 
   const db = new Database(dbPath);
@@ -54,15 +59,16 @@ export async function seedLarge({ db: dbPath, suppliers, lots, years, seed }) {
   const lotWriter = new LotWriter(w, r, ctx);
   const span = now - start - 2 * 3_600_000;
   const batch = 1000;
+  const openFrom = lots - Math.max(20, Math.round(lots * 0.005));
   for (let from = 0; from < lots; from += batch) {
     db.transaction(() => {
       for (let i = from; i < Math.min(lots, from + batch); i++) {
         const supplier = r.pick(weights);
         const receivedAt = Math.round(start + (span * (i + r.next())) / lots);
-        lotWriter.write(supplier, r.pick(supplier.products), receivedAt);
+        lotWriter.write(supplier, r.pick(supplier.products), receivedAt, i >= openFrom);
       }
     })();
-    if ((from / batch) % 10 === 9) process.stdout.write(`  ${from + batch} lots…\n`);
+    if ((from / batch) % 10 === 9) log(`  ${from + batch} lots…`);
   }
   db.transaction(() => {
     seedReturns(w, r, ctx.rejected, ctx.users, now);
@@ -76,8 +82,8 @@ export async function seedLarge({ db: dbPath, suppliers, lots, years, seed }) {
 
   const seconds = (performance.now() - migratedAt) / 1000;
   const total = w.total();
-  for (const [table, n] of [...w.counts].sort()) console.log(`  ${table}: ${n}`);
-  console.log(
+  for (const [table, n] of [...w.counts].sort()) log(`  ${table}: ${n}`);
+  log(
     `seeded ${total} rows in ${seconds.toFixed(1)} s (${Math.round(total / seconds)} rows/s; ` +
       `migrations ${((migratedAt - started) / 1000).toFixed(1)} s) into ${dbPath}`,
   );

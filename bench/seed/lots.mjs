@@ -6,9 +6,10 @@ const DAY = 86_400_000;
 const HOUR = 3_600_000;
 
 /** How far inspection got: recent lots are still open, older ones decided. */
-function stage(r, ageDays) {
+function stage(r, ageDays, recent) {
   const x = r.next();
-  if (ageDays < 2) return x < 0.4 ? 'on_hold' : x < 0.8 ? 'inspecting' : 'awaiting_decision';
+  if (ageDays < 2 || recent)
+    return x < 0.4 ? 'on_hold' : x < 0.8 ? 'inspecting' : 'awaiting_decision';
   if (ageDays < 7) {
     return x < 0.05
       ? 'on_hold'
@@ -44,7 +45,10 @@ function audit(w, actor, action, entityType, entityId, lotId, at, before, after)
 /** Weighted supplier list: a few suppliers deliver far more often than the rest. */
 export function deliveryWeights(r, suppliers) {
   const list = [];
-  for (const s of suppliers) for (let i = r.int(1, 6); i > 0; i--) list.push(s);
+  suppliers.forEach((s, i) => {
+    // The first supplier is the main source: about a twentieth of all deliveries.
+    for (let n = i === 0 ? 40 : r.int(1, 6); n > 0; n--) list.push(s);
+  });
   return list;
 }
 
@@ -57,7 +61,8 @@ export class LotWriter {
     this.poSeq = new Map();
   }
 
-  write(supplier, product, receivedAt) {
+  /** `recent`: among the newest deliveries, still open whatever the spacing of a small set. */
+  write(supplier, product, receivedAt, recent = false) {
     const { w, r, ctx } = this;
     const id = w.nextId('lots');
     const year = new Date(receivedAt).getUTCFullYear();
@@ -71,7 +76,7 @@ export class LotWriter {
     const severity = supplier.tier === 'bad' ? 'tightened' : 'normal';
     const plan = samplingPlan({ lotSize: quantity, level: 'S-3', aql: product.aql, severity });
     const ageDays = (ctx.now - receivedAt) / DAY;
-    const how = stage(r, ageDays);
+    const how = stage(r, ageDays, recent);
     const clerk = ctx.users.clerk[id % ctx.users.clerk.length];
     const qa = ctx.users.qa_lead[id % ctx.users.qa_lead.length];
     const lotShift = supplier.tier !== 'good' && r.chance(0.15) ? 0.9 : 1;

@@ -1,0 +1,66 @@
+// HTTP load with autocannon; latencies recorded per response so any percentile can be read.
+import autocannon from 'autocannon';
+
+export function percentile(sorted, p) {
+  if (sorted.length === 0) return NaN;
+  const i = Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1);
+  return sorted[Math.max(0, i)];
+}
+
+export function median(values) {
+  return percentile(
+    [...values].sort((a, b) => a - b),
+    50,
+  );
+}
+
+/**
+ * Runs `connections` clients for `seconds` against one request (or `nextRequest()` per
+ * request) and returns requests per second over 2xx answers, latency percentiles in ms and
+ * the count of answers that were not 2xx (a broken path: the caller treats them as failure).
+ */
+export async function load({
+  url,
+  connections,
+  seconds,
+  method = 'GET',
+  headers,
+  body,
+  nextRequest,
+}) {
+  const latencies = [];
+  const statuses = new Map();
+  let firstError = null;
+  const instance = autocannon({
+    url,
+    connections,
+    duration: seconds,
+    // Slow answers are measured, not dropped: only past 30 s does one count as a timeout.
+    timeout: 30,
+    method,
+    headers,
+    body,
+    requests: nextRequest ? [{ setupRequest: (req) => ({ ...req, ...nextRequest() }) }] : undefined,
+  });
+  instance.on('response', (client, statusCode, resBytes, responseTime) => {
+    statuses.set(statusCode, (statuses.get(statusCode) ?? 0) + 1);
+    if (statusCode >= 200 && statusCode < 300) latencies.push(responseTime);
+  });
+  instance.on('reqError', (e) => (firstError ??= e));
+  const result = await instance;
+  latencies.sort((a, b) => a - b);
+  const ok = latencies.length;
+  const refused = [...statuses].filter(([s]) => s < 200 || s >= 300).reduce((n, [, c]) => n + c, 0);
+  return {
+    rps: ok / (result.duration || seconds),
+    p50: percentile(latencies, 50),
+    p95: percentile(latencies, 95),
+    p99: percentile(latencies, 99),
+    ok,
+    // Answers other than 2xx, or none at all: a broken path, the caller gives up on it.
+    failed: refused + (ok === 0 ? 1 : 0),
+    timeouts: result.timeouts,
+    statuses: Object.fromEntries(statuses),
+    firstError,
+  };
+}

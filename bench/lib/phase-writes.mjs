@@ -1,0 +1,154 @@
+// Write and export paths: readings created under load, the two CSV exports with the
+// server's peak memory.
+import Database from 'better-sqlite3';
+import { MATERIALS } from '@gaugeproof/standards';
+import { load } from './load.mjs';
+import { peakRssMb } from './server.mjs';
+
+/** Open lots (with their conductors and samples) and a usable balance and rule. */
+function openLots(dbPath, limit) {
+  const db = new Database(dbPath, { readonly: true });
+  const open = `select id from lots where status in ('on_hold', 'inspecting', 'awaiting_decision')
+                 order by id desc limit ${Number(limit)}`;
+  const conductors = db
+    .prepare(
+      `select l.id as lot_id, cs.id as conductor_id, cs.nominal_area_mm2 from lots l
+         join conductor_specs cs on cs.product_id = l.product_id and cs.active = 1
+        where l.id in (${open}) and not exists (select 1 from samples s where s.lot_id = l.id)`,
+    )
+    .all();
+  const samples = db
+    .prepare(
+      `select s.id, cs.nominal_area_mm2 as areaMm2 from samples s
+         join conductor_specs cs on cs.id = s.conductor_id where s.lot_id in (${open})`,
+    )
+    .all();
+  const instrument = (kind) =>
+    db
+      .prepare(
+        'select id from instruments where kind = ? and active = 1 order by calibration_due_on desc',
+      )
+      .get(kind).id;
+  const instruments = [instrument('balance'), instrument('length_rule')];
+  db.close();
+  return { conductors, samples, instruments };
+}
+
+/**
+ * The samples the load writes to: a new sample (unit 1) per conductor of the open lots not
+ * cut yet, created through the API, and the samples already cut on open lots.
+ */
+async function prepareSamples(base, token, dbPath) {
+  const { conductors, samples, instruments } = openLots(dbPath, 300);
+  for (const c of conductors.slice(0, 100)) {
+    const res = await fetch(`${base}/api/lots/${c.lot_id}/samples`, {
+      method: 'POST',
+      headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' },
+      body: JSON.stringify({ conductorId: c.conductor_id, unitRef: 'Bench unit' }),
+    });
+    if (res.status !== 201) {
+      throw new Error(`POST /api/lots/${c.lot_id}/samples: ${res.status} ${await res.text()}`);
+    }
+    samples.push({ id: (await res.json()).id, areaMm2: c.nominal_area_mm2 });
+  }
+  if (samples.length === 0) throw new Error('readings: the data set has no open lot');
+  return { samples, instruments };
+}
+
+/** Mass readings posted round-robin over the prepared samples under load. */
+export async function readingsPhase({ base, token, dbPath, seconds, connections }) {
+  const { samples, instruments } = await prepareSamples(base, token, dbPath);
+  let i = 0;
+  const density = MATERIALS.copper.densityGPerCm3 / 1000;
+  const nextRequest = () => {
+    const s = samples[i++ % samples.length];
+    // 1000 mm of the nominal area of copper, ASTM B496's 2 % lay increment, a little scatter.
+    const massG =
+      Math.round(s.areaMm2 * density * 1000 * 1.02 * (0.99 + (i % 7) / 200) * 100) / 100;
+    return {
+      method: 'POST',
+      path: `/api/samples/${s.id}/readings`,
+      body: JSON.stringify({
+        method: 'mass',
+        massG,
+        lengthMm: 1000,
+        strandingIncrement: 0.02,
+        instrumentIds: instruments,
+      }),
+    };
+  };
+  const result = await load({
+    url: base,
+    connections,
+    seconds,
+    headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' },
+    nextRequest,
+  });
+  if (result.failed) {
+    throw new Error(`readings: ${result.failed} failed answers ${JSON.stringify(result.statuses)}`);
+  }
+  return result;
+}
+
+/** Downloads a CSV, counting data rows as they stream in (never holding the file). */
+async function downloadCsv(base, path, token) {
+  const t0 = performance.now();
+  const res = await fetch(`${base}${path}`, { headers: { authorization: `Bearer ${token}` } });
+  if (!res.ok) throw new Error(`GET ${path}: ${res.status} ${(await res.text()).slice(0, 300)}`);
+  let lines = 0;
+  let bytes = 0;
+  const decoder = new TextDecoder();
+  for await (const chunk of res.body) {
+    bytes += chunk.length;
+    const text = decoder.decode(chunk, { stream: true });
+    for (let k = text.indexOf('\n'); k !== -1; k = text.indexOf('\n', k + 1)) lines++;
+  }
+  return { rows: Math.max(0, lines - 1), bytes, ms: performance.now() - t0 };
+}
+
+/** The return with the most lots and the supplier with the most readings. */
+function exportTargets(dbPath) {
+  const db = new Database(dbPath, { readonly: true });
+  const ret = db
+    .prepare(
+      'select vendor_return_id as id, count(*) as n from vendor_return_lots group by 1 order by 2 desc, 1 limit 1',
+    )
+    .get();
+  const supplier = db
+    .prepare(
+      'select supplier_id as id, count(*) as n from lots group by 1 order by 2 desc, 1 limit 1',
+    )
+    .get();
+  db.close();
+  if (!ret) throw new Error('exports: the data set has no return');
+  return { returnId: ret.id, supplierId: supplier.id };
+}
+
+/**
+ * The return's CSV repeatedly (it is small) for at least a second of work, then the whole
+ * reading history of the busiest supplier; the server's VmHWM afterwards.
+ */
+export async function exportsPhase({ base, token, dbPath, pid }) {
+  const { returnId, supplierId } = exportTargets(dbPath);
+  const ret = { rows: 0, ms: 0, calls: 0 };
+  while (ret.calls < 5 || (ret.ms < 1000 && ret.calls < 200)) {
+    const one = await downloadCsv(base, `/api/returns/${returnId}/export.csv`, token);
+    if (one.rows === 0) throw new Error(`return ${returnId} export has no rows`);
+    ret.rows += one.rows;
+    ret.ms += one.ms;
+    ret.calls++;
+  }
+  const supplier = await downloadCsv(
+    base,
+    `/api/suppliers/${supplierId}/readings/export.csv`,
+    token,
+  );
+  if (supplier.rows === 0) throw new Error(`supplier ${supplierId} readings export has no rows`);
+  return {
+    returnRowsPerS: ret.rows / (ret.ms / 1000),
+    returnRows: ret.rows / ret.calls,
+    supplierRowsPerS: supplier.rows / (supplier.ms / 1000),
+    supplierRows: supplier.rows,
+    peakMb: peakRssMb(pid),
+  };
+}

@@ -1,0 +1,41 @@
+// The comparison server: node:http + better-sqlite3 answering the lot list query on the
+// same file, with the LotSummary shape. Run as a child process: node raw-lots-server.mjs DB.
+import { createServer } from 'node:http';
+import Database from 'better-sqlite3';
+import { lotListQuery } from './raw-sql.mjs';
+
+const db = new Database(process.argv[2], { readonly: true, fileMustExist: true });
+const cache = new Map();
+const prepared = (sql) => {
+  if (!cache.has(sql)) cache.set(sql, db.prepare(sql));
+  return cache.get(sql);
+};
+
+const server = createServer((req, res) => {
+  const url = new URL(req.url, 'http://localhost');
+  const page = Number(url.searchParams.get('page') ?? 1);
+  const pageSize = Number(url.searchParams.get('pageSize') ?? 25);
+  const statuses = (url.searchParams.get('status') ?? '').split(',').filter(Boolean);
+  const q = url.searchParams.get('q') ?? '';
+  const query = lotListQuery({ statuses, q, page, pageSize });
+  const rows = prepared(query.items.sql).all(...query.items.bindings);
+  const total = prepared(query.count.sql).get(...query.count.bindings).n;
+  const items = rows.map((r) => ({
+    id: r.id,
+    status: r.status,
+    poNumber: r.po_number,
+    packingSlip: r.packing_slip,
+    supplierLotCode: r.supplier_lot_code,
+    quantity: r.quantity,
+    unit: r.unit,
+    receivedAt: new Date(r.received_at).toISOString(),
+    receivedBy: { id: r.received_by_id, name: r.received_by_name },
+    product: { id: r.product_id, sku: r.sku, description: r.description, kind: r.kind },
+    supplier: { id: r.supplier_id, name: r.supplier_name, code: r.code, status: r.supplier_status },
+    samplingPlan: JSON.parse(r.sampling_plan),
+    version: r.version,
+  }));
+  res.writeHead(200, { 'content-type': 'application/json; charset=utf-8' });
+  res.end(JSON.stringify({ items, total, page, pageSize }));
+});
+server.listen(Number(process.argv[3]), '127.0.0.1', () => process.send?.('ready'));
