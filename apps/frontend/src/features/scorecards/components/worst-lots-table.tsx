@@ -1,4 +1,13 @@
-import { Link, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
+import {
+  Link,
+  Table,
+  TableBody,
+  TableCell,
+  TableContainer,
+  TableHead,
+  TableRow,
+  Typography,
+} from '@mui/material';
 import { Link as RouterLink } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { formatPercent, NONE } from '@/features/scorecards/lib/format';
@@ -16,41 +25,43 @@ export function WorstLotsTable({ lots }: { lots: WorstLot[] }) {
     );
   }
   return (
-    <Table size="small" aria-label="Worst lots">
-      <TableHead>
-        <TableRow>
-          <TableCell>Lot</TableCell>
-          <TableCell>PO</TableCell>
-          <TableCell>Received</TableCell>
-          <TableCell>SKU</TableCell>
-          <TableCell>Label</TableCell>
-          <TableCell>Measures as</TableCell>
-          <TableCell align="right">Lowest area</TableCell>
-          <TableCell align="right">Sizes short (worst conductor)</TableCell>
-          <TableCell>Status</TableCell>
-        </TableRow>
-      </TableHead>
-      <TableBody>
-        {lots.map((lot) => (
-          <TableRow key={lot.lotId}>
-            <TableCell>
-              <Link component={RouterLink} to={paths.lot.getHref(lot.lotId)}>
-                Lot {lot.lotId}
-              </Link>
-            </TableCell>
-            <TableCell>{lot.poNumber}</TableCell>
-            <TableCell>{day(lot.receivedAt)}</TableCell>
-            <TableCell>{lot.sku}</TableCell>
-            <TableCell>{lot.label ?? NONE}</TableCell>
-            <TableCell>{lot.measuresAs ?? NONE}</TableCell>
-            <TableCell align="right">{formatPercent(lot.lowestAreaRatio)}</TableCell>
-            <TableCell align="right">
-              {lot.sizesShort === null ? NONE : Math.max(0, lot.sizesShort)}
-            </TableCell>
-            <TableCell>{lot.status.replaceAll('_', ' ')}</TableCell>
+    <TableContainer>
+      <Table size="small" aria-label="Worst lots" sx={{ '& td, & th': { whiteSpace: 'nowrap' } }}>
+        <TableHead>
+          <TableRow>
+            <TableCell>Lot</TableCell>
+            <TableCell>PO</TableCell>
+            <TableCell>Received</TableCell>
+            <TableCell>SKU</TableCell>
+            <TableCell>Label</TableCell>
+            <TableCell>Measures as</TableCell>
+            <TableCell align="right">Lowest area</TableCell>
+            <TableCell align="right">Sizes short (worst conductor)</TableCell>
+            <TableCell>Status</TableCell>
           </TableRow>
-        ))}
-      </TableBody>
-    </Table>
+        </TableHead>
+        <TableBody>
+          {lots.map((lot) => (
+            <TableRow key={lot.lotId}>
+              <TableCell>
+                <Link component={RouterLink} to={paths.lot.getHref(lot.lotId)}>
+                  Lot {lot.lotId}
+                </Link>
+              </TableCell>
+              <TableCell>{lot.poNumber}</TableCell>
+              <TableCell>{day(lot.receivedAt)}</TableCell>
+              <TableCell>{lot.sku}</TableCell>
+              <TableCell>{lot.label ?? NONE}</TableCell>
+              <TableCell>{lot.measuresAs ?? NONE}</TableCell>
+              <TableCell align="right">{formatPercent(lot.lowestAreaRatio)}</TableCell>
+              <TableCell align="right">
+                {lot.sizesShort === null ? NONE : Math.max(0, lot.sizesShort)}
+              </TableCell>
+              <TableCell>{lot.status.replaceAll('_', ' ')}</TableCell>
+            </TableRow>
+          ))}
+        </TableBody>
+      </Table>
+    </TableContainer>
   );
 }
