@@ -4,18 +4,21 @@ import { LotDetailController } from './lot-detail.controller';
 import { LotDetailService } from './lot-detail.service';
 import { LotEvaluationService } from './lot-evaluation';
 import { LotStatusService } from './lot-status';
+import { ReadingsImportController } from './readings-import.controller';
+import { ReadingsImportService } from './readings-import.service';
 import { ReadingsService } from './readings.service';
 import { SamplesService } from './samples.service';
 
 /** Samples, readings, their computation, the lot's status flow and its evaluation. */
 @Module({
-  controllers: [InspectionController, LotDetailController],
+  controllers: [InspectionController, LotDetailController, ReadingsImportController],
   providers: [
     LotEvaluationService,
     LotDetailService,
     LotStatusService,
     SamplesService,
     ReadingsService,
+    ReadingsImportService,
   ],
   exports: [LotEvaluationService],
 })

@@ -3,10 +3,12 @@ import { EntityManager } from '@mikro-orm/core';
 import { Decision } from '../decisions/entities/decision.entity';
 import { Nonconformance } from '../decisions/entities/nonconformance.entity';
 import { Lot } from '../lots/entities/lot.entity';
+import { lotSummary, supplierWarning } from '../lots/lot-summary';
+import { InspectionState } from '../products/entities/inspection-state.entity';
+import { productView } from '../products/product-view';
 import { Photo } from '../photos/entities/photo.entity';
 import { photoView } from '../photos/photo-view';
 import { LotEvaluationService } from './lot-evaluation';
-import { lotSummary, productView, supplierWarning } from './lot-summary-local';
 import { sampleView } from './views';
 
 /** LotDetail of docs/api-conventions.md: the lot with all its evidence and its evaluation. */
@@ -24,6 +26,7 @@ export class LotDetailService {
       {
         populate: [
           'supplier',
+          'product.supplier',
           'receivedBy',
           'product.conductors',
           'samples.conductor',
@@ -33,7 +36,8 @@ export class LotDetailService {
         ],
       },
     );
-    const [photos, decisions, ncr] = await Promise.all([
+    const [state, photos, decisions, ncr] = await Promise.all([
+      this.em.findOne(InspectionState, { product: lot.product }),
       this.em.find(Photo, { lot }, { populate: ['uploadedBy', 'sample'], orderBy: { id: 'asc' } }),
       this.em.find(
         Decision,
@@ -49,7 +53,7 @@ export class LotDetailService {
       ...lotSummary(lot),
       notes: lot.notes,
       supplierWarning: supplierWarning(lot.supplier),
-      product: productView(lot.product, lot.supplier),
+      product: productView(lot.product, state, { allConductors: true }),
       samples: samples.map(sampleView),
       photos: photos.map(photoView),
       evaluation: this.evaluation.evaluateLoaded(lot),

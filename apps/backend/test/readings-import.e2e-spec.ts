@@ -1,0 +1,131 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { MikroORM } from '@mikro-orm/core';
+import { Reading } from '../src/inspection/entities/reading.entity';
+import { Sample } from '../src/inspection/entities/sample.entity';
+import {
+  as,
+  createBench,
+  createLot,
+  createProduct,
+  lotRow,
+  type Bench,
+  type Catalog,
+} from './helpers/fixtures';
+import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
+
+let t: TestApp;
+let bench: Bench;
+let kit: Catalog;
+beforeAll(async () => {
+  t = await startTestApp();
+  bench = await createBench(t);
+  // Power and ground 4 AWG copper; S-3, AQL 15 at 50 units → 3 units planned.
+  kit = await createProduct(t, [
+    { purpose: 'power', gauge: '4 AWG' },
+    { purpose: 'ground', gauge: '4 AWG' },
+  ]);
+});
+afterAll(async () => t.close());
+
+const HEADER =
+  'unit,conductor,method,massG,lengthMm,count,strandDiameterMm,resistanceOhm,temperatureC,diameterMm,instruments,unitRef';
+const count = (entity: typeof Reading | typeof Sample) =>
+  t.app.get(MikroORM).em.fork().count(entity);
+
+async function send(lotId: number, csv: string, who: string = DEMO.clerk) {
+  return t.http
+    .post(`/api/lots/${lotId}/readings/import`)
+    .set('Authorization', `Bearer ${await t.token(who)}`)
+    .attach('file', Buffer.from(csv), { filename: 'bench.csv', contentType: 'text/csv' });
+}
+
+describe('readings CSV import', () => {
+  it('imports every row, creating samples, and moves the lot to awaiting_decision', async () => {
+    const lotId = await createLot(t, kit);
+    const b = `${bench.balance.serial};${bench.rule.serial}`;
+    const rows = [1, 2, 3].flatMap((u) => [
+      `${u},power,mass,195,1000,,,,,,${b},SPOOL-${u}`,
+      `${u},2,mass,194.5,1000,,,,,,${b},SPOOL-${u}`,
+    ]);
+    rows.push(
+      `1,power,resistance,,1000,,,0.000805,20.5,,${bench.meter.serial};${bench.thermometer.serial},`,
+    );
+    const res = await send(lotId, [HEADER, ...rows].join('\n'));
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    expect(res.body.imported).toBe(7);
+    expect(res.body.readings[6]).toMatchObject({
+      method: 'resistance',
+      identifiedMaterial: 'copper',
+      verdict: 'conforms',
+    });
+    expect((await lotRow(t, lotId)).status).toBe('awaiting_decision');
+    const detail = await as(t, DEMO.qa, 'get', `/api/lots/${lotId}`);
+    expect(detail.body.samples).toHaveLength(6);
+    expect(detail.body.samples[0]).toMatchObject({ seq: 1, unitRef: 'SPOOL-1' });
+    expect(detail.body.evaluation).toMatchObject({ samplesTested: 3, recommendation: 'accept' });
+  });
+
+  it('refuses the whole file when one row is bad, listing every error by row and column; saves nothing', async () => {
+    const lotId = await createLot(t, kit);
+    const [readingsBefore, samplesBefore] = [await count(Reading), await count(Sample)];
+    const b = bench.balance.serial;
+    const csv = [
+      HEADER,
+      `1,power,mass,195,1000,,,,,,${b},`,
+      `1,ground,mass,heavy,1000,,,,,,${b};NO-SUCH-1,`,
+      `2,speaker,diameter,,,,,,,5.2,${bench.micrometer.serial},`,
+      `4,power,mass,195,1000,,,,,,${b},`,
+      `2,power,mass,195,1000,,,,,,${bench.overdueBalance.serial},`,
+      `3,power,strands,,,0,0.25,,,,${bench.micrometer.serial},`,
+    ].join('\n');
+    const res = await send(lotId, csv);
+    expect(res.status).toBe(422);
+    expect(res.body.message).toMatch(/nothing was imported/);
+    expect(res.body.errors).toEqual(
+      expect.arrayContaining([
+        { row: 3, column: 'massG', message: 'massG must be a number (got "heavy")' },
+        {
+          row: 3,
+          column: 'instruments',
+          message: 'no instrument with serial NO-SUCH-1 in the register',
+        },
+        expect.objectContaining({ row: 4, column: 'conductor' }),
+        expect.objectContaining({
+          row: 5,
+          column: 'unit',
+          message: expect.stringMatching(/beyond the plan/),
+        }),
+        expect.objectContaining({
+          row: 6,
+          column: 'instruments',
+          message: expect.stringContaining('2020-06-30'),
+        }),
+        { row: 7, column: 'count', message: 'count must be at least 1 strand' },
+      ]),
+    );
+    expect(res.body.errors.some((e: { row: number }) => e.row === 2)).toBe(false);
+    expect(await count(Reading)).toBe(readingsBefore);
+    expect(await count(Sample)).toBe(samplesBefore);
+    expect((await lotRow(t, lotId)).status).toBe('on_hold');
+  });
+
+  it('refuses a file without the needed columns, and callers without the role', async () => {
+    const lotId = await createLot(t, kit);
+    const res = await send(lotId, 'unit,method\n1,mass\n');
+    expect(res.status).toBe(422);
+    expect(res.body.errors).toEqual([
+      { row: 1, column: 'conductor', message: 'column conductor is missing' },
+      { row: 1, column: 'instruments', message: 'column instruments is missing' },
+    ]);
+    expect((await send(lotId, `${HEADER}\n`, DEMO.buyer)).status).toBe(403);
+    const qa = await send(
+      lotId,
+      `${HEADER}\n1,power,mass,195,1000,,,,,,${bench.balance.serial},`,
+      DEMO.qa,
+    );
+    expect(qa.status).toBe(201);
+    const big = await send(lotId, `${HEADER}\n${'x'.repeat(2 * 1024 * 1024)}`);
+    expect(big.status).toBe(413);
+    expect(big.body.message).toMatch(/larger than 2 MB/);
+  });
+});
