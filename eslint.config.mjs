@@ -2,6 +2,35 @@ import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
+import { existsSync, readdirSync } from 'node:fs';
+
+// One block per feature folder: a feature may import itself and shared code, never another
+// feature (STYLE.md). Route components in src/app compose features and are not limited.
+const featuresDir = 'apps/frontend/src/features';
+const features = existsSync(featuresDir) ? readdirSync(featuresDir) : [];
+const featureBlocks = features.map((name) => ({
+  files: [`${featuresDir}/${name}/**/*.{ts,tsx}`],
+  rules: {
+    'no-restricted-imports': [
+      'error',
+      {
+        patterns: [
+          {
+            group: [
+              '@/features/*',
+              `!@/features/${name}`,
+              `!@/features/${name}/**`,
+              '../../*/**',
+              '!../../' + name + '/**',
+            ],
+            message:
+              'A feature does not import another feature; move shared code to src/components or src/lib.',
+          },
+        ],
+      },
+    ],
+  },
+}));
 
 export default tseslint.config(
   {
@@ -32,22 +61,20 @@ export default tseslint.config(
     plugins: { 'react-hooks': reactHooks },
     rules: { ...reactHooks.configs.recommended.rules },
   },
-  {
-    files: ['apps/frontend/src/**/*.{ts,tsx}'],
-    rules: {
-      // Features never import from each other's folders (STYLE.md).
-      'no-restricted-imports': [
-        'error',
-        { patterns: [{ group: ['../../features/*', '@/features/*/*'], message: 'Import from another feature through shared code, not directly.' }] },
-      ],
-    },
-  },
+  ...featureBlocks,
   {
     files: ['libs/standards/src/**/*.ts'],
     rules: {
       'no-restricted-imports': [
         'error',
-        { patterns: [{ group: ['node:*', 'fs', 'path', 'http'], message: 'The standards library does no I/O.' }] },
+        {
+          patterns: [
+            {
+              group: ['node:*', 'fs', 'path', 'http'],
+              message: 'The standards library does no I/O.',
+            },
+          ],
+        },
       ],
     },
   },
