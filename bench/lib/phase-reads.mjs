@@ -71,8 +71,11 @@ export async function lotListPhase({ base, token, dbPath, seconds, connections }
     seconds,
     headers: { authorization: `Bearer ${token}` },
   });
-  if (api.failed)
-    throw new Error(`lot list: ${api.failed} failed answers ${JSON.stringify(api.statuses)}`);
+  if (api.failed) {
+    throw new Error(
+      `lot list: ${api.failed} failed answers ${JSON.stringify(api.statuses)} (none at all: no answer completed within the ${seconds} s window at ${connections} connections)`,
+    );
+  }
 
   const port = await freePort();
   const child = fork(join(import.meta.dirname, 'raw-lots-server.mjs'), [dbPath, String(port)], {

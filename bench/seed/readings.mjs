@@ -7,7 +7,11 @@ const require = createRequire(import.meta.url);
 const { computeReading } = require('../../apps/backend/dist/inspection/reading-compute.js');
 
 const K = 0.02; // ASTM B496 standard stranding increment, as the clerk would enter it
-const round = (v, step) => Math.round(v / step) * step;
+/** To the instrument's step, as the display shows it (no 22.200000000000003 °C). */
+const round = (v, step) => {
+  const decimals = Math.max(0, -Math.floor(Math.log10(step)));
+  return Number((Math.round(v / step) * step).toFixed(decimals));
+};
 
 /** Mass of the stripped specimen, g: ρ · A · L · (1 + k) (ASTM B263). */
 function massG(material, areaMm2, lengthMm) {
