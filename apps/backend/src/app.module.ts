@@ -9,6 +9,10 @@ import type { IncomingMessage } from 'node:http';
 import { AuditModule } from './audit/audit.module';
 import { AuthModule } from './auth/auth.module';
 import { ConfigModule } from './config/config.module';
+import { DecisionsModule } from './decisions/decisions.module';
+import { DocumentsModule } from './documents/documents.module';
+import { MailModule } from './mail/mail.module';
+import { ReturnsModule } from './returns/returns.module';
 import { ExportsModule } from './exports/exports.module';
 import type { AppConfig } from './config/env';
 import { ormOptions } from './database/orm-options';
@@ -38,6 +42,10 @@ const DOMAIN_MODULES = [
   PhotosModule,
   ScorecardsModule,
   ExportsModule,
+  DecisionsModule,
+  DocumentsModule,
+  MailModule,
+  ReturnsModule,
 ];
 
 function requestId(req: IncomingMessage): string {

@@ -1,6 +1,12 @@
 import { Global, Module } from '@nestjs/common';
+import { AuditController } from './audit.controller';
+import { AuditQueryService } from './audit-query.service';
 import { AuditService } from './audit.service';
 
 @Global()
-@Module({ providers: [AuditService], exports: [AuditService] })
+@Module({
+  controllers: [AuditController],
+  providers: [AuditService, AuditQueryService],
+  exports: [AuditService],
+})
 export class AuditModule {}

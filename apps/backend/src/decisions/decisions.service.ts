@@ -11,7 +11,7 @@ import type { RequestUser } from '../auth/request-user';
 import { retryOnUniqueConflict } from '../common/numbering';
 import { LotEvaluationService, type Evaluation } from '../inspection/lot-evaluation';
 import { Lot, type LotStatus } from '../lots/entities/lot.entity';
-import { lotSnapshot as lotSummary } from './lot-snapshot';
+import { lotSummary } from '../lots/lot-summary';
 import { User } from '../users/entities/user.entity';
 import { decisionView } from './decision-view';
 import { CreateDecisionDto } from './dto/create-decision.dto';

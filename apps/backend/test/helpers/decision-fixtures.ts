@@ -16,8 +16,10 @@ import { DEMO, type TestApp } from './test-app';
  * decision, return and corrective-action tests need no other domain's routes. All names are
  * invented.
  */
+/** Shared by every Fixtures of a test file, so codes stay unique in one database. */
+let counter = 0;
+
 export class Fixtures {
-  private counter = 0;
   constructor(private readonly t: TestApp) {}
 
   em(): EntityManager {
@@ -26,14 +28,14 @@ export class Fixtures {
 
   async supplier(name = 'Northwind Cable Works', contactEmail = 'quality@northwind.example') {
     const em = this.em();
-    const n = ++this.counter;
+    const n = ++counter;
     const s = em.create(Supplier, { name, code: `SUP${n}`, contactEmail });
     await em.flush();
     return s;
   }
 
   /** A power-and-ground kit (4 AWG each, copper) with its switching state on normal. */
-  async product(supplierId: number, sku = `KIT-4-${++this.counter}`) {
+  async product(supplierId: number, sku = `KIT-4-${++counter}`) {
     const em = this.em();
     const product = em.create(Product, {
       supplier: em.getReference(Supplier, supplierId),
@@ -95,9 +97,9 @@ export class Fixtures {
     const lot = em.create(Lot, {
       product,
       supplier: product.supplier,
-      poNumber: opts.poNumber ?? `PO-${7000 + ++this.counter}`,
-      packingSlip: `PS-${this.counter}`,
-      supplierLotCode: `L${this.counter}`,
+      poNumber: opts.poNumber ?? `PO-${7000 + ++counter}`,
+      packingSlip: `PS-${counter}`,
+      supplierLotCode: `L${counter}`,
       quantity,
       unit: 'kits',
       receivedBy: clerk,
@@ -135,6 +137,17 @@ export class Fixtures {
     await em.flush();
     return { lot, plan };
   }
+}
+
+/** A lot rejected through the decisions API (so it has its decision and NCR). */
+export async function rejectedLot(t: TestApp, fx: Fixtures, productId: number, poNumber?: string) {
+  const { lot } = await fx.lot(productId, { nonconforming: 2, poNumber });
+  const res = await t.http
+    .post(`/api/lots/${lot.id}/decisions`)
+    .set('Authorization', `Bearer ${await t.token(DEMO.qa)}`)
+    .send({ outcome: 'reject', reason: '', version: lot.version });
+  if (res.status !== 201) throw new Error(`reject lot ${lot.id}: ${res.status} ${res.text}`);
+  return { lot, ncrNumber: res.body.ncrNumber as string };
 }
 
 /** A mass reading whose result suits its verdict (8.4 mm² measures as 8 AWG). */

@@ -1,0 +1,63 @@
+import Papa from 'papaparse';
+import { Readable } from 'node:stream';
+
+export type CsvCell = string | number | boolean | null | undefined;
+export type CsvRow = readonly CsvCell[];
+
+export const CSV_CONTENT_TYPE = 'text/csv; charset=utf-8';
+
+/**
+ * A text cell a spreadsheet could read as a formula (starting with = + - @, tab or CR)
+ * gets a leading apostrophe, so it shows as text (OWASP "CSV injection"). Numbers stay
+ * numbers: a negative number is data, not a formula.
+ */
+export function neutralise(value: CsvCell): string | number | boolean {
+  if (value === null || value === undefined) return '';
+  if (typeof value === 'string' && /^[=+\-@\t\r]/.test(value)) return `'${value}`;
+  return value;
+}
+
+/** One block of CSV lines (CRLF, RFC 4180 quoting by papaparse), each ending in CRLF. */
+function lines(rows: readonly CsvRow[]): string {
+  if (rows.length === 0) return '';
+  const data = rows.map((r) => r.map(neutralise));
+  return `${Papa.unparse(data, { newline: '\r\n', header: false })}\r\n`;
+}
+
+/**
+ * CSV text produced block by block: the header, then each block of rows the source yields,
+ * so an export of a large set never holds the whole file in memory. The file opens with a
+ * UTF-8 byte-order mark so spreadsheet programs read "mm²" correctly.
+ */
+export async function* csvChunks(
+  header: readonly string[],
+  blocks: AsyncIterable<readonly CsvRow[]> | Iterable<readonly CsvRow[]>,
+): AsyncGenerator<string> {
+  yield `\ufeff${lines([header])}`;
+  for await (const block of blocks) {
+    const text = lines(block);
+    if (text) yield text;
+  }
+}
+
+export function csvStream(
+  header: readonly string[],
+  blocks: AsyncIterable<readonly CsvRow[]> | Iterable<readonly CsvRow[]>,
+): Readable {
+  return Readable.from(csvChunks(header, blocks), { objectMode: false });
+}
+
+/** The whole CSV as a buffer, for an e-mail attachment (one return's rows are few). */
+export async function csvBuffer(
+  header: readonly string[],
+  blocks: AsyncIterable<readonly CsvRow[]> | Iterable<readonly CsvRow[]>,
+): Promise<Buffer> {
+  const parts: Buffer[] = [];
+  for await (const chunk of csvChunks(header, blocks)) parts.push(Buffer.from(chunk, 'utf8'));
+  return Buffer.concat(parts);
+}
+
+/** Content-Disposition for a download, the file name reduced to safe characters. */
+export function attachmentName(filename: string): string {
+  return `attachment; filename="${filename.replace(/[^\w.-]+/g, '_')}"`;
+}

@@ -1,0 +1,49 @@
+import { Inject, Injectable, NotFoundException } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/core';
+import { APP_CONFIG } from '../config/config.module';
+import type { AppConfig } from '../config/env';
+import { Decision } from '../decisions/entities/decision.entity';
+import { ncrNumberOfLot } from '../decisions/decision-view';
+import { Lot } from '../lots/entities/lot.entity';
+import { lotTagPdf } from './lot-tag';
+
+const OUTCOME_WORDS: Record<string, string> = {
+  accept: 'accepted',
+  accept_on_concession: 'accepted on concession',
+  reject: 'rejected',
+};
+
+/** Printable documents of a lot. */
+@Injectable()
+export class DocumentsService {
+  constructor(
+    private readonly em: EntityManager,
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
+  ) {}
+
+  async lotTag(lotId: number): Promise<Buffer> {
+    const lot = await this.em.findOne(Lot, lotId, { populate: ['product', 'supplier'] });
+    if (!lot) throw new NotFoundException(`There is no lot ${lotId}`);
+    const decision = await this.em.findOne(
+      Decision,
+      { lot },
+      { orderBy: { decidedAt: 'desc', id: 'desc' }, populate: ['decidedBy'] },
+    );
+    return lotTagPdf({
+      lotId: lot.id,
+      status: lot.status,
+      poNumber: lot.poNumber,
+      sku: lot.product.sku,
+      description: lot.product.description,
+      supplier: `${lot.supplier.name} (${lot.supplier.code})`,
+      receivedAt: lot.receivedAt,
+      quantity: `${lot.quantity} ${lot.unit}`,
+      decision: decision
+        ? `${OUTCOME_WORDS[decision.outcome]} by ${decision.decidedBy.name}`
+        : null,
+      decidedAt: decision?.decidedAt ?? null,
+      ncrNumber: await ncrNumberOfLot(this.em, lot.id),
+      url: `${this.config.publicUrl}/lots/${lot.id}`,
+    });
+  }
+}

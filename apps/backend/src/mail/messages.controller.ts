@@ -1,0 +1,25 @@
+import { Controller, Get, HttpCode, Param, ParseIntPipe, Post, Query } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import { CurrentUser, Roles } from '../auth/decorators';
+import type { RequestUser } from '../auth/request-user';
+import { ListMessagesDto } from './dto/list-messages.dto';
+import { MailService } from './mail.service';
+
+@ApiTags('messages')
+@Controller('messages')
+@Roles('purchasing', 'admin')
+export class MessagesController {
+  constructor(private readonly mail: MailService) {}
+
+  @Get()
+  list(@Query() q: ListMessagesDto) {
+    return this.mail.list(q);
+  }
+
+  /** Sends a failed (or only logged) message again, its attachments rebuilt. */
+  @Post(':id/retry')
+  @HttpCode(200)
+  retry(@Param('id', ParseIntPipe) id: number, @CurrentUser() actor: RequestUser) {
+    return this.mail.retry(id, actor);
+  }
+}

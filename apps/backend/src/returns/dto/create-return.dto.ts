@@ -1,0 +1,44 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  ArrayUnique,
+  IsArray,
+  IsInt,
+  IsOptional,
+  IsString,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
+import { ReturnCostsDto } from './return-costs.dto';
+
+export class CreateReturnDto {
+  @ApiProperty({ type: [Number], description: 'Rejected lots of one supplier' })
+  @IsArray({ message: 'lotIds must be a list of lot ids' })
+  @ArrayMinSize(1, { message: 'lotIds must name at least one lot' })
+  @ArrayMaxSize(100, { message: 'lotIds can name at most 100 lots' })
+  @ArrayUnique({ message: 'lotIds must not repeat a lot' })
+  @IsInt({ each: true, message: 'each lot id must be a whole number' })
+  @Min(1, { each: true, message: 'each lot id must be a whole number' })
+  readonly lotIds: number[];
+
+  @ApiPropertyOptional({ description: "The supplier's return authorization number" })
+  @IsOptional()
+  @IsString()
+  @MaxLength(64, { message: 'rmaNumber must be at most 64 characters' })
+  readonly rmaNumber?: string;
+
+  @ApiPropertyOptional()
+  @IsOptional()
+  @IsString()
+  @MaxLength(4000, { message: 'notes must be at most 4000 characters' })
+  readonly notes?: string;
+
+  @ApiPropertyOptional({ type: ReturnCostsDto })
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => ReturnCostsDto)
+  readonly costs?: ReturnCostsDto;
+}

@@ -1,0 +1,35 @@
+import type { VendorReturn } from './entities/vendor-return.entity';
+
+/** VendorReturn as the API shows it; lots, supplier and createdBy loaded. */
+export function returnView(r: VendorReturn) {
+  return {
+    id: r.id,
+    number: r.number,
+    status: r.status,
+    supplier: {
+      id: r.supplier.id,
+      name: r.supplier.name,
+      code: r.supplier.code,
+      status: r.supplier.status,
+      contactEmail: r.supplier.contactEmail,
+    },
+    lots: r.lots
+      .getItems()
+      .sort((a, b) => a.id - b.id)
+      .map((l) => ({
+        id: l.id,
+        poNumber: l.poNumber,
+        status: l.status,
+        quantity: l.quantity,
+        unit: l.unit,
+      })),
+    rmaNumber: r.rmaNumber,
+    notes: r.notes,
+    costs: r.costs,
+    chargebackTotal: r.chargebackTotal,
+    createdBy: { id: r.createdBy.id, name: r.createdBy.name },
+    createdAt: r.createdAt,
+    updatedAt: r.updatedAt,
+  };
+}
+export type ReturnView = ReturnType<typeof returnView>;
