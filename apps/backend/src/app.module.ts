@@ -9,11 +9,11 @@ import type { IncomingMessage } from 'node:http';
 import { AuditModule } from './audit/audit.module';
 import { AuthModule } from './auth/auth.module';
 import { ConfigModule } from './config/config.module';
+import { ExportsModule } from './exports/exports.module';
 import { DecisionsModule } from './decisions/decisions.module';
 import { DocumentsModule } from './documents/documents.module';
 import { MailModule } from './mail/mail.module';
 import { ReturnsModule } from './returns/returns.module';
-import { ExportsModule } from './exports/exports.module';
 import type { AppConfig } from './config/env';
 import { ormOptions } from './database/orm-options';
 import { HealthModule } from './health/health.module';
@@ -36,16 +36,17 @@ const DOMAIN_MODULES = [
   InstrumentsModule,
   SuppliersModule,
   ProductsModule,
+  // LotsModule before InspectionModule: /api/lots/export.csv must match before /api/lots/:id.
   LotsModule,
   InspectionModule,
   StorageModule,
   PhotosModule,
   ScorecardsModule,
-  ExportsModule,
   DecisionsModule,
   DocumentsModule,
   MailModule,
   ReturnsModule,
+  ExportsModule,
 ];
 
 function requestId(req: IncomingMessage): string {

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { MikroORM } from '@mikro-orm/core';
+import { AuditEvent } from '../src/audit/entities/audit-event.entity';
 import { Reading } from '../src/inspection/entities/reading.entity';
 import {
   as,
@@ -161,6 +162,30 @@ describe('readings', () => {
     expect(r.body.identification.massResistivity).toBeCloseTo(0.097, 2);
     const detail = await as(t, DEMO.buyer, 'get', `/api/lots/${lotId}`);
     expect(detail.body.samples[0].verdict).toBe('nonconforming');
+    // The earlier mass reading follows the finding the two readings make together.
+    const massNow = detail.body.samples[0].readings.find((x: { id: number }) => x.id === m.body.id);
+    expect(massNow).toMatchObject({
+      identifiedMaterial: 'cca',
+      materialMismatch: true,
+      verdict: 'nonconforming',
+    });
+
+    // Voiding the mass reading takes away what the CCA finding stood on.
+    const voided = await as(t, DEMO.qa, 'post', `/api/readings/${m.body.id}/void`, {
+      reason: 'Specimen was cut from the wrong unit',
+    });
+    expect(voided.status, JSON.stringify(voided.body)).toBe(200);
+    const after = await as(t, DEMO.qa, 'get', `/api/lots/${lotId}`);
+    const resistanceNow = after.body.samples[0].readings.find(
+      (x: { id: number }) => x.id === r.body.id,
+    );
+    expect(resistanceNow.materialMismatch).toBe(false);
+    expect(resistanceNow.identifiedMaterial).not.toBe('cca');
+    const recomputed = await t.app
+      .get(MikroORM)
+      .em.fork()
+      .find(AuditEvent, { action: 'reading.recompute', lotId });
+    expect(recomputed.map((e) => e.entityId)).toEqual([m.body.id, r.body.id]);
   });
 
   it('refuses an instrument past its calibration date, naming it and the date; stores nothing', async () => {

@@ -36,7 +36,7 @@ const KIND_WORDS: Record<InstrumentKind, string> = {
 };
 
 /** Converts a resolution to the method's unit; milliohm meters may read in mΩ (÷ 1000). */
-function inUnit(i: Instrument, wanted: 'g' | 'mm' | 'ohm' | 'degC'): number {
+function inUnit(i: InstrumentLike, wanted: 'g' | 'mm' | 'ohm' | 'degC'): number {
   if (i.resolutionUnit === wanted) return i.resolution;
   if (wanted === 'ohm' && i.resolutionUnit === 'mohm') return i.resolution / 1000;
   throw new UnprocessableEntityException(
@@ -48,13 +48,19 @@ function inUnit(i: Instrument, wanted: 'g' | 'mm' | 'ohm' | 'degC'): number {
  * Checks that the instruments fit the method (the main one present, no kind twice, none
  * foreign to the method) and returns their resolutions. Throws 422 with a clerk's sentence.
  */
+/** What the resolution rules read of an instrument: a register row or a reading's snapshot. */
+export type InstrumentLike = Pick<
+  Instrument,
+  'kind' | 'name' | 'serial' | 'resolution' | 'resolutionUnit'
+>;
+
 export function resolutionsFor(
   method: ReadingMethod,
-  instruments: Instrument[],
+  instruments: readonly InstrumentLike[],
 ): MethodResolutions {
   const { main, optional } = METHOD_INSTRUMENTS[method];
   const problems: string[] = [];
-  const byKind = new Map<InstrumentKind, Instrument>();
+  const byKind = new Map<InstrumentKind, InstrumentLike>();
   for (const i of instruments) {
     if (![...main, ...optional].includes(i.kind)) {
       problems.push(`a ${KIND_WORDS[i.kind]} ('${i.name}') is not used by the ${method} method`);

@@ -3,13 +3,13 @@ import { EntityManager } from '@mikro-orm/core';
 import type { MaterialId } from '@gaugeproof/standards';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
-import type { Instrument } from '../instruments/entities/instrument.entity';
+import type { Instrument, InstrumentKind } from '../instruments/entities/instrument.entity';
 import { User } from '../users/entities/user.entity';
 import { CreateReadingDto, INPUT_FIELDS, METHOD_FIELDS } from './dto/create-reading.dto';
 import { VoidReadingDto } from './dto/void-reading.dto';
-import { Reading } from './entities/reading.entity';
+import { Reading, type InstrumentSnapshot } from './entities/reading.entity';
 import { Sample } from './entities/sample.entity';
-import { resolutionsFor, snapshot } from './instrument-resolutions';
+import { resolutionsFor, snapshot, type InstrumentLike } from './instrument-resolutions';
 import { assertLotOpen, LotStatusService } from './lot-status';
 import { computeReading, type ReadingInputs } from './reading-compute';
 import { assertUsableInstruments } from '../instruments/instruments.service';
@@ -96,6 +96,7 @@ export class ReadingsService {
     });
     em.persist(reading);
     await em.flush();
+    await this.recomputeSiblings(em, sample, actor, reading.id);
     this.audit.record(em, actor, {
       action: 'reading.create',
       entityType: 'reading',
@@ -104,6 +105,50 @@ export class ReadingsService {
       after: auditShape(reading),
     });
     return reading;
+  }
+
+  /**
+   * When a reading is added or voided, the sample's other live readings are computed again
+   * with the readings that now stand: a material finding needs mass and resistance together,
+   * and must follow when one of them arrives or is voided. Each changed reading is updated
+   * in place and audited as `reading.recompute`.
+   */
+  private async recomputeSiblings(
+    em: EntityManager,
+    sample: Sample,
+    actor: RequestUser,
+    exceptId?: number,
+  ) {
+    await em.populate(sample, ['lot.product', 'conductor']);
+    const live = await em.find(Reading, { sample, voided: false }, { orderBy: { id: 'asc' } });
+    for (const r of live.filter((x) => x.id !== exceptId)) {
+      const others = live.filter((o) => o.id !== r.id);
+      const computed = computeReading({
+        method: r.method,
+        inputs: r.inputs as ReadingInputs,
+        resolutions: resolutionsFor(r.method, r.instruments.map(asInstrument)),
+        gaugeLabel: sample.conductor.gaugeLabel,
+        claimedMaterial: sample.conductor.claimedMaterial as MaterialId,
+        minAreaRatio: sample.lot.product.minAreaRatio,
+        siblings: others.map((o) => ({
+          method: o.method,
+          inputs: o.inputs as ReadingInputs,
+          areaMm2: o.areaMm2,
+        })),
+      });
+      if (outcomeOf(computed) === outcomeOf(r)) continue;
+      const before = auditShape(r);
+      Object.assign(r, computed);
+      this.audit.record(em, actor, {
+        action: 'reading.recompute',
+        entityType: 'reading',
+        entityId: r.id,
+        lotId: sample.lot.id,
+        before,
+        after: auditShape(r),
+      });
+    }
+    await em.flush();
   }
 
   async void(id: number, dto: VoidReadingDto, actor: RequestUser) {
@@ -124,6 +169,7 @@ export class ReadingsService {
       reading.voidedBy = await tx.findOneOrFail(User, { id: actor.id });
       reading.voidedAt = new Date();
       await tx.flush();
+      await this.recomputeSiblings(tx, reading.sample, actor);
       this.audit.record(tx, actor, {
         action: 'reading.void',
         entityType: 'reading',
@@ -136,6 +182,16 @@ export class ReadingsService {
       return readingView(reading);
     });
   }
+}
+
+/** A reading's instrument snapshot, as the resolution rules read it. */
+function asInstrument(s: InstrumentSnapshot): InstrumentLike {
+  return { ...s, kind: s.kind as InstrumentKind };
+}
+
+/** The computed part of a reading that a change of its siblings can alter. */
+function outcomeOf(r: Pick<Reading, 'identifiedMaterial' | 'materialMismatch' | 'verdict'>) {
+  return `${r.identifiedMaterial}|${r.materialMismatch}|${r.verdict}`;
 }
 
 function auditShape(r: Reading): Record<string, unknown> {
