@@ -1,13 +1,13 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import {
   Alert,
+  Box,
   Button,
   Dialog,
   DialogActions,
   DialogContent,
   DialogTitle,
   MenuItem,
-  Stack,
   TextField,
 } from '@mui/material';
 import { Controller, useForm, useWatch } from 'react-hook-form';
@@ -106,7 +106,6 @@ export function InstrumentDialog(props: { instrument: Instrument | null; onClose
           }}
           error={!!fieldState.error}
           helperText={fieldState.error?.message}
-          sx={{ flex: 1 }}
         >
           {options.map((o) => (
             <MenuItem key={o} value={o}>
@@ -124,7 +123,6 @@ export function InstrumentDialog(props: { instrument: Instrument | null; onClose
       label={label}
       error={!!errors[name]}
       helperText={errors[name]?.message}
-      sx={{ flex: 1 }}
       {...extra}
       {...form.register(name)}
     />
@@ -139,11 +137,11 @@ export function InstrumentDialog(props: { instrument: Instrument | null; onClose
           {select('kind', 'Kind', INSTRUMENT_KINDS)}
           {text('name', 'Name')}
           {text('serial', 'Serial number')}
-          <Stack direction="row" spacing={1}>
+          <Box sx={{ display: 'grid', gridTemplateColumns: '1fr 1fr', columnGap: 1.5 }}>
             {text('resolution', 'Resolution', { inputMode: 'decimal' })}
             {select('resolutionUnit', 'Unit', UNITS_BY_KIND[kind])}
-          </Stack>
-          <Stack direction="row" spacing={1}>
+          </Box>
+          <Box sx={{ display: 'grid', gridTemplateColumns: '1fr 1fr', columnGap: 1.5 }}>
             {text('calibratedOn', 'Calibrated on', {
               type: 'date',
               slotProps: { inputLabel: { shrink: true } },
@@ -152,7 +150,7 @@ export function InstrumentDialog(props: { instrument: Instrument | null; onClose
               type: 'date',
               slotProps: { inputLabel: { shrink: true } },
             })}
-          </Stack>
+          </Box>
         </DialogContent>
         <DialogActions>
           <Button onClick={onClose}>Cancel</Button>

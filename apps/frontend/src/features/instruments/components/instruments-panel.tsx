@@ -1,6 +1,7 @@
 import AddOutlined from '@mui/icons-material/AddOutlined';
-import { Alert, Button, MenuItem, Paper, Stack, TextField } from '@mui/material';
+import { Alert, Button, MenuItem, Paper, TextField } from '@mui/material';
 import { useCallback, useState } from 'react';
+import { FilterBar, FilterBarSpacer, allOptionProps } from '@/components/data-table/filter-bar';
 import { useListParams } from '@/components/data-table/use-list-params';
 import { useInstruments } from '@/features/instruments/api/get-instruments';
 import { useUpdateInstrument } from '@/features/instruments/api/update-instrument';
@@ -38,13 +39,14 @@ export function InstrumentsPanel({ canWrite }: { canWrite: boolean }) {
           The QA lead keeps this register. Readings with an overdue instrument are refused.
         </Alert>
       )}
-      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2} sx={{ mb: 1 }}>
+      <FilterBar>
         <TextField
           select
           label="Kind"
+          {...allOptionProps}
           value={list.filters.kind}
           onChange={(e) => list.setFilter('kind', e.target.value)}
-          sx={{ minWidth: 180, mt: 0 }}
+          sx={{ width: 200 }}
         >
           <MenuItem value="">All</MenuItem>
           {INSTRUMENT_KINDS.map((k) => (
@@ -56,9 +58,10 @@ export function InstrumentsPanel({ canWrite }: { canWrite: boolean }) {
         <TextField
           select
           label="Calibration"
+          {...allOptionProps}
           value={list.filters.dueWithinDays}
           onChange={(e) => list.setFilter('dueWithinDays', e.target.value)}
-          sx={{ minWidth: 220, mt: 0 }}
+          sx={{ width: 280 }}
         >
           <MenuItem value="">Any</MenuItem>
           <MenuItem value="14">Due within 14 days or overdue</MenuItem>
@@ -67,21 +70,22 @@ export function InstrumentsPanel({ canWrite }: { canWrite: boolean }) {
         <TextField
           select
           label="In service"
+          {...allOptionProps}
           value={list.filters.active}
           onChange={(e) => list.setFilter('active', e.target.value)}
-          sx={{ minWidth: 160, mt: 0 }}
+          sx={{ width: 160 }}
         >
           <MenuItem value="">All</MenuItem>
           <MenuItem value="true">In service</MenuItem>
           <MenuItem value="false">Retired</MenuItem>
         </TextField>
-        <Stack sx={{ flex: 1 }} />
+        <FilterBarSpacer />
         {canWrite && (
           <Button variant="contained" startIcon={<AddOutlined />} onClick={() => setEditing('new')}>
             New instrument
           </Button>
         )}
-      </Stack>
+      </FilterBar>
       <InstrumentsTable
         {...list.tableProps}
         data={instruments.data}

@@ -1,6 +1,6 @@
 import AddOutlined from '@mui/icons-material/AddOutlined';
 import RemoveCircleOutlined from '@mui/icons-material/RemoveCircleOutlined';
-import { Box, Button, IconButton, MenuItem, Stack, TextField, Typography } from '@mui/material';
+import { Box, Button, IconButton, MenuItem, TextField, Typography } from '@mui/material';
 import { Controller, useFieldArray, useWatch, type Control } from 'react-hook-form';
 import { EMPTY_CONDUCTOR, type ProductInput } from '@/features/products/api/create-product';
 import { previewGauge } from '@/features/products/product-rules';
@@ -33,19 +33,22 @@ export function ConductorFields({ control }: { control: Control<ProductInput> })
         Conductors
       </Typography>
       {fields.map((field, index) => (
-        <Stack
+        <Box
           key={field.id}
-          direction={{ xs: 'column', md: 'row' }}
-          spacing={1}
-          sx={{ alignItems: { md: 'flex-start' } }}
           role="group"
           aria-label={`Conductor ${index + 1}`}
+          sx={{
+            display: 'grid',
+            gridTemplateColumns: { xs: '1fr', md: '160px minmax(180px, 1fr) 190px 160px 40px' },
+            columnGap: 1.5,
+            alignItems: 'start',
+          }}
         >
           <Controller
             control={control}
             name={`conductors.${index}.purpose`}
             render={({ field: f }) => (
-              <TextField select label="Purpose" {...f} sx={{ minWidth: 150 }}>
+              <TextField select label="Purpose" {...f}>
                 {CONDUCTOR_PURPOSES.map((p) => (
                   <MenuItem key={p} value={p}>
                     {purposeLabels[p]}
@@ -66,7 +69,6 @@ export function ConductorFields({ control }: { control: Control<ProductInput> })
                 helperText={
                   fieldState.error?.message ?? <GaugeHelper control={control} index={index} />
                 }
-                sx={{ flex: 1 }}
               />
             )}
           />
@@ -74,7 +76,7 @@ export function ConductorFields({ control }: { control: Control<ProductInput> })
             control={control}
             name={`conductors.${index}.claimedMaterial`}
             render={({ field: f }) => (
-              <TextField select label="Claimed material" {...f} sx={{ minWidth: 160 }}>
+              <TextField select label="Claimed material" {...f}>
                 {CLAIMED_MATERIALS.map((m) => (
                   <MenuItem key={m} value={m}>
                     {materialLabels[m]}
@@ -93,7 +95,6 @@ export function ConductorFields({ control }: { control: Control<ProductInput> })
                 {...f}
                 error={!!fieldState.error}
                 helperText={fieldState.error?.message}
-                sx={{ width: { md: 140 } }}
               />
             )}
           />
@@ -105,7 +106,7 @@ export function ConductorFields({ control }: { control: Control<ProductInput> })
           >
             <RemoveCircleOutlined />
           </IconButton>
-        </Stack>
+        </Box>
       ))}
       <Button
         startIcon={<AddOutlined />}

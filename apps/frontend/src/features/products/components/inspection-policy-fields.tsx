@@ -1,12 +1,13 @@
 import { AQLS, INSPECTION_LEVELS } from '@gaugeproof/standards';
-import { InputAdornment, MenuItem, Stack, TextField } from '@mui/material';
+import { InputAdornment, MenuItem, TextField } from '@mui/material';
 import { Controller, type Control } from 'react-hook-form';
+import { FormRow } from '@/features/products/components/form-row';
 import type { ProductInput } from '@/features/products/api/create-product';
 
 /** Inspection policy: ISO 2859-1 level and AQL, and the minimum area ratio. */
 export function InspectionPolicyFields({ control }: { control: Control<ProductInput> }) {
   return (
-    <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1}>
+    <FormRow columns="1fr 1fr 1fr">
       <Controller
         control={control}
         name="inspectionLevel"
@@ -22,7 +23,6 @@ export function InspectionPolicyFields({ control }: { control: Control<ProductIn
                 ? 'Special level: samples are destroyed.'
                 : 'General level: more samples are cut.')
             }
-            sx={{ flex: 1 }}
           >
             {INSPECTION_LEVELS.map((level) => (
               <MenuItem key={level} value={level}>
@@ -42,7 +42,6 @@ export function InspectionPolicyFields({ control }: { control: Control<ProductIn
             {...field}
             error={!!fieldState.error}
             helperText={fieldState.error?.message ?? 'Percent nonconforming (ISO 2859-1).'}
-            sx={{ flex: 1 }}
           >
             {AQLS.map((aql) => (
               <MenuItem key={aql} value={aql}>
@@ -65,10 +64,9 @@ export function InspectionPolicyFields({ control }: { control: Control<ProductIn
             slotProps={{
               input: { endAdornment: <InputAdornment position="end">%</InputAdornment> },
             }}
-            sx={{ flex: 1 }}
           />
         )}
       />
-    </Stack>
+    </FormRow>
   );
 }

@@ -1,6 +1,7 @@
-import { MenuItem, Stack, TextField } from '@mui/material';
+import { MenuItem, TextField } from '@mui/material';
 import { Controller, useWatch, type Control } from 'react-hook-form';
 import type { ProductInput } from '@/features/products/api/create-product';
+import { FormRow } from '@/features/products/components/form-row';
 import { useSupplierOptions } from '@/features/products/api/get-supplier-options';
 import { PRODUCT_KINDS, kindLabels } from '@/features/products/types';
 import { useUnits } from '@/lib/units';
@@ -19,7 +20,7 @@ export function ProductMainFields(props: { control: Control<ProductInput>; locke
   const suppliers = useSupplierOptions();
   return (
     <>
-      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1}>
+      <FormRow columns="2fr 1fr 1fr">
         <Controller
           control={control}
           name="supplierId"
@@ -34,7 +35,6 @@ export function ProductMainFields(props: { control: Control<ProductInput>; locke
                 fieldState.error?.message ??
                 (suppliers.isError ? 'The suppliers could not be loaded.' : undefined)
               }
-              sx={{ flex: 2 }}
             >
               {(suppliers.data ?? []).map((s) => (
                 <MenuItem key={s.id} value={String(s.id)}>
@@ -54,7 +54,6 @@ export function ProductMainFields(props: { control: Control<ProductInput>; locke
               disabled={locked}
               error={!!fieldState.error}
               helperText={fieldState.error?.message}
-              sx={{ flex: 1 }}
             />
           )}
         />
@@ -62,7 +61,7 @@ export function ProductMainFields(props: { control: Control<ProductInput>; locke
           control={control}
           name="kind"
           render={({ field }) => (
-            <TextField select label="Kind" {...field} disabled={locked} sx={{ flex: 1 }}>
+            <TextField select label="Kind" {...field} disabled={locked}>
               {PRODUCT_KINDS.map((k) => (
                 <MenuItem key={k} value={k}>
                   {kindLabels[k]}
@@ -71,8 +70,8 @@ export function ProductMainFields(props: { control: Control<ProductInput>; locke
             </TextField>
           )}
         />
-      </Stack>
-      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1}>
+      </FormRow>
+      <FormRow columns="3fr 1fr">
         <Controller
           control={control}
           name="description"
@@ -82,7 +81,6 @@ export function ProductMainFields(props: { control: Control<ProductInput>; locke
               {...field}
               error={!!fieldState.error}
               helperText={fieldState.error?.message}
-              sx={{ flex: 3 }}
             />
           )}
         />
@@ -96,11 +94,10 @@ export function ProductMainFields(props: { control: Control<ProductInput>; locke
               {...field}
               error={!!fieldState.error}
               helperText={fieldState.error?.message ?? <LengthHelper control={control} />}
-              sx={{ flex: 1 }}
             />
           )}
         />
-      </Stack>
+      </FormRow>
     </>
   );
 }

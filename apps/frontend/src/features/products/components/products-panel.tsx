@@ -1,6 +1,7 @@
 import AddOutlined from '@mui/icons-material/AddOutlined';
-import { Button, MenuItem, Paper, Stack, TextField } from '@mui/material';
+import { Button, MenuItem, Paper, TextField } from '@mui/material';
 import { useEffect, useState } from 'react';
+import { FilterBar, FilterBarSpacer, allOptionProps } from '@/components/data-table/filter-bar';
 import { useListParams } from '@/components/data-table/use-list-params';
 import { useProducts } from '@/features/products/api/get-products';
 import { useSupplierOptions } from '@/features/products/api/get-supplier-options';
@@ -29,19 +30,21 @@ export function ProductsPanel({ canWrite }: { canWrite: boolean }) {
   const filtered = Boolean(list.filters.q || list.filters.supplierId || list.filters.kind);
   return (
     <Paper variant="outlined" sx={{ p: 2 }}>
-      <Stack direction={{ xs: 'column', md: 'row' }} spacing={2} sx={{ mb: 1 }}>
+      <FilterBar>
         <TextField
           label="Search SKU or description"
           value={search}
           onChange={(event) => setSearch(event.target.value)}
-          sx={{ flex: 1, mt: 0 }}
+          fullWidth={false}
+          sx={{ width: 300 }}
         />
         <TextField
           select
           label="Supplier"
+          {...allOptionProps}
           value={list.filters.supplierId}
           onChange={(event) => list.setFilter('supplierId', event.target.value)}
-          sx={{ minWidth: 200, mt: 0 }}
+          sx={{ width: 240 }}
         >
           <MenuItem value="">All</MenuItem>
           {(suppliers.data ?? []).map((s) => (
@@ -53,9 +56,10 @@ export function ProductsPanel({ canWrite }: { canWrite: boolean }) {
         <TextField
           select
           label="Kind"
+          {...allOptionProps}
           value={list.filters.kind}
           onChange={(event) => list.setFilter('kind', event.target.value)}
-          sx={{ minWidth: 140, mt: 0 }}
+          sx={{ width: 160 }}
         >
           <MenuItem value="">All</MenuItem>
           {PRODUCT_KINDS.map((k) => (
@@ -64,12 +68,13 @@ export function ProductsPanel({ canWrite }: { canWrite: boolean }) {
             </MenuItem>
           ))}
         </TextField>
+        <FilterBarSpacer />
         {canWrite && (
           <Button variant="contained" startIcon={<AddOutlined />} onClick={() => setEditing('new')}>
             New product
           </Button>
         )}
-      </Stack>
+      </FilterBar>
       <ProductsTable
         {...list.tableProps}
         data={products.data}

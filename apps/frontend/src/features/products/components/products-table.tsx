@@ -1,5 +1,5 @@
 import WarningAmberOutlined from '@mui/icons-material/WarningAmberOutlined';
-import { Button, Stack, Tooltip, Typography } from '@mui/material';
+import { Box, Button, Stack, Tooltip, Typography } from '@mui/material';
 import { useMemo } from 'react';
 import {
   DataTable,
@@ -19,7 +19,15 @@ export function ProductsTable({ onEdit, ...props }: ProductsTableProps) {
   const columns = useMemo(
     () =>
       helper.columns([
-        helper.accessor('sku', { header: 'SKU', enableSorting: true }),
+        helper.accessor('sku', {
+          header: 'SKU',
+          enableSorting: true,
+          cell: (info) => (
+            <Box component="span" sx={{ whiteSpace: 'nowrap' }}>
+              {info.getValue()}
+            </Box>
+          ),
+        }),
         helper.accessor('description', { header: 'Description', enableSorting: true }),
         helper.accessor((p) => p.supplier.name, {
           id: 'supplier',

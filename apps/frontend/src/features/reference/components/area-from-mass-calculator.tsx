@@ -4,14 +4,15 @@ import { useState } from 'react';
 import { calcAreaFromMass } from '@/features/reference/calculations';
 import { AreaOutcomeView } from '@/features/reference/components/area-outcome-view';
 import { CalcField, MaterialField } from '@/features/reference/components/calc-field';
+import { useUnitText } from '@/features/reference/use-unit-text';
 import { inputUnits, useUnits } from '@/lib/units';
 
 /** ASTM B263: weigh all stripped strands of a square-cut specimen. */
 export function AreaFromMassCalculator() {
   const { system } = useUnits();
   const units = inputUnits[system];
-  const [mass, setMass] = useState('');
-  const [length, setLength] = useState('');
+  const [mass, setMass] = useUnitText('mass');
+  const [length, setLength] = useUnitText('shortLength');
   const [material, setMaterial] = useState<MaterialId>('copper');
   const [k, setK] = useState(String(STANDARD_STRANDING_INCREMENT * 100));
   const [label, setLabel] = useState('');

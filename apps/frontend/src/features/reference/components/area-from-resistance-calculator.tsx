@@ -4,13 +4,14 @@ import { useState } from 'react';
 import { calcAreaFromResistance } from '@/features/reference/calculations';
 import { AreaOutcomeView } from '@/features/reference/components/area-outcome-view';
 import { CalcField, MaterialField } from '@/features/reference/components/calc-field';
+import { useUnitText } from '@/features/reference/use-unit-text';
 import { inputUnits, useUnits } from '@/lib/units';
 
 /** Four-wire resistance over a length, corrected to 20 °C: the copper-equivalent area. */
 export function AreaFromResistanceCalculator() {
   const { system } = useUnits();
   const [resistance, setResistance] = useState('');
-  const [length, setLength] = useState('');
+  const [length, setLength] = useUnitText('shortLength');
   const [temperature, setTemperature] = useState('20');
   const [material, setMaterial] = useState<MaterialId>('copper');
   const [k, setK] = useState(String(STANDARD_STRANDING_INCREMENT * 100));

@@ -3,13 +3,14 @@ import { useState } from 'react';
 import { calcAreaFromStrands } from '@/features/reference/calculations';
 import { AreaOutcomeView } from '@/features/reference/components/area-outcome-view';
 import { CalcField } from '@/features/reference/components/calc-field';
+import { useUnitText } from '@/features/reference/use-unit-text';
 import { inputUnits, useUnits } from '@/lib/units';
 
 /** A = n · π d² / 4, d the mean of several strands measured with a micrometer. */
 export function AreaFromStrandsCalculator() {
   const { system } = useUnits();
   const [count, setCount] = useState('');
-  const [diameters, setDiameters] = useState('');
+  const [diameters, setDiameters] = useUnitText('shortLength');
   const [label, setLabel] = useState('');
   const calc = calcAreaFromStrands({
     system,

@@ -13,7 +13,9 @@ export function AreaOutcomeView({ calc }: { calc: Calc<AreaOutcome> }) {
   if (!calc.ok) {
     return (
       <Alert severity="info" variant="outlined">
-        {calc.message}
+        {calc.message === 'Enter a value.'
+          ? 'Fill in the fields; the result appears as you type.'
+          : calc.message}
       </Alert>
     );
   }

@@ -1,4 +1,4 @@
-import { AWG_SIZES, METRIC_SIZES, measuresAs, mm2ToCmil } from '@gaugeproof/standards';
+import { AWG_SIZES, METRIC_SIZES, measuresAs, mm2ToCmil, type Gauge } from '@gaugeproof/standards';
 import {
   Stack,
   Table,
@@ -12,6 +12,9 @@ import {
 
 const cmil = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
 const head = { fontWeight: 600, whiteSpace: 'nowrap' } as const;
+
+/** Significant figures B258 gives a size: 4 from 0.1 in diameter up, 3 below (ASTM B258). */
+const figures = (g: Gauge) => ((g.nominalDiameterIn ?? 0) >= 0.1 ? 4 : 3);
 
 /** AWG 4/0 to 40 as ASTM B258 rounds them, from the standards library. */
 export function AwgTable() {
@@ -45,9 +48,9 @@ export function AwgTable() {
               <TableRow key={g.label} hover>
                 <TableCell>{g.label}</TableCell>
                 <TableCell align="right">{g.nominalDiameterIn?.toFixed(4)}</TableCell>
-                <TableCell align="right">{g.nominalDiameterMm}</TableCell>
+                <TableCell align="right">{g.nominalDiameterMm?.toPrecision(4)}</TableCell>
                 <TableCell align="right">{cmil.format(g.nominalAreaCmil ?? 0)}</TableCell>
-                <TableCell align="right">{g.nominalAreaMm2}</TableCell>
+                <TableCell align="right">{g.nominalAreaMm2.toPrecision(figures(g))}</TableCell>
               </TableRow>
             ))}
           </TableBody>

@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { calcVoltageDrop } from '@/features/reference/calculations';
 import { CalcField, MaterialField } from '@/features/reference/components/calc-field';
 import { DropResults } from '@/features/reference/components/drop-results';
+import { useUnitText } from '@/features/reference/use-unit-text';
 import { inputUnits, useUnits } from '@/lib/units';
 
 /** V = I · R over the whole circuit, labelled size against measured (REFERENCE §7). */
@@ -11,10 +12,10 @@ export function VoltageDropCalculator() {
   const { system } = useUnits();
   const units = inputUnits[system];
   const [label, setLabel] = useState('4 AWG');
-  const [measuredArea, setMeasuredArea] = useState('');
+  const [measuredArea, setMeasuredArea] = useUnitText('area');
   const [material, setMaterial] = useState<MaterialId>('copper');
-  const [powerLength, setPowerLength] = useState('');
-  const [groundLength, setGroundLength] = useState('');
+  const [powerLength, setPowerLength] = useUnitText('runLength');
+  const [groundLength, setGroundLength] = useUnitText('runLength');
   const [current, setCurrent] = useState('');
   const [temperature, setTemperature] = useState('20');
   const calc = calcVoltageDrop({
@@ -88,7 +89,9 @@ export function VoltageDropCalculator() {
         <DropResults outcome={calc.value} />
       ) : (
         <Alert severity="info" variant="outlined">
-          {calc.message}
+          {calc.message === 'Enter a value.'
+            ? 'Fill in the fields; the result appears as you type.'
+            : calc.message}
         </Alert>
       )}
     </Stack>

@@ -1,6 +1,7 @@
 import AddBusinessOutlined from '@mui/icons-material/AddBusinessOutlined';
-import { Button, MenuItem, Paper, Stack, TextField } from '@mui/material';
+import { Button, MenuItem, Paper, TextField } from '@mui/material';
 import { useEffect, useState } from 'react';
+import { FilterBar, FilterBarSpacer, allOptionProps } from '@/components/data-table/filter-bar';
 import { useListParams } from '@/components/data-table/use-list-params';
 import { useSuppliers } from '@/features/suppliers/api/get-suppliers';
 import { SupplierDialog } from '@/features/suppliers/components/supplier-dialog';
@@ -28,19 +29,21 @@ export function SuppliersPanel({ canWrite }: { canWrite: boolean }) {
 
   return (
     <Paper variant="outlined" sx={{ p: 2 }}>
-      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2} sx={{ mb: 1 }}>
+      <FilterBar>
         <TextField
           label="Search name or code"
           value={search}
           onChange={(event) => setSearch(event.target.value)}
-          sx={{ flex: 1, mt: 0 }}
+          fullWidth={false}
+          sx={{ width: 320 }}
         />
         <TextField
           select
           label="Status"
+          {...allOptionProps}
           value={list.filters.status}
           onChange={(event) => list.setFilter('status', event.target.value)}
-          sx={{ minWidth: 180, mt: 0 }}
+          sx={{ width: 200 }}
         >
           <MenuItem value="">All</MenuItem>
           {SUPPLIER_STATUSES.map((status) => (
@@ -49,6 +52,7 @@ export function SuppliersPanel({ canWrite }: { canWrite: boolean }) {
             </MenuItem>
           ))}
         </TextField>
+        <FilterBarSpacer />
         {canWrite && (
           <Button
             variant="contained"
@@ -58,7 +62,7 @@ export function SuppliersPanel({ canWrite }: { canWrite: boolean }) {
             New supplier
           </Button>
         )}
-      </Stack>
+      </FilterBar>
       <SuppliersTable
         {...list.tableProps}
         data={suppliers.data}
