@@ -9,6 +9,7 @@ import type { IncomingMessage } from 'node:http';
 import { AuditModule } from './audit/audit.module';
 import { AuthModule } from './auth/auth.module';
 import { ConfigModule } from './config/config.module';
+import { CorrectiveActionsModule } from './corrective-actions/corrective-actions.module';
 import { ExportsModule } from './exports/exports.module';
 import { DecisionsModule } from './decisions/decisions.module';
 import { DocumentsModule } from './documents/documents.module';
@@ -47,6 +48,7 @@ const DOMAIN_MODULES = [
   MailModule,
   ReturnsModule,
   ExportsModule,
+  CorrectiveActionsModule,
 ];
 
 function requestId(req: IncomingMessage): string {

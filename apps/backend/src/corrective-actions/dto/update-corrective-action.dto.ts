@@ -1,0 +1,43 @@
+import { ApiPropertyOptional } from '@nestjs/swagger';
+import { IsIn, IsOptional, IsString, Matches, MaxLength, MinLength } from 'class-validator';
+import { CAR_STATUSES, type CorrectiveActionStatus } from '../entities/corrective-action.entity';
+
+export class UpdateCorrectiveActionDto {
+  @ApiPropertyOptional({
+    enum: CAR_STATUSES,
+    description: 'open → responded → verified | reopened; reopened → responded; verified → closed',
+  })
+  @IsOptional()
+  @IsIn(CAR_STATUSES, { message: `status must be one of ${CAR_STATUSES.join(', ')}` })
+  readonly status?: CorrectiveActionStatus;
+
+  @ApiPropertyOptional()
+  @IsOptional()
+  @IsString()
+  @MinLength(10, { message: 'problem must be at least 10 characters' })
+  @MaxLength(4000, { message: 'problem must be at most 4000 characters' })
+  readonly problem?: string;
+
+  @ApiPropertyOptional({ example: '2026-12-31' })
+  @IsOptional()
+  @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'dueOn must be a date YYYY-MM-DD' })
+  readonly dueOn?: string;
+
+  @ApiPropertyOptional({ description: "The supplier's containment of suspect stock" })
+  @IsOptional()
+  @IsString()
+  @MaxLength(4000, { message: 'containment must be at most 4000 characters' })
+  readonly containment?: string;
+
+  @ApiPropertyOptional()
+  @IsOptional()
+  @IsString()
+  @MaxLength(4000, { message: 'rootCause must be at most 4000 characters' })
+  readonly rootCause?: string;
+
+  @ApiPropertyOptional()
+  @IsOptional()
+  @IsString()
+  @MaxLength(4000, { message: 'correctiveAction must be at most 4000 characters' })
+  readonly correctiveAction?: string;
+}
