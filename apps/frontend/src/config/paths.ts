@@ -23,4 +23,15 @@ export const paths = {
     path: '/scorecards/:supplierId',
     getHref: (id: number | string) => `/scorecards/${id}`,
   },
+  returns: {
+    path: '/returns',
+    getHref: (raise?: { lotId: number; supplierId: number }) =>
+      raise ? `/returns?raiseLot=${raise.lotId}&raiseSupplier=${raise.supplierId}` : '/returns',
+  },
+  returnDetail: { path: '/returns/:id', getHref: (id: number | string) => `/returns/${id}` },
+  correctiveActions: { path: '/corrective-actions', getHref: () => '/corrective-actions' },
+  correctiveActionDetail: {
+    path: '/corrective-actions/:id',
+    getHref: (id: number | string) => `/corrective-actions/${id}`,
+  },
 } as const;

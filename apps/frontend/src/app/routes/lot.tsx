@@ -2,7 +2,11 @@ import { Alert, Button, CircularProgress, Grid, Stack, Typography } from '@mui/m
 import { Link as RouterLink, useParams } from 'react-router-dom';
 import { SectionBoundary } from '@/components/section-boundary';
 import { paths } from '@/config/paths';
+import { LotTimeline } from '@/features/audit/components/lot-timeline';
 import { useSessionUser } from '@/features/auth/auth-context';
+import { DecisionPanel } from '@/features/decisions/components/decision-panel';
+import { DecisionsCard } from '@/features/decisions/components/decisions-card';
+import { PrintTagButton } from '@/features/decisions/components/print-tag-button';
 import { useLot } from '@/features/inspection/api/get-lot';
 import { EvaluationCard } from '@/features/inspection/components/evaluation-card';
 import { ImportReadingsCard } from '@/features/inspection/components/import-readings-card';
@@ -16,6 +20,8 @@ import type { Role } from '@/lib/roles';
 const RECORDERS: readonly Role[] = ['clerk', 'qa_lead', 'admin'];
 const VOIDERS: readonly Role[] = ['qa_lead', 'admin'];
 const OPEN_STATUSES = ['on_hold', 'inspecting', 'awaiting_decision'];
+const DECIDERS: readonly Role[] = ['qa_lead', 'admin'];
+const RETURNERS: readonly Role[] = ['purchasing', 'admin'];
 
 export function LotRoute() {
   const { id } = useParams();
@@ -105,15 +111,31 @@ export function LotRoute() {
             </SectionBoundary>
           </Stack>
         </Grid>
-        {/* Decision panel and timeline go here (a later issue): the right-hand column. */}
         <Grid size={{ xs: 12, xl: 4 }} data-testid="lot-side-column">
-          <Typography variant="body2" color="text.secondary">
-            {data.status === 'awaiting_decision'
-              ? 'Every planned unit has a reading. The lot waits for the QA lead’s decision.'
-              : open
-                ? 'The decision is taken once every planned unit has a reading.'
-                : 'This lot has been decided.'}
-          </Typography>
+          <Stack spacing={3}>
+            <Stack direction="row" spacing={1} sx={{ flexWrap: 'wrap' }}>
+              <PrintTagButton lotId={data.id} />
+              {data.status === 'rejected' && RETURNERS.includes(user.role) && (
+                <Button
+                  variant="contained"
+                  component={RouterLink}
+                  to={paths.returns.getHref({ lotId: data.id, supplierId: data.supplier.id })}
+                >
+                  Raise return
+                </Button>
+              )}
+            </Stack>
+            <SectionBoundary name="decision">
+              {DECIDERS.includes(user.role) ? (
+                <DecisionPanel lot={data} />
+              ) : (
+                <DecisionsCard lotId={data.id} />
+              )}
+            </SectionBoundary>
+            <SectionBoundary name="timeline">
+              <LotTimeline lotId={data.id} />
+            </SectionBoundary>
+          </Stack>
         </Grid>
       </Grid>
     </Stack>

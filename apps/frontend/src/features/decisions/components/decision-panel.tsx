@@ -1,0 +1,107 @@
+import {
+  Alert,
+  AlertTitle,
+  Button,
+  Card,
+  CardContent,
+  Divider,
+  Stack,
+  Typography,
+} from '@mui/material';
+import { useQueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
+import { useCreateDecision, type DecisionInput } from '@/features/decisions/api/create-decision';
+import { DecisionForm } from '@/features/decisions/components/decision-form';
+import { DecisionHistory } from '@/features/decisions/components/decision-history';
+import { SwitchingNoticeView } from '@/features/decisions/components/switching-notice';
+import { decisionConflict } from '@/features/decisions/lib/conflict';
+import type { DecidableLot, DecisionResult } from '@/features/decisions/types';
+import { splitServerErrors } from '@/lib/server-field-errors';
+
+const DECIDABLE = ['awaiting_decision', 'accepted', 'accepted_on_concession', 'rejected'];
+const words = (status: string) => status.replace(/_/g, ' ');
+
+/** The QA lead's decision on a lot, with what it did to the switching state. */
+/** Shown to QA leads and admins only; the server checks the role again. */
+export function DecisionPanel({ lot }: { lot: DecidableLot }) {
+  const queryClient = useQueryClient();
+  const decide = useCreateDecision();
+  const [result, setResult] = useState<DecisionResult | null>(null);
+  const [last, setLast] = useState<DecisionInput | null>(null);
+  const conflict = decisionConflict(decide.error);
+  const decided = lot.status !== 'awaiting_decision';
+  const formErrors =
+    decide.isError && !conflict
+      ? splitServerErrors(decide.error, ['outcome', 'reason']).formErrors
+      : [];
+
+  const send = async (input: DecisionInput, version: number, approveReduced?: boolean) => {
+    setResult(null);
+    const answer = await decide.mutateAsync({ lotId: lot.id, version, ...input, approveReduced });
+    setLast(input);
+    setResult(answer);
+  };
+
+  const reload = () => {
+    decide.reset();
+    void queryClient.invalidateQueries({ queryKey: ['lots', 'detail', lot.id] });
+  };
+
+  return (
+    <Card aria-label="Decision panel">
+      <CardContent>
+        <Stack spacing={2}>
+          <Typography variant="h4" component="h2">
+            Decision
+          </Typography>
+          <Typography variant="body2" color="text.secondary">
+            {lot.evaluation.samplesTested} of {lot.evaluation.samplesPlanned} units tested,{' '}
+            {lot.evaluation.nonconforming} nonconforming, {lot.evaluation.inconclusive}{' '}
+            inconclusive. Recommendation: <strong>{lot.evaluation.recommendation}</strong>.
+          </Typography>
+          {result && (
+            <SwitchingNoticeView
+              result={result}
+              approving={decide.isPending}
+              onApproveReduced={() => {
+                if (last) void send(last, result.lot.version, true).catch(() => undefined);
+              }}
+            />
+          )}
+          {conflict && (
+            <Alert
+              severity="warning"
+              action={
+                <Button color="inherit" onClick={reload}>
+                  Reload
+                </Button>
+              }
+            >
+              <AlertTitle>Someone decided this lot first</AlertTitle>
+              The lot is now {words(conflict.status)} (version {conflict.version}). Reload to see
+              their decision before you decide again.
+            </Alert>
+          )}
+          {DECIDABLE.includes(lot.status) && !conflict && (
+            <DecisionForm
+              key={lot.version}
+              recommendation={lot.evaluation.recommendation}
+              submitLabel={decided ? 'Supersede the decision' : 'Record the decision'}
+              formErrors={formErrors}
+              onDecide={(input) => send(input, lot.version)}
+            />
+          )}
+          {!DECIDABLE.includes(lot.status) && (
+            <Alert severity="info">
+              {lot.status === 'returned'
+                ? 'This lot has gone back to the supplier; it cannot be decided again.'
+                : 'The decision is taken once every planned unit has a reading.'}
+            </Alert>
+          )}
+          <Divider />
+          <DecisionHistory lotId={lot.id} />
+        </Stack>
+      </CardContent>
+    </Card>
+  );
+}
