@@ -31,7 +31,7 @@ if (!env.SMTP_URL) {
     run(
       process.execPath,
       [
-        join(root, 'node_modules/maildev/bin/maildev'),
+        join(root, 'node_modules/maildev/dist/bin/maildev.js'),
         '--smtp',
         String(smtpPort),
         '--web',
