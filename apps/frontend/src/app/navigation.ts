@@ -8,6 +8,8 @@ import MenuBookOutlined from '@mui/icons-material/MenuBookOutlined';
 import SpeedOutlined from '@mui/icons-material/SpeedOutlined';
 import StorefrontOutlined from '@mui/icons-material/StorefrontOutlined';
 import InsightsOutlined from '@mui/icons-material/InsightsOutlined';
+import AssignmentReturnOutlined from '@mui/icons-material/AssignmentReturnOutlined';
+import FactCheckOutlined from '@mui/icons-material/FactCheckOutlined';
 import { paths } from '@/config/paths';
 import { ROLES, type Role } from '@/lib/roles';
 
@@ -56,6 +58,18 @@ export const navItems: readonly NavItem[] = [
     label: 'Scorecards',
     path: paths.scorecards.path,
     icon: InsightsOutlined,
+    roles: ['purchasing', 'qa_lead', 'admin'],
+  },
+  {
+    label: 'Returns',
+    path: paths.returns.path,
+    icon: AssignmentReturnOutlined,
+    roles: ['purchasing', 'admin'],
+  },
+  {
+    label: 'Corrective actions',
+    path: paths.correctiveActions.path,
+    icon: FactCheckOutlined,
     roles: ['purchasing', 'qa_lead', 'admin'],
   },
   { label: 'Users', path: paths.users.path, icon: ManageAccountsOutlined, roles: ['admin'] },

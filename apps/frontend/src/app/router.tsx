@@ -17,6 +17,10 @@ import { InstrumentsRoute } from '@/app/routes/instruments';
 import { ProductsRoute } from '@/app/routes/products';
 import { ReferenceRoute } from '@/app/routes/reference';
 import { SuppliersRoute } from '@/app/routes/suppliers';
+import { ReturnsRoute } from '@/app/routes/returns';
+import { ReturnDetailRoute } from '@/app/routes/return-detail';
+import { CorrectiveActionsRoute } from '@/app/routes/corrective-actions';
+import { CorrectiveActionDetailRoute } from '@/app/routes/corrective-action-detail';
 import { paths } from '@/config/paths';
 import { useSessionUser } from '@/features/auth/auth-context';
 
@@ -113,6 +117,38 @@ const shellRoutes: RouteObject[] = [
     element: (
       <RoleGate>
         <SupplierScorecardRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.returns.path,
+    element: (
+      <RoleGate>
+        <ReturnsRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.returnDetail.path,
+    element: (
+      <RoleGate>
+        <ReturnDetailRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.correctiveActions.path,
+    element: (
+      <RoleGate>
+        <CorrectiveActionsRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.correctiveActionDetail.path,
+    element: (
+      <RoleGate>
+        <CorrectiveActionDetailRoute />
       </RoleGate>
     ),
   },

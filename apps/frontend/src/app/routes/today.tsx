@@ -5,11 +5,13 @@ import { SafetyCaution } from '@/components/safety-caution';
 import { SectionBoundary } from '@/components/section-boundary';
 import { paths } from '@/config/paths';
 import { useSessionUser } from '@/features/auth/auth-context';
+import { OverdueCorrectiveActionsSection } from '@/features/corrective-actions/components/overdue-corrective-actions-section';
 import { InstrumentsDueSection } from '@/features/inspection/components/instruments-due-section';
 import { TodayLotsSection } from '@/features/lots/components/today-lots-section';
 import { roleLabels } from '@/lib/roles';
 
 const CAN_RECEIVE = ['clerk', 'qa_lead', 'admin'];
+const FOLLOWS_SUPPLIERS = ['purchasing', 'qa_lead', 'admin'];
 
 export function TodayRoute() {
   const user = useSessionUser();
@@ -73,6 +75,13 @@ export function TodayRoute() {
             <InstrumentsDueSection />
           </SectionBoundary>
         </Grid>
+        {FOLLOWS_SUPPLIERS.includes(user.role) && (
+          <Grid size={{ xs: 12, lg: 6 }}>
+            <SectionBoundary name="overdue corrective actions">
+              <OverdueCorrectiveActionsSection />
+            </SectionBoundary>
+          </Grid>
+        )}
       </Grid>
       <SafetyCaution />
     </Stack>

@@ -28,6 +28,7 @@ export function DecisionPanel({ lot }: { lot: DecidableLot }) {
   const decide = useCreateDecision();
   const [result, setResult] = useState<DecisionResult | null>(null);
   const [last, setLast] = useState<DecisionInput | null>(null);
+  const [revising, setRevising] = useState(false);
   const conflict = decisionConflict(decide.error);
   const decided = lot.status !== 'awaiting_decision';
   const formErrors =
@@ -40,6 +41,7 @@ export function DecisionPanel({ lot }: { lot: DecidableLot }) {
     const answer = await decide.mutateAsync({ lotId: lot.id, version, ...input, approveReduced });
     setLast(input);
     setResult(answer);
+    setRevising(false);
   };
 
   const reload = () => {
@@ -82,14 +84,24 @@ export function DecisionPanel({ lot }: { lot: DecidableLot }) {
               their decision before you decide again.
             </Alert>
           )}
-          {DECIDABLE.includes(lot.status) && !conflict && (
+          {DECIDABLE.includes(lot.status) && !conflict && (!decided || revising) && (
             <DecisionForm
               key={lot.version}
               recommendation={lot.evaluation.recommendation}
-              submitLabel={decided ? 'Supersede the decision' : 'Record the decision'}
+              submitLabel={decided ? 'Record the new decision' : 'Record the decision'}
               formErrors={formErrors}
               onDecide={(input) => send(input, lot.version)}
             />
+          )}
+          {DECIDABLE.includes(lot.status) && !conflict && decided && !revising && (
+            <div>
+              <Button variant="outlined" onClick={() => setRevising(true)}>
+                Supersede the decision
+              </Button>
+              <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
+                A new decision is added on top; the earlier one stays in the history.
+              </Typography>
+            </div>
           )}
           {!DECIDABLE.includes(lot.status) && (
             <Alert severity="info">

@@ -21,8 +21,7 @@ const titleOf = (r: DecisionResult) => {
   const s = r.switching;
   if (s.changed && s.to === 'discontinued') return 'Inspection discontinued for this product';
   if (s.changed) return `Inspection moves from ${s.from} to ${s.to}`;
-  if (s.reducedAvailable) return 'Reduced inspection is available';
-  return `Inspection stays ${s.to}`;
+  return 'Reduced inspection is available';
 };
 
 /** What the decision did: the NCR of a reject and the ISO 2859-1 switching notice. */
@@ -55,7 +54,7 @@ export function SwitchingNoticeView({ result, approving, onApproveReduced }: Swi
           ) : undefined
         }
       >
-        <AlertTitle>{titleOf(result)}</AlertTitle>
+        {s.changed || s.reducedAvailable ? <AlertTitle>{titleOf(result)}</AlertTitle> : null}
         {s.message}
       </Alert>
       <Dialog open={confirming} onClose={() => setConfirming(false)}>

@@ -1,0 +1,155 @@
+import assert from 'node:assert/strict';
+import { readFile } from 'node:fs/promises';
+import { after, before, test } from 'node:test';
+import { DEMO_PASSWORD, launchBrowser, screenshot, signIn, url } from './browser.mjs';
+
+const STAMP = Date.now().toString(36).toUpperCase();
+
+/** Calls the API with a bearer token from one sign-in (the sign-in throttle counts each). */
+async function apiAs(email) {
+  const login = await fetch(url('/api/auth/login'), {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
+  });
+  assert.equal(login.status, 200, `${email} signs in through the API`);
+  const { accessToken } = await login.json();
+  return async (method, path, body) => {
+    const response = await fetch(url(`/api${path}`), {
+      method,
+      headers: { Authorization: `Bearer ${accessToken}`, 'Content-Type': 'application/json' },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+    const data = await response.json();
+    assert.ok(response.ok, `${method} ${path} → ${response.status} ${JSON.stringify(data)}`);
+    return data;
+  };
+}
+
+/**
+ * A rejected lot not yet on a return: the one decisions.e2e.mjs rejected when it ran first
+ * in this server, otherwise one built and rejected here through the API (S-3, AQL 15, 50
+ * spools: 3 units, reject on 2; 76.1 g over 1000 mm of copper measures as 8 AWG).
+ */
+async function rejectedLot(request) {
+  const found = await request.get(url('/api/lots?status=rejected&q=PO-E2E-DEC-&pageSize=1'));
+  assert.equal(found.status(), 200);
+  const { items } = await found.json();
+  if (items[0]) return items[0];
+  const call = await apiAs('admin@demo.example');
+  const supplier = await call('POST', '/suppliers', {
+    name: `Copperline Return Wire ${STAMP}`,
+    code: `CRW${STAMP}`.slice(0, 32),
+    contactEmail: 'returns@copperline-test.example',
+  });
+  const product = await call('POST', '/products', {
+    supplierId: supplier.id,
+    sku: `CRW-4-${STAMP}`,
+    kind: 'spool',
+    description: '4 AWG ground cable, black, 30 m spool',
+    inspectionLevel: 'S-3',
+    aql: '15',
+    conductors: [{ purpose: 'ground', gauge: '4 AWG', claimedMaterial: 'copper' }],
+  });
+  const instruments = await call('GET', '/instruments?pageSize=100');
+  const balance = instruments.items.find(
+    (i) => i.kind === 'balance' && i.active && i.calibrationStatus !== 'overdue',
+  );
+  const lot = await call('POST', '/lots', {
+    productId: product.id,
+    poNumber: `PO-E2E-RET-${STAMP}`,
+    quantity: 50,
+    unit: 'spools',
+  });
+  for (const [seq, massG] of [
+    [1, 76.1],
+    [2, 76.1],
+    [3, 195],
+  ]) {
+    const sample = await call('POST', `/lots/${lot.id}/samples`, {
+      conductorId: product.conductors[0].id,
+      seq,
+    });
+    await call('POST', `/samples/${sample.id}/readings`, {
+      method: 'mass',
+      massG,
+      lengthMm: 1000,
+      instrumentIds: [balance.id],
+    });
+  }
+  await call('POST', `/lots/${lot.id}/decisions`, {
+    outcome: 'reject',
+    reason: 'Two of three units measure as 8 AWG.',
+    version: (await call('GET', `/lots/${lot.id}`)).version,
+  });
+  return call('GET', `/lots/${lot.id}`);
+}
+
+let browser;
+let page;
+before(async () => {
+  browser = await launchBrowser();
+  page = await browser.context.newPage();
+});
+after(async () => {
+  await browser?.close();
+});
+
+test('purchasing raises a return for a rejected lot, downloads its CSV and e-mails the supplier', async () => {
+  await page.goto(url('/sign-in'));
+  await signIn(page, 'buyer@demo.example');
+  await page.waitForURL((u) => u.pathname !== '/sign-in');
+  const lot = await rejectedLot(page.request);
+
+  // From the lot page: "Raise return" opens the form with the lot preselected.
+  await page.goto(url(`/lots/${lot.id}`));
+  await page.getByRole('link', { name: 'Raise return' }).click();
+  await page.waitForURL((u) => u.pathname === '/returns');
+  const dialog = page.getByRole('dialog');
+  const box = dialog.getByRole('checkbox', { name: new RegExp(`^Lot ${lot.id} · PO`) });
+  await box.waitFor();
+  assert.ok(await box.isChecked(), 'the lot from the lot page is ticked');
+  await dialog.getByLabel('Supplier RMA number (optional)').fill(`RMA-${STAMP}`);
+  await dialog.getByLabel('Inspection hours').fill('2.5');
+  await dialog.getByLabel('Hourly rate').fill('48');
+  await dialog.getByLabel('Freight').fill('35.50');
+  await dialog.getByLabel('Other').fill('-3');
+  await dialog.getByText('A number ≥ 0 with at most 2 decimals.').waitFor();
+  await dialog.getByLabel('Other').fill('12.25');
+  // 2.5 h × 48 + 35.50 + 12.25 = 167.75
+  await dialog.getByRole('status', { name: 'Chargeback total' }).getByText('167.75').waitFor();
+  await screenshot(page, 'return-new');
+  await dialog.getByRole('button', { name: 'Raise the return' }).click();
+  await page.waitForURL((u) => /^\/returns\/\d+$/.test(u.pathname));
+  await page.getByRole('heading', { name: /^Return RTV-\d{4}-\d{4}$/ }).waitFor();
+  await page.getByRole('list', { name: 'Lots on the return' }).getByText(`Lot ${lot.id}`).waitFor();
+  await page.getByRole('button', { name: 'Mark as sent' }).waitFor();
+
+  // The readings CSV: one row per reading, with the lot and the verdicts.
+  const [download] = await Promise.all([
+    page.waitForEvent('download'),
+    page.getByRole('button', { name: 'Download CSV' }).click(),
+  ]);
+  const csv = await readFile(await download.path(), 'utf8');
+  const [header, ...rows] = csv.trim().split(/\r?\n/);
+  assert.match(header, /^lot,po,supplier,sku,label,unit/);
+  assert.equal(rows.length, 3, 'three readings');
+  assert.ok(rows.every((r) => r.startsWith(`${lot.id},${lot.poNumber},`)));
+  assert.equal(rows.filter((r) => r.includes('nonconforming')).length, 2);
+
+  // The e-mail: the e2e server has no SMTP_URL, so the message is stored as logged.
+  await page.getByRole('button', { name: 'E-mail supplier' }).click();
+  const mail = page.getByRole('dialog');
+  assert.match(await mail.getByLabel('To').inputValue(), /@/);
+  await mail.getByLabel('Message (optional)').fill('Please send an RMA and collect the spools.');
+  await mail.getByRole('button', { name: 'Send' }).click();
+  const row = page.getByRole('list', { name: 'Outbound messages' }).getByRole('listitem').first();
+  await row.getByText('Logged, not sent').waitFor();
+  await row.getByText(/readings\.csv, RTV-\d{4}-\d{4}-evidence\.pdf/).waitFor();
+  await screenshot(page, 'return-detail');
+
+  await page.getByRole('link', { name: 'Returns' }).first().click();
+  await page.waitForURL((u) => u.pathname === '/returns');
+  await page.getByRole('table', { name: 'Returns' }).getByText(`RMA-${STAMP}`).waitFor();
+  await screenshot(page, 'returns-list');
+});

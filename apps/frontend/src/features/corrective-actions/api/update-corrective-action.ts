@@ -1,0 +1,40 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { api } from '@/lib/api-client';
+import type { CorrectiveAction, CorrectiveActionStatus } from '@/features/corrective-actions/types';
+
+const answer = (what: string) =>
+  z
+    .string()
+    .trim()
+    .min(10, `Give the supplier's ${what} in at least 10 characters.`)
+    .max(4000, 'At most 4000 characters.');
+
+/** The supplier's response, recorded by purchasing. */
+export const responseSchema = z.object({
+  containment: answer('containment'),
+  rootCause: answer('root cause'),
+  correctiveAction: answer('corrective action'),
+});
+export type ResponseInput = z.infer<typeof responseSchema>;
+
+export interface CorrectiveActionPatch extends Partial<ResponseInput> {
+  status?: CorrectiveActionStatus;
+}
+
+export const updateCorrectiveAction = ({
+  id,
+  patch,
+}: {
+  id: number;
+  patch: CorrectiveActionPatch;
+}) => api.patch<CorrectiveAction>(`/corrective-actions/${id}`, patch);
+
+export function useUpdateCorrectiveAction({ inlineErrors = false } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateCorrectiveAction,
+    meta: { inlineErrors },
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['corrective-actions'] }),
+  });
+}

@@ -1,0 +1,100 @@
+import AddTaskOutlined from '@mui/icons-material/AddTaskOutlined';
+import {
+  Button,
+  Checkbox,
+  FormControlLabel,
+  MenuItem,
+  Paper,
+  Stack,
+  TextField,
+} from '@mui/material';
+import { useState } from 'react';
+import { CsvDownloadButton } from '@/components/data-table/csv-download-button';
+import { useListParams } from '@/components/data-table/use-list-params';
+import { useCorrectiveActions } from '@/features/corrective-actions/api/get-corrective-actions';
+import { CorrectiveActionsTable } from '@/features/corrective-actions/components/corrective-actions-table';
+import { NewCorrectiveActionDialog } from '@/features/corrective-actions/components/new-corrective-action-dialog';
+import { SupplierSelect } from '@/features/corrective-actions/components/supplier-select';
+import { CAR_STATUSES, carStatusLabels } from '@/features/corrective-actions/types';
+
+export function CorrectiveActionsPanel() {
+  const list = useListParams({
+    filters: ['status', 'supplierId', 'overdue'],
+    defaultSort: { field: 'dueOn', direction: 'asc' },
+  });
+  const cars = useCorrectiveActions(list.query);
+  const [creating, setCreating] = useState(false);
+  const filtered = !!(list.filters.status || list.filters.supplierId || list.filters.overdue);
+
+  return (
+    <Paper variant="outlined" sx={{ p: 2 }}>
+      <Stack
+        direction={{ xs: 'column', md: 'row' }}
+        spacing={2}
+        sx={{ mb: 1, alignItems: { md: 'center' } }}
+      >
+        <TextField
+          select
+          label="Status"
+          fullWidth={false}
+          value={list.filters.status}
+          onChange={(event) => list.setFilter('status', event.target.value)}
+          sx={{ width: 200, mt: 0 }}
+        >
+          <MenuItem value="">All</MenuItem>
+          <MenuItem value="open,responded,verified,reopened">Not closed</MenuItem>
+          {CAR_STATUSES.map((s) => (
+            <MenuItem key={s} value={s}>
+              {carStatusLabels[s]}
+            </MenuItem>
+          ))}
+        </TextField>
+        <SupplierSelect
+          allowAll
+          value={list.filters.supplierId ? Number(list.filters.supplierId) : null}
+          onChange={(id) => list.setFilter('supplierId', id ? String(id) : '')}
+        />
+        <FormControlLabel
+          control={
+            <Checkbox
+              checked={list.filters.overdue === 'true'}
+              onChange={(e) => list.setFilter('overdue', e.target.checked ? 'true' : '')}
+            />
+          }
+          label="Overdue only"
+        />
+        <Stack
+          direction="row"
+          spacing={2}
+          sx={{ flex: 1, justifyContent: 'flex-end', alignItems: 'center', whiteSpace: 'nowrap' }}
+        >
+          <CsvDownloadButton
+            path="/corrective-actions/export.csv"
+            query={list.query}
+            filename="corrective-actions.csv"
+          />
+          <Button
+            variant="contained"
+            startIcon={<AddTaskOutlined />}
+            onClick={() => setCreating(true)}
+          >
+            New SCAR
+          </Button>
+        </Stack>
+      </Stack>
+      <CorrectiveActionsTable
+        {...list.tableProps}
+        data={cars.data}
+        loading={cars.isFetching}
+        error={cars.error}
+        onRetry={() => void cars.refetch()}
+        emptyMessage={
+          filtered
+            ? 'No corrective action matches these filters.'
+            : 'No corrective action requested yet.'
+        }
+      />
+      {creating && <NewCorrectiveActionDialog onClose={() => setCreating(false)} />}
+    </Paper>
+  );
+}

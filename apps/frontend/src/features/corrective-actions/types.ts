@@ -1,0 +1,40 @@
+/** Supplier corrective action request (SCAR), docs/api-conventions.md CorrectiveAction. */
+export const CAR_STATUSES = ['open', 'responded', 'verified', 'reopened', 'closed'] as const;
+export type CorrectiveActionStatus = (typeof CAR_STATUSES)[number];
+
+export interface CorrectiveAction {
+  id: number;
+  number: string;
+  status: CorrectiveActionStatus;
+  supplier: { id: number; name: string; code: string; status: string };
+  lots: { id: number; poNumber: string; status: string }[];
+  problem: string;
+  /** Calendar date YYYY-MM-DD. */
+  dueOn: string;
+  /** Open or reopened past dueOn (the server's UTC calendar day). */
+  overdue: boolean;
+  daysOverdue: number;
+  containment: string | null;
+  rootCause: string | null;
+  correctiveAction: string | null;
+  respondedAt: string | null;
+  closedAt: string | null;
+  createdBy: { id: number; name: string };
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface Page<T> {
+  items: T[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export const carStatusLabels: Record<CorrectiveActionStatus, string> = {
+  open: 'Open',
+  responded: 'Responded',
+  verified: 'Verified',
+  reopened: 'Reopened',
+  closed: 'Closed',
+};

@@ -1,0 +1,34 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { api } from '@/lib/api-client';
+import { costsFromForm, costsSchema } from '@/features/returns/api/cost-schema';
+import type { VendorReturn } from '@/features/returns/types';
+
+export const createReturnSchema = z.object({
+  supplierId: z.number('Choose the supplier.').int().positive('Choose the supplier.'),
+  lotIds: z.array(z.number().int()).min(1, 'Choose at least one rejected lot.').max(100),
+  rmaNumber: z.string().trim().max(64, 'At most 64 characters.'),
+  notes: z.string().trim().max(4000, 'At most 4000 characters.'),
+  costs: costsSchema,
+});
+export type CreateReturnForm = z.input<typeof createReturnSchema>;
+
+export const createReturn = (form: CreateReturnForm) =>
+  api.post<VendorReturn>('/returns', {
+    lotIds: form.lotIds,
+    rmaNumber: form.rmaNumber.trim() || undefined,
+    notes: form.notes.trim() || undefined,
+    costs: costsFromForm(form.costs),
+  });
+
+export function useCreateReturn() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createReturn,
+    meta: { inlineErrors: true },
+    onSuccess: async () => {
+      await queryClient.invalidateQueries({ queryKey: ['returns'] });
+      await queryClient.invalidateQueries({ queryKey: ['lots'] });
+    },
+  });
+}

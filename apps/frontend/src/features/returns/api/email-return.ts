@@ -1,0 +1,32 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { api } from '@/lib/api-client';
+
+export const emailReturnSchema = z.object({
+  to: z.string().trim().pipe(z.email('Enter a valid e-mail address.')),
+  message: z.string().max(4000, 'At most 4000 characters.'),
+});
+export type EmailReturnInput = z.infer<typeof emailReturnSchema>;
+
+/** The stored outbound message; its status tells whether it went (sent, failed, logged). */
+export interface SentMessage {
+  id: number;
+  to: string;
+  status: 'queued' | 'sent' | 'failed' | 'logged';
+  error: string | null;
+}
+
+export const emailReturn = ({ id, input }: { id: number; input: EmailReturnInput }) =>
+  api.post<SentMessage>(`/returns/${id}/email`, {
+    to: input.to.trim(),
+    message: input.message.trim() || undefined,
+  });
+
+export function useEmailReturn() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: emailReturn,
+    meta: { inlineErrors: true },
+    onSettled: () => queryClient.invalidateQueries({ queryKey: ['messages'] }),
+  });
+}

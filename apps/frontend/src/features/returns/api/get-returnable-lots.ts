@@ -1,0 +1,41 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import { getReturns } from '@/features/returns/api/get-returns';
+import type { Page } from '@/features/returns/types';
+
+export interface ReturnableLot {
+  id: number;
+  poNumber: string;
+  quantity: number;
+  unit: string;
+  receivedAt: string;
+  product: { sku: string; description: string };
+}
+
+/**
+ * A supplier's rejected lots that are not on an open return yet. A draft return keeps its
+ * lots `rejected` (they become `returned` when it is sent), so drafts are subtracted here.
+ */
+export async function getReturnableLots(supplierId: number, signal?: AbortSignal) {
+  const [lots, open] = await Promise.all([
+    api.get<Page<ReturnableLot>>(
+      `/lots?status=rejected&supplierId=${supplierId}&pageSize=100&sort=receivedAt:asc`,
+      signal,
+    ),
+    getReturns(
+      { supplierId: String(supplierId), status: 'draft,sent,acknowledged', pageSize: '100' },
+      signal,
+    ),
+  ]);
+  const taken = new Set(open.items.flatMap((r) => r.lots.map((l) => l.id)));
+  return lots.items.filter((l) => !taken.has(l.id));
+}
+
+export const returnableLotsQueryOptions = (supplierId: number) =>
+  queryOptions({
+    queryKey: ['returns', 'returnable-lots', supplierId] as const,
+    queryFn: ({ signal }) => getReturnableLots(supplierId, signal),
+  });
+
+export const useReturnableLots = (supplierId: number | null) =>
+  useQuery({ ...returnableLotsQueryOptions(supplierId ?? 0), enabled: supplierId !== null });

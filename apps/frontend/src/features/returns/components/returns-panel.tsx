@@ -1,0 +1,97 @@
+import AssignmentReturnOutlined from '@mui/icons-material/AssignmentReturnOutlined';
+import { Button, MenuItem, Paper, Stack, TextField } from '@mui/material';
+import { useSearchParams } from 'react-router-dom';
+import { CsvDownloadButton } from '@/components/data-table/csv-download-button';
+import { useListParams } from '@/components/data-table/use-list-params';
+import { useReturns } from '@/features/returns/api/get-returns';
+import { NewReturnDialog } from '@/features/returns/components/new-return-dialog';
+import { ReturnsTable } from '@/features/returns/components/returns-table';
+import { SupplierSelect } from '@/features/returns/components/supplier-select';
+import { RETURN_STATUSES, returnStatusLabels } from '@/features/returns/types';
+
+const positive = (v: string | null) => (v && /^\d+$/.test(v) && Number(v) > 0 ? Number(v) : null);
+
+/** Returns to vendor with their filters; `?raiseLot=&raiseSupplier=` opens the new-return form. */
+export function ReturnsPanel() {
+  const list = useListParams({
+    filters: ['status', 'supplierId', 'new'],
+    defaultSort: { field: 'createdAt', direction: 'desc' },
+  });
+  const { new: _new, ...query } = list.query;
+  const returns = useReturns(query);
+  const [search, setSearch] = useSearchParams();
+  const raiseLot = positive(search.get('raiseLot'));
+  const raiseSupplier = positive(search.get('raiseSupplier'));
+  const raising = raiseLot !== null && raiseSupplier !== null;
+  const open = raising || list.filters.new === '1';
+
+  const close = () =>
+    setSearch(
+      (prev) => {
+        const next = new URLSearchParams(prev);
+        ['raiseLot', 'raiseSupplier', 'new'].forEach((k) => next.delete(k));
+        return next;
+      },
+      { replace: true },
+    );
+
+  return (
+    <Paper variant="outlined" sx={{ p: 2 }}>
+      <Stack direction={{ xs: 'column', md: 'row' }} spacing={2} sx={{ mb: 1 }}>
+        <TextField
+          select
+          label="Status"
+          fullWidth={false}
+          value={list.filters.status}
+          onChange={(event) => list.setFilter('status', event.target.value)}
+          sx={{ width: 200, mt: 0 }}
+        >
+          <MenuItem value="">All</MenuItem>
+          <MenuItem value="draft,sent,acknowledged">Open (not closed)</MenuItem>
+          {RETURN_STATUSES.map((s) => (
+            <MenuItem key={s} value={s}>
+              {returnStatusLabels[s]}
+            </MenuItem>
+          ))}
+        </TextField>
+        <SupplierSelect
+          allowAll
+          value={positive(list.filters.supplierId)}
+          onChange={(id) => list.setFilter('supplierId', id ? String(id) : '')}
+        />
+        <Stack
+          direction="row"
+          spacing={2}
+          sx={{ flex: 1, justifyContent: 'flex-end', alignItems: 'center', whiteSpace: 'nowrap' }}
+        >
+          <CsvDownloadButton path="/returns/export.csv" query={query} filename="returns.csv" />
+          <Button
+            variant="contained"
+            startIcon={<AssignmentReturnOutlined />}
+            onClick={() => list.setFilter('new', '1')}
+          >
+            New return
+          </Button>
+        </Stack>
+      </Stack>
+      <ReturnsTable
+        {...list.tableProps}
+        data={returns.data}
+        loading={returns.isFetching}
+        error={returns.error}
+        onRetry={() => void returns.refetch()}
+        emptyMessage={
+          list.filters.status || list.filters.supplierId
+            ? 'No return matches these filters.'
+            : 'No return raised yet. Raise one from a rejected lot or with “New return”.'
+        }
+      />
+      {open && (
+        <NewReturnDialog
+          onClose={close}
+          initial={raising ? { lotId: raiseLot, supplierId: raiseSupplier } : undefined}
+        />
+      )}
+    </Paper>
+  );
+}

@@ -1,0 +1,83 @@
+import { Link } from '@mui/material';
+import { Link as RouterLink, useNavigate } from 'react-router-dom';
+import {
+  createDataTableColumnHelper,
+  DataTable,
+  type Page,
+} from '@/components/data-table/data-table';
+import type { ListSort } from '@/components/data-table/use-list-params';
+import { paths } from '@/config/paths';
+import { ReturnStatusChip } from '@/features/returns/components/return-status-chip';
+import { formatMoney } from '@/features/returns/lib/chargeback';
+import type { VendorReturn } from '@/features/returns/types';
+
+const helper = createDataTableColumnHelper<VendorReturn>();
+const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
+
+// Sortable ids are the server's sort fields: createdAt, number, status, chargebackTotal.
+const columns = helper.columns([
+  helper.accessor('number', {
+    header: 'Return',
+    enableSorting: true,
+    cell: (info) => (
+      <Link
+        component={RouterLink}
+        to={paths.returnDetail.getHref(info.row.original.id)}
+        onClick={(e) => e.stopPropagation()}
+      >
+        {info.getValue()}
+      </Link>
+    ),
+  }),
+  helper.accessor('createdAt', {
+    header: 'Raised',
+    enableSorting: true,
+    cell: (info) => dateFormat.format(new Date(info.getValue())),
+  }),
+  helper.accessor('status', {
+    header: 'Status',
+    enableSorting: true,
+    cell: (info) => <ReturnStatusChip status={info.getValue()} />,
+  }),
+  helper.accessor((r) => `${r.supplier.name} (${r.supplier.code})`, {
+    id: 'supplier',
+    header: 'Supplier',
+  }),
+  helper.accessor((r) => r.lots.map((l) => `${l.id} (PO ${l.poNumber})`).join(', '), {
+    id: 'lots',
+    header: 'Lots',
+  }),
+  helper.accessor((r) => r.rmaNumber ?? '—', { id: 'rma', header: 'RMA' }),
+  helper.accessor('chargebackTotal', {
+    header: 'Chargeback',
+    enableSorting: true,
+    cell: (info) => formatMoney(info.getValue()),
+  }),
+]);
+
+interface ReturnsTableProps {
+  data: Page<VendorReturn> | undefined;
+  loading: boolean;
+  error: unknown;
+  onRetry: () => void;
+  emptyMessage: string;
+  page: number;
+  pageSize: number;
+  sort: ListSort | null;
+  onPageChange: (page: number) => void;
+  onPageSizeChange: (pageSize: number) => void;
+  onSortChange: (sort: ListSort | null) => void;
+}
+
+export function ReturnsTable(props: ReturnsTableProps) {
+  const navigate = useNavigate();
+  return (
+    <DataTable
+      label="Returns"
+      columns={columns}
+      getRowId={(r) => String(r.id)}
+      onRowClick={(r) => void navigate(paths.returnDetail.getHref(r.id))}
+      {...props}
+    />
+  );
+}
