@@ -145,27 +145,31 @@ export class SupplierMetricsQuery {
    */
   async samplesByPurpose(range: ScorecardRange, supplierId?: number): Promise<SamplePurposeRow[]> {
     const k = this.knex;
-    const perSample = k('readings as r')
-      .select('r.sample_id')
-      .select(k.raw('max(case when r.verdict = ? then 1 else 0 end) as nc', ['nonconforming']))
-      .select(k.raw('max(case when r.material_mismatch = ? then 1 else 0 end) as mm', [true]))
-      .where('r.voided', false)
-      .groupBy('r.sample_id');
-    const q = this.inRange(
-      k
-        .from(perSample.as('ps'))
-        .join('samples as s', 's.id', 'ps.sample_id')
-        .join('lots as l', 'l.id', 's.lot_id')
-        .join('conductor_specs as cs', 'cs.id', 's.conductor_id')
-        .select('l.supplier_id', 'cs.purpose')
-        .select(k.raw('count(*) as tested'))
-        .select(k.raw('sum(ps.nc) as nonconforming'))
-        .select(k.raw('sum(ps.mm) as mismatches'))
-        .groupBy('l.supplier_id', 'cs.purpose'),
-      'l.received_at',
+    // Per sample, only the readings of lots received in the range (the range applied
+    // inside the sub-query, so readings of other years are never grouped).
+    const perSample = this.inRange(
+      k('readings as r')
+        .join('samples as s0', 's0.id', 'r.sample_id')
+        .join('lots as l0', 'l0.id', 's0.lot_id')
+        .select('r.sample_id')
+        .select(k.raw('max(case when r.verdict = ? then 1 else 0 end) as nc', ['nonconforming']))
+        .select(k.raw('max(case when r.material_mismatch = ? then 1 else 0 end) as mm', [true]))
+        .where('r.voided', false)
+        .groupBy('r.sample_id'),
+      'l0.received_at',
       range,
     );
-    if (supplierId !== undefined) q.andWhere('l.supplier_id', supplierId);
+    if (supplierId !== undefined) perSample.andWhere('l0.supplier_id', supplierId);
+    const q = k
+      .from(perSample.as('ps'))
+      .join('samples as s', 's.id', 'ps.sample_id')
+      .join('lots as l', 'l.id', 's.lot_id')
+      .join('conductor_specs as cs', 'cs.id', 's.conductor_id')
+      .select('l.supplier_id', 'cs.purpose')
+      .select(k.raw('count(*) as tested'))
+      .select(k.raw('sum(ps.nc) as nonconforming'))
+      .select(k.raw('sum(ps.mm) as mismatches'))
+      .groupBy('l.supplier_id', 'cs.purpose');
     const rows: Record<string, unknown>[] = await q;
     return rows.map((r) => ({
       supplierId: num(r.supplier_id),

@@ -23,7 +23,15 @@ export interface InstrumentSnapshot {
  * The flat result columns feed lists and scorecards; `result` keeps the whole computation.
  */
 @Entity({ tableName: 'readings' })
-@Index({ properties: ['sample', 'voided'] })
+/**
+ * Covers every scorecard aggregate over readings (sample, voided, verdict, mismatch, ratio,
+ * measured size) so they read the index, never the wide rows with their `result` JSON; its
+ * (sample, voided) prefix serves the per-sample lookups the old two-column index served.
+ */
+@Index({
+  name: 'readings_scorecard_covering_index',
+  properties: ['sample', 'voided', 'verdict', 'materialMismatch', 'areaRatio', 'measuresAs'],
+})
 export class Reading {
   @PrimaryKey({ type: 'integer' })
   id!: number;

@@ -40,6 +40,8 @@ export interface StoredSamplingPlan {
 @Entity({ tableName: 'lots' })
 @Index({ properties: ['status', 'receivedAt'] })
 @Index({ properties: ['supplier', 'receivedAt'] })
+/** The list's default order: a page walks it newest first and stops after the page. */
+@Index({ properties: ['receivedAt'] })
 export class Lot {
   @PrimaryKey({ type: 'integer' })
   id!: number;
