@@ -1,4 +1,9 @@
-import { BadRequestException, Injectable, UnprocessableEntityException } from '@nestjs/common';
+import {
+  BadRequestException,
+  Injectable,
+  Optional,
+  UnprocessableEntityException,
+} from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import type { QueryBuilder, SqlEntityManager } from '@mikro-orm/sqlite';
 import { AuditService } from '../audit/audit.service';
@@ -12,6 +17,7 @@ import { User } from '../users/entities/user.entity';
 import { CreateLotDto } from './dto/create-lot.dto';
 import { LotFiltersDto } from './dto/list-lots.dto';
 import { Lot } from './entities/lot.entity';
+import { LotCountCache } from './lot-count-cache';
 import { lotSummary, supplierWarning, type LotSummary } from './lot-summary';
 import { lotsCsv } from './lots-csv';
 
@@ -33,6 +39,8 @@ export class LotsService {
   constructor(
     private readonly em: EntityManager,
     private readonly audit: AuditService,
+    /** Optional so scripts that build the service by hand (the demo seed) count directly. */
+    @Optional() private readonly counts?: LotCountCache,
   ) {}
 
   async create(dto: CreateLotDto, actor: RequestUser) {
@@ -82,7 +90,11 @@ export class LotsService {
   async list(q: LotFiltersDto): Promise<Page<LotSummary>> {
     const { page, pageSize, offset } = paging(q);
     const qb = this.filtered(q);
-    const total = await qb.clone().getCount('l.id');
+    const { page: _p, pageSize: _s, sort: _o, ...filters } = q;
+    const count = () => qb.clone().getCount('l.id');
+    const total = this.counts
+      ? await this.counts.total(JSON.stringify(filters), count)
+      : await count();
     const rows = await this.sorted(qb, q).limit(pageSize).offset(offset).getResultList();
     return { items: await this.summaries(rows), total, page, pageSize };
   }
@@ -127,11 +139,20 @@ export class LotsService {
       qb.andWhere({ receivedAt: { $lt: new Date(`${addDays(q.receivedTo, 1)}T00:00:00Z`) } });
     }
     if (q.q?.trim()) {
-      const p = likePattern(q.q);
-      const like = (col: string) => `lower(coalesce(${col}, '')) like ? escape '\\'`;
+      // Names and SKUs match anywhere and are looked up once in their small tables; PO,
+      // packing slip and supplier lot code match by their start, as a clerk types them.
+      const any = likePattern(q.q);
+      const start = any.slice(1);
+      const like = (col: string) => `lower(${col}) like ? escape '\\'`;
       qb.andWhere(
-        `(${[like('l.po_number'), like('l.packing_slip'), like('l.supplier_lot_code'), like('p.sku'), like('s.name')].join(' or ')})`,
-        [p, p, p, p, p],
+        `(${[
+          `l.supplier_id in (select id from suppliers where ${like('name')})`,
+          `l.product_id in (select id from products where ${like('sku')})`,
+          like('l.po_number'),
+          like('l.packing_slip'),
+          like('l.supplier_lot_code'),
+        ].join(' or ')})`,
+        [any, any, start, start, start],
       );
     }
     return qb;
