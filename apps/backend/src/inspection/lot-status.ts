@@ -1,5 +1,6 @@
 import { Injectable, UnprocessableEntityException } from '@nestjs/common';
 import type { EntityManager } from '@mikro-orm/core';
+import type { SqlEntityManager } from '@mikro-orm/sqlite';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
 import { Decision } from '../decisions/entities/decision.entity';
@@ -16,22 +17,34 @@ export function assertLotOpen(lot: Lot): void {
   }
 }
 
-/** Every planned unit has, for every active conductor, a sample with a non-voided reading. */
-export function allPlannedUnitsRead(lot: Lot): boolean {
-  const conductorIds = lot.product.conductors
-    .getItems()
-    .filter((c) => c.active)
-    .map((c) => c.id);
-  const read = new Set(
-    lot.samples
-      .getItems()
-      .filter((s) => s.readings.getItems().some((r) => !r.voided))
-      .map((s) => `${s.seq}:${s.conductor.id}`),
+/**
+ * Whether the lot has any non-voided reading, and whether every planned unit (seq 1 …
+ * sample size) has, for every active conductor of the product, a sample with one — counted
+ * by the database, so a lot with hundreds of readings costs three small queries, not the
+ * loading of all its samples and readings.
+ */
+export async function evidenceOf(
+  em: EntityManager,
+  lot: Lot,
+): Promise<{ hasReading: boolean; allPlannedUnitsRead: boolean }> {
+  const sql = em as SqlEntityManager;
+  const live = 'exists (select 1 from readings r where r.sample_id = s.id and r.voided = ?)';
+  const [read] = await sql.execute<{ n: number | string }[]>(
+    `select count(*) as n from samples s where s.lot_id = ? and ${live}`,
+    [lot.id, false],
   );
-  for (let seq = 1; seq <= lot.samplingPlan.sampleSize; seq++) {
-    if (!conductorIds.every((id) => read.has(`${seq}:${id}`))) return false;
-  }
-  return true;
+  const [units] = await sql.execute<{ n: number | string }[]>(
+    `select count(*) as n from (select distinct s.seq, s.conductor_id from samples s
+       join conductor_specs c on c.id = s.conductor_id
+       where s.lot_id = ? and c.active = ? and s.seq >= 1 and s.seq <= ? and ${live}) t`,
+    [lot.id, true, lot.samplingPlan.sampleSize, false],
+  );
+  const [conductors] = await sql.execute<{ n: number | string }[]>(
+    'select count(*) as n from conductor_specs c where c.product_id = ? and c.active = ?',
+    [lot.product.id, true],
+  );
+  const needed = Number(conductors.n) * Math.max(0, lot.samplingPlan.sampleSize);
+  return { hasReading: Number(read.n) > 0, allPlannedUnitsRead: Number(units.n) >= needed };
 }
 
 /**
@@ -45,17 +58,12 @@ export class LotStatusService {
   constructor(private readonly audit: AuditService) {}
 
   async refresh(em: EntityManager, lot: Lot, actor: RequestUser): Promise<void> {
-    await em.populate(lot, ['product.conductors', 'samples.readings', 'samples.conductor'], {
-      refresh: true,
-    });
     const before = lot.status;
     let next = before;
     if (before === 'on_hold' || before === 'inspecting' || before === 'awaiting_decision') {
-      const hasReading = lot.samples
-        .getItems()
-        .some((s) => s.readings.getItems().some((r) => !r.voided));
-      if (allPlannedUnitsRead(lot)) next = 'awaiting_decision';
-      else if (hasReading || before !== 'on_hold') next = 'inspecting';
+      const evidence = await evidenceOf(em, lot);
+      if (evidence.allPlannedUnitsRead) next = 'awaiting_decision';
+      else if (evidence.hasReading || before !== 'on_hold') next = 'inspecting';
       if (
         before === 'awaiting_decision' &&
         next !== before &&

@@ -96,7 +96,8 @@ export class ReadingsService {
     });
     em.persist(reading);
     await em.flush();
-    await this.recomputeSiblings(em, sample, actor, reading.id);
+    const live = [...siblings, reading].sort((a, b) => a.id - b.id);
+    await this.recomputeSiblings(em, sample, actor, reading.id, live);
     this.audit.record(em, actor, {
       action: 'reading.create',
       entityType: 'reading',
@@ -111,16 +112,19 @@ export class ReadingsService {
    * When a reading is added or voided, the sample's other live readings are computed again
    * with the readings that now stand: a material finding needs mass and resistance together,
    * and must follow when one of them arrives or is voided. Each changed reading is updated
-   * in place and audited as `reading.recompute`.
+   * in place and audited as `reading.recompute`. `known`: the live readings, when the
+   * caller has just read them (spares the query on every create).
    */
   private async recomputeSiblings(
     em: EntityManager,
     sample: Sample,
     actor: RequestUser,
     exceptId?: number,
+    known?: Reading[],
   ) {
     await em.populate(sample, ['lot.product', 'conductor']);
-    const live = await em.find(Reading, { sample, voided: false }, { orderBy: { id: 'asc' } });
+    const live =
+      known ?? (await em.find(Reading, { sample, voided: false }, { orderBy: { id: 'asc' } }));
     for (const r of live.filter((x) => x.id !== exceptId)) {
       const others = live.filter((o) => o.id !== r.id);
       const computed = computeReading({
