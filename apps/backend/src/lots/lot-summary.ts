@@ -30,6 +30,47 @@ export function lotSummary(lot: Lot) {
 }
 export type LotSummary = ReturnType<typeof lotSummary>;
 
+/** The columns of a lot list row (aliases l, p, s, u), read without building entities. */
+export const LIST_COLUMNS = [
+  'l.id, l.status, l.po_number, l.packing_slip, l.supplier_lot_code, l.quantity, l.unit',
+  'l.received_at, l.sampling_plan, l.version, u.id as u_id, u.name as u_name',
+  'p.id as p_id, p.sku as p_sku, p.description as p_description, p.kind as p_kind',
+  's.id as s_id, s.name as s_name, s.code as s_code, s.status as s_status',
+];
+
+/** SQLite keeps datetimes as epoch milliseconds and JSON as text; PostgreSQL as values. */
+const asDate = (v: unknown) => (v instanceof Date ? v : new Date(Number(v)));
+const asJson = (v: unknown) => (typeof v === 'string' ? (JSON.parse(v) as unknown) : v);
+
+/** LotSummary from a row of LIST_COLUMNS: the same shape as lotSummary(lot). */
+export function summaryOfRow(r: Record<string, unknown>): LotSummary {
+  return {
+    id: Number(r.id),
+    status: r.status as Lot['status'],
+    poNumber: String(r.po_number),
+    packingSlip: (r.packing_slip as string | null) ?? null,
+    supplierLotCode: (r.supplier_lot_code as string | null) ?? null,
+    quantity: Number(r.quantity),
+    unit: String(r.unit),
+    receivedAt: asDate(r.received_at),
+    receivedBy: { id: Number(r.u_id), name: String(r.u_name) },
+    product: {
+      id: Number(r.p_id),
+      sku: String(r.p_sku),
+      description: String(r.p_description),
+      kind: r.p_kind as Lot['product']['kind'],
+    },
+    supplier: {
+      id: Number(r.s_id),
+      name: String(r.s_name),
+      code: String(r.s_code),
+      status: r.s_status as Supplier['status'],
+    },
+    samplingPlan: asJson(r.sampling_plan) as Lot['samplingPlan'],
+    version: Number(r.version),
+  };
+}
+
 /**
  * What the clerk must see first on a delivery from a supplier not in good standing. A
  * suspended supplier's delivery is still received (the cable is on the dock) but held.
