@@ -2,27 +2,42 @@ import { createBrowserRouter, Navigate, type RouteObject } from 'react-router-do
 import { AppShell } from '@/app/layout/app-shell';
 import { RequireAuth } from '@/app/layout/require-auth';
 import { RoleGate } from '@/app/layout/role-gate';
+import { lazyRoute, WithRouteFallback } from '@/app/layout/lazy-route';
 import { homePathFor } from '@/app/navigation';
 import { NotFoundRoute } from '@/app/routes/not-found';
 import { RouteError } from '@/app/routes/route-error';
 import { SignInRoute } from '@/app/routes/sign-in';
-import { TodayRoute } from '@/app/routes/today';
-import { LotRoute } from '@/app/routes/lot';
-import { LotsRoute } from '@/app/routes/lots';
-import { ReceivingRoute } from '@/app/routes/receiving';
-import { UsersRoute } from '@/app/routes/users';
-import { ScorecardsRoute } from '@/app/routes/scorecards';
-import { SupplierScorecardRoute } from '@/app/routes/supplier-scorecard';
-import { InstrumentsRoute } from '@/app/routes/instruments';
-import { ProductsRoute } from '@/app/routes/products';
-import { ReferenceRoute } from '@/app/routes/reference';
-import { SuppliersRoute } from '@/app/routes/suppliers';
-import { ReturnsRoute } from '@/app/routes/returns';
-import { ReturnDetailRoute } from '@/app/routes/return-detail';
-import { CorrectiveActionsRoute } from '@/app/routes/corrective-actions';
-import { CorrectiveActionDetailRoute } from '@/app/routes/corrective-action-detail';
 import { paths } from '@/config/paths';
 import { useSessionUser } from '@/features/auth/auth-context';
+
+/** Each screen's code loads on its first visit (first-screen budget of issue 7). */
+const TodayRoute = lazyRoute(() => import('@/app/routes/today'), 'TodayRoute');
+const LotRoute = lazyRoute(() => import('@/app/routes/lot'), 'LotRoute');
+const LotsRoute = lazyRoute(() => import('@/app/routes/lots'), 'LotsRoute');
+const ReceivingRoute = lazyRoute(() => import('@/app/routes/receiving'), 'ReceivingRoute');
+const UsersRoute = lazyRoute(() => import('@/app/routes/users'), 'UsersRoute');
+const ScorecardsRoute = lazyRoute(() => import('@/app/routes/scorecards'), 'ScorecardsRoute');
+const SupplierScorecardRoute = lazyRoute(
+  () => import('@/app/routes/supplier-scorecard'),
+  'SupplierScorecardRoute',
+);
+const InstrumentsRoute = lazyRoute(() => import('@/app/routes/instruments'), 'InstrumentsRoute');
+const ProductsRoute = lazyRoute(() => import('@/app/routes/products'), 'ProductsRoute');
+const ReferenceRoute = lazyRoute(() => import('@/app/routes/reference'), 'ReferenceRoute');
+const SuppliersRoute = lazyRoute(() => import('@/app/routes/suppliers'), 'SuppliersRoute');
+const ReturnsRoute = lazyRoute(() => import('@/app/routes/returns'), 'ReturnsRoute');
+const ReturnDetailRoute = lazyRoute(
+  () => import('@/app/routes/return-detail'),
+  'ReturnDetailRoute',
+);
+const CorrectiveActionsRoute = lazyRoute(
+  () => import('@/app/routes/corrective-actions'),
+  'CorrectiveActionsRoute',
+);
+const CorrectiveActionDetailRoute = lazyRoute(
+  () => import('@/app/routes/corrective-action-detail'),
+  'CorrectiveActionDetailRoute',
+);
 
 function HomeRedirect() {
   const user = useSessionUser();
@@ -153,7 +168,11 @@ const shellRoutes: RouteObject[] = [
     ),
   },
   { path: '*', element: <NotFoundRoute /> },
-].map((route) => ({ ...route, errorElement: <RouteError /> }));
+].map((route) => ({
+  ...route,
+  element: <WithRouteFallback>{route.element}</WithRouteFallback>,
+  errorElement: <RouteError />,
+}));
 
 export const routes: RouteObject[] = [
   {
