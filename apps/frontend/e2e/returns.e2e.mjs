@@ -153,3 +153,50 @@ test('purchasing raises a return for a rejected lot, downloads its CSV and e-mai
   await page.getByRole('table', { name: 'Returns' }).getByText(`RMA-${STAMP}`).waitFor();
   await screenshot(page, 'returns-list');
 });
+
+test('purchasing raises a corrective action request for the supplier and records its response', async () => {
+  const found = await page.request.get(
+    url('/api/lots?status=returned,rejected&q=PO-E2E-&pageSize=1'),
+  );
+  const [lot] = (await found.json()).items;
+  assert.ok(lot, 'the rejected lot of the first test');
+  await page.getByRole('link', { name: 'Corrective actions' }).first().click();
+  await page.waitForURL((u) => u.pathname === '/corrective-actions');
+  await page.getByRole('button', { name: 'New SCAR' }).click();
+  const dialog = page.getByRole('dialog');
+  await dialog.getByRole('combobox', { name: 'Supplier' }).click();
+  await page.getByRole('option', { name: new RegExp(lot.supplier.code) }).click();
+  await dialog.getByRole('checkbox', { name: new RegExp(`^Lot ${lot.id} · PO`) }).check();
+  await dialog
+    .getByLabel('Problem')
+    .fill('4 AWG spools measure as 8 AWG: copper area about 40 % of the label.');
+  // A due date in the past is refused as it is typed.
+  await dialog.getByLabel('Response due on').fill('2020-01-31');
+  await dialog.getByText('The due date cannot be in the past.').waitFor();
+  const due = new Date(Date.now() + 14 * 86_400_000).toISOString().slice(0, 10);
+  await dialog.getByLabel('Response due on').fill(due);
+  await dialog.getByRole('button', { name: 'Raise the request' }).click();
+  await page.waitForURL((u) => /^\/corrective-actions\/\d+$/.test(u.pathname));
+  await page.getByRole('heading', { name: /^SCAR-\d{4}-\d{4}$/ }).waitFor();
+  const form = page.getByRole('form', { name: 'Supplier response' });
+  await form.getByLabel('Containment').fill('Stock of the same reel batch quarantined and sorted.');
+  await form
+    .getByLabel('Root cause')
+    .fill('The extruder line ran 8 AWG strand packs under 4 AWG jackets.');
+  await form
+    .getByLabel('Corrective action')
+    .fill('Strand count checked at the line for every reel change.');
+  await form.getByRole('button', { name: 'Record the response' }).click();
+  await page.getByRole('button', { name: 'Verify the response' }).waitFor();
+  await page.getByRole('button', { name: 'Reopen' }).waitFor();
+  await screenshot(page, 'corrective-action-detail');
+  await page.getByRole('button', { name: 'Verify the response' }).click();
+  await page.getByRole('button', { name: 'Close' }).waitFor();
+  await page.getByRole('link', { name: 'All corrective actions' }).click();
+  await page
+    .getByRole('table', { name: 'Corrective actions' })
+    .getByText('Verified')
+    .first()
+    .waitFor();
+  await screenshot(page, 'corrective-actions-list');
+});

@@ -22,6 +22,7 @@ const columns = helper.columns([
         component={RouterLink}
         to={paths.correctiveActionDetail.getHref(info.row.original.id)}
         onClick={(e) => e.stopPropagation()}
+        sx={{ whiteSpace: 'nowrap' }}
       >
         {info.getValue()}
       </Link>
@@ -52,7 +53,7 @@ const columns = helper.columns([
       <Typography
         variant="body2"
         color={info.row.original.overdue ? 'error' : undefined}
-        sx={{ fontWeight: info.row.original.overdue ? 600 : undefined }}
+        sx={{ whiteSpace: 'nowrap', fontWeight: info.row.original.overdue ? 600 : undefined }}
       >
         {info.getValue()}
       </Typography>

@@ -24,6 +24,7 @@ const columns = helper.columns([
         component={RouterLink}
         to={paths.returnDetail.getHref(info.row.original.id)}
         onClick={(e) => e.stopPropagation()}
+        sx={{ whiteSpace: 'nowrap' }}
       >
         {info.getValue()}
       </Link>
