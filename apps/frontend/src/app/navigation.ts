@@ -52,7 +52,12 @@ export const navItems: readonly NavItem[] = [
   },
   { label: 'Suppliers', path: paths.suppliers.path, icon: StorefrontOutlined, roles: ALL },
   { label: 'Products', path: paths.products.path, icon: CableOutlined, roles: ALL },
-  { label: 'Instruments', path: paths.instruments.path, icon: SpeedOutlined, roles: ALL }, // clerk: read only
+  {
+    label: 'Instruments',
+    path: paths.instruments.path,
+    icon: SpeedOutlined,
+    roles: ['clerk', 'qa_lead', 'admin'], // clerk: read only
+  },
   { label: 'Reference', path: paths.reference.path, icon: MenuBookOutlined, roles: ALL },
   {
     label: 'Scorecards',
