@@ -11,6 +11,7 @@ import { AllExceptionsFilter } from './common/all-exceptions.filter';
 import { BodyDepthInterceptor } from './common/body-depth.interceptor';
 import type { AppConfig } from './config/env';
 import { seedDemo } from './seed/seed-demo';
+import { StorageService } from './storage/storage.service';
 
 /**
  * Builds the whole application: used by main.ts, by the API tests and the benchmark,
@@ -53,6 +54,6 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
 
   const orm = app.get(MikroORM);
   await orm.getMigrator().up();
-  if (config.seedDemo) await seedDemo(orm.em.fork());
+  if (config.seedDemo) await seedDemo(orm.em.fork(), app.get(StorageService), config.seedHistory);
   return app;
 }

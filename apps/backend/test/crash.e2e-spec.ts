@@ -110,7 +110,7 @@ beforeAll(async () => {
     DB_PATH: dbPath,
     UPLOAD_DIR: uploadDir,
     JWT_SECRET: 'crash-test-secret-0123456789',
-    SEED_DEMO: 'true',
+    SEED_DEMO: 'catalog',
   });
   await server.start();
   await signIn();

@@ -13,6 +13,8 @@ export interface AppConfig {
   mailFrom: string;
   jwtSecret: string;
   seedDemo: boolean;
+  /** SEED_DEMO=catalog seeds users and catalog only, without the scenario's history. */
+  seedHistory: boolean;
   /** Extra origins allowed to send cookie-authenticated writes (comma-separated). */
   appOrigins: string[];
   /** Public address of the app, used in QR codes and e-mails. */
@@ -75,8 +77,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     problems.push('SMTP_URL must start with smtp:// or smtps:// (leave it empty to log mail)');
   }
   const seedRaw = (env.SEED_DEMO ?? 'true').toLowerCase();
-  if (!['true', 'false'].includes(seedRaw)) {
-    problems.push(`SEED_DEMO must be "true" or "false" (got "${env.SEED_DEMO}")`);
+  if (!['true', 'false', 'catalog'].includes(seedRaw)) {
+    problems.push(`SEED_DEMO must be "true", "catalog" or "false" (got "${env.SEED_DEMO}")`);
   }
   const jwtSecret = env.JWT_SECRET?.trim();
   if (jwtSecret !== undefined && jwtSecret !== '' && jwtSecret.length < 16) {
@@ -116,7 +118,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     smtpUrl,
     mailFrom: env.MAIL_FROM || 'Gaugeproof <gaugeproof@localhost>',
     jwtSecret: jwtSecret || persistentSecret(dirname(dbPath)),
-    seedDemo: seedRaw === 'true',
+    seedDemo: seedRaw !== 'false',
+    seedHistory: seedRaw === 'true',
     appOrigins: (env.APP_ORIGINS ?? '')
       .split(',')
       .map((o) => o.trim())

@@ -32,7 +32,7 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
     DB_PATH: join(dir, 'test.sqlite'),
     UPLOAD_DIR: join(dir, 'uploads'),
     JWT_SECRET: 'test-secret-that-is-long-enough',
-    SEED_DEMO: 'true',
+    SEED_DEMO: 'catalog',
     LOG_LEVEL: 'silent',
     PUBLIC_URL: ORIGIN,
     ...env,

@@ -1,0 +1,112 @@
+import { Nonconformance } from '../decisions/entities/nonconformance.entity';
+import { Lot } from '../lots/entities/lot.entity';
+import { OutboundMessage } from '../mail/entities/outbound-message.entity';
+import {
+  VendorReturn,
+  type ReturnCosts,
+  type ReturnStatus,
+} from '../returns/entities/vendor-return.entity';
+import type { ScenarioContext } from './seed-scenario-context';
+
+const DAY_MS = 86_400_000;
+export const daysAgo = (ctx: ScenarioContext, days: number, hour = 10) =>
+  new Date(
+    Date.UTC(ctx.now.getUTCFullYear(), ctx.now.getUTCMonth(), ctx.now.getUTCDate(), hour) -
+      days * DAY_MS,
+  );
+
+interface ReturnStory {
+  lot: Lot;
+  rmaNumber: string;
+  costs: ReturnCosts;
+  notes: string;
+  /** Days ago of each step: raised, then sent (and acknowledged, closed when given). */
+  steps: number[];
+  mail: 'sent' | 'logged';
+}
+
+/** A return to vendor of a rejected lot, through the real returns service, e-mailed once. */
+async function returnLot(ctx: ScenarioContext, r: ReturnStory): Promise<void> {
+  const [raised, ...later] = r.steps;
+  ctx.clock.set(daysAgo(ctx, raised, 14));
+  const view = await ctx.returns.create(
+    { lotIds: [r.lot.id], rmaNumber: r.rmaNumber, notes: r.notes, costs: r.costs },
+    ctx.users.buyer,
+  );
+  const statuses: ReturnStatus[] = ['sent', 'acknowledged', 'closed'];
+  for (const [i, days] of later.entries()) {
+    ctx.clock.set(daysAgo(ctx, days, 9));
+    await ctx.returns.update(view.id, { status: statuses[i] }, ctx.users.buyer);
+    if (statuses[i] === 'sent') mailReturn(ctx, r, view.id, view.number, view.chargebackTotal);
+  }
+  const ncr = await ctx.em.findOneOrFail(Nonconformance, { lot: r.lot });
+  ncr.disposition = 'return_to_vendor';
+  await ctx.em.flush();
+  const at = daysAgo(ctx, raised, 14);
+  const last = daysAgo(ctx, later.at(-1) ?? raised, 9);
+  await ctx.em.nativeUpdate(VendorReturn, { id: view.id }, { createdAt: at, updatedAt: last });
+  await ctx.em.nativeUpdate(Lot, { id: r.lot.id }, { updatedAt: last });
+}
+
+/** The e-mail of the return as the mail service would record it (no SMTP in the story). */
+function mailReturn(
+  ctx: ScenarioContext,
+  r: ReturnStory,
+  id: number,
+  number: string,
+  total: number,
+) {
+  const supplier = r.lot.supplier;
+  const message = ctx.em.create(OutboundMessage, {
+    to: supplier.contactEmail ?? `quality@${supplier.code.toLowerCase()}.example`,
+    subject: `Return ${number}: rejected cable from ${supplier.name}`,
+    body: [
+      `Return to vendor ${number}, your RMA ${r.rmaNumber}.`,
+      `We rejected lot ${r.lot.id} (PO ${r.lot.poNumber}) at receiving inspection: the attached evidence pack shows the sampling plan, every reading with its uncertainty and the decision; the CSV holds the readings.`,
+      `Chargeback: ${total.toFixed(2)}.`,
+      'Please confirm the return and send us your corrective action.',
+    ].join('\n\n'),
+    attachments: [
+      { filename: `${number}-readings.csv`, contentType: 'text/csv; charset=utf-8' },
+      { filename: `${number}-evidence.pdf`, contentType: 'application/pdf' },
+    ],
+    status: r.mail,
+    attempts: 1,
+    relatedType: 'vendor_return',
+    relatedId: id,
+    sentById: ctx.users.buyer.id,
+    createdAt: new Date(ctx.clock.now),
+    sentAt: r.mail === 'sent' ? new Date(ctx.clock.now) : null,
+  });
+  ctx.em.persist(message);
+  ctx.audit.record(ctx.em, ctx.users.buyer, {
+    action: 'return.email',
+    entityType: 'vendor_return',
+    entityId: id,
+    lotId: r.lot.id,
+    after: { number, to: message.to, status: message.status, error: null },
+  });
+}
+
+/** The story's lot, freshly loaded with its supplier. */
+export type LotByKey = (key: string) => Lot;
+
+/** What purchasing did about the copper-clad aluminium: two returns with chargebacks. */
+export async function seedReturns(ctx: ScenarioContext, lot: LotByKey) {
+  await returnLot(ctx, {
+    lot: lot('qa4-cca-1'),
+    rmaNumber: 'QAS-RMA-5521',
+    costs: { inspectionHours: 3.5, hourlyRate: 48, freight: 85 },
+    notes: 'Sold as copper; mass and four-wire resistance identify copper-clad aluminium.',
+    steps: [132, 131, 126, 112],
+    mail: 'sent',
+  });
+  await returnLot(ctx, {
+    lot: lot('qa4-cca-2'),
+    rmaNumber: 'QAS-RMA-5870',
+    costs: { inspectionHours: 4, hourlyRate: 48, freight: 95, other: 30 },
+    notes: 'Second delivery of copper-clad aluminium sold as copper; see SCAR.',
+    steps: [48, 47],
+    mail: 'logged',
+  });
+}

@@ -1,0 +1,217 @@
+import { MikroORM, type EntityManager } from '@mikro-orm/core';
+import { areaFromMass, areaFromResistance, identifyMaterial } from '@gaugeproof/standards';
+import { createHash } from 'node:crypto';
+import { existsSync, readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { Jimp } from 'jimp';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createApp } from '../src/app.factory';
+import { AuditEvent } from '../src/audit/entities/audit-event.entity';
+import { isoDate } from '../src/common/calendar';
+import { CorrectiveAction } from '../src/corrective-actions/entities/corrective-action.entity';
+import { Decision } from '../src/decisions/entities/decision.entity';
+import { Nonconformance } from '../src/decisions/entities/nonconformance.entity';
+import type { SwitchingRecord } from '../src/decisions/switching';
+import type { Instrument } from '../src/instruments/entities/instrument.entity';
+import { Reading } from '../src/inspection/entities/reading.entity';
+import { resolutionsFor } from '../src/inspection/instrument-resolutions';
+import { computeReading, type ReadingInputs } from '../src/inspection/reading-compute';
+import { Lot, LOT_STATUSES } from '../src/lots/entities/lot.entity';
+import { OutboundMessage } from '../src/mail/entities/outbound-message.entity';
+import { Photo } from '../src/photos/entities/photo.entity';
+import { InspectionState } from '../src/products/entities/inspection-state.entity';
+import { VendorReturn } from '../src/returns/entities/vendor-return.entity';
+import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
+
+let t: TestApp;
+let em: EntityManager;
+let seedMs: number;
+const sha = (b: Buffer) => createHash('sha256').update(b).digest('hex');
+
+beforeAll(async () => {
+  const started = Date.now();
+  t = await startTestApp({ SEED_DEMO: 'true' });
+  seedMs = Date.now() - started;
+  em = t.app.get(MikroORM).em.fork();
+}, 120_000);
+afterAll(async () => t?.close());
+
+const get = async (who: string, path: string) =>
+  t.http.get(path).set('Authorization', `Bearer ${await t.token(who)}`);
+
+describe('demo scenario seeded on an empty database', () => {
+  it('boots with the whole history within the time budget', () => {
+    console.info(`app start with the demo scenario: ${seedMs} ms`);
+    expect(seedMs).toBeLessThan(60_000);
+  });
+
+  it('has lots in every status, each with a timeline', async () => {
+    for (const status of LOT_STATUSES) {
+      const res = await get(DEMO.qa, `/api/lots?status=${status}`);
+      expect(res.status).toBe(200);
+      expect(res.body.total, status).toBeGreaterThan(0);
+    }
+    for (const lot of await em.find(Lot, {})) {
+      const events = await em.count(AuditEvent, { lotId: lot.id, action: 'lot.create' });
+      expect(events, `lot ${lot.id}`).toBe(1);
+    }
+    const concession = await em.find(Decision, { outcome: 'accept_on_concession' });
+    expect(concession.length).toBeGreaterThan(0);
+    expect(concession.every((d) => d.reason.length >= 20)).toBe(true);
+    const rejected = await em.find(Lot, { status: { $in: ['rejected', 'returned'] } });
+    for (const lot of rejected) expect(await em.count(Nonconformance, { lot })).toBe(1);
+  });
+
+  it('leaves one lot awaiting a reject and one awaiting an accept', async () => {
+    const waiting = await get(DEMO.qa, '/api/lots?status=awaiting_decision');
+    const recommendations = [];
+    for (const l of waiting.body.items as { id: number }[]) {
+      const detail = await get(DEMO.qa, `/api/lots/${l.id}`);
+      recommendations.push(detail.body.evaluation.recommendation);
+    }
+    expect(recommendations.sort()).toEqual(['accept', 'reject']);
+  });
+
+  it('stores every reading as the standards library computes it from its inputs', async () => {
+    const readings = await em.find(
+      Reading,
+      {},
+      { populate: ['sample.conductor', 'sample.lot.product'], orderBy: { id: 'asc' } },
+    );
+    expect(readings.length).toBeGreaterThan(300);
+    const live = new Map<number, Reading[]>();
+    for (const r of readings) {
+      const siblings = (live.get(r.sample.id) ?? []).slice().reverse();
+      const computed = computeReading({
+        method: r.method,
+        inputs: r.inputs as ReadingInputs,
+        resolutions: resolutionsFor(r.method, r.instruments as unknown as Instrument[]),
+        gaugeLabel: r.sample.conductor.gaugeLabel,
+        claimedMaterial: 'copper',
+        minAreaRatio: r.sample.lot.product.minAreaRatio,
+        siblings: siblings.map((s) => ({
+          method: s.method,
+          inputs: s.inputs as ReadingInputs,
+          areaMm2: s.areaMm2,
+        })),
+      });
+      expect(r.areaMm2, `reading ${r.id}`).toBeCloseTo(computed.areaMm2, 9);
+      expect(r.verdict, `reading ${r.id}`).toBe(computed.verdict);
+      expect(r.measuresAs).toBe(computed.measuresAs);
+      expect(r.identifiedMaterial).toBe(computed.identifiedMaterial);
+      if (!r.voided) live.set(r.sample.id, [...(live.get(r.sample.id) ?? []), r]);
+    }
+    // By hand for one mass reading: A = m / (ρ · L · (1 + k)), copper 8.89 g/cm³, k = 0.02.
+    const mass = readings.find((r) => r.method === 'mass' && !r.voided) as Reading;
+    const { massG, lengthMm } = mass.inputs;
+    expect(mass.areaMm2).toBeCloseTo(massG / (0.00889 * lengthMm * 1.02), 9);
+    expect(mass.areaMm2).toBeCloseTo(areaFromMass({ massG, lengthMm }).areaMm2, 12);
+  });
+
+  it('finds copper-clad aluminium sold as copper by mass and resistance', async () => {
+    const cca = await em.find(
+      Reading,
+      { materialMismatch: true, identifiedMaterial: 'cca', voided: false },
+      { populate: ['sample.lot'] },
+    );
+    expect(cca.length).toBeGreaterThanOrEqual(6);
+    const r = cca.find((x) => x.method === 'resistance') as Reading;
+    const mass = await em.findOneOrFail(Reading, { sample: r.sample, method: 'mass' });
+    const ohmOverMassLength = (r.inputs.resistanceOhm * mass.inputs.lengthMm) / r.inputs.lengthMm;
+    const id = identifyMaterial({
+      massG: mass.inputs.massG,
+      lengthMm: mass.inputs.lengthMm,
+      resistanceOhm: ohmOverMassLength,
+      temperatureC: r.inputs.temperatureC,
+    });
+    expect(id.material).toBe('cca');
+    const byR = areaFromResistance({ ...r.inputs, material: 'copper' } as never);
+    expect(r.areaMm2).toBeCloseTo(byR.areaMm2, 6);
+    expect(['rejected', 'returned']).toContain(r.sample.lot.status);
+  });
+
+  it('never used an instrument outside its calibration period', async () => {
+    const readings = await em.find(Reading, {});
+    for (const r of readings) {
+      const day = isoDate(r.takenAt);
+      for (const i of r.instruments) {
+        expect(i.calibrationDueOn >= day, `reading ${r.id} with ${i.serial} on ${day}`).toBe(true);
+      }
+    }
+    expect(readings.every((r) => r.takenAt.getTime() <= Date.now())).toBe(true);
+    const voided = readings.filter((r) => r.voided);
+    expect(voided.length).toBeGreaterThan(0);
+    expect(voided.every((r) => (r.voidReason ?? '').length > 10)).toBe(true);
+  });
+
+  it('stores drawn photos with their sha256 and thumbnails as the upload service makes them', async () => {
+    const photos = await em.find(Photo, {});
+    expect(photos.length).toBeGreaterThanOrEqual(4);
+    for (const p of photos) {
+      const original = readFileSync(join(t.config.uploadDir, p.storageKey));
+      expect(sha(original)).toBe(p.sha256);
+      expect(p.sizeBytes).toBe(original.length);
+      expect(existsSync(join(t.config.uploadDir, p.thumbnailKey))).toBe(true);
+      const thumb = await Jimp.fromBuffer(readFileSync(join(t.config.uploadDir, p.thumbnailKey)));
+      expect([thumb.bitmap.width, thumb.bitmap.height]).toEqual([320, 240]);
+    }
+    const res = await get(DEMO.clerk, `/api/photos/${photos[0].id}/original`);
+    expect(res.status).toBe(200);
+  });
+
+  it('returned the CCA lots with a chargeback and e-mail, and has an overdue SCAR', async () => {
+    const returns = await em.find(VendorReturn, {}, { populate: ['lots'] });
+    const sent = returns.filter((r) => r.status === 'sent');
+    expect(sent.length).toBeGreaterThan(0);
+    expect(sent[0].rmaNumber).toBeTruthy();
+    expect(returns.every((r) => r.chargebackTotal > 0)).toBe(true);
+    expect(returns.flatMap((r) => r.lots.getItems()).every((l) => l.status === 'returned')).toBe(
+      true,
+    );
+    expect(await em.count(OutboundMessage, { relatedType: 'vendor_return' })).toBe(returns.length);
+    const today = isoDate(new Date());
+    const overdue = await em.find(CorrectiveAction, { status: 'open', dueOn: { $lt: today } });
+    expect(overdue.length).toBe(1);
+    expect(await em.count(CorrectiveAction, { status: 'responded' })).toBeGreaterThan(0);
+  });
+
+  it('keeps each product’s switching state equal to its decisions replayed in order', async () => {
+    for (const state of await em.find(InspectionState, {}, { populate: ['product'] })) {
+      const decisions = await em.find(
+        Decision,
+        { lot: { product: state.product } },
+        { orderBy: { id: 'asc' } },
+      );
+      let last = null as SwitchingRecord['after'] | null;
+      for (const d of decisions) {
+        const s = d.evaluation.switching as SwitchingRecord;
+        if (last) expect(s.before).toEqual(last);
+        last = s.after;
+      }
+      if (last) expect(state.state).toEqual(last);
+      if (last) expect(state.severity).toBe(last.severity);
+    }
+    const severities = (await em.find(InspectionState, {})).map((s) => s.severity);
+    expect(severities).toContain('tightened');
+  });
+
+  it('shows suppliers of different quality on the scorecards', async () => {
+    const res = await get(DEMO.buyer, '/api/scorecards');
+    expect(res.status).toBe(200);
+    const rate = (code: string) =>
+      (res.body.items as { code: string; acceptanceRate: number | null }[]).find(
+        (r) => r.code === code,
+      )?.acceptanceRate as number;
+    expect(rate('HLC')).toBe(1);
+    expect(rate('VWH')).toBeLessThan(rate('TSC'));
+    expect(rate('QAS')).toBeLessThan(rate('VWH'));
+  });
+
+  it('does not seed again on a second start', async () => {
+    const before = await em.count(Lot, {});
+    const again = await createApp(t.config);
+    await again.init();
+    await again.close();
+    expect(await em.fork().count(Lot, {})).toBe(before);
+  });
+});
