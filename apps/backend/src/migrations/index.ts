@@ -1,8 +1,10 @@
 import type { MigrationObject } from '@mikro-orm/core';
 import { Migration20261201225022 } from './postgresql/Migration20261201225022';
 import { Migration20261202001640 } from './postgresql/Migration20261202001640';
+import { Migration20261202004244 } from './postgresql/Migration20261202004244';
 import { Migration20261201224334 } from './sqlite/Migration20261201224334';
 import { Migration20261202001630 } from './sqlite/Migration20261202001630';
+import { Migration20261202004800 } from './sqlite/Migration20261202004800';
 
 /**
  * Migrations per driver, in order, each driver in its own folder; listed in code so the
@@ -12,9 +14,11 @@ import { Migration20261202001630 } from './sqlite/Migration20261202001630';
 export const SQLITE_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261201224334', class: Migration20261201224334 },
   { name: 'Migration20261202001630', class: Migration20261202001630 },
+  { name: 'Migration20261202004800', class: Migration20261202004800 },
 ];
 
 export const POSTGRES_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261201225022', class: Migration20261201225022 },
   { name: 'Migration20261202001640', class: Migration20261202001640 },
+  { name: 'Migration20261202004244', class: Migration20261202004244 },
 ];

@@ -6,6 +6,7 @@ import {
   ManyToOne,
   PrimaryKey,
   Property,
+  Unique,
   type Opt,
 } from '@mikro-orm/core';
 import { Lot } from '../../lots/entities/lot.entity';
@@ -22,6 +23,7 @@ export class CorrectiveAction {
   id!: number;
 
   @Property({ type: 'string', length: 20 })
+  @Unique()
   number!: string;
 
   @ManyToOne(() => Supplier)
