@@ -16,7 +16,10 @@ async function schemaOf(orm: MikroORM) {
     .execute<{ type: string; name: string; sql: string }[]>(
       "select type, name, sql from sqlite_master where name not like 'sqlite_%' and name not like 'mikro_orm_migrations%' order by type, name",
     );
-  return rows.map((r) => ({ ...r, sql: (r.sql ?? '').replace(/\s+/g, ' ') }));
+  return rows.map((r: { type: string; name: string; sql: string }) => ({
+    ...r,
+    sql: (r.sql ?? '').replace(/\s+/g, ' '),
+  }));
 }
 
 // MikroORM's SQLite diff reports check constraints as changed even when they are equal, so

@@ -1,4 +1,4 @@
-import { Controller, Get, Param, ParseIntPipe, Query, Res } from '@nestjs/common';
+import { Logger, Controller, Get, Param, ParseIntPipe, Query, Res } from '@nestjs/common';
 import { ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { once } from 'node:events';
@@ -39,6 +39,8 @@ export class ExportsController {
       res.end();
     } catch (e) {
       if (!res.headersSent) throw e;
+      // The status line is gone: cut the download short and keep the cause for support.
+      new Logger('Exports').error({ err: e }, 'Readings export failed mid-stream');
       res.destroy(e instanceof Error ? e : new Error(String(e)));
     }
   }

@@ -38,7 +38,12 @@ export interface ExportRange {
 type Row = Record<string, unknown>;
 
 /** Columns come back as numbers or Dates (SQLite: epoch ms), JSON as text or objects. */
-const toDate = (v: unknown): Date => (v instanceof Date ? v : new Date(Number(v)));
+/** SQLite gives instants as epoch milliseconds, PostgreSQL (through MikroORM) as text. */
+const toDate = (v: unknown): Date => {
+  if (v instanceof Date) return v;
+  if (typeof v === 'number' || /^\d+$/.test(String(v))) return new Date(Number(v));
+  return new Date(String(v));
+};
 const toJson = (v: unknown): Record<string, number> =>
   typeof v === 'string' ? (JSON.parse(v) as Record<string, number>) : (v as Record<string, number>);
 

@@ -33,7 +33,9 @@ export async function seedExportLot(t: TestApp, input: ExportLotInput): Promise<
   const m = t.app.get(MikroORM).em.fork();
   const clerk = await m.findOneOrFail(User, { email: DEMO.clerk });
   let supplier = await m.findOne(Supplier, { code: input.code });
-  let product = supplier && (await m.findOne(Product, { supplier }, { populate: ['conductors'] }));
+  let product: Product | null = supplier
+    ? await m.findOne(Product, { supplier }, { populate: ['conductors'] })
+    : null;
   if (!supplier || !product) {
     supplier = m.create(Supplier, { name: `Fennick Export ${input.code}`, code: input.code });
     product = m.create(Product, {
@@ -62,6 +64,7 @@ export async function seedExportLot(t: TestApp, input: ExportLotInput): Promise<
     unit: 'spools',
     receivedAt: new Date(`${input.receivedAt}T08:00:00.000Z`),
     receivedBy: clerk,
+    version: 1,
     status: 'inspecting',
     samplingPlan: { ...plan, severity: 'normal' },
   });
