@@ -190,6 +190,9 @@ test('purchasing raises a corrective action request for the supplier and records
   await page.getByRole('button', { name: 'Verify the response' }).waitFor();
   await page.getByRole('button', { name: 'Reopen' }).waitFor();
   await screenshot(page, 'corrective-action-detail');
+  // A toast left from the e-mail step pauses while the pointer rests on it; let it go.
+  await page.mouse.move(640, 10);
+  await page.locator('.MuiSnackbar-root').waitFor({ state: 'detached', timeout: 15_000 });
   await page.getByRole('button', { name: 'Verify the response' }).click();
   await page.getByRole('button', { name: 'Close' }).waitFor();
   await page.getByRole('link', { name: 'All corrective actions' }).click();

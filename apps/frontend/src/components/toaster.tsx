@@ -12,7 +12,8 @@ export function Toaster() {
       open
       autoHideDuration={current.severity === 'error' ? 8000 : 4000}
       onClose={(_event, reason) => reason !== 'clickaway' && close()}
-      anchorOrigin={{ vertical: 'bottom', horizontal: 'center' }}
+      // Bottom left, over the navigation's empty foot: never over a form's action buttons.
+      anchorOrigin={{ vertical: 'bottom', horizontal: 'left' }}
     >
       <Alert severity={current.severity} variant="filled" onClose={close} sx={{ width: '100%' }}>
         {current.message}
