@@ -194,7 +194,7 @@ test('purchasing raises a corrective action request for the supplier and records
   await page.mouse.move(640, 10);
   await page.locator('.MuiSnackbar-root').waitFor({ state: 'detached', timeout: 15_000 });
   await page.getByRole('button', { name: 'Verify the response' }).click();
-  await page.getByRole('button', { name: 'Close' }).waitFor();
+  await page.getByRole('button', { name: 'Close' }).filter({ hasText: 'Close' }).waitFor();
   await page.getByRole('link', { name: 'All corrective actions' }).click();
   await page
     .getByRole('table', { name: 'Corrective actions' })
