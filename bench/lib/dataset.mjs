@@ -1,5 +1,7 @@
-// The large data set, built once per set of parameters (and version of the seed code and
-// migrations) under .bench-cache/, and copied to a scratch file for every run.
+// The large data set, built once per set of parameters (and version of the seed code)
+// under .bench-cache/, and copied to a scratch file for every run. Migrations added after
+// the set was built are applied by the server when it starts on the copy, as they would be
+// on a customer's file, so a new index does not cost a new seed.
 import { createHash } from 'node:crypto';
 import {
   copyFileSync,
@@ -20,7 +22,6 @@ function codeHash() {
   const files = [
     ...readdirSync(join(ROOT, 'bench/seed')).map((f) => join(ROOT, 'bench/seed', f)),
     join(ROOT, 'bench/seed-large.mjs'),
-    join(ROOT, 'apps/backend/src/migrations/index.ts'),
   ].sort();
   for (const f of files) h.update(readFileSync(f));
   return h.digest('hex').slice(0, 10);

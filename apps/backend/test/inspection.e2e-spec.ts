@@ -108,6 +108,29 @@ describe('samples', () => {
 });
 
 describe('readings', () => {
+  it('writes only the reading, its audit and one touch of the lot: loaded rows stay as they were', async () => {
+    const lotId = await createLot(t, spool);
+    const s = await sample(lotId, spool.conductorIds[0]);
+    const conn = t.app.get(MikroORM).em.fork().getConnection();
+    // Loaded users, instruments, products and samples were once written back on every flush
+    // (their dates compared as changed), bumping updated_at and the lot's version twice.
+    const snapshot = async () => ({
+      users: await conn.execute('select id, updated_at from users order by id'),
+      instruments: await conn.execute('select id, updated_at from instruments order by id'),
+      products: await conn.execute('select id, updated_at from products order by id'),
+      samples: await conn.execute('select id, created_at from samples order by id'),
+      version: (await lotRow(t, lotId)).version,
+    });
+    const before = await snapshot();
+    expect((await mass(s.id, 195)).status).toBe(201);
+    const after = await snapshot();
+    expect(after.users).toEqual(before.users);
+    expect(after.instruments).toEqual(before.instruments);
+    expect(after.products).toEqual(before.products);
+    expect(after.samples).toEqual(before.samples);
+    expect(after.version).toBe(before.version + 1);
+  });
+
   it('finds 76.1 g over 1000 mm of a "4 AWG" copper cable nonconforming, measuring as 8 AWG', async () => {
     const lotId = await createLot(t, spool);
     const s = await sample(lotId, spool.conductorIds[0]);

@@ -36,7 +36,7 @@ export class AuditEvent {
   @Property({ type: 'json', nullable: true })
   after: Record<string, unknown> | null = null;
 
-  @Property({ type: 'datetime' })
+  @Property({ type: 'Date' })
   @Index()
   at: Opt<Date> = new Date();
 }

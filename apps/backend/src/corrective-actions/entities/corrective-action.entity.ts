@@ -50,18 +50,18 @@ export class CorrectiveAction {
   @Property({ type: 'text', nullable: true })
   correctiveAction: string | null = null;
 
-  @Property({ type: 'datetime', nullable: true })
+  @Property({ type: 'Date', nullable: true })
   respondedAt: Date | null = null;
 
-  @Property({ type: 'datetime', nullable: true })
+  @Property({ type: 'Date', nullable: true })
   closedAt: Date | null = null;
 
   @ManyToOne(() => User)
   createdBy!: User;
 
-  @Property({ type: 'datetime' })
+  @Property({ type: 'Date' })
   createdAt: Opt<Date> = new Date();
 
-  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  @Property({ type: 'Date', onUpdate: () => new Date() })
   updatedAt: Opt<Date> = new Date();
 }

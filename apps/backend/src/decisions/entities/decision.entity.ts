@@ -36,6 +36,6 @@ export class Decision {
   @ManyToOne(() => User)
   decidedBy!: User;
 
-  @Property({ type: 'datetime' })
+  @Property({ type: 'Date' })
   decidedAt: Opt<Date> = new Date();
 }

@@ -34,6 +34,6 @@ export class Nonconformance {
   @Property({ type: 'string', length: 8 })
   status: Opt<string> = 'open';
 
-  @Property({ type: 'datetime' })
+  @Property({ type: 'Date' })
   createdAt: Opt<Date> = new Date();
 }

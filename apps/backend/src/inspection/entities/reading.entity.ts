@@ -84,7 +84,7 @@ export class Reading {
   @ManyToOne(() => User)
   takenBy!: User;
 
-  @Property({ type: 'datetime' })
+  @Property({ type: 'Date' })
   takenAt: Opt<Date> = new Date();
 
   @Property({ type: 'boolean' })
@@ -96,6 +96,6 @@ export class Reading {
   @ManyToOne(() => User, { nullable: true })
   voidedBy: User | null = null;
 
-  @Property({ type: 'datetime', nullable: true })
+  @Property({ type: 'Date', nullable: true })
   voidedAt: Date | null = null;
 }

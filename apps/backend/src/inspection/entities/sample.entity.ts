@@ -38,6 +38,6 @@ export class Sample {
   @ManyToOne(() => User)
   createdBy!: User;
 
-  @Property({ type: 'datetime' })
+  @Property({ type: 'Date' })
   createdAt: Opt<Date> = new Date();
 }

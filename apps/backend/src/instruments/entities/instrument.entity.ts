@@ -44,9 +44,9 @@ export class Instrument {
   @Property({ type: 'boolean' })
   active: Opt<boolean> = true;
 
-  @Property({ type: 'datetime' })
+  @Property({ type: 'Date' })
   createdAt: Opt<Date> = new Date();
 
-  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  @Property({ type: 'Date', onUpdate: () => new Date() })
   updatedAt: Opt<Date> = new Date();
 }

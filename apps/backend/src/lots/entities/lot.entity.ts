@@ -70,7 +70,7 @@ export class Lot {
   @Property({ type: 'string', length: 16 })
   unit!: string;
 
-  @Property({ type: 'datetime' })
+  @Property({ type: 'Date' })
   receivedAt: Opt<Date> = new Date();
 
   @ManyToOne(() => User)
@@ -92,9 +92,9 @@ export class Lot {
   @Property({ type: 'integer', version: true })
   version!: number;
 
-  @Property({ type: 'datetime' })
+  @Property({ type: 'Date' })
   createdAt: Opt<Date> = new Date();
 
-  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  @Property({ type: 'Date', onUpdate: () => new Date() })
   updatedAt: Opt<Date> = new Date();
 }

@@ -41,9 +41,9 @@ export class OutboundMessage {
   @Property({ type: 'integer', nullable: true })
   sentById: number | null = null;
 
-  @Property({ type: 'datetime' })
+  @Property({ type: 'Date' })
   createdAt: Opt<Date> = new Date();
 
-  @Property({ type: 'datetime', nullable: true })
+  @Property({ type: 'Date', nullable: true })
   sentAt: Date | null = null;
 }

@@ -42,6 +42,6 @@ export class Photo {
   @ManyToOne(() => User)
   uploadedBy!: User;
 
-  @Property({ type: 'datetime' })
+  @Property({ type: 'Date' })
   createdAt: Opt<Date> = new Date();
 }

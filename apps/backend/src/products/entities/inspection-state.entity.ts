@@ -22,6 +22,6 @@ export class InspectionState {
   @Property({ type: 'text', nullable: true })
   reason: string | null = null;
 
-  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  @Property({ type: 'Date', onUpdate: () => new Date() })
   updatedAt: Opt<Date> = new Date();
 }

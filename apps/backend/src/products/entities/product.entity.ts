@@ -55,9 +55,9 @@ export class Product {
   @OneToMany(() => ConductorSpec, (c) => c.product, { orphanRemoval: false })
   conductors = new Collection<ConductorSpec>(this);
 
-  @Property({ type: 'datetime' })
+  @Property({ type: 'Date' })
   createdAt: Opt<Date> = new Date();
 
-  @Property({ type: 'datetime', onUpdate: () => new Date() })
+  @Property({ type: 'Date', onUpdate: () => new Date() })
   updatedAt: Opt<Date> = new Date();
 }
