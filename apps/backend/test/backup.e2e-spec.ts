@@ -1,17 +1,17 @@
 import { existsSync, mkdirSync, readdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import sqlite3 from 'sqlite3';
+import Database from 'better-sqlite3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { backupDatabase, copyFolder, restoreDatabase } from '../src/ops/sqlite-backup';
 import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
 
-function query<T>(file: string, sql: string): Promise<T[]> {
-  return new Promise((resolve, reject) => {
-    const db = new sqlite3.Database(file, sqlite3.OPEN_READONLY, (err) => {
-      if (err) return reject(err);
-      db.all(sql, (e, rows) => db.close(() => (e ? reject(e) : resolve(rows as T[]))));
-    });
-  });
+function query<T>(file: string, sql: string): T[] {
+  const db = new Database(file, { readonly: true });
+  try {
+    return db.prepare(sql).all() as T[];
+  } finally {
+    db.close();
+  }
 }
 
 let t: TestApp;
@@ -47,9 +47,9 @@ describe('backup and restore', () => {
     stop = true;
     await load;
 
-    const integrity = await query<{ integrity_check: string }>(target, 'PRAGMA integrity_check');
+    const integrity = query<{ integrity_check: string }>(target, 'PRAGMA integrity_check');
     expect(integrity).toEqual([{ integrity_check: 'ok' }]);
-    const inBackup = (await query<{ email: string }>(target, 'select email from users')).map(
+    const inBackup = query<{ email: string }>(target, 'select email from users').map(
       (r) => r.email,
     );
     // Every write answered before the backup started is in it.
@@ -60,8 +60,8 @@ describe('backup and restore', () => {
     const restoredPath = join(t.dir, 'restored', 'gaugeproof.sqlite');
     restoreDatabase(target, restoredPath);
     for (const table of ['users', 'audit_events', 'mikro_orm_migrations']) {
-      const a = await query(target, `select * from ${table} order by id`);
-      const b = await query(restoredPath, `select * from ${table} order by id`);
+      const a = query(target, `select * from ${table} order by id`);
+      const b = query(restoredPath, `select * from ${table} order by id`);
       expect(b).toEqual(a);
     }
     const restoredUploads = join(t.dir, 'restored', 'uploads');

@@ -2,7 +2,7 @@ import { mkdtempSync, readdirSync, rmSync, existsSync } from 'node:fs';
 import { request as httpRequest } from 'node:http';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import sqlite3 from 'sqlite3';
+import Database from 'better-sqlite3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../src/seed/seed-users';
 import { ChildServer, freePort } from './helpers/child-server';
@@ -94,15 +94,13 @@ async function lotAwaitingDecision(): Promise<{ id: number; version: number }> {
   return { id, version: lot.version };
 }
 
-function integrity(): Promise<string> {
-  return new Promise((resolve, reject) => {
-    const db = new sqlite3.Database(dbPath, sqlite3.OPEN_READONLY, (err) => {
-      if (err) return reject(err);
-      db.get('PRAGMA integrity_check', (e, row: { integrity_check: string }) =>
-        db.close(() => (e ? reject(e) : resolve(row.integrity_check))),
-      );
-    });
-  });
+function integrity(): string {
+  const db = new Database(dbPath, { readonly: true });
+  try {
+    return db.pragma('integrity_check', { simple: true }) as string;
+  } finally {
+    db.close();
+  }
 }
 
 beforeAll(async () => {
@@ -212,7 +210,7 @@ describe('crash safety', () => {
       expect(answered).toBeGreaterThan(0);
 
       await server.start();
-      expect(await integrity()).toBe('ok');
+      expect(integrity()).toBe('ok');
       const lot = await must<{
         samples: { id: number; readings: { id: number; inputs: { massG: number } }[] }[];
       }>('GET', `/api/lots/${readingLotId}`);

@@ -1,4 +1,4 @@
-import { defineConfig as defineSqlite } from '@mikro-orm/sqlite';
+import { defineConfig as defineSqlite } from '@mikro-orm/better-sqlite';
 import { Migrator } from '@mikro-orm/migrations';
 import { ReflectMetadataProvider, type Options } from '@mikro-orm/core';
 import { dirname } from 'node:path';
@@ -6,9 +6,10 @@ import { mkdirSync } from 'node:fs';
 import { ENTITIES } from './entities';
 import { SQLITE_MIGRATIONS } from '../migrations';
 
+/** The part of a better-sqlite3 database the pool's set-up uses. */
 interface SqliteConnection {
-  exec(sql: string, cb: (err: Error | null) => void): void;
-  configure(option: 'busyTimeout', ms: number): void;
+  exec(sql: string): unknown;
+  pragma(sql: string): unknown;
 }
 
 /**
@@ -49,11 +50,15 @@ export function sqliteOptions(dbPath: string): Options {
       min: 1,
       max: 1,
       afterCreate: (conn: SqliteConnection, done: (err: Error | null, conn: unknown) => void) => {
-        conn.configure('busyTimeout', 5000);
-        conn.exec(
-          `PRAGMA journal_mode = WAL; PRAGMA foreign_keys = ON; PRAGMA synchronous = FULL; ${STATISTICS}`,
-          (err) => done(err, conn),
-        );
+        try {
+          conn.pragma('busy_timeout = 5000');
+          conn.exec(
+            `PRAGMA journal_mode = WAL; PRAGMA foreign_keys = ON; PRAGMA synchronous = FULL; ${STATISTICS}`,
+          );
+          done(null, conn);
+        } catch (err) {
+          done(err as Error, conn);
+        }
       },
     },
   });

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
-import type { Knex, SqlEntityManager } from '@mikro-orm/sqlite';
+import type { Knex, SqlEntityManager } from '@mikro-orm/knex';
 
 /** Readings per page of the export (our choice: small enough to keep memory flat). */
 export const EXPORT_PAGE_SIZE = 1000;

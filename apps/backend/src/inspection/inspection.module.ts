@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { LotsModule } from '../lots/lots.module';
 import { InspectionController } from './inspection.controller';
 import { LotDetailController } from './lot-detail.controller';
 import { LotDetailService } from './lot-detail.service';
@@ -7,10 +8,12 @@ import { LotStatusService } from './lot-status';
 import { ReadingsImportController } from './readings-import.controller';
 import { ReadingsImportService } from './readings-import.service';
 import { ReadingsService } from './readings.service';
+import { ReadingWriter } from './reading-writer';
 import { SamplesService } from './samples.service';
 
 /** Samples, readings, their computation, the lot's status flow and its evaluation. */
 @Module({
+  imports: [LotsModule],
   controllers: [InspectionController, LotDetailController, ReadingsImportController],
   providers: [
     LotEvaluationService,
@@ -18,6 +21,7 @@ import { SamplesService } from './samples.service';
     LotStatusService,
     SamplesService,
     ReadingsService,
+    ReadingWriter,
     ReadingsImportService,
   ],
   exports: [LotEvaluationService],

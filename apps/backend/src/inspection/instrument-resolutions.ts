@@ -95,7 +95,12 @@ export function resolutionsFor(
   return r;
 }
 
-export function snapshot(i: Instrument): InstrumentSnapshot {
+export function snapshot(
+  i: Pick<
+    Instrument,
+    'id' | 'kind' | 'name' | 'serial' | 'resolution' | 'resolutionUnit' | 'calibrationDueOn'
+  >,
+): InstrumentSnapshot {
   return {
     id: i.id,
     kind: i.kind,

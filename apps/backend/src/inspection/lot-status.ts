@@ -1,6 +1,6 @@
 import { Injectable, UnprocessableEntityException } from '@nestjs/common';
 import type { EntityManager } from '@mikro-orm/core';
-import type { SqlEntityManager } from '@mikro-orm/sqlite';
+import type { SqlEntityManager } from '@mikro-orm/knex';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
 import { Decision } from '../decisions/entities/decision.entity';
@@ -9,12 +9,24 @@ import type { Lot, LotStatus } from '../lots/entities/lot.entity';
 /** Statuses in which samples and readings may still be added. */
 const OPEN: readonly LotStatus[] = ['on_hold', 'inspecting', 'awaiting_decision'];
 
-export function assertLotOpen(lot: Lot): void {
+export function assertLotOpen(lot: Pick<Lot, 'status' | 'poNumber'>): void {
   if (!OPEN.includes(lot.status)) {
     throw new UnprocessableEntityException(
       `Lot ${lot.poNumber} is already ${lot.status.replace(/_/g, ' ')}: no more samples or readings can be added to a decided lot.`,
     );
   }
+}
+
+/** What the evidence counts need of a lot. */
+export interface LotRef {
+  id: number;
+  productId: number;
+  sampleSize: number;
+}
+
+export interface Evidence {
+  hasReading: boolean;
+  allPlannedUnitsRead: boolean;
 }
 
 /**
@@ -23,10 +35,7 @@ export function assertLotOpen(lot: Lot): void {
  * by the database, so a lot with hundreds of readings costs three small queries, not the
  * loading of all its samples and readings.
  */
-export async function evidenceOf(
-  em: EntityManager,
-  lot: Lot,
-): Promise<{ hasReading: boolean; allPlannedUnitsRead: boolean }> {
+export async function evidenceOf(em: EntityManager, lot: LotRef): Promise<Evidence> {
   const sql = em as SqlEntityManager;
   const live = 'exists (select 1 from readings r where r.sample_id = s.id and r.voided = ?)';
   const [read] = await sql.execute<{ n: number | string }[]>(
@@ -37,14 +46,33 @@ export async function evidenceOf(
     `select count(*) as n from (select distinct s.seq, s.conductor_id from samples s
        join conductor_specs c on c.id = s.conductor_id
        where s.lot_id = ? and c.active = ? and s.seq >= 1 and s.seq <= ? and ${live}) t`,
-    [lot.id, true, lot.samplingPlan.sampleSize, false],
+    [lot.id, true, lot.sampleSize, false],
   );
   const [conductors] = await sql.execute<{ n: number | string }[]>(
     'select count(*) as n from conductor_specs c where c.product_id = ? and c.active = ?',
-    [lot.product.id, true],
+    [lot.productId, true],
   );
-  const needed = Number(conductors.n) * Math.max(0, lot.samplingPlan.sampleSize);
+  const needed = Number(conductors.n) * Math.max(0, lot.sampleSize);
   return { hasReading: Number(read.n) > 0, allPlannedUnitsRead: Number(units.n) >= needed };
+}
+
+/**
+ * The status a lot moves to after its evidence changed: on_hold → inspecting →
+ * awaiting_decision, and back to inspecting when a void leaves a planned unit unread —
+ * only before any decision (`hasDecision` is asked only then).
+ */
+export async function nextStatus(
+  before: LotStatus,
+  evidence: () => Promise<Evidence>,
+  hasDecision: () => Promise<boolean>,
+): Promise<LotStatus> {
+  if (!OPEN.includes(before)) return before;
+  const e = await evidence();
+  let next: LotStatus = before;
+  if (e.allPlannedUnitsRead) next = 'awaiting_decision';
+  else if (e.hasReading || before !== 'on_hold') next = 'inspecting';
+  if (before === 'awaiting_decision' && next !== before && (await hasDecision())) return before;
+  return next;
 }
 
 /**
@@ -59,19 +87,16 @@ export class LotStatusService {
 
   async refresh(em: EntityManager, lot: Lot, actor: RequestUser): Promise<void> {
     const before = lot.status;
-    let next = before;
-    if (before === 'on_hold' || before === 'inspecting' || before === 'awaiting_decision') {
-      const evidence = await evidenceOf(em, lot);
-      if (evidence.allPlannedUnitsRead) next = 'awaiting_decision';
-      else if (evidence.hasReading || before !== 'on_hold') next = 'inspecting';
-      if (
-        before === 'awaiting_decision' &&
-        next !== before &&
-        (await em.count(Decision, { lot }))
-      ) {
-        next = before;
-      }
-    }
+    const next = await nextStatus(
+      before,
+      () =>
+        evidenceOf(em, {
+          id: lot.id,
+          productId: lot.product.id,
+          sampleSize: lot.samplingPlan.sampleSize,
+        }),
+      async () => (await em.count(Decision, { lot })) > 0,
+    );
     lot.updatedAt = new Date();
     if (next !== before) {
       lot.status = next;

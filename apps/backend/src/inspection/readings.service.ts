@@ -14,6 +14,8 @@ import { assertLotOpen, LotStatusService } from './lot-status';
 import { computeReading, type ReadingInputs } from './reading-compute';
 import { assertUsableInstruments } from '../instruments/instruments.service';
 import { readingView } from './views';
+import { auditShapeOf, outcomeOf } from './reading-rules';
+import { asInstrument, ReadingWriter } from './reading-writer';
 
 /** The inputs of the reading's method; 400 naming any field another method uses. */
 export function methodInputs(dto: CreateReadingDto): ReadingInputs {
@@ -38,22 +40,13 @@ export class ReadingsService {
     private readonly em: EntityManager,
     private readonly audit: AuditService,
     private readonly lotStatus: LotStatusService,
+    private readonly writer: ReadingWriter,
   ) {}
 
+  /** One reading from the clerk's form: written by the SQL writer (see ReadingWriter). */
   async create(sampleId: number, dto: CreateReadingDto, actor: RequestUser) {
     const inputs = methodInputs(dto);
-    return this.em.transactional(async (tx) => {
-      const sample = await tx.findOneOrFail(
-        Sample,
-        { id: sampleId },
-        { populate: ['lot.product', 'conductor'] },
-      );
-      assertLotOpen(sample.lot);
-      const instruments = await assertUsableInstruments(tx, dto.instrumentIds, new Date());
-      const reading = await this.record(tx, sample, dto.method, inputs, instruments, actor);
-      await this.lotStatus.refresh(tx, sample.lot, actor);
-      return readingView(reading);
-    });
+    return this.writer.create(sampleId, dto.method, inputs, dto, actor);
   }
 
   /**
@@ -96,14 +89,14 @@ export class ReadingsService {
     });
     em.persist(reading);
     await em.flush();
-    const live = [...siblings, reading].sort((a, b) => a.id - b.id);
+    const live = [reading, ...siblings];
     await this.recomputeSiblings(em, sample, actor, reading.id, live);
     this.audit.record(em, actor, {
       action: 'reading.create',
       entityType: 'reading',
       entityId: reading.id,
       lotId: sample.lot.id,
-      after: auditShape(reading),
+      after: auditShapeOf(reading),
     });
     return reading;
   }
@@ -112,7 +105,7 @@ export class ReadingsService {
    * When a reading is added or voided, the sample's other live readings are computed again
    * with the readings that now stand: a material finding needs mass and resistance together,
    * and must follow when one of them arrives or is voided. Each changed reading is updated
-   * in place and audited as `reading.recompute`. `known`: the live readings, when the
+   * in place and audited as `reading.recompute`. `known`: the live readings, newest first (the order identification picks from), when the
    * caller has just read them (spares the query on every create).
    */
   private async recomputeSiblings(
@@ -124,7 +117,12 @@ export class ReadingsService {
   ) {
     await em.populate(sample, ['lot.product', 'conductor']);
     const live =
-      known ?? (await em.find(Reading, { sample, voided: false }, { orderBy: { id: 'asc' } }));
+      known ??
+      (await em.find(
+        Reading,
+        { sample, voided: false },
+        { orderBy: { takenAt: 'desc', id: 'desc' } },
+      ));
     for (const r of live.filter((x) => x.id !== exceptId)) {
       const others = live.filter((o) => o.id !== r.id);
       const computed = computeReading({
@@ -141,7 +139,7 @@ export class ReadingsService {
         })),
       });
       if (outcomeOf(computed) === outcomeOf(r)) continue;
-      const before = auditShape(r);
+      const before = auditShapeOf(r);
       Object.assign(r, computed);
       this.audit.record(em, actor, {
         action: 'reading.recompute',
@@ -149,7 +147,7 @@ export class ReadingsService {
         entityId: r.id,
         lotId: sample.lot.id,
         before,
-        after: auditShape(r),
+        after: auditShapeOf(r),
       });
     }
     await em.flush();
@@ -167,7 +165,7 @@ export class ReadingsService {
           `This reading was already voided on ${reading.voidedAt?.toISOString().slice(0, 10)}: ${reading.voidReason}`,
         );
       }
-      const before = auditShape(reading);
+      const before = auditShapeOf(reading);
       reading.voided = true;
       reading.voidReason = dto.reason;
       reading.voidedBy = await tx.findOneOrFail(User, { id: actor.id });
@@ -180,35 +178,10 @@ export class ReadingsService {
         entityId: reading.id,
         lotId: reading.sample.lot.id,
         before,
-        after: auditShape(reading),
+        after: auditShapeOf(reading),
       });
       await this.lotStatus.refresh(tx, reading.sample.lot, actor);
       return readingView(reading);
     });
   }
-}
-
-/** A reading's instrument snapshot, as the resolution rules read it. */
-function asInstrument(s: InstrumentSnapshot): InstrumentLike {
-  return { ...s, kind: s.kind as InstrumentKind };
-}
-
-/** The computed part of a reading that a change of its siblings can alter. */
-function outcomeOf(r: Pick<Reading, 'identifiedMaterial' | 'materialMismatch' | 'verdict'>) {
-  return `${r.identifiedMaterial}|${r.materialMismatch}|${r.verdict}`;
-}
-
-function auditShape(r: Reading): Record<string, unknown> {
-  return {
-    sampleId: r.sample.id,
-    method: r.method,
-    inputs: r.inputs,
-    instrumentIds: r.instruments.map((i) => i.id),
-    areaMm2: r.areaMm2,
-    measuresAs: r.measuresAs,
-    identifiedMaterial: r.identifiedMaterial,
-    verdict: r.verdict,
-    voided: r.voided,
-    voidReason: r.voidReason,
-  };
 }

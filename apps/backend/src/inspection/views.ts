@@ -4,8 +4,44 @@ import { sampleVerdict } from './lot-evaluation';
 
 const person = (u: { id: number; name: string } | null) => (u ? { id: u.id, name: u.name } : null);
 
+/** A reading as stored: an entity, or the row the SQL writer has just written. */
+export interface ReadingFacts extends Pick<
+  Reading,
+  | 'id'
+  | 'method'
+  | 'inputs'
+  | 'instruments'
+  | 'areaMm2'
+  | 'uMm2'
+  | 'expandedUMm2'
+  | 'areaRatio'
+  | 'measuresAs'
+  | 'identifiedMaterial'
+  | 'materialMismatch'
+  | 'verdict'
+  | 'result'
+  | 'takenAt'
+  | 'voided'
+  | 'voidReason'
+  | 'voidedAt'
+> {
+  sampleId: number;
+  takenBy: { id: number; name: string } | null;
+  voidedBy: { id: number; name: string } | null;
+}
+
 /** Reading as docs/api-conventions.md describes it. */
 export function readingView(r: Reading) {
+  return readingFactsView({
+    ...r,
+    id: r.id,
+    sampleId: r.sample.id,
+    takenBy: r.takenBy,
+    voidedBy: r.voidedBy,
+  });
+}
+
+export function readingFactsView(r: ReadingFacts) {
   const result = r.result as {
     reasons?: string[];
     lengthForConclusiveMm?: number | null;
@@ -14,7 +50,7 @@ export function readingView(r: Reading) {
   };
   return {
     id: r.id,
-    sampleId: r.sample.id,
+    sampleId: r.sampleId,
     method: r.method,
     inputs: r.inputs,
     instruments: r.instruments as InstrumentSnapshot[],

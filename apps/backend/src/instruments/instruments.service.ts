@@ -22,23 +22,33 @@ import {
 
 const SORTS = ['name', 'kind', 'serial', 'calibrationDueOn'] as const;
 
+/** What the usability rule reads of a register row. */
+export type InstrumentRecord = Pick<
+  Instrument,
+  | 'id'
+  | 'kind'
+  | 'name'
+  | 'serial'
+  | 'resolution'
+  | 'resolutionUnit'
+  | 'calibrationDueOn'
+  | 'active'
+>;
+
 /**
  * Refuses instruments that may not be used on `on`: unknown, retired or past their
  * calibration due date (ISO 9001 7.1.5: measuring equipment must be fit for its purpose).
- * Returns the instruments in the order of `ids`. Usable with any EntityManager, so a
- * reading can check inside its own unit of work.
+ * `found`: the register rows of `ids` that exist. Returns them in the order of `ids`.
  */
-export async function assertUsableInstruments(
-  em: EntityManager,
+export function usableInstruments<T extends InstrumentRecord>(
   ids: readonly number[],
+  found: readonly T[],
   on: Date,
-): Promise<Instrument[]> {
-  const unique = [...new Set(ids)];
-  const found = unique.length ? await em.find(Instrument, { id: { $in: unique } }) : [];
+): T[] {
   const byId = new Map(found.map((i) => [i.id, i]));
   const day = isoDate(on);
   const problems: string[] = [];
-  for (const id of unique) {
+  for (const id of new Set(ids)) {
     const i = byId.get(id);
     if (!i) {
       problems.push(`Instrument #${id} is not in the instrument register.`);
@@ -54,7 +64,21 @@ export async function assertUsableInstruments(
     }
   }
   if (problems.length) throw new UnprocessableEntityException(problems.join(' '));
-  return ids.map((id) => byId.get(id) as Instrument);
+  return ids.map((id) => byId.get(id) as T);
+}
+
+/**
+ * `usableInstruments` on the register rows read through `em`, so a reading can check
+ * inside its own unit of work.
+ */
+export async function assertUsableInstruments(
+  em: EntityManager,
+  ids: readonly number[],
+  on: Date,
+): Promise<Instrument[]> {
+  const unique = [...new Set(ids)];
+  const found = unique.length ? await em.find(Instrument, { id: { $in: unique } }) : [];
+  return usableInstruments(ids, found, on);
 }
 
 @Injectable()

@@ -5,7 +5,7 @@ import {
   UnprocessableEntityException,
 } from '@nestjs/common';
 import { EntityManager, raw } from '@mikro-orm/core';
-import type { QueryBuilder, SqlEntityManager } from '@mikro-orm/sqlite';
+import type { QueryBuilder, SqlEntityManager } from '@mikro-orm/knex';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
 import { addDays } from '../common/calendar';

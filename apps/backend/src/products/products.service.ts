@@ -1,6 +1,6 @@
 import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
-import type { SqlEntityManager } from '@mikro-orm/sqlite';
+import type { SqlEntityManager } from '@mikro-orm/knex';
 import { initialInspectionState } from '@gaugeproof/standards';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';

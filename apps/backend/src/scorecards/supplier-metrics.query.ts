@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
-import type { Knex, SqlEntityManager } from '@mikro-orm/sqlite';
+import type { Knex, SqlEntityManager } from '@mikro-orm/knex';
 import type { ScorecardRange } from './scorecard-range';
 import { dateParam, millisBetween, monthIndex, num, numOrNull, sizesShort } from './scorecard-sql';
 
