@@ -48,7 +48,13 @@ export class AuthGuard implements CanActivate {
     } catch {
       throw new UnauthorizedException('Your session has ended; sign in again');
     }
-    const user = await this.em.fork().findOne(User, { id: claims.sub });
+    // Every signed-in request passes here: one plain query, no entity to hydrate and track.
+    const [user] = await this.em
+      .getConnection()
+      .execute<Pick<User, 'id' | 'email' | 'name' | 'role' | 'active'>[]>(
+        'select id, email, name, role, active from users where id = ?',
+        [claims.sub],
+      );
     if (!user || !user.active) throw new UnauthorizedException('This account cannot sign in');
     if (!bearer && MUTATING.has(req.method) && !this.sameOrigin(req)) {
       throw new ForbiddenException('Request refused: it did not come from Gaugeproof itself');
