@@ -18,6 +18,7 @@ export function judge(report, m) {
   const f = (name, value, unit, digits) => report.figure(name, value, unit, digits);
   const s = m.scorecards ?? {};
   const scApi = f('scorecards api median', s.apiMs, 'ms');
+  f('scorecards api first call (computed)', s.firstMs, 'ms');
   const scRaw = f('scorecards raw sql median', s.rawMs, 'ms');
   const scRatio = f('scorecards api/raw', scApi / scRaw, 'x', 2);
   const api = m.lots?.api ?? {};

@@ -14,7 +14,12 @@ export async function scorecardsPhase({ base, token, dbPath, calls }) {
   const to = day(Date.now());
   const from = day(Date.now() - 364 * DAY);
   const path = `/api/scorecards?from=${from}&to=${to}`;
-  await getJson(base, path, token); // warm-up
+  // The first call computes the six aggregates; the server keeps the ranking until the
+  // next write (ScorecardCache), so the 20 timed calls after it are what a buyer browsing
+  // the screen gets. Both are printed.
+  const c0 = performance.now();
+  await getJson(base, path, token);
+  const firstMs = performance.now() - c0;
   const api = [];
   for (let i = 0; i < calls; i++) {
     const t0 = performance.now();
@@ -38,7 +43,7 @@ export async function scorecardsPhase({ base, token, dbPath, calls }) {
     if (out.suppliers.length === 0) throw new Error('raw scorecards: no suppliers');
   }
   db.close();
-  return { apiMs: median(api), rawMs: median(raw) };
+  return { apiMs: median(api), rawMs: median(raw), firstMs };
 }
 
 /** The lot list query of the benchmark: decided lots of suppliers named like the main one. */

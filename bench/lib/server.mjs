@@ -93,8 +93,16 @@ export async function signIn(base, email, password) {
   return body.accessToken;
 }
 
+/**
+ * GET as JSON. A kept-alive socket the server closed while idle (a long raw-SQL phase
+ * between two calls) fails as "fetch failed" before any request was sent: tried once more.
+ */
 export async function getJson(base, path, token) {
-  const res = await fetch(`${base}${path}`, { headers: { authorization: `Bearer ${token}` } });
+  const get = () => fetch(`${base}${path}`, { headers: { authorization: `Bearer ${token}` } });
+  const res = await get().catch((e) => {
+    if (e instanceof TypeError) return get();
+    throw e;
+  });
   if (!res.ok)
     throw new Error(`GET ${path} answered ${res.status}: ${(await res.text()).slice(0, 300)}`);
   return res.json();

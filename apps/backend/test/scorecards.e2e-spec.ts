@@ -3,6 +3,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CorrectiveActionStatus } from '../src/corrective-actions/entities/corrective-action.entity';
 import { AuditEvent } from '../src/audit/entities/audit-event.entity';
 import type { ScorecardRow, SupplierScorecard } from '../src/scorecards/scorecard.types';
+import { Sample } from '../src/inspection/entities/sample.entity';
+import { createBench, GOOD_4AWG_MASS } from './helpers/fixtures';
 import { ScorecardFixtures } from './helpers/scorecard-fixtures';
 import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
 
@@ -296,5 +298,27 @@ describe('CSV export', () => {
     expect(lines).toContain('trend,2025-01,lots,2');
     expect(lines).toContain(`worstLot,${ids.lots.L2},measuresAs,8 AWG`);
     expect(lines).toContain('product,SCA-4P,severity,tightened');
+  });
+});
+
+// Last in the file: it adds a supplier, lots and readings the counts above do not expect.
+describe('the cached ranking', () => {
+  it('shows every write at once: an ORM flush and a reading entered through the form', async () => {
+    const f = new ScorecardFixtures(t);
+    const before = await list(); // computed and cached
+    expect(await list()).toEqual(before); // served from the cache
+    const d = await f.supplier('Scorecard Test Delta Spools', 'SC-D');
+    expect(rowOf(await list(), d.id)).toMatchObject({ lotsReceived: 0, readings: 0 });
+    const p = await f.product(d.id, 'SCD-4P', [{ purpose: 'power', ...AWG4 }]);
+    const lotId = await f.lot(p, '2025-03-20T08:00:00.000Z', 'inspecting', [[0]]);
+    expect(rowOf(await list(), d.id)).toMatchObject({ lotsReceived: 1, readings: 0 });
+    const bench = await createBench(t);
+    const [sample] = await t.app.get(MikroORM).em.fork().find(Sample, { lot: lotId });
+    const res = await t.http
+      .post(`/api/samples/${sample.id}/readings`)
+      .set('Authorization', `Bearer ${await t.token(DEMO.clerk)}`)
+      .send({ ...GOOD_4AWG_MASS, instrumentIds: [bench.balance.id, bench.rule.id] });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    expect(rowOf(await list(), d.id)).toMatchObject({ lotsReceived: 1, readings: 1 });
   });
 });

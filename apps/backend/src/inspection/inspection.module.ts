@@ -1,5 +1,4 @@
 import { Module } from '@nestjs/common';
-import { LotsModule } from '../lots/lots.module';
 import { InspectionController } from './inspection.controller';
 import { LotDetailController } from './lot-detail.controller';
 import { LotDetailService } from './lot-detail.service';
@@ -13,7 +12,6 @@ import { SamplesService } from './samples.service';
 
 /** Samples, readings, their computation, the lot's status flow and its evaluation. */
 @Module({
-  imports: [LotsModule],
   controllers: [InspectionController, LotDetailController, ReadingsImportController],
   providers: [
     LotEvaluationService,

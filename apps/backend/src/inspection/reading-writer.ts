@@ -6,7 +6,7 @@ import { AuditService, type AuditEntry } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
 import { usableInstruments, type InstrumentRecord } from '../instruments/instruments.service';
 import type { InstrumentKind } from '../instruments/entities/instrument.entity';
-import { LotCountCache } from '../lots/lot-count-cache';
+import { announceSqlWrite } from '../common/sql-writes';
 import type { LotStatus } from '../lots/entities/lot.entity';
 import type { CreateReadingDto } from './dto/create-reading.dto';
 import type { InstrumentSnapshot, ReadingMethod, Verdict } from './entities/reading.entity';
@@ -80,7 +80,6 @@ export class ReadingWriter {
   constructor(
     private readonly em: EntityManager,
     private readonly audit: AuditService,
-    private readonly lotCounts: LotCountCache,
   ) {}
 
   async create(
@@ -90,7 +89,7 @@ export class ReadingWriter {
     dto: CreateReadingDto,
     actor: RequestUser,
   ) {
-    const moved = await this.em.transactional(async (em) => {
+    const view = await this.em.transactional(async (em) => {
       const sql = em as SqlEntityManager;
       const [sample] = await sql.execute<SampleRow[]>(
         `select s.lot_id as "lotId", l.status, l.po_number as "poNumber", l.product_id as "productId",
@@ -192,7 +191,7 @@ export class ReadingWriter {
           after: auditShape({ ...shaped, ...again }),
         });
       }
-      const status = await this.lotStatus(sql, sample, events);
+      await this.lotStatus(sql, sample, events);
       await this.audit.append(em, actor, events);
       const view = readingFactsView({
         ...reading,
@@ -201,10 +200,10 @@ export class ReadingWriter {
         voidedBy: null,
         voidedAt: null,
       });
-      return { view, status };
+      return view;
     });
-    if (moved.status.before !== moved.status.after) this.lotCounts.invalidate();
-    return moved.view;
+    announceSqlWrite(['Reading', 'Lot', 'AuditEvent']);
+    return view;
   }
 
   private async instruments(sql: SqlEntityManager, ids: readonly number[]) {
@@ -258,7 +257,6 @@ export class ReadingWriter {
         after: { status: after },
       });
     }
-    return { before, after };
   }
 }
 

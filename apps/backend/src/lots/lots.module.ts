@@ -6,6 +6,6 @@ import { LotsService } from './lots.service';
 @Module({
   controllers: [LotsController],
   providers: [LotsService, LotCountCache],
-  exports: [LotsService, LotCountCache],
+  exports: [LotsService],
 })
 export class LotsModule {}

@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { ScorecardCache } from './scorecard-cache';
 import { ScorecardExportService } from './scorecard-export.service';
 import { ScorecardsController } from './scorecards.controller';
 import { ScorecardsService } from './scorecards.service';
@@ -8,6 +9,12 @@ import { SupplierMetricsQuery } from './supplier-metrics.query';
 /** Supplier scorecards: SQL aggregates over lots, readings, SCARs and returns; CSV. */
 @Module({
   controllers: [ScorecardsController],
-  providers: [ScorecardsService, ScorecardExportService, SupplierMetricsQuery, SupplierDetailQuery],
+  providers: [
+    ScorecardCache,
+    ScorecardsService,
+    ScorecardExportService,
+    SupplierMetricsQuery,
+    SupplierDetailQuery,
+  ],
 })
 export class ScorecardsModule {}

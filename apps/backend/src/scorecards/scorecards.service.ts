@@ -4,6 +4,7 @@ import { isoDate } from '../common/calendar';
 import { CONDUCTOR_PURPOSES } from '../products/entities/conductor-spec.entity';
 import { Supplier } from '../suppliers/entities/supplier.entity';
 import { assembleRow, compareWorstFirst, type SupplierIdentity } from './scorecard-assemble';
+import { ScorecardCache } from './scorecard-cache';
 import type { ScorecardRange } from './scorecard-range';
 import type { ScorecardList, ScorecardRow, SupplierScorecard } from './scorecard.types';
 import { SupplierDetailQuery } from './supplier-detail.query';
@@ -20,6 +21,7 @@ export class ScorecardsService {
     private readonly em: EntityManager,
     private readonly metrics: SupplierMetricsQuery,
     private readonly detail: SupplierDetailQuery,
+    private readonly cache: ScorecardCache,
   ) {}
 
   private async rows(range: ScorecardRange, suppliers: SupplierIdentity[], supplierId?: number) {
@@ -42,8 +44,16 @@ export class ScorecardsService {
     );
   }
 
-  /** One row per supplier, suppliers without lots included; worst first. */
-  async list(range: ScorecardRange): Promise<ScorecardList> {
+  /**
+   * One row per supplier, suppliers without lots included; worst first. Kept until the next
+   * write to what it counts (ScorecardCache); the day is part of the key (overdue SCARs).
+   */
+  list(range: ScorecardRange): Promise<ScorecardList> {
+    const key = `${range.start.toISOString()}|${range.end.toISOString()}|${isoDate(new Date())}`;
+    return this.cache.list(key, () => this.computeList(range));
+  }
+
+  private async computeList(range: ScorecardRange): Promise<ScorecardList> {
     const suppliers = await this.em.find(
       Supplier,
       {},

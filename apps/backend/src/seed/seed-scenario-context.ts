@@ -7,7 +7,6 @@ import { InspectionStreams } from '../decisions/inspection-streams';
 import { LotEvaluationService } from '../inspection/lot-evaluation';
 import { LotStatusService } from '../inspection/lot-status';
 import { ReadingWriter } from '../inspection/reading-writer';
-import { LotCountCache } from '../lots/lot-count-cache';
 import { ReadingsService } from '../inspection/readings.service';
 import { SamplesService } from '../inspection/samples.service';
 import { LotsService } from '../lots/lots.service';
@@ -92,12 +91,7 @@ export async function scenarioContext(
     audit,
     lots: new LotsService(em, audit),
     samples: new SamplesService(em, audit),
-    readings: new ReadingsService(
-      em,
-      audit,
-      lotStatus,
-      new ReadingWriter(em, audit, new LotCountCache(em)),
-    ),
+    readings: new ReadingsService(em, audit, lotStatus, new ReadingWriter(em, audit)),
     lotStatus,
     evaluations,
     decisions: new DecisionsService(em, audit, evaluations, new InspectionStreams(audit)),
