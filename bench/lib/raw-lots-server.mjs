@@ -1,11 +1,18 @@
 // The comparison server: node:http + better-sqlite3 answering the lot list query on the
 // same file, with the LotSummary shape. Run as a child process: node raw-lots-server.mjs DB.
+// Like the API it keeps the total and the status share per filter set (nothing writes
+// during the phase), so the two differ by framework and ORM, not by what they compute.
 import { createServer } from 'node:http';
 import Database from 'better-sqlite3';
 import { lotListQuery } from './raw-sql.mjs';
 
 const db = new Database(process.argv[2], { readonly: true, fileMustExist: true });
 const cache = new Map();
+const totals = new Map();
+const remembered = (key, compute) => {
+  if (!totals.has(key)) totals.set(key, compute());
+  return totals.get(key);
+};
 const prepared = (sql) => {
   if (!cache.has(sql)) cache.set(sql, db.prepare(sql));
   return cache.get(sql);
@@ -17,9 +24,17 @@ const server = createServer((req, res) => {
   const pageSize = Number(url.searchParams.get('pageSize') ?? 25);
   const statuses = (url.searchParams.get('status') ?? '').split(',').filter(Boolean);
   const q = url.searchParams.get('q') ?? '';
-  const query = lotListQuery({ statuses, q, page, pageSize });
+  const probe = lotListQuery({ statuses, q, page, pageSize, walk: false });
+  const share = remembered(
+    `share ${statuses}`,
+    () => prepared(probe.share.sql).get(...probe.share.bindings).share,
+  );
+  const query = lotListQuery({ statuses, q, page, pageSize, walk: share >= 0.25 });
   const rows = prepared(query.items.sql).all(...query.items.bindings);
-  const total = prepared(query.count.sql).get(...query.count.bindings).n;
+  const total = remembered(
+    `total ${statuses} ${q}`,
+    () => prepared(query.count.sql).get(...query.count.bindings).n,
+  );
   const items = rows.map((r) => ({
     id: r.id,
     status: r.status,

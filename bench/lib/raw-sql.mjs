@@ -79,19 +79,29 @@ export function scorecardsRaw(db, { start, end, today }) {
 }
 
 /**
- * The lot list: status filter, text filter over PO, slip, lot code, SKU and supplier name,
- * written as the lots service writes it (lower(coalesce(…)) like ? escape '\\').
+ * The lot list: status filter, text filter, newest first, written as the lots service
+ * writes it: supplier names and SKUs looked up in their tables, PO, packing slip and
+ * supplier lot code matched by their start, and (`walk`, when the statuses hold a large
+ * share of the lots) the status test kept off the indexes so the page walks received-at.
  */
-export function lotListQuery({ statuses, q, page, pageSize }) {
-  const like = `%${q
+export function lotListQuery({ statuses, q, page, pageSize, walk }) {
+  const escaped = q
     .trim()
     .toLowerCase()
-    .replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-  const text = ['l.po_number', 'l.packing_slip', 'l.supplier_lot_code', 'p.sku', 's.name']
-    .map((col) => `lower(coalesce(${col}, '')) like ? escape '\\'`)
-    .join(' or ');
-  const where = `l.status in (${statuses.map(() => '?').join(', ')}) and (${text})`;
-  const bindings = [...statuses, like, like, like, like, like];
+    .replace(/[\\%_]/g, (c) => `\\${c}`);
+  const any = `%${escaped}%`;
+  const start = `${escaped}%`;
+  const like = (col) => `lower(${col}) like ? escape '\\'`;
+  const text = [
+    `l.supplier_id in (select id from suppliers where ${like('name')})`,
+    `l.product_id in (select id from products where ${like('sku')})`,
+    like('l.po_number'),
+    like('l.packing_slip'),
+    like('l.supplier_lot_code'),
+  ].join(' or ');
+  const status = walk ? "coalesce(l.status, '')" : 'l.status';
+  const where = `${status} in (${statuses.map(() => '?').join(', ')}) and (${text})`;
+  const bindings = [...statuses, any, any, start, start, start];
   const from = `from lots l join products p on p.id = l.product_id join suppliers s on s.id = l.supplier_id`;
   return {
     items: {
@@ -104,5 +114,10 @@ export function lotListQuery({ statuses, q, page, pageSize }) {
       bindings: [...bindings, pageSize, (page - 1) * pageSize],
     },
     count: { sql: `select count(*) as n ${from} where ${where}`, bindings },
+    share: {
+      sql: `select (select count(*) from lots where status in (${statuses.map(() => '?').join(', ')})) * 1.0 /
+                   max(1, (select count(*) from lots)) as share`,
+      bindings: statuses,
+    },
   };
 }
