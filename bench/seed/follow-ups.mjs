@@ -61,7 +61,41 @@ export function seedReturns(w, r, rejected, users, now) {
     });
     returnIds.push(id);
   }
+  const recall = seedRecall(w, rejected, users, now, counters);
+  if (recall) returnIds.push(recall);
   return returnIds;
+}
+
+/**
+ * A recall: the supplier with the most rejected lots still in stock sends them all back on
+ * one draft return, hundreds of lots at once (what a distributor does on finding a brand's
+ * cable is CCA), so the return export is measured on a return of realistic worst size.
+ */
+function seedRecall(w, rejected, users, now, counters) {
+  const kept = groupBy(
+    rejected.filter((x) => !x.returned),
+    (x) => x.supplierId,
+  );
+  const lots = [...kept.values()].sort((a, b) => b.length - a.length)[0];
+  if (!lots) return null;
+  const id = w.nextId('vendor_returns');
+  const buyer = users.purchasing[0];
+  const costs = { inspectionHours: lots.length * 0.5, hourlyRate: 48, freight: 900 };
+  w.insert('vendor_returns', {
+    id,
+    number: numbered(counters, 'RTV', now),
+    supplier_id: lots[0].supplierId,
+    rma_number: null,
+    notes: 'Recall: every rejected lot still in stock',
+    status: 'draft',
+    costs,
+    chargeback_total: costs.inspectionHours * costs.hourlyRate + costs.freight,
+    created_by_id: buyer.id,
+    created_at: now - DAY,
+    updated_at: now - DAY,
+  });
+  for (const l of lots) w.insert('vendor_return_lots', { vendor_return_id: id, lot_id: l.lotId });
+  return id;
 }
 
 /** A SCAR per supplier and quarter with rejections; responses come in a few weeks later. */

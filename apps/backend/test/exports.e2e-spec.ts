@@ -8,7 +8,10 @@ import { Reading } from '../src/inspection/entities/reading.entity';
 import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
 import { seedExportLot, type ExportLot } from './helpers/export-fixtures';
 
-const parse = (text: string) => Papa.parse<string[]>(text.trim(), { skipEmptyLines: true }).data;
+const parse = (text: string) => {
+  expect(text.startsWith('\ufeff')).toBe(true); // so spreadsheets read "mm²" right
+  return Papa.parse<string[]>(text.slice(1).trim(), { skipEmptyLines: true }).data;
+};
 const url = (supplierId: number, query = '') =>
   `/api/suppliers/${supplierId}/readings/export.csv${query}`;
 

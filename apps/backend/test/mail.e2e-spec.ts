@@ -75,8 +75,8 @@ describe('e-mail through a real MailDev', () => {
       )
     ).toString('utf8');
     const rows = Papa.parse<string[]>(csv.replace(/^\ufeff/, '').trim(), { newline: '\r\n' }).data;
-    expect(rows[0][0]).toBe('lot');
-    expect(rows[1].slice(0, 2)).toEqual([String(lot.id), lot.poNumber]);
+    expect(rows[0].slice(0, 3)).toEqual(['readingId', 'lotId', 'poNumber']);
+    expect(rows[1].slice(1, 3)).toEqual([String(lot.id), lot.poNumber]);
     const pdf = await mail.attachment(
       email.id,
       names.find((n) => n.endsWith('.pdf'))!,

@@ -213,50 +213,54 @@ describe('GET /api/returns/:id/export.csv', () => {
       `attachment; filename="${ret.number}-readings.csv"`,
     );
     const rows = parseCsv(res.text);
+    // The readings export's own columns (exports/readings-csv.ts).
     expect(rows[0]).toEqual([
-      'lot',
-      'po',
+      'readingId',
+      'lotId',
+      'poNumber',
       'supplier',
       'sku',
-      'label',
+      'receivedAt',
       'unit',
-      'unitRef',
       'conductor',
+      'label',
       'method',
       'inputs',
       'areaMm2',
-      'expandedUMm2',
+      'UMm2',
       'areaRatio',
       'measuresAs',
-      'material',
+      'identifiedMaterial',
       'verdict',
+      'takenAt',
       'voided',
       'voidReason',
-      'takenAt',
     ]);
     const plan = lots[0].samplingPlan;
     expect(rows).toHaveLength(1 + plan.sampleSize * 2); // every unit, power and ground
     const first = rows[1];
-    expect(first.slice(0, 10)).toEqual([
+    expect(first.slice(1, 5)).toEqual([
       String(lots[0].id),
       lots[0].poNumber,
       `'=HYPERLINK("x")`,
       expect.any(String),
-      '4 AWG',
-      '1',
+    ]);
+    expect(first.slice(6, 11)).toEqual([
       'K-1',
       'power',
+      '4 AWG',
       'mass',
       expect.stringMatching(/^massG=[\d.]+; lengthMm=500$/),
     ]);
-    expect(first.slice(10, 17)).toEqual([
+    expect(first.slice(11, 19)).toEqual([
       '8.4',
       '0.24',
       '0.397',
       '8 AWG',
       'copper',
       'nonconforming',
-      'no',
+      expect.any(String),
+      'false',
     ]);
     expect(res.text).toContain(`"'=HYPERLINK(""x"")"`);
     expect(res.text).not.toMatch(/,=HYPERLINK|,"=HYPERLINK/);

@@ -1,6 +1,7 @@
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
-import { csvBuffer, csvChunks, csvStream, neutralise } from './csv';
+import fc from 'fast-check';
+import { csvBuffer, csvChunks, csvLines, csvStream, neutralise } from './csv';
 
 describe('csv', () => {
   it('neutralises cells a spreadsheet would run as formulas (OWASP CSV injection)', () => {
@@ -40,5 +41,26 @@ describe('csv', () => {
     let text = '';
     for await (const chunk of csvStream(['n'], [[[1]], [[2]]])) text += String(chunk);
     expect(text).toBe('\ufeffn\r\n1\r\n2\r\n');
+  });
+});
+
+describe('csvLines', () => {
+  it('writes what papaparse reads back, for any cells (RFC 4180 quoting)', () => {
+    const cell = fc.oneof(
+      fc.string({ unit: fc.constantFrom('a', ' ', ',', '"', '\r', '\n', 'é', '=', '-', 'x') }),
+      fc.double({ noNaN: true, noDefaultInfinity: true }),
+      fc.boolean(),
+      fc.constant(null),
+    );
+    fc.assert(
+      fc.property(
+        fc.array(fc.array(cell, { minLength: 2, maxLength: 5 }), { minLength: 1 }),
+        (rows) => {
+          const text = csvLines(rows);
+          const back = Papa.parse<string[]>(text.slice(0, -2), { newline: '\r\n' }).data;
+          expect(back).toEqual(rows.map((r) => r.map((c) => String(neutralise(c)))));
+        },
+      ),
+    );
   });
 });

@@ -1,4 +1,3 @@
-import Papa from 'papaparse';
 import { Readable } from 'node:stream';
 
 export type CsvCell = string | number | boolean | null | undefined;
@@ -17,12 +16,34 @@ export function neutralise(value: CsvCell): string | number | boolean {
   return value;
 }
 
-/** One block of CSV lines (CRLF, RFC 4180 quoting by papaparse), each ending in CRLF. */
-function lines(rows: readonly CsvRow[]): string {
-  if (rows.length === 0) return '';
-  const data = rows.map((r) => r.map(neutralise));
-  return `${Papa.unparse(data, { newline: '\r\n', header: false })}\r\n`;
+/**
+ * A field needs quotes when it holds a delimiter, quote or line break (RFC 4180 §2.6), or
+ * starts or ends with white space (which spreadsheet programs would otherwise trim).
+ */
+const NEEDS_QUOTES = /[",\r\n]|^\s|\s$/;
+
+/** One field as RFC 4180 writes it: quoted when needed, inner quotes doubled (§2.7). */
+function field(value: CsvCell): string {
+  const v = neutralise(value);
+  if (typeof v !== 'string') return String(v);
+  return NEEDS_QUOTES.test(v) ? `"${v.replace(/"/g, '""')}"` : v;
 }
+
+/**
+ * One block of CSV lines (CRLF), each ending in CRLF. Written here rather than with
+ * papaparse's unparse, which took 15 µs a row of the readings export (three quarters of
+ * the export's own time); papaparse still reads every CSV back in the tests.
+ */
+export function csvLines(rows: readonly CsvRow[]): string {
+  let out = '';
+  for (const r of rows) {
+    for (let i = 0; i < r.length; i++) out += (i ? ',' : '') + field(r[i]);
+    out += '\r\n';
+  }
+  return out;
+}
+
+const lines = csvLines;
 
 /**
  * CSV text produced block by block: the header, then each block of rows the source yields,

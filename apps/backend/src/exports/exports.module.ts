@@ -7,5 +7,6 @@ import { ReadingsExportService } from './readings-export.service';
 @Module({
   controllers: [ExportsController],
   providers: [ReadingsExportService, ReadingsExportQuery],
+  exports: [ReadingsExportService],
 })
 export class ExportsModule {}

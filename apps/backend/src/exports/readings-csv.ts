@@ -1,4 +1,4 @@
-import Papa from 'papaparse';
+import { csvLines as lines, type CsvCell } from '../common/csv';
 import type { ExportedReading } from './readings-export.query';
 
 /** Columns of the readings export, in order. */
@@ -6,6 +6,7 @@ export const READING_COLUMNS = [
   'readingId',
   'lotId',
   'poNumber',
+  'supplier',
   'sku',
   'receivedAt',
   'unit',
@@ -24,8 +25,6 @@ export const READING_COLUMNS = [
   'voidReason',
 ] as const;
 
-type Cell = string | number | boolean | null;
-
 /** `massG=76.1; lengthMm=1000` in the order the clerk entered them. */
 export function inputsText(inputs: Record<string, number>): string {
   return Object.entries(inputs)
@@ -33,11 +32,12 @@ export function inputsText(inputs: Record<string, number>): string {
     .join('; ');
 }
 
-function cells(r: ExportedReading): Cell[] {
+function cells(r: ExportedReading): CsvCell[] {
   return [
     r.id,
     r.lotId,
     r.poNumber,
+    r.supplier,
     r.sku,
     r.receivedAt.toISOString(),
     r.unitRef ?? `Unit ${r.seq}`,
@@ -57,17 +57,12 @@ function cells(r: ExportedReading): Cell[] {
   ];
 }
 
-/**
- * CSV lines (CRLF) with the formula-injection guard: a text cell starting with = + - @ tab
- * or CR gets a leading apostrophe so a spreadsheet shows it as text (OWASP "CSV injection";
- * papaparse's escapeFormulae uses exactly that set). Numbers stay numbers.
- */
+/** CSV lines (CRLF) with the formula-injection guard of common/csv.ts; numbers stay numbers. */
 export function csvLines(rows: readonly ExportedReading[]): string {
-  if (rows.length === 0) return '';
-  const data = rows.map((r) => cells(r).map((c) => (c === null ? '' : c)));
-  return `${Papa.unparse(data, { escapeFormulae: true, newline: '\r\n' })}\r\n`;
+  return lines(rows.map(cells));
 }
 
+/** The header line, after a UTF-8 byte-order mark so spreadsheets read "mm²" right. */
 export function csvHeader(): string {
-  return `${Papa.unparse([[...READING_COLUMNS]], { newline: '\r\n' })}\r\n`;
+  return `\ufeff${lines([READING_COLUMNS])}`;
 }

@@ -9,6 +9,7 @@ export interface ExportedReading {
   id: number;
   lotId: number;
   poNumber: string;
+  supplier: string;
   sku: string;
   receivedAt: Date;
   seq: number;
@@ -47,6 +48,9 @@ const toDate = (v: unknown): Date => {
 const toJson = (v: unknown): Record<string, number> =>
   typeof v === 'string' ? (JSON.parse(v) as Record<string, number>) : (v as Record<string, number>);
 
+/** Whose readings: one supplier's lots received in a range, or the lots on one return. */
+export type ExportScope = { supplierId: number; range: ExportRange } | { returnId: number };
+
 /** Where the previous page ended: the last lot and reading written. */
 export interface ExportCursor {
   lotId: number;
@@ -54,11 +58,11 @@ export interface ExportCursor {
 }
 
 /**
- * One supplier's readings in pages, in lot order then reading id, keyset on (lot id,
+ * The readings of a scope in pages, in lot order then reading id, keyset on (lot id,
  * reading id). Each page first takes the next ids through the indexes only (lots by
- * supplier in id order, samples by lot, readings by sample): a page costs the same at the
- * end of the file as at its start, and the wide reading rows of other suppliers are never
- * touched. Then it reads those rows.
+ * supplier, or by return, in id order; samples by lot; readings by sample): a page costs
+ * the same at the end of the file as at its start, and the wide reading rows of other
+ * lots are never touched. Then it reads those rows.
  */
 @Injectable()
 export class ReadingsExportQuery {
@@ -72,29 +76,33 @@ export class ReadingsExportQuery {
     return this.em.getPlatform().processDateProperty(d) as Knex.Value;
   }
 
-  async page(
-    supplierId: number,
-    range: ExportRange,
-    after: ExportCursor,
-  ): Promise<ExportedReading[]> {
+  async page(scope: ExportScope, after: ExportCursor): Promise<ExportedReading[]> {
     const k = this.knex;
     const ids = k('lots as l')
       .join('samples as s', 's.lot_id', 'l.id')
       .join('readings as r', 'r.sample_id', 's.id')
-      .where('l.supplier_id', supplierId)
       .andWhere('l.id', '>=', after.lotId)
       .andWhere((w) => w.where('l.id', '>', after.lotId).orWhere('r.id', '>', after.readingId))
       .select('r.id')
       .orderBy([{ column: 'l.id' }, { column: 'r.id' }])
       .limit(EXPORT_PAGE_SIZE);
-    if (range.start) ids.andWhere('l.received_at', '>=', this.date(range.start));
-    if (range.end) ids.andWhere('l.received_at', '<', this.date(range.end));
+    if ('returnId' in scope) {
+      ids
+        .join('vendor_return_lots as vrl', 'vrl.lot_id', 'l.id')
+        .andWhere('vrl.vendor_return_id', scope.returnId);
+    } else {
+      ids.andWhere('l.supplier_id', scope.supplierId);
+      const { start, end } = scope.range;
+      if (start) ids.andWhere('l.received_at', '>=', this.date(start));
+      if (end) ids.andWhere('l.received_at', '<', this.date(end));
+    }
     const idRows: Row[] = await ids;
     if (idRows.length === 0) return [];
     const rows: Row[] = await k('readings as r')
       .join('samples as s', 's.id', 'r.sample_id')
       .join('lots as l', 'l.id', 's.lot_id')
       .join('products as p', 'p.id', 'l.product_id')
+      .join('suppliers as su', 'su.id', 'l.supplier_id')
       .join('conductor_specs as cs', 'cs.id', 's.conductor_id')
       .whereIn(
         'r.id',
@@ -105,6 +113,7 @@ export class ReadingsExportQuery {
         'r.id',
         'l.id as lot_id',
         'l.po_number',
+        'su.name as supplier_name',
         'p.sku',
         'l.received_at',
         's.seq',
@@ -127,6 +136,7 @@ export class ReadingsExportQuery {
       id: Number(r.id),
       lotId: Number(r.lot_id),
       poNumber: String(r.po_number),
+      supplier: String(r.supplier_name),
       sku: String(r.sku),
       receivedAt: toDate(r.received_at),
       seq: Number(r.seq),

@@ -5,7 +5,7 @@ import type { RequestUser } from '../auth/request-user';
 import { addDays, isCalendarDate } from '../common/calendar';
 import { Supplier } from '../suppliers/entities/supplier.entity';
 import { csvHeader, csvLines } from './readings-csv';
-import { ReadingsExportQuery, type ExportRange } from './readings-export.query';
+import { ReadingsExportQuery, type ExportRange, type ExportScope } from './readings-export.query';
 
 export interface ReadingsExport {
   filename: string;
@@ -61,15 +61,16 @@ export class ReadingsExportService {
     const span = `${from ?? 'start'}_${to ?? 'latest'}`;
     return {
       filename: `readings-${supplier.code}-${span}.csv`.replace(/[^\w.-]/g, '_'),
-      chunks: this.chunks(supplier.id, range),
+      chunks: this.chunks({ supplierId: supplier.id, range }),
     };
   }
 
-  private async *chunks(supplierId: number, range: ExportRange): AsyncGenerator<string> {
+  /** The CSV of a scope: header, then one chunk per page of readings. */
+  async *chunks(scope: ExportScope): AsyncGenerator<string> {
     yield csvHeader();
     let after = { lotId: 0, readingId: 0 };
     for (;;) {
-      const page = await this.query.page(supplierId, range, after);
+      const page = await this.query.page(scope, after);
       if (page.length === 0) return;
       yield csvLines(page);
       const last = page[page.length - 1];

@@ -1,12 +1,12 @@
 import { Injectable, Logger } from '@nestjs/common';
 import { INSTALLER_CAUTIONS, largestSizeReached } from '@gaugeproof/standards';
-import type { Readable } from 'node:stream';
-import { csvBuffer, csvStream } from '../common/csv';
+import { Readable } from 'node:stream';
 import type { CrossSection } from '../documents/cross-section';
 import { evidencePackPdf, type EvidenceLot } from '../documents/evidence-pack';
 import { StorageService } from '../storage/storage.service';
 import type { VendorReturn } from './entities/vendor-return.entity';
-import { READING_CSV_HEADER, ReturnEvidence, type LotEvidence } from './return-evidence';
+import { ReadingsExportService } from '../exports/readings-export.service';
+import { ReturnEvidence, type LotEvidence } from './return-evidence';
 
 const OUTCOME: Record<string, string> = {
   accept: 'accepted',
@@ -48,14 +48,21 @@ export class ReturnDocuments {
   constructor(
     private readonly evidence: ReturnEvidence,
     private readonly storage: StorageService,
+    private readonly readings: ReadingsExportService,
   ) {}
 
+  /**
+   * One row per reading of every lot on the return, voided ones included: the readings
+   * export's own columns and paging, so a recall of hundreds of lots streams like a
+   * supplier's history.
+   */
   csvStream(ret: VendorReturn): Readable {
-    return csvStream(READING_CSV_HEADER, this.evidence.csvBlocks(ret));
+    return Readable.from(this.readings.chunks({ returnId: ret.id }), { objectMode: false });
   }
 
-  csvBuffer(ret: VendorReturn): Promise<Buffer> {
-    return csvBuffer(READING_CSV_HEADER, this.evidence.csvBlocks(ret));
+  /** The same CSV whole, for the e-mail attachment. */
+  async csvBuffer(ret: VendorReturn): Promise<Buffer> {
+    return toBuffer(this.csvStream(ret));
   }
 
   private async thumbnails(e: LotEvidence) {

@@ -5,7 +5,6 @@ import { Reading } from '../inspection/entities/reading.entity';
 import { LotEvaluationService, type Evaluation } from '../inspection/lot-evaluation';
 import { Lot } from '../lots/entities/lot.entity';
 import { Photo } from '../photos/entities/photo.entity';
-import type { CsvRow } from '../common/csv';
 import type { VendorReturn } from './entities/vendor-return.entity';
 
 export interface LotEvidence {
@@ -16,60 +15,7 @@ export interface LotEvidence {
   photos: Photo[];
 }
 
-export const READING_CSV_HEADER = [
-  'lot',
-  'po',
-  'supplier',
-  'sku',
-  'label',
-  'unit',
-  'unitRef',
-  'conductor',
-  'method',
-  'inputs',
-  'areaMm2',
-  'expandedUMm2',
-  'areaRatio',
-  'measuresAs',
-  'material',
-  'verdict',
-  'voided',
-  'voidReason',
-  'takenAt',
-] as const;
-
-function inputsText(inputs: Record<string, number>): string {
-  return Object.entries(inputs)
-    .map(([k, v]) => `${k}=${v}`)
-    .join('; ');
-}
-
-export function readingRow(lot: Lot, r: Reading): CsvRow {
-  const s = r.sample;
-  return [
-    lot.id,
-    lot.poNumber,
-    lot.supplier.name,
-    lot.product.sku,
-    s.conductor.gaugeLabel,
-    s.seq,
-    s.unitRef,
-    s.conductor.purpose,
-    r.method,
-    inputsText(r.inputs),
-    r.areaMm2,
-    r.expandedUMm2,
-    r.areaRatio,
-    r.measuresAs,
-    r.identifiedMaterial,
-    r.verdict,
-    r.voided ? 'yes' : 'no',
-    r.voidReason,
-    r.takenAt.toISOString(),
-  ];
-}
-
-/** Everything the evidence pack and the CSV show about the lots of a return. */
+/** Everything the evidence pack shows about the lots of a return. */
 @Injectable()
 export class ReturnEvidence {
   constructor(
@@ -99,18 +45,6 @@ export class ReturnEvidence {
       );
       if (rows.length) yield rows;
       if (rows.length < 500) return;
-    }
-  }
-
-  /** CSV rows, one per reading, lot by lot and block by block (nothing built in full). */
-  async *csvBlocks(ret: VendorReturn): AsyncGenerator<CsvRow[]> {
-    const em = this.em.fork();
-    for (const id of this.lotIds(ret)) {
-      const lot = await em.findOneOrFail(Lot, id, { populate: ['product', 'supplier'] });
-      for await (const block of this.readingBlocks(em, id)) {
-        yield block.map((r) => readingRow(lot, r));
-      }
-      em.clear();
     }
   }
 

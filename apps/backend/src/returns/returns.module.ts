@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { ExportsModule } from '../exports/exports.module';
 import { InspectionModule } from '../inspection/inspection.module';
 import { MailModule } from '../mail/mail.module';
 import { ReturnDocuments } from './return-documents';
@@ -9,7 +10,7 @@ import { ReturnsService } from './returns.service';
 
 /** Returns to vendor: rejected lots of one supplier, their evidence, CSV and e-mail. */
 @Module({
-  imports: [InspectionModule, MailModule],
+  imports: [ExportsModule, InspectionModule, MailModule],
   controllers: [ReturnsController],
   providers: [ReturnsService, ReturnEvidence, ReturnDocuments, ReturnMailService],
 })
