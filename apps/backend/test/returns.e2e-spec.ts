@@ -5,6 +5,7 @@ import Papa from 'papaparse';
 import type { Response } from 'superagent';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Jimp } from 'jimp';
+import { AuditEvent } from '../src/audit/entities/audit-event.entity';
 import { Photo } from '../src/photos/entities/photo.entity';
 import { StorageService } from '../src/storage/storage.service';
 import { User } from '../src/users/entities/user.entity';
@@ -264,6 +265,11 @@ describe('GET /api/returns/:id/export.csv', () => {
     ]);
     expect(res.text).toContain(`"'=HYPERLINK(""x"")"`);
     expect(res.text).not.toMatch(/,=HYPERLINK|,"=HYPERLINK/);
+    // The lot's timeline shows the evidence went out.
+    const events = await fx.em().find(AuditEvent, { action: 'return.export', lotId: lots[0].id });
+    expect(events.map((e) => [e.entityId, e.actorEmail, e.after])).toEqual([
+      [ret.id, DEMO.buyer, { number: ret.number, format: 'CSV' }],
+    ]);
   });
 });
 

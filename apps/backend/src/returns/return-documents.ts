@@ -56,7 +56,7 @@ export class ReturnDocuments {
    * export's own columns and paging, so a recall of hundreds of lots streams like a
    * supplier's history.
    */
-  csvStream(ret: VendorReturn): Readable {
+  csvStream(ret: { id: number }): Readable {
     return Readable.from(this.readings.chunks({ returnId: ret.id }), { objectMode: false });
   }
 

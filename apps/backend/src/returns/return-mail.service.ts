@@ -7,7 +7,7 @@ import type { MessageView } from '../mail/message-view';
 import { EmailReturnDto } from './dto/email-return.dto';
 import type { VendorReturn } from './entities/vendor-return.entity';
 import { ReturnDocuments } from './return-documents';
-import { ReturnsService } from './returns.service';
+import { ReturnsService, type ReturnRef } from './returns.service';
 
 const RELATED = 'vendor_return';
 
@@ -96,17 +96,21 @@ export class ReturnMailService implements OnModuleInit {
     return message;
   }
 
-  async recordExport(ret: VendorReturn, format: 'CSV' | 'evidence pack', actor: RequestUser) {
-    const em = this.em.fork();
-    for (const lot of ret.lots.getItems()) {
-      this.audit.record(em, actor, {
+  /**
+   * One `return.export` event per lot of the return, so each lot's timeline shows the
+   * evidence went out: one insert, however many lots a recall holds.
+   */
+  async recordExport(ret: ReturnRef, format: 'CSV' | 'evidence pack', actor: RequestUser) {
+    await this.audit.append(
+      this.em.fork(),
+      actor,
+      ret.lotIds.map((lotId) => ({
         action: 'return.export',
         entityType: 'vendor_return',
         entityId: ret.id,
-        lotId: lot.id,
+        lotId,
         after: { number: ret.number, format },
-      });
-    }
-    await em.flush();
+      })),
+    );
   }
 }

@@ -20,7 +20,7 @@ import { UpdateReturnDto } from './dto/update-return.dto';
 import { ReturnDocuments } from './return-documents';
 import { ReturnMailService } from './return-mail.service';
 import { RETURN_LIST_HEADER, returnListRows } from './return-list-csv';
-import { ReturnsService } from './returns.service';
+import { refOf, ReturnsService } from './returns.service';
 
 @ApiTags('returns')
 @Controller('returns')
@@ -72,7 +72,7 @@ export class ReturnsController {
   @Get(':id/export.csv')
   @ApiProduces('text/csv')
   async exportReadings(@Param('id', ParseIntPipe) id: number, @CurrentUser() actor: RequestUser) {
-    const ret = await this.returns.loadForDocuments(id);
+    const ret = await this.returns.ref(id);
     await this.mail.recordExport(ret, 'CSV', actor);
     return new StreamableFile(this.documents.csvStream(ret), {
       type: CSV_CONTENT_TYPE,
@@ -85,7 +85,7 @@ export class ReturnsController {
   async evidence(@Param('id', ParseIntPipe) id: number, @CurrentUser() actor: RequestUser) {
     const ret = await this.returns.loadForDocuments(id);
     const pdf = await this.documents.pdf(ret);
-    await this.mail.recordExport(ret, 'evidence pack', actor);
+    await this.mail.recordExport(refOf(ret), 'evidence pack', actor);
     return new StreamableFile(pdf, {
       type: 'application/pdf',
       disposition: `inline; filename="${ret.number}-evidence.pdf"`,

@@ -1,4 +1,5 @@
 import { Injectable, NotFoundException, UnprocessableEntityException } from '@nestjs/common';
+import type { SqlEntityManager } from '@mikro-orm/knex';
 import { EntityManager, type FilterQuery } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
@@ -14,6 +15,19 @@ import { canMove, chargeback, cleanCosts, OPEN_RETURN } from './return-rules';
 import { returnView, type ReturnView } from './return-view';
 
 const POPULATE = ['supplier', 'lots', 'createdBy'] as const;
+
+/** What an export of a return records: its id, number and lots. */
+export interface ReturnRef {
+  id: number;
+  number: string;
+  lotIds: number[];
+}
+
+export const refOf = (r: VendorReturn): ReturnRef => ({
+  id: r.id,
+  number: r.number,
+  lotIds: r.lots.getItems().map((l) => l.id),
+});
 const audited = (r: VendorReturn) => ({
   number: r.number,
   status: r.status,
@@ -102,6 +116,21 @@ export class ReturnsService {
   }
 
   /** A return to build documents from, in a manager of its own. */
+  /** Number and lot ids of a return, read without loading its lots (the CSV's needs). */
+  async ref(id: number): Promise<ReturnRef> {
+    const sql = this.em as SqlEntityManager;
+    const [ret] = await sql.execute<{ id: number; number: string }[]>(
+      'select id, number from vendor_returns where id = ?',
+      [id],
+    );
+    if (!ret) throw new NotFoundException(`There is no return ${id}`);
+    const lots = await sql.execute<{ lotId: number }[]>(
+      'select lot_id as "lotId" from vendor_return_lots where vendor_return_id = ? order by lot_id',
+      [id],
+    );
+    return { id: ret.id, number: ret.number, lotIds: lots.map((l) => l.lotId) };
+  }
+
   loadForDocuments(id: number): Promise<VendorReturn> {
     return this.load(this.em.fork(), id);
   }
