@@ -19,6 +19,8 @@ interface Entry<T> {
 export class WriteInvalidatedCache<T> implements EventSubscriber {
   private generation = 0;
   private readonly entries = new Map<string, Entry<T>>();
+  /** Computations under way, by key and generation: concurrent misses share one. */
+  private readonly pending = new Map<string, Promise<T>>();
   private readonly names: ReadonlySet<string>;
   private unwatchSql: (() => void) | null = null;
 
@@ -53,15 +55,26 @@ export class WriteInvalidatedCache<T> implements EventSubscriber {
   invalidate(): void {
     this.generation++;
     this.entries.clear();
+    this.pending.clear();
   }
 
+  /**
+   * The cached value, or one computation of it shared by every caller that misses while it
+   * runs (fifty lot lists arriving after a write count once, not fifty times).
+   */
   async get(key: string, compute: () => Promise<T>): Promise<T> {
     const hit = this.entries.get(key);
     if (hit && hit.generation === this.generation && Date.now() - hit.at < this.maxAgeMs) {
       return hit.value;
     }
+    const running = this.pending.get(key);
+    if (running) return running;
     const generation = this.generation;
-    const value = await compute();
+    const computation = compute().finally(() => {
+      if (this.pending.get(key) === computation) this.pending.delete(key);
+    });
+    this.pending.set(key, computation);
+    const value = await computation;
     if (generation === this.generation) {
       if (this.entries.size >= this.maxEntries) {
         this.entries.delete(this.entries.keys().next().value as string);
