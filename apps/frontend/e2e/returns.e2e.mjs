@@ -164,7 +164,7 @@ test('purchasing raises a corrective action request for the supplier and records
   await page.waitForURL((u) => u.pathname === '/corrective-actions');
   await page.getByRole('button', { name: 'New SCAR' }).click();
   const dialog = page.getByRole('dialog');
-  await dialog.getByRole('combobox', { name: 'Supplier' }).click();
+  await dialog.getByRole('combobox', { name: 'Supplier' }).fill(lot.supplier.code);
   await page.getByRole('option', { name: new RegExp(lot.supplier.code) }).click();
   await dialog.getByRole('checkbox', { name: new RegExp(`^Lot ${lot.id} · PO`) }).check();
   await dialog

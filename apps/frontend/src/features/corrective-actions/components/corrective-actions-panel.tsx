@@ -14,7 +14,7 @@ import { useListParams } from '@/components/data-table/use-list-params';
 import { useCorrectiveActions } from '@/features/corrective-actions/api/get-corrective-actions';
 import { CorrectiveActionsTable } from '@/features/corrective-actions/components/corrective-actions-table';
 import { NewCorrectiveActionDialog } from '@/features/corrective-actions/components/new-corrective-action-dialog';
-import { SupplierSelect } from '@/features/corrective-actions/components/supplier-select';
+import { SupplierSelect } from '@/components/supplier-select/supplier-select';
 import { CAR_STATUSES, carStatusLabels } from '@/features/corrective-actions/types';
 
 export function CorrectiveActionsPanel() {

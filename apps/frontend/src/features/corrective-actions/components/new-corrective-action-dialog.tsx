@@ -18,7 +18,7 @@ import {
   type CreateCorrectiveActionInput,
 } from '@/features/corrective-actions/api/create-corrective-action';
 import { SupplierLotsPicker } from '@/features/corrective-actions/components/supplier-lots-picker';
-import { SupplierSelect } from '@/features/corrective-actions/components/supplier-select';
+import { SupplierSelect } from '@/components/supplier-select/supplier-select';
 import { todayIso } from '@/features/corrective-actions/lib/car-rules';
 import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';

@@ -3,7 +3,7 @@ import { useEffect, useState } from 'react';
 import { useProductOptions } from '@/features/lots/api/get-product-options';
 import { useSupplierOptions } from '@/features/lots/api/get-supplier-options';
 import { lotStatusLabels } from '@/features/lots/lib/lot-status';
-import { useDebouncedValue } from '@/features/lots/lib/use-debounced-value';
+import { useDebouncedValue } from '@/lib/use-debounced-value';
 import { LOT_STATUSES, type LotStatus } from '@/features/lots/types';
 
 export const LOT_FILTERS = [

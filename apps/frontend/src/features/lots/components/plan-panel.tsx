@@ -3,7 +3,7 @@ import { useSamplingPlan } from '@/features/lots/api/get-sampling-plan';
 import { parseLotQuantity } from '@/features/lots/api/create-lot';
 import { SamplingPlanSummary } from '@/features/lots/components/sampling-plan-summary';
 import { previewPlan } from '@/features/lots/lib/plan-preview';
-import { useDebouncedValue } from '@/features/lots/lib/use-debounced-value';
+import { useDebouncedValue } from '@/lib/use-debounced-value';
 import type { ProductOption } from '@/features/lots/types';
 import { errorMessage } from '@/lib/query-client';
 

@@ -1,7 +1,7 @@
 import { Autocomplete, TextField } from '@mui/material';
 import { useState } from 'react';
 import { useProductOptions } from '@/features/lots/api/get-product-options';
-import { useDebouncedValue } from '@/features/lots/lib/use-debounced-value';
+import { useDebouncedValue } from '@/lib/use-debounced-value';
 import type { ProductOption } from '@/features/lots/types';
 
 interface ProductAutocompleteProps {

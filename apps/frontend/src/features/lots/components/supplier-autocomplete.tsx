@@ -1,7 +1,7 @@
 import { Autocomplete, Chip, TextField } from '@mui/material';
 import { useState } from 'react';
 import { useSupplierOptions } from '@/features/lots/api/get-supplier-options';
-import { useDebouncedValue } from '@/features/lots/lib/use-debounced-value';
+import { useDebouncedValue } from '@/lib/use-debounced-value';
 import type { SupplierOption } from '@/features/lots/types';
 
 interface SupplierAutocompleteProps {

@@ -20,7 +20,7 @@ import {
 } from '@/features/returns/api/create-return';
 import { CostFields } from '@/features/returns/components/cost-fields';
 import { ReturnableLotsPicker } from '@/features/returns/components/returnable-lots-picker';
-import { SupplierSelect } from '@/features/returns/components/supplier-select';
+import { SupplierSelect } from '@/components/supplier-select/supplier-select';
 import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 

@@ -6,7 +6,7 @@ import { useListParams } from '@/components/data-table/use-list-params';
 import { useReturns } from '@/features/returns/api/get-returns';
 import { NewReturnDialog } from '@/features/returns/components/new-return-dialog';
 import { ReturnsTable } from '@/features/returns/components/returns-table';
-import { SupplierSelect } from '@/features/returns/components/supplier-select';
+import { SupplierSelect } from '@/components/supplier-select/supplier-select';
 import { RETURN_STATUSES, returnStatusLabels } from '@/features/returns/types';
 
 const positive = (v: string | null) => (v && /^\d+$/.test(v) && Number(v) > 0 ? Number(v) : null);
