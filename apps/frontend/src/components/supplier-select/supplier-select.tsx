@@ -15,6 +15,7 @@ interface SupplierSelectProps {
   allowAll?: boolean;
   error?: string;
   required?: boolean;
+  disabled?: boolean;
 }
 
 const text = (s: SupplierChoice) => `${s.name} (${s.code})`;
@@ -30,6 +31,7 @@ export function SupplierSelect({
   allowAll,
   error,
   required,
+  disabled,
 }: SupplierSelectProps) {
   const [input, setInput] = useState('');
   const chosen = useSupplierChoice(value);
@@ -56,6 +58,7 @@ export function SupplierSelect({
       isOptionEqualToValue={(a, b) => a.id === b.id}
       noOptionsText={search ? 'No supplier matches.' : 'No suppliers yet.'}
       fullWidth={!allowAll}
+      disabled={disabled}
       renderOption={({ key, ...props }, s) => (
         <li key={key} {...props}>
           {text(s)}

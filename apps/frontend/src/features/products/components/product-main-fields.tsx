@@ -2,7 +2,7 @@ import { MenuItem, TextField } from '@mui/material';
 import { Controller, useWatch, type Control } from 'react-hook-form';
 import type { ProductInput } from '@/features/products/api/create-product';
 import { FormRow } from '@/features/products/components/form-row';
-import { useSupplierOptions } from '@/features/products/api/get-supplier-options';
+import { SupplierSelect } from '@/components/supplier-select/supplier-select';
 import { PRODUCT_KINDS, kindLabels } from '@/features/products/types';
 import { useUnits } from '@/lib/units';
 
@@ -17,7 +17,6 @@ function LengthHelper({ control }: { control: Control<ProductInput> }) {
 /** `locked`: editing, when supplier, SKU and kind stay as created (lots are filed under them). */
 export function ProductMainFields(props: { control: Control<ProductInput>; locked: boolean }) {
   const { control, locked } = props;
-  const suppliers = useSupplierOptions();
   return (
     <>
       <FormRow columns="2fr 1fr 1fr">
@@ -25,23 +24,13 @@ export function ProductMainFields(props: { control: Control<ProductInput>; locke
           control={control}
           name="supplierId"
           render={({ field, fieldState }) => (
-            <TextField
-              select
-              label="Supplier"
-              {...field}
+            <SupplierSelect
+              required
+              value={field.value ? Number(field.value) : null}
+              onChange={(id) => field.onChange(id === null ? '' : String(id))}
               disabled={locked}
-              error={!!fieldState.error || suppliers.isError}
-              helperText={
-                fieldState.error?.message ??
-                (suppliers.isError ? 'The suppliers could not be loaded.' : undefined)
-              }
-            >
-              {(suppliers.data ?? []).map((s) => (
-                <MenuItem key={s.id} value={String(s.id)}>
-                  {s.name} ({s.code}){s.status === 'suspended' ? ' — suspended' : ''}
-                </MenuItem>
-              ))}
-            </TextField>
+              error={fieldState.error?.message}
+            />
           )}
         />
         <Controller

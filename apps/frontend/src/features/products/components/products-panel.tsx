@@ -4,7 +4,7 @@ import { useEffect, useState } from 'react';
 import { FilterBar, FilterBarSpacer, allOptionProps } from '@/components/data-table/filter-bar';
 import { useListParams } from '@/components/data-table/use-list-params';
 import { useProducts } from '@/features/products/api/get-products';
-import { useSupplierOptions } from '@/features/products/api/get-supplier-options';
+import { SupplierSelect } from '@/components/supplier-select/supplier-select';
 import { ProductDialog } from '@/features/products/components/product-dialog';
 import { ProductsTable } from '@/features/products/components/products-table';
 import { PRODUCT_KINDS, kindLabels, type Product } from '@/features/products/types';
@@ -15,7 +15,6 @@ export function ProductsPanel({ canWrite }: { canWrite: boolean }) {
     defaultSort: { field: 'sku', direction: 'asc' },
   });
   const products = useProducts(list.query);
-  const suppliers = useSupplierOptions();
   const [editing, setEditing] = useState<Product | 'new' | null>(null);
   const [search, setSearch] = useState(list.filters.q);
   const { setFilter } = list;
@@ -38,21 +37,11 @@ export function ProductsPanel({ canWrite }: { canWrite: boolean }) {
           fullWidth={false}
           sx={{ width: 300 }}
         />
-        <TextField
-          select
-          label="Supplier"
-          {...allOptionProps}
-          value={list.filters.supplierId}
-          onChange={(event) => list.setFilter('supplierId', event.target.value)}
-          sx={{ width: 240 }}
-        >
-          <MenuItem value="">All</MenuItem>
-          {(suppliers.data ?? []).map((s) => (
-            <MenuItem key={s.id} value={String(s.id)}>
-              {s.name}
-            </MenuItem>
-          ))}
-        </TextField>
+        <SupplierSelect
+          allowAll
+          value={list.filters.supplierId ? Number(list.filters.supplierId) : null}
+          onChange={(id) => list.setFilter('supplierId', id ? String(id) : '')}
+        />
         <TextField
           select
           label="Kind"
