@@ -29,6 +29,11 @@ export interface ListParams<TFilter extends string> {
   setSort: (sort: ListSort | null) => void;
   /** Sets one filter and goes back to page 1; an empty value removes it. */
   setFilter: (name: TFilter, value: string) => void;
+  /**
+   * Several filters in one change of the address (two `setFilter` calls in a row would
+   * each start from the same address, and the second would undo the first).
+   */
+  setFilters: (changes: Partial<Record<TFilter, string>>) => void;
   /** Spread into <DataTable>: the paging and sorting props with their callbacks. */
   tableProps: {
     page: number;
@@ -112,6 +117,8 @@ export function useListParams<TFilter extends string>({
       update({ sort: text === defaultSortText ? null : text || 'none' }, true);
     };
     const setFilter = (name: TFilter, value: string) => update({ [name]: value }, true);
+    const setFilters = (changes: Partial<Record<TFilter, string>>) =>
+      update(changes as Record<string, string>, true);
     return {
       page,
       pageSize,
@@ -122,6 +129,7 @@ export function useListParams<TFilter extends string>({
       setPageSize,
       setSort,
       setFilter,
+      setFilters,
       tableProps: {
         page,
         pageSize,

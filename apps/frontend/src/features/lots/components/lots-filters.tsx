@@ -1,7 +1,7 @@
 import { Chip, MenuItem, Stack, TextField } from '@mui/material';
 import { useEffect, useState } from 'react';
 import { useProductOptions } from '@/features/lots/api/get-product-options';
-import { useSupplierOptions } from '@/features/lots/api/get-supplier-options';
+import { SupplierSelect } from '@/components/supplier-select/supplier-select';
 import { lotStatusLabels } from '@/features/lots/lib/lot-status';
 import { useDebouncedValue } from '@/lib/use-debounced-value';
 import { LOT_STATUSES, type LotStatus } from '@/features/lots/types';
@@ -19,15 +19,15 @@ export type LotFilterName = (typeof LOT_FILTERS)[number];
 interface LotsFiltersProps {
   filters: Record<LotFilterName, string>;
   setFilter: (name: LotFilterName, value: string) => void;
+  setFilters: (changes: Partial<Record<LotFilterName, string>>) => void;
 }
 
 export const parseStatuses = (text: string): LotStatus[] =>
   text.split(',').filter((s): s is LotStatus => (LOT_STATUSES as readonly string[]).includes(s));
 
-export function LotsFilters({ filters, setFilter }: LotsFiltersProps) {
+export function LotsFilters({ filters, setFilter, setFilters }: LotsFiltersProps) {
   const statuses = parseStatuses(filters.status);
   const supplierId = filters.supplierId ? Number(filters.supplierId) : null;
-  const suppliers = useSupplierOptions('');
   const products = useProductOptions(supplierId, '');
   const [text, setText] = useState(filters.q);
   const debounced = useDebouncedValue(text, 400);
@@ -71,23 +71,11 @@ export function LotsFilters({ filters, setFilter }: LotsFiltersProps) {
           onChange={(e) => setText(e.target.value)}
           sx={{ minWidth: 260 }}
         />
-        <TextField
-          select
-          label="Supplier"
-          value={filters.supplierId}
-          onChange={(e) => {
-            setFilter('supplierId', e.target.value);
-            setFilter('productId', '');
-          }}
-          sx={{ minWidth: 200 }}
-        >
-          <MenuItem value="">All suppliers</MenuItem>
-          {(suppliers.data?.items ?? []).map((s) => (
-            <MenuItem key={s.id} value={String(s.id)}>
-              {s.name}
-            </MenuItem>
-          ))}
-        </TextField>
+        <SupplierSelect
+          allowAll
+          value={supplierId}
+          onChange={(id) => setFilters({ supplierId: id ? String(id) : '', productId: '' })}
+        />
         <TextField
           select
           label="Product"

@@ -79,7 +79,7 @@ export function LotsTable() {
       <Stack direction="row" sx={{ justifyContent: 'flex-end' }}>
         <CsvDownloadButton path="/lots/export.csv" query={list.query} filename="lots.csv" />
       </Stack>
-      <LotsFilters filters={list.filters} setFilter={list.setFilter} />
+      <LotsFilters filters={list.filters} setFilter={list.setFilter} setFilters={list.setFilters} />
       <DataTable
         label="Lots"
         columns={columns}
