@@ -3,7 +3,7 @@ import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { AuditEvent } from '../src/audit/entities/audit-event.entity';
 import { Lot } from '../src/lots/entities/lot.entity';
-import { guardCell } from '../src/lots/lots-csv';
+import { neutralise as guardCell } from '../src/common/csv';
 import { InspectionState } from '../src/products/entities/inspection-state.entity';
 import { call, dayFromToday } from './helpers/api';
 import { makeProduct, makeSupplier, spoolBody } from './helpers/catalog';

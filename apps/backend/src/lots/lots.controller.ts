@@ -1,10 +1,12 @@
-import { Body, Controller, Get, Header, Post, Query } from '@nestjs/common';
-import { ApiTags } from '@nestjs/swagger';
+import { Body, Controller, Get, Post, Query, StreamableFile } from '@nestjs/common';
+import { ApiProduces, ApiTags } from '@nestjs/swagger';
+import { attachmentName, CSV_CONTENT_TYPE, csvStream } from '../common/csv';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
 import { ALL_ROLES } from '../auth/roles';
 import { CreateLotDto } from './dto/create-lot.dto';
 import { LotFiltersDto } from './dto/list-lots.dto';
+import { LOT_CSV_COLUMNS } from './lots-csv';
 import { LotsService } from './lots.service';
 
 /** Receiving and the lot list. The lot detail (GET /lots/:id) lives with inspection. */
@@ -27,9 +29,12 @@ export class LotsController {
 
   @Get('export.csv')
   @Roles(...ALL_ROLES)
-  @Header('Content-Type', 'text/csv; charset=utf-8')
-  @Header('Content-Disposition', 'attachment; filename="lots.csv"')
-  exportCsv(@Query() query: LotFiltersDto, @CurrentUser() actor: RequestUser) {
-    return this.lots.exportCsv(query, actor);
+  @ApiProduces('text/csv')
+  async exportCsv(@Query() query: LotFiltersDto, @CurrentUser() actor: RequestUser) {
+    const rows = await this.lots.exportRows(query, actor);
+    return new StreamableFile(csvStream(LOT_CSV_COLUMNS, rows), {
+      type: CSV_CONTENT_TYPE,
+      disposition: attachmentName('lots.csv'),
+    });
   }
 }
