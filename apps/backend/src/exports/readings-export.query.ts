@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import type { Knex, SqlEntityManager } from '@mikro-orm/knex';
+import { instantOf, jsonOf } from '../common/sql-values';
 
 /** Readings per page of the export (our choice: small enough to keep memory flat). */
 export const EXPORT_PAGE_SIZE = 1000;
@@ -37,16 +38,6 @@ export interface ExportRange {
 }
 
 type Row = Record<string, unknown>;
-
-/** Columns come back as numbers or Dates (SQLite: epoch ms), JSON as text or objects. */
-/** SQLite gives instants as epoch milliseconds, PostgreSQL (through MikroORM) as text. */
-const toDate = (v: unknown): Date => {
-  if (v instanceof Date) return v;
-  if (typeof v === 'number' || /^\d+$/.test(String(v))) return new Date(Number(v));
-  return new Date(String(v));
-};
-const toJson = (v: unknown): Record<string, number> =>
-  typeof v === 'string' ? (JSON.parse(v) as Record<string, number>) : (v as Record<string, number>);
 
 /** Whose readings: one supplier's lots received in a range, or the lots on one return. */
 export type ExportScope = { supplierId: number; range: ExportRange } | { returnId: number };
@@ -138,20 +129,20 @@ export class ReadingsExportQuery {
       poNumber: String(r.po_number),
       supplier: String(r.supplier_name),
       sku: String(r.sku),
-      receivedAt: toDate(r.received_at),
+      receivedAt: instantOf(r.received_at),
       seq: Number(r.seq),
       unitRef: (r.unit_ref as string | null) ?? null,
       purpose: String(r.purpose),
       gaugeLabel: String(r.gauge_label),
       method: String(r.method),
-      inputs: toJson(r.inputs),
+      inputs: jsonOf<Record<string, number>>(r.inputs),
       areaMm2: Number(r.area_mm2),
       expandedUMm2: Number(r.expanded_umm2),
       areaRatio: Number(r.area_ratio),
       measuresAs: String(r.measures_as),
       identifiedMaterial: (r.identified_material as string | null) ?? null,
       verdict: String(r.verdict),
-      takenAt: toDate(r.taken_at),
+      takenAt: instantOf(r.taken_at),
       voided: r.voided === true || Number(r.voided) === 1,
       voidReason: (r.void_reason as string | null) ?? null,
     }));

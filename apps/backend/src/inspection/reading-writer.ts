@@ -7,6 +7,7 @@ import type { RequestUser } from '../auth/request-user';
 import { usableInstruments, type InstrumentRecord } from '../instruments/instruments.service';
 import type { InstrumentKind } from '../instruments/entities/instrument.entity';
 import { announceSqlWrite } from '../common/sql-writes';
+import { jsonOf } from '../common/sql-values';
 import type { LotStatus } from '../lots/entities/lot.entity';
 import type { CreateReadingDto } from './dto/create-reading.dto';
 import type { InstrumentSnapshot, ReadingMethod, Verdict } from './entities/reading.entity';
@@ -40,8 +41,6 @@ interface ReadingRow {
   materialMismatch: number | boolean;
   verdict: Verdict;
 }
-
-const parsed = <T>(v: string | T): T => (typeof v === 'string' ? (JSON.parse(v) as T) : v);
 
 /** Columns a computation fills, in the order of COMPUTED_VALUES. */
 const COMPUTED_COLUMNS = [
@@ -112,8 +111,8 @@ export class ReadingWriter {
         )
       ).map((r) => ({
         ...r,
-        inputs: parsed(r.inputs),
-        instruments: parsed(r.instruments),
+        inputs: jsonOf<ReadingInputs>(r.inputs),
+        instruments: jsonOf<InstrumentSnapshot[]>(r.instruments),
         materialMismatch: Boolean(r.materialMismatch),
       }));
       const context = {
@@ -229,7 +228,7 @@ export class ReadingWriter {
     const lot = {
       id: sample.lotId,
       productId: sample.productId,
-      sampleSize: parsed(sample.samplingPlan).sampleSize,
+      sampleSize: jsonOf<{ sampleSize: number }>(sample.samplingPlan).sampleSize,
     };
     const after = await nextStatus(
       before,

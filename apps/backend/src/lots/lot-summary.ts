@@ -1,3 +1,4 @@
+import { instantOf, jsonOf } from '../common/sql-values';
 import type { Supplier } from '../suppliers/entities/supplier.entity';
 import { supplierRef } from '../suppliers/supplier-view';
 import type { Lot } from './entities/lot.entity';
@@ -39,8 +40,6 @@ export const LIST_COLUMNS = [
 ];
 
 /** SQLite keeps datetimes as epoch milliseconds and JSON as text; PostgreSQL as values. */
-const asDate = (v: unknown) => (v instanceof Date ? v : new Date(Number(v)));
-const asJson = (v: unknown) => (typeof v === 'string' ? (JSON.parse(v) as unknown) : v);
 
 /** LotSummary from a row of LIST_COLUMNS: the same shape as lotSummary(lot). */
 export function summaryOfRow(r: Record<string, unknown>): LotSummary {
@@ -52,7 +51,7 @@ export function summaryOfRow(r: Record<string, unknown>): LotSummary {
     supplierLotCode: (r.supplier_lot_code as string | null) ?? null,
     quantity: Number(r.quantity),
     unit: String(r.unit),
-    receivedAt: asDate(r.received_at),
+    receivedAt: instantOf(r.received_at),
     receivedBy: { id: Number(r.u_id), name: String(r.u_name) },
     product: {
       id: Number(r.p_id),
@@ -66,7 +65,7 @@ export function summaryOfRow(r: Record<string, unknown>): LotSummary {
       code: String(r.s_code),
       status: r.s_status as Supplier['status'],
     },
-    samplingPlan: asJson(r.sampling_plan) as Lot['samplingPlan'],
+    samplingPlan: jsonOf<Lot['samplingPlan']>(r.sampling_plan),
     version: Number(r.version),
   };
 }

@@ -141,7 +141,10 @@ export class LotsService {
    * a row between two pages.
    */
   async exportRows(q: LotFiltersDto, actor: RequestUser): Promise<AsyncGenerator<CsvRow[]>> {
-    const qb = this.filtered(q, await this.walkInReceivedOrder(q));
+    // Its own EntityManager: the pages are read after the handler has returned, while the
+    // response streams, outside the request's context.
+    const em = this.em.fork();
+    const qb = this.filtered(q, await this.walkInReceivedOrder(q), em);
     const total = await qb.clone().getCount('l.id');
     if (total > LOT_EXPORT_MAX_ROWS) {
       throw new UnprocessableEntityException(
@@ -149,12 +152,12 @@ export class LotsService {
       );
     }
     const { page: _p, pageSize: _s, ...filters } = q;
-    this.audit.record(this.em, actor, {
+    this.audit.record(em, actor, {
       action: 'lot.export',
       entityType: 'lot',
       after: { filters: { ...filters }, rows: total },
     });
-    await this.em.flush();
+    await em.flush();
     return this.exportPages(qb, q, total);
   }
 
@@ -194,13 +197,13 @@ export class LotsService {
   /**
    * The filters as SQL. `walkByDate`: the status test is written so no index can serve it
    * (`coalesce` of a NOT NULL column, the same rows on every database), see
-   * walkInReceivedOrder.
+   * walkInReceivedOrder. `em`: the manager the query is built on.
    */
-  private filtered(q: LotFiltersDto, walkByDate = false): QueryBuilder<Lot> {
+  private filtered(q: LotFiltersDto, walkByDate = false, em = this.em): QueryBuilder<Lot> {
     if (q.receivedFrom && q.receivedTo && q.receivedTo < q.receivedFrom) {
       throw new BadRequestException(['receivedTo must not be before receivedFrom']);
     }
-    const qb = (this.em as SqlEntityManager)
+    const qb = (em as SqlEntityManager)
       .createQueryBuilder(Lot, 'l')
       .select('l.*')
       .join('l.product', 'p')
