@@ -1,7 +1,7 @@
 import { Injectable, UnprocessableEntityException } from '@nestjs/common';
 import type { EntityManager } from '@mikro-orm/core';
 import type { SqlEntityManager } from '@mikro-orm/knex';
-import { AuditService } from '../audit/audit.service';
+import { AuditService, type AuditEntry } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
 import { Decision } from '../decisions/entities/decision.entity';
 import type { Lot, LotStatus } from '../lots/entities/lot.entity';
@@ -75,6 +75,18 @@ export async function nextStatus(
   return next;
 }
 
+/** The audit entry of a lot moving from one status to another. */
+export function statusChange(lotId: number, before: LotStatus, after: LotStatus): AuditEntry {
+  return {
+    action: 'lot.status',
+    entityType: 'lot',
+    entityId: lotId,
+    lotId,
+    before: { status: before },
+    after: { status: after },
+  };
+}
+
 /**
  * Moves the lot along on_hold → inspecting → awaiting_decision after its evidence changed,
  * and back to inspecting when a void leaves a planned unit unread (only before any decision).
@@ -100,14 +112,7 @@ export class LotStatusService {
     lot.updatedAt = new Date();
     if (next !== before) {
       lot.status = next;
-      this.audit.record(em, actor, {
-        action: 'lot.status',
-        entityType: 'lot',
-        entityId: lot.id,
-        lotId: lot.id,
-        before: { status: before },
-        after: { status: next },
-      });
+      this.audit.record(em, actor, statusChange(lot.id, before, next));
     }
     await em.flush();
   }

@@ -12,7 +12,7 @@ import type { LotStatus } from '../lots/entities/lot.entity';
 import type { CreateReadingDto } from './dto/create-reading.dto';
 import type { InstrumentSnapshot, ReadingMethod, Verdict } from './entities/reading.entity';
 import { resolutionsFor, snapshot } from './instrument-resolutions';
-import { assertLotOpen, evidenceOf, nextStatus } from './lot-status';
+import { assertLotOpen, evidenceOf, nextStatus, statusChange } from './lot-status';
 import { computeReading, type ComputedReading, type ReadingInputs } from './reading-compute';
 import { auditShape, outcomeOf } from './reading-rules';
 import { readingFactsView } from './views';
@@ -246,16 +246,7 @@ export class ReadingWriter {
       [after, new Date(), lot.id],
       'run',
     );
-    if (after !== before) {
-      events.push({
-        action: 'lot.status',
-        entityType: 'lot',
-        entityId: lot.id,
-        lotId: lot.id,
-        before: { status: before },
-        after: { status: after },
-      });
-    }
+    if (after !== before) events.push(statusChange(lot.id, before, after));
   }
 }
 

@@ -1,3 +1,4 @@
+import { auditShape } from '../inspection/reading-rules';
 import { parseGauge, type MaterialId } from '@gaugeproof/standards';
 import { Reading, type ReadingMethod } from '../inspection/entities/reading.entity';
 import { Sample } from '../inspection/entities/sample.entity';
@@ -110,18 +111,8 @@ class Bench {
           entityType: 'reading',
           entityId: r.id,
           lotId: this.lot.id,
-          after: {
-            sampleId: sample.id,
-            method: r.method,
-            inputs: r.inputs,
-            instrumentIds: r.instruments.map((i) => i.id),
-            areaMm2: r.areaMm2,
-            measuresAs: r.measuresAs,
-            identifiedMaterial: r.identifiedMaterial,
-            verdict: r.verdict,
-            voided: false,
-            voidReason: null,
-          },
+          // As entered: a reading voided later was live when it was created.
+          after: auditShape({ ...r, sampleId: sample.id, voided: false, voidReason: null }),
         });
       }
     }

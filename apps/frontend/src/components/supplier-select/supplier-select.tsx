@@ -1,5 +1,5 @@
 import { Autocomplete, Chip, TextField } from '@mui/material';
-import { useState } from 'react';
+import { useState, type HTMLAttributes, type Key } from 'react';
 import { useDebouncedValue } from '@/lib/use-debounced-value';
 import {
   useSupplierChoice,
@@ -18,7 +18,27 @@ interface SupplierSelectProps {
   disabled?: boolean;
 }
 
-const text = (s: SupplierChoice) => `${s.name} (${s.code})`;
+const text = (s: Pick<SupplierChoice, 'name' | 'code'>) => `${s.name} (${s.code})`;
+
+/** A supplier in a picker's list: name, code, and its standing when not approved. */
+export function renderSupplierOption(
+  { key, ...props }: HTMLAttributes<HTMLLIElement> & { key: Key },
+  s: Pick<SupplierChoice, 'name' | 'code' | 'status'>,
+) {
+  return (
+    <li key={key} {...props}>
+      {text(s)}
+      {s.status !== 'approved' && (
+        <Chip
+          size="small"
+          sx={{ ml: 1 }}
+          color={s.status === 'suspended' ? 'error' : 'warning'}
+          label={s.status === 'suspended' ? 'Suspended' : 'Probation'}
+        />
+      )}
+    </li>
+  );
+}
 
 /**
  * A supplier chosen by typing part of its name or code, searched on the server, so a
@@ -59,19 +79,7 @@ export function SupplierSelect({
       noOptionsText={search ? 'No supplier matches.' : 'No suppliers yet.'}
       fullWidth={!allowAll}
       disabled={disabled}
-      renderOption={({ key, ...props }, s) => (
-        <li key={key} {...props}>
-          {text(s)}
-          {s.status !== 'approved' && (
-            <Chip
-              size="small"
-              sx={{ ml: 1 }}
-              color={s.status === 'suspended' ? 'error' : 'warning'}
-              label={s.status === 'suspended' ? 'Suspended' : 'Probation'}
-            />
-          )}
-        </li>
-      )}
+      renderOption={(props, s) => renderSupplierOption(props, s)}
       renderInput={(params) => (
         <TextField
           {...params}

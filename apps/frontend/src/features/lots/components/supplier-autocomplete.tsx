@@ -1,4 +1,5 @@
-import { Autocomplete, Chip, TextField } from '@mui/material';
+import { Autocomplete, TextField } from '@mui/material';
+import { renderSupplierOption } from '@/components/supplier-select/supplier-select';
 import { useState } from 'react';
 import { useSupplierOptions } from '@/features/lots/api/get-supplier-options';
 import { useDebouncedValue } from '@/lib/use-debounced-value';
@@ -36,19 +37,7 @@ export function SupplierAutocomplete({
       getOptionLabel={(s) => `${s.name} (${s.code})`}
       isOptionEqualToValue={(a, b) => a.id === b.id}
       noOptionsText={search ? 'No supplier matches.' : 'No suppliers yet.'}
-      renderOption={({ key, ...props }, s) => (
-        <li key={key} {...props}>
-          {s.name} ({s.code})
-          {s.status !== 'approved' && (
-            <Chip
-              size="small"
-              sx={{ ml: 1 }}
-              color={s.status === 'suspended' ? 'error' : 'warning'}
-              label={s.status === 'suspended' ? 'Suspended' : 'Probation'}
-            />
-          )}
-        </li>
-      )}
+      renderOption={(props, s) => renderSupplierOption(props, s)}
       renderInput={(params) => (
         <TextField
           {...params}
