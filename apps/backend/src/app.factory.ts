@@ -10,7 +10,6 @@ import { AppModule } from './app.module';
 import { AllExceptionsFilter } from './common/all-exceptions.filter';
 import { BodyDepthInterceptor } from './common/body-depth.interceptor';
 import type { AppConfig } from './config/env';
-import { seedDemo } from './seed/seed-demo';
 import { StorageService } from './storage/storage.service';
 
 /**
@@ -54,6 +53,10 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
 
   const orm = app.get(MikroORM);
   await orm.getMigrator().up();
-  if (config.seedDemo) await seedDemo(orm.em.fork(), app.get(StorageService), config.seedHistory);
+  if (config.seedDemo) {
+    // Loaded only when demo data is wanted: it draws its photos with jimp.
+    const { seedDemo } = await import('./seed/seed-demo.js');
+    await seedDemo(orm.em.fork(), app.get(StorageService), config.seedHistory);
+  }
   return app;
 }

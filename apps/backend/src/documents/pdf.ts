@@ -1,4 +1,6 @@
-import PDFDocument from 'pdfkit';
+// pdfkit is loaded on the first PDF, not at start: it holds about 10 MB the server would
+// otherwise carry all its life (measured with process.memoryUsage, bench notes in README).
+import type PDFDocument from 'pdfkit';
 
 export type Pdf = InstanceType<typeof PDFDocument>;
 
@@ -16,12 +18,13 @@ export const COLOURS = {
 } as const;
 
 /** Renders a PDF into a buffer; `draw` writes the pages. */
-export function renderPdf(
+export async function renderPdf(
   options: ConstructorParameters<typeof PDFDocument>[0],
   draw: (doc: Pdf) => void | Promise<void>,
 ): Promise<Buffer> {
+  const { default: PdfDocument } = await import('pdfkit');
   return new Promise((resolve, reject) => {
-    const doc = new PDFDocument({ ...options, bufferPages: false });
+    const doc = new PdfDocument({ ...options, bufferPages: false });
     const chunks: Buffer[] = [];
     doc.on('data', (c: Buffer) => chunks.push(c));
     doc.on('end', () => resolve(Buffer.concat(chunks)));

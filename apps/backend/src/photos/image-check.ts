@@ -1,5 +1,4 @@
 import { UnprocessableEntityException, UnsupportedMediaTypeException } from '@nestjs/common';
-import { Jimp } from 'jimp';
 import { readImageHeader, sniffImageType, webpComplete, type ImageType } from './image-header';
 
 /** 40 megapixels: above any phone camera; a guard against decompression bombs (no source). */
@@ -42,6 +41,8 @@ export async function checkImage(data: Buffer): Promise<CheckedImage> {
     if (!webpComplete(data)) throw corrupt();
     return { ...header, thumbnail: null };
   }
+  // jimp is loaded on the first photo, not at start (about 14 MB of resident memory).
+  const { Jimp } = await import('jimp');
   let image: Awaited<ReturnType<typeof Jimp.fromBuffer>>;
   try {
     image = await Jimp.fromBuffer(data);
