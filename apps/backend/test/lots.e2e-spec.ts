@@ -6,6 +6,7 @@ import { Lot } from '../src/lots/entities/lot.entity';
 import { neutralise as guardCell } from '../src/common/csv';
 import { InspectionState } from '../src/products/entities/inspection-state.entity';
 import { call, dayFromToday } from './helpers/api';
+import { createBench, GOOD_4AWG_MASS } from './helpers/fixtures';
 import { makeProduct, makeSupplier, spoolBody } from './helpers/catalog';
 import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
 
@@ -346,5 +347,59 @@ describe('GET /api/lots/export.csv', () => {
       "'\rx",
     ]);
     expect([' =x', 'PO-1', 12, null].map(guardCell)).toEqual([' =x', 'PO-1', 12, '']);
+  });
+});
+
+// Last in the file: it adds a lot and renames a supplier the tests above count on.
+describe('the cached lot list', () => {
+  it('shows every write at once: a new lot, a supplier renamed, a reading entered', async () => {
+    const path = `/api/lots?supplierId=${good.id}&pageSize=100`;
+    const list = async () => (await call(t, DEMO.qa, 'get', path)).body;
+    const before = await list(); // read and cached
+    expect(await list()).toEqual(before); // answered from the cache
+
+    const product = await makeProduct(t, spoolBody(good.id, 'LS-CACHE'));
+    const created = await call(t, DEMO.clerk, 'post', '/api/lots', {
+      ...lotBody(product.id),
+      poNumber: 'PO-CACHE-1',
+    });
+    expect(created.status).toBe(201);
+    const after = await list();
+    expect(after.total).toBe(before.total + 1);
+    expect(after.items[0]).toMatchObject({ id: created.body.id, status: 'on_hold' });
+
+    const renamed = await call(t, DEMO.buyer, 'patch', `/api/suppliers/${good.id}`, {
+      name: 'Lotfixture Copper Works',
+    });
+    expect(renamed.status).toBe(200);
+    expect((await list()).items[0].supplier.name).toBe('Lotfixture Copper Works');
+
+    // A reading is written with plain SQL (inspection/reading-writer.ts), not a flush.
+    const sample = await call(t, DEMO.clerk, 'post', `/api/lots/${created.body.id}/samples`, {
+      conductorId: product.conductors[0].id,
+    });
+    expect(sample.status).toBe(201);
+    const bench = await createBench(t);
+    const reading = await call(t, DEMO.clerk, 'post', `/api/samples/${sample.body.id}/readings`, {
+      ...GOOD_4AWG_MASS,
+      instrumentIds: [bench.balance.id, bench.rule.id],
+    });
+    expect(reading.status, JSON.stringify(reading.body)).toBe(201);
+    const inspected = (await list()).items[0];
+    expect(inspected).toMatchObject({ id: created.body.id, status: 'inspecting' });
+    expect(inspected.version).toBeGreaterThan(after.items[0].version);
+  });
+
+  it('answers a cached page with its ETag, and 304 when the client already has it', async () => {
+    const token = await t.token(DEMO.clerk);
+    const first = await t.http.get('/api/lots').set('Authorization', `Bearer ${token}`);
+    expect(first.status).toBe(200);
+    expect(first.headers['content-type']).toBe('application/json; charset=utf-8');
+    expect(first.headers.etag).toMatch(/^W\/"/);
+    const again = await t.http
+      .get('/api/lots')
+      .set('Authorization', `Bearer ${token}`)
+      .set('If-None-Match', first.headers.etag);
+    expect(again.status).toBe(304);
   });
 });

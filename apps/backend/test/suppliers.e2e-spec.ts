@@ -55,6 +55,19 @@ describe('POST /api/suppliers', () => {
     );
   });
 
+  it('refuses a body nested too deeply before validating it, and saves nothing', async () => {
+    let notes: unknown = 'deep';
+    for (let i = 0; i < 100; i++) notes = { notes };
+    const res = await call(t, DEMO.buyer, 'post', '/api/suppliers', {
+      ...supplier('TS-DEEP'),
+      notes,
+    });
+    expect(res.status).toBe(400);
+    expect(res.body.message).toBe('Request body is nested too deeply (more than 16 levels)');
+    const list = await call(t, DEMO.buyer, 'get', '/api/suppliers?q=TS-DEEP');
+    expect(list.body.items).toEqual([]);
+  });
+
   it('answers 409 for a code already used, whatever its case', async () => {
     await call(t, DEMO.buyer, 'post', '/api/suppliers', supplier('DUPE'));
     const res = await call(t, DEMO.buyer, 'post', '/api/suppliers', supplier('dupe'));

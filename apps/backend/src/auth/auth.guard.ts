@@ -8,14 +8,13 @@ import {
 } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
 import { JwtService } from '@nestjs/jwt';
-import { EntityManager } from '@mikro-orm/core';
 import type { Request } from 'express';
 import { APP_CONFIG } from '../config/config.module';
 import type { AppConfig } from '../config/env';
-import { User } from '../users/entities/user.entity';
 import { IS_PUBLIC, ROLES_KEY } from './decorators';
 import type { Role } from './roles';
 import { SESSION_COOKIE, type JwtClaims, type RequestUser } from './request-user';
+import { SignedInUsers } from './signed-in-users';
 
 const MUTATING = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
 
@@ -28,7 +27,7 @@ export class AuthGuard implements CanActivate {
   constructor(
     private readonly reflector: Reflector,
     private readonly jwt: JwtService,
-    private readonly em: EntityManager,
+    private readonly users: SignedInUsers,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
@@ -48,13 +47,7 @@ export class AuthGuard implements CanActivate {
     } catch {
       throw new UnauthorizedException('Your session has ended; sign in again');
     }
-    // Every signed-in request passes here: one plain query, no entity to hydrate and track.
-    const [user] = await this.em
-      .getConnection()
-      .execute<Pick<User, 'id' | 'email' | 'name' | 'role' | 'active'>[]>(
-        'select id, email, name, role, active from users where id = ?',
-        [claims.sub],
-      );
+    const user = await this.users.byId(claims.sub);
     if (!user || !user.active) throw new UnauthorizedException('This account cannot sign in');
     if (!bearer && MUTATING.has(req.method) && !this.sameOrigin(req)) {
       throw new ForbiddenException('Request refused: it did not come from Gaugeproof itself');

@@ -8,6 +8,7 @@ import type { AppConfig } from '../config/env';
 import { AuthController } from './auth.controller';
 import { AuthGuard } from './auth.guard';
 import { AuthService } from './auth.service';
+import { SignedInUsers } from './signed-in-users';
 
 @Module({
   imports: [
@@ -24,6 +25,6 @@ import { AuthService } from './auth.service';
     ThrottlerModule.forRoot([{ name: 'default', ttl: 60_000, limit: 5 }]),
   ],
   controllers: [AuthController],
-  providers: [AuthService, { provide: APP_GUARD, useClass: AuthGuard }],
+  providers: [AuthService, SignedInUsers, { provide: APP_GUARD, useClass: AuthGuard }],
 })
 export class AuthModule {}

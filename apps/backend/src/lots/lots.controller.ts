@@ -1,6 +1,8 @@
-import { Body, Controller, Get, Post, Query, StreamableFile } from '@nestjs/common';
+import { Body, Controller, Get, Post, Query, Res, StreamableFile } from '@nestjs/common';
 import { ApiProduces, ApiTags } from '@nestjs/swagger';
+import type { Response } from 'express';
 import { attachmentName, CSV_CONTENT_TYPE, csvStream } from '../common/csv';
+import { sendJson } from '../common/json-answer';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
 import { ALL_ROLES } from '../auth/roles';
@@ -23,8 +25,9 @@ export class LotsController {
 
   @Get()
   @Roles(...ALL_ROLES)
-  list(@Query() query: LotFiltersDto) {
-    return this.lots.list(query);
+  async list(@Query() query: LotFiltersDto, @Res() res: Response) {
+    // Sent as the cached JSON answer: the page of LotSummary (docs/api-conventions.md).
+    sendJson(res, await this.lots.listAnswer(query));
   }
 
   @Get('export.csv')

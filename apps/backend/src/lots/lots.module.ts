@@ -1,11 +1,11 @@
 import { Module } from '@nestjs/common';
-import { LotCountCache } from './lot-count-cache';
+import { LotListCache } from './lot-list-cache';
 import { LotsController } from './lots.controller';
 import { LotsService } from './lots.service';
 
 @Module({
   controllers: [LotsController],
-  providers: [LotsService, LotCountCache],
+  providers: [LotsService, LotListCache],
   exports: [LotsService],
 })
 export class LotsModule {}

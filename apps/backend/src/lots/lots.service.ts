@@ -17,7 +17,7 @@ import { User } from '../users/entities/user.entity';
 import { CreateLotDto } from './dto/create-lot.dto';
 import { LotFiltersDto } from './dto/list-lots.dto';
 import { Lot } from './entities/lot.entity';
-import { LotCountCache } from './lot-count-cache';
+import { LotListCache } from './lot-list-cache';
 import {
   LIST_COLUMNS,
   lotSummary,
@@ -27,6 +27,7 @@ import {
 } from './lot-summary';
 import { lotCsvRow } from './lots-csv';
 import type { CsvRow } from '../common/csv';
+import { jsonAnswer, type JsonAnswer } from '../common/json-answer';
 
 const SORTS = ['receivedAt', 'poNumber', 'status', 'supplier', 'quantity'] as const;
 const SORT_COLUMNS: Record<(typeof SORTS)[number], string> = {
@@ -55,7 +56,7 @@ export class LotsService {
     private readonly em: EntityManager,
     private readonly audit: AuditService,
     /** Optional so scripts that build the service by hand (the demo seed) count directly. */
-    @Optional() private readonly counts?: LotCountCache,
+    @Optional() private readonly cache?: LotListCache,
   ) {}
 
   async create(dto: CreateLotDto, actor: RequestUser) {
@@ -102,13 +103,23 @@ export class LotsService {
     });
   }
 
+  /**
+   * A page of the lot list as its JSON answer; the same query is answered from
+   * LotListCache until a write could change it.
+   */
+  async listAnswer(q: LotFiltersDto): Promise<JsonAnswer> {
+    if (!this.cache) return jsonAnswer(await this.list(q));
+    return this.cache.page(JSON.stringify(q), async () => jsonAnswer(await this.list(q)));
+  }
+
+  /** A page of the lot list, read from the database. */
   async list(q: LotFiltersDto): Promise<Page<LotSummary>> {
     const { page, pageSize, offset } = paging(q);
     const qb = this.filtered(q, await this.walkInReceivedOrder(q));
     const { page: _p, pageSize: _s, sort: _o, ...filters } = q;
     const count = () => qb.clone().getCount('l.id');
-    const total = this.counts
-      ? await this.counts.total(JSON.stringify(filters), count)
+    const total = this.cache
+      ? await this.cache.total(JSON.stringify(filters), count)
       : await count();
     const items = await this.summaries(qb, q, pageSize, offset);
     return { items, total, page, pageSize };
@@ -183,11 +194,11 @@ export class LotsService {
    * Shares come from the cached totals, so this costs nothing between lot writes.
    */
   private async walkInReceivedOrder(q: LotFiltersDto): Promise<boolean> {
-    if (!this.counts || !q.status?.length) return false;
+    if (!this.cache || !q.status?.length) return false;
     if (parseSort(q.sort, SORTS, ['receivedAt', 'desc'])[0] !== 'receivedAt') return false;
     const count = (filters: LotFiltersDto) => () => this.filtered(filters).getCount('l.id');
-    const all = await this.counts.total(JSON.stringify({}), count({}));
-    const some = await this.counts.total(
+    const all = await this.cache.total(JSON.stringify({}), count({}));
+    const some = await this.cache.total(
       JSON.stringify({ status: q.status }),
       count({ status: q.status }),
     );

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { jsonDepth } from './body-depth.interceptor';
+import { jsonDepth } from './body-depth.pipe';
 
 describe('jsonDepth', () => {
   it('measures plain values, objects and arrays', () => {
