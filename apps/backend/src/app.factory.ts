@@ -20,6 +20,8 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
   const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot(config), {
     bufferLogs: true,
     abortOnError: false,
+    // JSON bodies are parsed by JsonBodyMiddleware (AppModule), so their errors reach our filter.
+    bodyParser: false,
   });
   app.useLogger(app.get(Logger));
   app.set('trust proxy', 'loopback');
@@ -34,7 +36,6 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
     }),
   );
   app.use(cookieParser());
-  app.useBodyParser('json', { limit: '1mb' });
   app.setGlobalPrefix('api');
   app.useGlobalPipes(
     new BodyDepthPipe(),

@@ -1,4 +1,10 @@
-import { DynamicModule, Module, RequestMethod } from '@nestjs/common';
+import {
+  DynamicModule,
+  Module,
+  RequestMethod,
+  type MiddlewareConsumer,
+  type NestModule,
+} from '@nestjs/common';
 import { DiscoveryModule } from '@nestjs/core';
 import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { ServeStaticModule } from '@nestjs/serve-static';
@@ -17,6 +23,7 @@ import { DocumentsModule } from './documents/documents.module';
 import { MailModule } from './mail/mail.module';
 import { ReturnsModule } from './returns/returns.module';
 import type { AppConfig } from './config/env';
+import { JsonBodyMiddleware } from './common/json-body.middleware';
 import { ormOptions } from './database/orm-options';
 import { HealthModule } from './health/health.module';
 import { UsersModule } from './users/users.module';
@@ -58,7 +65,12 @@ function requestId(req: IncomingMessage): string {
 }
 
 @Module({})
-export class AppModule {
+export class AppModule implements NestModule {
+  /** Runs after the modules' own middleware (request id, logger, ORM context): Nest orders by depth. */
+  configure(consumer: MiddlewareConsumer) {
+    consumer.apply(JsonBodyMiddleware).forRoutes({ path: '{*splat}', method: RequestMethod.ALL });
+  }
+
   static forRoot(config: AppConfig): DynamicModule {
     const staticSite = existsSync(config.frontendDist)
       ? [

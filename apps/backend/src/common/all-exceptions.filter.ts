@@ -78,7 +78,12 @@ export class AllExceptionsFilter implements ExceptionFilter {
       message = 'A referenced record does not exist';
     } else if (isBodyParserError(exception)) {
       status = exception.status;
-      message = status === 413 ? 'Request body is too large' : 'Request body is not valid JSON';
+      message =
+        status === 413
+          ? 'Request body is too large'
+          : status === 415
+            ? 'Request body must be UTF-8 text, not compressed'
+            : 'Request body is not valid JSON';
     }
     if (status >= 500) {
       this.logger.error({ requestId, err: exception }, `Unhandled error on ${req.method} ${path}`);

@@ -20,13 +20,19 @@ export interface TestApp {
   close(): Promise<void>;
 }
 
-/** Boots the real application on a fresh SQLite file in a scratch folder. */
-export async function startTestApp(env: Record<string, string> = {}): Promise<TestApp> {
+/**
+ * Boots the real application on a fresh SQLite file in a scratch folder. `overrides`
+ * replace settings that have no environment variable (e.g. the built client's folder).
+ */
+export async function startTestApp(
+  env: Record<string, string> = {},
+  overrides: Partial<AppConfig> = {},
+): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'gp-test-'));
   // The PostgreSQL pass of the suite (npm run test:pg) gives each app its own database.
   const pgAdmin = process.env.TEST_PG_ADMIN_URL;
   const pg = pgAdmin ? await createScratchDatabase(pgAdmin, 'gp_test') : null;
-  const config = loadConfig({
+  const loaded = loadConfig({
     ...(pg ? { DB_URL: pg.url } : {}),
     PORT: '3999',
     DB_PATH: join(dir, 'test.sqlite'),
@@ -37,6 +43,7 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
     PUBLIC_URL: ORIGIN,
     ...env,
   });
+  const config = { ...loaded, ...overrides };
   const app = await createApp(config);
   await app.init();
   const http = request(app.getHttpServer());
