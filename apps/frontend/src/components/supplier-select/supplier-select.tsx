@@ -16,6 +16,8 @@ interface SupplierSelectProps {
   error?: string;
   required?: boolean;
   disabled?: boolean;
+  /** Fill the width it is given; by default only a form field (not allowAll) does. */
+  fullWidth?: boolean;
 }
 
 const text = (s: Pick<SupplierChoice, 'name' | 'code'>) => `${s.name} (${s.code})`;
@@ -52,6 +54,7 @@ export function SupplierSelect({
   error,
   required,
   disabled,
+  fullWidth = !allowAll,
 }: SupplierSelectProps) {
   const [input, setInput] = useState('');
   const chosen = useSupplierChoice(value);
@@ -77,7 +80,7 @@ export function SupplierSelect({
       getOptionLabel={text}
       isOptionEqualToValue={(a, b) => a.id === b.id}
       noOptionsText={search ? 'No supplier matches.' : 'No suppliers yet.'}
-      fullWidth={!allowAll}
+      fullWidth={fullWidth}
       disabled={disabled}
       renderOption={(props, s) => renderSupplierOption(props, s)}
       renderInput={(params) => (

@@ -1,15 +1,8 @@
 import AddTaskOutlined from '@mui/icons-material/AddTaskOutlined';
-import {
-  Button,
-  Checkbox,
-  FormControlLabel,
-  MenuItem,
-  Paper,
-  Stack,
-  TextField,
-} from '@mui/material';
+import { Box, Button, Checkbox, FormControlLabel, MenuItem, Paper, TextField } from '@mui/material';
 import { useState } from 'react';
 import { CsvDownloadButton } from '@/components/data-table/csv-download-button';
+import { FilterBar } from '@/components/data-table/filter-bar';
 import { useListParams } from '@/components/data-table/use-list-params';
 import { useCorrectiveActions } from '@/features/corrective-actions/api/get-corrective-actions';
 import { CorrectiveActionsTable } from '@/features/corrective-actions/components/corrective-actions-table';
@@ -28,18 +21,14 @@ export function CorrectiveActionsPanel() {
 
   return (
     <Paper variant="outlined" sx={{ p: 2 }}>
-      <Stack
-        direction={{ xs: 'column', md: 'row' }}
-        spacing={2}
-        sx={{ mb: 1, alignItems: { md: 'center' } }}
-      >
+      <FilterBar>
         <TextField
           select
           label="Status"
           fullWidth={false}
           value={list.filters.status}
           onChange={(event) => list.setFilter('status', event.target.value)}
-          sx={{ width: 200, mt: 0 }}
+          sx={{ width: 180 }}
         >
           <MenuItem value="">All</MenuItem>
           <MenuItem value="open,responded,verified,reopened">Not closed</MenuItem>
@@ -62,12 +51,10 @@ export function CorrectiveActionsPanel() {
             />
           }
           label="Overdue only"
+          sx={{ whiteSpace: 'nowrap' }}
         />
-        <Stack
-          direction="row"
-          spacing={2}
-          sx={{ flex: 1, justifyContent: 'flex-end', alignItems: 'center', whiteSpace: 'nowrap' }}
-        >
+        {/* The two commands stay together at the right, on the next line if need be. */}
+        <Box sx={{ display: 'flex', gap: 2, ml: 'auto' }}>
           <CsvDownloadButton
             path="/corrective-actions/export.csv"
             query={list.query}
@@ -80,8 +67,8 @@ export function CorrectiveActionsPanel() {
           >
             New SCAR
           </Button>
-        </Stack>
-      </Stack>
+        </Box>
+      </FilterBar>
       <CorrectiveActionsTable
         {...list.tableProps}
         data={cars.data}

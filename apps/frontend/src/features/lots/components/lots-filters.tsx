@@ -1,4 +1,4 @@
-import { Chip, MenuItem, Stack, TextField } from '@mui/material';
+import { Box, Chip, MenuItem, Stack, TextField } from '@mui/material';
 import { useEffect, useState } from 'react';
 import { useProductOptions } from '@/features/lots/api/get-product-options';
 import { SupplierSelect } from '@/components/supplier-select/supplier-select';
@@ -63,19 +63,29 @@ export function LotsFilters({ filters, setFilter, setFilters }: LotsFiltersProps
           />
         ))}
       </Stack>
-      <Stack direction={{ xs: 'column', md: 'row' }} spacing={2}>
+      <Stack
+        direction={{ xs: 'column', md: 'row' }}
+        spacing={2}
+        useFlexGap
+        // Search, supplier and product share the first line; the two dates wrap below them
+        // together on a laptop screen and join the line on a wide one.
+        sx={{ flexWrap: 'wrap', alignItems: { md: 'flex-start' } }}
+      >
         <TextField
           label="Search"
           placeholder="PO, packing slip, lot code, SKU, supplier"
           value={text}
           onChange={(e) => setText(e.target.value)}
-          sx={{ minWidth: 260 }}
+          sx={{ flex: { md: '2 1 260px' } }}
         />
-        <SupplierSelect
-          allowAll
-          value={supplierId}
-          onChange={(id) => setFilters({ supplierId: id ? String(id) : '', productId: '' })}
-        />
+        <Box sx={{ flex: { md: '2 1 300px' } }}>
+          <SupplierSelect
+            allowAll
+            fullWidth
+            value={supplierId}
+            onChange={(id) => setFilters({ supplierId: id ? String(id) : '', productId: '' })}
+          />
+        </Box>
         <TextField
           select
           label="Product"
@@ -83,7 +93,7 @@ export function LotsFilters({ filters, setFilter, setFilters }: LotsFiltersProps
           disabled={supplierId === null}
           helperText={supplierId === null ? 'Choose a supplier first.' : undefined}
           onChange={(e) => setFilter('productId', e.target.value)}
-          sx={{ minWidth: 200 }}
+          sx={{ flex: { md: '1 1 200px' } }}
         >
           <MenuItem value="">All products</MenuItem>
           {(products.data?.items ?? []).map((p) => (
@@ -92,20 +102,24 @@ export function LotsFilters({ filters, setFilter, setFilters }: LotsFiltersProps
             </MenuItem>
           ))}
         </TextField>
-        <TextField
-          type="date"
-          label="Received from"
-          value={filters.receivedFrom}
-          onChange={(e) => setFilter('receivedFrom', e.target.value)}
-          slotProps={{ inputLabel: { shrink: true } }}
-        />
-        <TextField
-          type="date"
-          label="Received to"
-          value={filters.receivedTo}
-          onChange={(e) => setFilter('receivedTo', e.target.value)}
-          slotProps={{ inputLabel: { shrink: true } }}
-        />
+        <Stack direction="row" spacing={2} sx={{ flex: { md: '1 1 356px' } }}>
+          <TextField
+            type="date"
+            label="Received from"
+            value={filters.receivedFrom}
+            onChange={(e) => setFilter('receivedFrom', e.target.value)}
+            slotProps={{ inputLabel: { shrink: true } }}
+            sx={{ flex: 1, minWidth: 150 }}
+          />
+          <TextField
+            type="date"
+            label="Received to"
+            value={filters.receivedTo}
+            onChange={(e) => setFilter('receivedTo', e.target.value)}
+            slotProps={{ inputLabel: { shrink: true } }}
+            sx={{ flex: 1, minWidth: 150 }}
+          />
+        </Stack>
       </Stack>
     </Stack>
   );

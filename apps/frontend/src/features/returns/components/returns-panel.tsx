@@ -1,7 +1,8 @@
 import AssignmentReturnOutlined from '@mui/icons-material/AssignmentReturnOutlined';
-import { Button, MenuItem, Paper, Stack, TextField } from '@mui/material';
+import { Button, MenuItem, Paper, TextField } from '@mui/material';
 import { useSearchParams } from 'react-router-dom';
 import { CsvDownloadButton } from '@/components/data-table/csv-download-button';
+import { FilterBar, FilterBarSpacer } from '@/components/data-table/filter-bar';
 import { useListParams } from '@/components/data-table/use-list-params';
 import { useReturns } from '@/features/returns/api/get-returns';
 import { NewReturnDialog } from '@/features/returns/components/new-return-dialog';
@@ -37,14 +38,14 @@ export function ReturnsPanel() {
 
   return (
     <Paper variant="outlined" sx={{ p: 2 }}>
-      <Stack direction={{ xs: 'column', md: 'row' }} spacing={2} sx={{ mb: 1 }}>
+      <FilterBar>
         <TextField
           select
           label="Status"
           fullWidth={false}
           value={list.filters.status}
           onChange={(event) => list.setFilter('status', event.target.value)}
-          sx={{ width: 200, mt: 0 }}
+          sx={{ width: 200 }}
         >
           <MenuItem value="">All</MenuItem>
           <MenuItem value="draft,sent,acknowledged">Open (not closed)</MenuItem>
@@ -59,21 +60,16 @@ export function ReturnsPanel() {
           value={positive(list.filters.supplierId)}
           onChange={(id) => list.setFilter('supplierId', id ? String(id) : '')}
         />
-        <Stack
-          direction="row"
-          spacing={2}
-          sx={{ flex: 1, justifyContent: 'flex-end', alignItems: 'center', whiteSpace: 'nowrap' }}
+        <FilterBarSpacer />
+        <CsvDownloadButton path="/returns/export.csv" query={query} filename="returns.csv" />
+        <Button
+          variant="contained"
+          startIcon={<AssignmentReturnOutlined />}
+          onClick={() => list.setFilter('new', '1')}
         >
-          <CsvDownloadButton path="/returns/export.csv" query={query} filename="returns.csv" />
-          <Button
-            variant="contained"
-            startIcon={<AssignmentReturnOutlined />}
-            onClick={() => list.setFilter('new', '1')}
-          >
-            New return
-          </Button>
-        </Stack>
-      </Stack>
+          New return
+        </Button>
+      </FilterBar>
       <ReturnsTable
         {...list.tableProps}
         data={returns.data}
