@@ -273,6 +273,21 @@ describe('GET /api/returns/:id/export.csv', () => {
   });
 });
 
+describe('a return id in the path', () => {
+  it('answers 404 for an unknown return and 400 for what cannot be an id, on every driver', async () => {
+    for (const path of ['', '/export.csv', '/evidence.pdf']) {
+      expect((await t.http.get(`/api/returns/999999${path}`).set(auth(buyer))).status).toBe(404);
+      for (const bad of ['99999999999999999999', '0', 'abc']) {
+        const res = await t.http.get(`/api/returns/${bad}${path}`).set(auth(buyer));
+        expect(res.status, `${bad}${path}`).toBe(400);
+        expect(res.body.message).toBe(
+          'id must be a record id: a whole number from 1 to 2147483647',
+        );
+      }
+    }
+  });
+});
+
 describe('GET /api/returns/:id/evidence.pdf', () => {
   it('holds the plan, counts, readings with uncertainty, drawings, photos, decision, chargeback and caution', async () => {
     const { lots, ncrs } = await supplierWithRejects('Meadowlark Wire Goods');

@@ -1,9 +1,10 @@
-import { Controller, Get, Param, ParseIntPipe, Query } from '@nestjs/common';
+import { Controller, Get, Param, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { Roles } from '../auth/decorators';
 import { ALL_ROLES } from '../auth/roles';
 import { AuditQueryService } from './audit-query.service';
 import { ListAuditDto } from './dto/list-audit.dto';
+import { IdPipe } from '../common/id.pipe';
 
 /** The audit trail is read-only through the API: no route changes or deletes an event. */
 @ApiTags('audit')
@@ -13,7 +14,7 @@ export class AuditController {
 
   @Get('lots/:id/timeline')
   @Roles(...ALL_ROLES)
-  timeline(@Param('id', ParseIntPipe) id: number) {
+  timeline(@Param('id', IdPipe) id: number) {
     return this.audit.timeline(id);
   }
 

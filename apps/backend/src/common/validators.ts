@@ -19,9 +19,16 @@ export function IsWholeNumber(min: number, max: number, options: ValidationOptio
   );
 }
 
+/**
+ * The largest record id: ids are 32-bit integer columns on PostgreSQL (and SQLite's are
+ * far larger), so a bigger one cannot name a record (PostgreSQL documentation, "Numeric
+ * Types": integer is -2147483648 to +2147483647).
+ */
+export const MAX_ID = 2_147_483_647;
+
 /** A record id: a whole number from 1 (one message whatever is wrong). */
 export function IsId(options: ValidationOptions) {
-  return IsWholeNumber(1, 2_147_483_647, options);
+  return IsWholeNumber(1, MAX_ID, options);
 }
 
 /** A real calendar date written YYYY-MM-DD (no 2026-02-30). */

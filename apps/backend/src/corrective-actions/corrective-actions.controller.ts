@@ -1,14 +1,4 @@
-import {
-  Body,
-  Controller,
-  Get,
-  Param,
-  ParseIntPipe,
-  Patch,
-  Post,
-  Query,
-  StreamableFile,
-} from '@nestjs/common';
+import { Body, Controller, Get, Param, Patch, Post, Query, StreamableFile } from '@nestjs/common';
 import { ApiProduces, ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
@@ -18,6 +8,7 @@ import { CorrectiveActionsService } from './corrective-actions.service';
 import { CreateCorrectiveActionDto } from './dto/create-corrective-action.dto';
 import { ListCorrectiveActionsDto } from './dto/list-corrective-actions.dto';
 import { UpdateCorrectiveActionDto } from './dto/update-corrective-action.dto';
+import { IdPipe } from '../common/id.pipe';
 
 @ApiTags('corrective-actions')
 @Controller('corrective-actions')
@@ -48,13 +39,13 @@ export class CorrectiveActionsController {
   }
 
   @Get(':id')
-  get(@Param('id', ParseIntPipe) id: number) {
+  get(@Param('id', IdPipe) id: number) {
     return this.cars.get(id);
   }
 
   @Patch(':id')
   update(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('id', IdPipe) id: number,
     @Body() dto: UpdateCorrectiveActionDto,
     @CurrentUser() actor: RequestUser,
   ) {

@@ -1,10 +1,11 @@
-import { Body, Controller, Param, ParseIntPipe, Post } from '@nestjs/common';
+import { Body, Controller, Param, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
 import { DecisionsService } from './decisions.service';
 import { CreateDecisionDto } from './dto/create-decision.dto';
 import { RestoreInspectionStateDto } from './dto/restore-inspection-state.dto';
+import { IdPipe } from '../common/id.pipe';
 
 @ApiTags('decisions')
 @Controller()
@@ -14,7 +15,7 @@ export class DecisionsController {
 
   @Post('lots/:id/decisions')
   decide(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('id', IdPipe) id: number,
     @Body() dto: CreateDecisionDto,
     @CurrentUser() actor: RequestUser,
   ) {
@@ -24,7 +25,7 @@ export class DecisionsController {
   /** Brings a discontinued stream back on tightened inspection (ISO 2859-1). */
   @Post('products/:id/inspection-state/restore')
   restore(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('id', IdPipe) id: number,
     @Body() dto: RestoreInspectionStateDto,
     @CurrentUser() actor: RequestUser,
   ) {

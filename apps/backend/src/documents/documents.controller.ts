@@ -1,8 +1,9 @@
-import { Controller, Get, Header, Param, ParseIntPipe, StreamableFile } from '@nestjs/common';
+import { Controller, Get, Header, Param, StreamableFile } from '@nestjs/common';
 import { ApiProduces, ApiTags } from '@nestjs/swagger';
 import { Roles } from '../auth/decorators';
 import { ALL_ROLES } from '../auth/roles';
 import { DocumentsService } from './documents.service';
+import { IdPipe } from '../common/id.pipe';
 
 @ApiTags('documents')
 @Controller()
@@ -14,7 +15,7 @@ export class DocumentsController {
   @Roles(...ALL_ROLES)
   @ApiProduces('application/pdf')
   @Header('Cache-Control', 'no-store')
-  async tag(@Param('id', ParseIntPipe) id: number) {
+  async tag(@Param('id', IdPipe) id: number) {
     const pdf = await this.documents.lotTag(id);
     return new StreamableFile(pdf, {
       type: 'application/pdf',

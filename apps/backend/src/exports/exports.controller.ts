@@ -1,4 +1,4 @@
-import { Logger, Controller, Get, Param, ParseIntPipe, Query, Res } from '@nestjs/common';
+import { Logger, Controller, Get, Param, Query, Res } from '@nestjs/common';
 import { ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { once } from 'node:events';
@@ -6,6 +6,7 @@ import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
 import { ReadingsExportQueryDto } from './dto/readings-export-query.dto';
 import { ReadingsExportService } from './readings-export.service';
+import { IdPipe } from '../common/id.pipe';
 
 @ApiTags('exports')
 @Controller()
@@ -21,7 +22,7 @@ export class ExportsController {
   @Roles('purchasing', 'qa_lead', 'admin')
   @ApiProduces('text/csv')
   async supplierReadings(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('id', IdPipe) id: number,
     @Query() q: ReadingsExportQueryDto,
     @CurrentUser() actor: RequestUser,
     @Res() res: Response,

@@ -1,4 +1,4 @@
-import { Body, Controller, HttpCode, Param, ParseIntPipe, Post } from '@nestjs/common';
+import { Body, Controller, HttpCode, Param, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
@@ -7,6 +7,7 @@ import { CreateSampleDto } from './dto/create-sample.dto';
 import { VoidReadingDto } from './dto/void-reading.dto';
 import { ReadingsService } from './readings.service';
 import { SamplesService } from './samples.service';
+import { IdPipe } from '../common/id.pipe';
 
 @ApiTags('inspection')
 @Controller()
@@ -19,7 +20,7 @@ export class InspectionController {
   @Post('lots/:id/samples')
   @Roles('clerk', 'qa_lead', 'admin')
   createSample(
-    @Param('id', ParseIntPipe) lotId: number,
+    @Param('id', IdPipe) lotId: number,
     @Body() dto: CreateSampleDto,
     @CurrentUser() actor: RequestUser,
   ) {
@@ -29,7 +30,7 @@ export class InspectionController {
   @Post('samples/:id/readings')
   @Roles('clerk', 'qa_lead', 'admin')
   createReading(
-    @Param('id', ParseIntPipe) sampleId: number,
+    @Param('id', IdPipe) sampleId: number,
     @Body() dto: CreateReadingDto,
     @CurrentUser() actor: RequestUser,
   ) {
@@ -40,7 +41,7 @@ export class InspectionController {
   @HttpCode(200)
   @Roles('qa_lead', 'admin')
   voidReading(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('id', IdPipe) id: number,
     @Body() dto: VoidReadingDto,
     @CurrentUser() actor: RequestUser,
   ) {

@@ -1,8 +1,9 @@
-import { Controller, Get, Param, ParseIntPipe } from '@nestjs/common';
+import { Controller, Get, Param } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { Roles } from '../auth/decorators';
 import { ALL_ROLES } from '../auth/roles';
 import { LotDetailService } from './lot-detail.service';
+import { IdPipe } from '../common/id.pipe';
 
 @ApiTags('lots')
 @Controller('lots')
@@ -11,7 +12,7 @@ export class LotDetailController {
 
   @Get(':id')
   @Roles(...ALL_ROLES)
-  detail(@Param('id', ParseIntPipe) id: number) {
+  detail(@Param('id', IdPipe) id: number) {
     return this.lots.detail(id);
   }
 }

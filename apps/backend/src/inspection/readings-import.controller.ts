@@ -1,16 +1,10 @@
-import {
-  Controller,
-  Param,
-  ParseIntPipe,
-  Post,
-  UploadedFile,
-  UseInterceptors,
-} from '@nestjs/common';
+import { Controller, Param, Post, UploadedFile, UseInterceptors } from '@nestjs/common';
 import { ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
 import { singleFileInterceptor } from '../storage/single-file.interceptor';
 import { ReadingsImportService } from './readings-import.service';
+import { IdPipe } from '../common/id.pipe';
 
 /** 2 MB holds tens of thousands of bench-logger rows (issue 4; no source). */
 const CsvUpload = singleFileInterceptor(
@@ -42,7 +36,7 @@ export class ReadingsImportController {
     },
   })
   import(
-    @Param('id', ParseIntPipe) lotId: number,
+    @Param('id', IdPipe) lotId: number,
     @UploadedFile() file: Express.Multer.File | undefined,
     @CurrentUser() actor: RequestUser,
   ) {

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, Param, Patch, Post, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
@@ -7,6 +7,7 @@ import { CreateInstrumentDto } from './dto/create-instrument.dto';
 import { ListInstrumentsDto } from './dto/list-instruments.dto';
 import { UpdateInstrumentDto } from './dto/update-instrument.dto';
 import { InstrumentsService } from './instruments.service';
+import { IdPipe } from '../common/id.pipe';
 
 @ApiTags('instruments')
 @Controller('instruments')
@@ -21,7 +22,7 @@ export class InstrumentsController {
 
   @Get(':id')
   @Roles(...ALL_ROLES)
-  get(@Param('id', ParseIntPipe) id: number) {
+  get(@Param('id', IdPipe) id: number) {
     return this.instruments.get(id);
   }
 
@@ -34,7 +35,7 @@ export class InstrumentsController {
   @Patch(':id')
   @Roles('qa_lead', 'admin')
   update(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('id', IdPipe) id: number,
     @Body() dto: UpdateInstrumentDto,
     @CurrentUser() actor: RequestUser,
   ) {

@@ -1,9 +1,10 @@
-import { Controller, Get, HttpCode, Param, ParseIntPipe, Post, Query } from '@nestjs/common';
+import { Controller, Get, HttpCode, Param, Post, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
 import { ListMessagesDto } from './dto/list-messages.dto';
 import { MailService } from './mail.service';
+import { IdPipe } from '../common/id.pipe';
 
 @ApiTags('messages')
 @Controller('messages')
@@ -19,7 +20,7 @@ export class MessagesController {
   /** Sends a failed (or only logged) message again, its attachments rebuilt. */
   @Post(':id/retry')
   @HttpCode(200)
-  retry(@Param('id', ParseIntPipe) id: number, @CurrentUser() actor: RequestUser) {
+  retry(@Param('id', IdPipe) id: number, @CurrentUser() actor: RequestUser) {
     return this.mail.retry(id, actor);
   }
 }

@@ -3,7 +3,6 @@ import {
   Controller,
   Get,
   Param,
-  ParseIntPipe,
   Post,
   Res,
   StreamableFile,
@@ -18,6 +17,7 @@ import { ALL_ROLES } from '../auth/roles';
 import { UploadPhotoDto } from './dto/upload-photo.dto';
 import { PhotoUploadInterceptor } from './photo-upload.interceptor';
 import { PhotosService } from './photos.service';
+import { IdPipe } from '../common/id.pipe';
 
 @ApiTags('photos')
 @Controller()
@@ -40,7 +40,7 @@ export class PhotosController {
     },
   })
   upload(
-    @Param('id', ParseIntPipe) lotId: number,
+    @Param('id', IdPipe) lotId: number,
     @UploadedFile() file: Express.Multer.File | undefined,
     @Body() dto: UploadPhotoDto,
     @CurrentUser() actor: RequestUser,
@@ -50,13 +50,13 @@ export class PhotosController {
 
   @Get('photos/:id/original')
   @Roles(...ALL_ROLES)
-  original(@Param('id', ParseIntPipe) id: number, @Res({ passthrough: true }) res: Response) {
+  original(@Param('id', IdPipe) id: number, @Res({ passthrough: true }) res: Response) {
     return this.serve(id, 'original', res);
   }
 
   @Get('photos/:id/thumbnail')
   @Roles(...ALL_ROLES)
-  thumbnail(@Param('id', ParseIntPipe) id: number, @Res({ passthrough: true }) res: Response) {
+  thumbnail(@Param('id', IdPipe) id: number, @Res({ passthrough: true }) res: Response) {
     return this.serve(id, 'thumbnail', res);
   }
 

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, Param, Patch, Post, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
@@ -8,6 +8,7 @@ import { ListProductsDto } from './dto/list-products.dto';
 import { SamplingPlanQueryDto } from './dto/sampling-plan-query.dto';
 import { UpdateProductDto } from './dto/update-product.dto';
 import { ProductsService } from './products.service';
+import { IdPipe } from '../common/id.pipe';
 
 @ApiTags('products')
 @Controller('products')
@@ -22,14 +23,14 @@ export class ProductsController {
 
   @Get(':id')
   @Roles(...ALL_ROLES)
-  get(@Param('id', ParseIntPipe) id: number) {
+  get(@Param('id', IdPipe) id: number) {
     return this.products.get(id);
   }
 
   /** The plan a lot of `quantity` units would get now (the receiving form shows it). */
   @Get(':id/sampling-plan')
   @Roles(...ALL_ROLES)
-  samplingPlan(@Param('id', ParseIntPipe) id: number, @Query() query: SamplingPlanQueryDto) {
+  samplingPlan(@Param('id', IdPipe) id: number, @Query() query: SamplingPlanQueryDto) {
     return this.products.samplingPlan(id, query.quantity);
   }
 
@@ -42,7 +43,7 @@ export class ProductsController {
   @Patch(':id')
   @Roles('qa_lead', 'purchasing', 'admin')
   update(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('id', IdPipe) id: number,
     @Body() dto: UpdateProductDto,
     @CurrentUser() actor: RequestUser,
   ) {

@@ -1,14 +1,4 @@
-import {
-  Body,
-  Controller,
-  Get,
-  Param,
-  ParseIntPipe,
-  Patch,
-  Post,
-  Query,
-  StreamableFile,
-} from '@nestjs/common';
+import { Body, Controller, Get, Param, Patch, Post, Query, StreamableFile } from '@nestjs/common';
 import { ApiProduces, ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
@@ -21,6 +11,7 @@ import { ReturnDocuments } from './return-documents';
 import { ReturnMailService } from './return-mail.service';
 import { RETURN_LIST_HEADER, returnListRows } from './return-list-csv';
 import { refOf, ReturnsService } from './returns.service';
+import { IdPipe } from '../common/id.pipe';
 
 @ApiTags('returns')
 @Controller('returns')
@@ -55,13 +46,13 @@ export class ReturnsController {
   }
 
   @Get(':id')
-  get(@Param('id', ParseIntPipe) id: number) {
+  get(@Param('id', IdPipe) id: number) {
     return this.returns.get(id);
   }
 
   @Patch(':id')
   update(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('id', IdPipe) id: number,
     @Body() dto: UpdateReturnDto,
     @CurrentUser() actor: RequestUser,
   ) {
@@ -71,7 +62,7 @@ export class ReturnsController {
   /** One row per reading of every lot on the return. */
   @Get(':id/export.csv')
   @ApiProduces('text/csv')
-  async exportReadings(@Param('id', ParseIntPipe) id: number, @CurrentUser() actor: RequestUser) {
+  async exportReadings(@Param('id', IdPipe) id: number, @CurrentUser() actor: RequestUser) {
     const ret = await this.returns.ref(id);
     await this.mail.recordExport(ret, 'CSV', actor);
     return new StreamableFile(this.documents.csvStream(ret), {
@@ -82,7 +73,7 @@ export class ReturnsController {
 
   @Get(':id/evidence.pdf')
   @ApiProduces('application/pdf')
-  async evidence(@Param('id', ParseIntPipe) id: number, @CurrentUser() actor: RequestUser) {
+  async evidence(@Param('id', IdPipe) id: number, @CurrentUser() actor: RequestUser) {
     const ret = await this.returns.loadForDocuments(id);
     const pdf = await this.documents.pdf(ret);
     await this.mail.recordExport(refOf(ret), 'evidence pack', actor);
@@ -94,7 +85,7 @@ export class ReturnsController {
 
   @Post(':id/email')
   email(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('id', IdPipe) id: number,
     @Body() dto: EmailReturnDto,
     @CurrentUser() actor: RequestUser,
   ) {

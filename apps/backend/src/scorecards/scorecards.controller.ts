@@ -1,4 +1,4 @@
-import { Controller, Get, Header, Param, ParseIntPipe, Query } from '@nestjs/common';
+import { Controller, Get, Header, Param, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
@@ -6,6 +6,7 @@ import { ScorecardQueryDto } from './dto/scorecard-query.dto';
 import { resolveRange } from './scorecard-range';
 import { ScorecardExportService } from './scorecard-export.service';
 import { ScorecardsService } from './scorecards.service';
+import { IdPipe } from '../common/id.pipe';
 
 const CSV = 'text/csv; charset=utf-8';
 
@@ -32,7 +33,7 @@ export class ScorecardsController {
   }
 
   @Get('suppliers/:id/scorecard')
-  forSupplier(@Param('id', ParseIntPipe) id: number, @Query() q: ScorecardQueryDto) {
+  forSupplier(@Param('id', IdPipe) id: number, @Query() q: ScorecardQueryDto) {
     return this.scorecards.forSupplier(id, resolveRange(q.from, q.to));
   }
 
@@ -40,7 +41,7 @@ export class ScorecardsController {
   @Header('Content-Type', CSV)
   @Header('Content-Disposition', 'attachment; filename="supplier-scorecard.csv"')
   exportSupplier(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('id', IdPipe) id: number,
     @Query() q: ScorecardQueryDto,
     @CurrentUser() actor: RequestUser,
   ) {

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, Param, Patch, Post, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
@@ -7,6 +7,7 @@ import { CreateSupplierDto } from './dto/create-supplier.dto';
 import { ListSuppliersDto } from './dto/list-suppliers.dto';
 import { UpdateSupplierDto } from './dto/update-supplier.dto';
 import { SuppliersService } from './suppliers.service';
+import { IdPipe } from '../common/id.pipe';
 
 @ApiTags('suppliers')
 @Controller('suppliers')
@@ -21,7 +22,7 @@ export class SuppliersController {
 
   @Get(':id')
   @Roles(...ALL_ROLES)
-  get(@Param('id', ParseIntPipe) id: number) {
+  get(@Param('id', IdPipe) id: number) {
     return this.suppliers.get(id);
   }
 
@@ -34,7 +35,7 @@ export class SuppliersController {
   @Patch(':id')
   @Roles('purchasing', 'admin')
   update(
-    @Param('id', ParseIntPipe) id: number,
+    @Param('id', IdPipe) id: number,
     @Body() dto: UpdateSupplierDto,
     @CurrentUser() actor: RequestUser,
   ) {
