@@ -1,8 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
-import type { SqlEntityManager } from '@mikro-orm/knex';
 import type { RequestUser } from '../auth/request-user';
 import { AuditEvent } from './entities/audit-event.entity';
+import { plainSql } from '../common/plain-sql';
 
 export interface AuditEntry {
   action: string;
@@ -43,7 +43,8 @@ export class AuditService {
     if (entries.length === 0) return;
     const at = new Date();
     const json = (v: Record<string, unknown> | null | undefined) => (v ? JSON.stringify(v) : null);
-    await (em as SqlEntityManager).execute(
+    await plainSql(
+      em,
       `insert into audit_events (actor_id, actor_email, action, entity_type, entity_id, lot_id,
          before, after, at) values ${entries.map(() => '(?, ?, ?, ?, ?, ?, ?, ?, ?)').join(', ')}`,
       entries.flatMap((e) => [

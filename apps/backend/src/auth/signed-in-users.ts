@@ -2,6 +2,7 @@ import { Injectable, type OnModuleDestroy, type OnModuleInit } from '@nestjs/com
 import { EntityManager } from '@mikro-orm/core';
 import { WriteInvalidatedCache } from '../common/write-invalidated-cache';
 import { User } from '../users/entities/user.entity';
+import { plainSql } from '../common/plain-sql';
 
 export type SignedInUser = Pick<User, 'id' | 'email' | 'name' | 'role' | 'active'>;
 
@@ -40,11 +41,11 @@ export class SignedInUsers implements OnModuleInit, OnModuleDestroy {
   /** The account with this id, or null when there is none. */
   byId(id: number): Promise<SignedInUser | null> {
     return this.cache.get(String(id), async () => {
-      const [user] = await this.em
-        .getConnection()
-        .execute<SignedInUser[]>('select id, email, name, role, active from users where id = ?', [
-          id,
-        ]);
+      const [user] = await plainSql<SignedInUser[]>(
+        this.em,
+        'select id, email, name, role, active from users where id = ?',
+        [id],
+      );
       return user ?? null;
     });
   }

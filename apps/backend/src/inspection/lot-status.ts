@@ -5,6 +5,7 @@ import { AuditService, type AuditEntry } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
 import { Decision } from '../decisions/entities/decision.entity';
 import type { Lot, LotStatus } from '../lots/entities/lot.entity';
+import { plainSql } from '../common/plain-sql';
 
 /** Statuses in which samples and readings may still be added. */
 const OPEN: readonly LotStatus[] = ['on_hold', 'inspecting', 'awaiting_decision'];
@@ -38,17 +39,20 @@ export interface Evidence {
 export async function evidenceOf(em: EntityManager, lot: LotRef): Promise<Evidence> {
   const sql = em as SqlEntityManager;
   const live = 'exists (select 1 from readings r where r.sample_id = s.id and r.voided = ?)';
-  const [read] = await sql.execute<{ n: number | string }[]>(
+  const [read] = await plainSql<{ n: number | string }[]>(
+    sql,
     `select count(*) as n from samples s where s.lot_id = ? and ${live}`,
     [lot.id, false],
   );
-  const [units] = await sql.execute<{ n: number | string }[]>(
+  const [units] = await plainSql<{ n: number | string }[]>(
+    sql,
     `select count(*) as n from (select distinct s.seq, s.conductor_id from samples s
        join conductor_specs c on c.id = s.conductor_id
        where s.lot_id = ? and c.active = ? and s.seq >= 1 and s.seq <= ? and ${live}) t`,
     [lot.id, true, lot.sampleSize, false],
   );
-  const [conductors] = await sql.execute<{ n: number | string }[]>(
+  const [conductors] = await plainSql<{ n: number | string }[]>(
+    sql,
     'select count(*) as n from conductor_specs c where c.product_id = ? and c.active = ?',
     [lot.productId, true],
   );

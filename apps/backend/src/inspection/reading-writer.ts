@@ -16,6 +16,7 @@ import { assertLotOpen, evidenceOf, nextStatus, statusChange } from './lot-statu
 import { computeReading, type ComputedReading, type ReadingInputs } from './reading-compute';
 import { auditShape, outcomeOf } from './reading-rules';
 import { readingFactsView } from './views';
+import { plainSql } from '../common/plain-sql';
 
 /** Row of the sample with what its reading needs of lot, product and conductor. */
 interface SampleRow {
@@ -90,7 +91,8 @@ export class ReadingWriter {
   ) {
     const view = await this.em.transactional(async (em) => {
       const sql = em as SqlEntityManager;
-      const [sample] = await sql.execute<SampleRow[]>(
+      const [sample] = await plainSql<SampleRow[]>(
+        sql,
         `select s.lot_id as "lotId", l.status, l.po_number as "poNumber", l.product_id as "productId",
                 l.sampling_plan as "samplingPlan", p.min_area_ratio as "minAreaRatio",
                 c.gauge_label as "gaugeLabel", c.claimed_material as "claimedMaterial"
@@ -103,7 +105,8 @@ export class ReadingWriter {
       assertLotOpen(sample);
       const instruments = await this.instruments(sql, dto.instrumentIds);
       const siblings = (
-        await sql.execute<ReadingRow[]>(
+        await plainSql<ReadingRow[]>(
+          sql,
           `select id, method, inputs, instruments, area_mm2 as "areaMm2", measures_as as "measuresAs",
                   identified_material as "identifiedMaterial", material_mismatch as "materialMismatch", verdict
              from readings where sample_id = ? and voided = ? order by taken_at desc, id desc`,
@@ -129,7 +132,8 @@ export class ReadingWriter {
       });
       const takenAt = new Date();
       const snapshots = instruments.map(snapshot);
-      const [{ id }] = await sql.execute<{ id: number }[]>(
+      const [{ id }] = await plainSql<{ id: number }[]>(
+        sql,
         `insert into readings (sample_id, method, inputs, instruments, ${COMPUTED_COLUMNS.join(', ')},
            taken_by_id, taken_at, voided) values (?, ?, ?, ?, ${COMPUTED_COLUMNS.map(() => '?').join(', ')}, ?, ?, ?)
          returning id`,
@@ -175,7 +179,8 @@ export class ReadingWriter {
           siblings: live.filter((o) => o.id !== r.id),
         });
         if (outcomeOf(again) === outcomeOf(r)) continue;
-        await sql.execute(
+        await plainSql(
+          sql,
           `update readings set ${COMPUTED_COLUMNS.map((c) => `${c} = ?`).join(', ')} where id = ?`,
           [...computedValues(again), r.id],
           'run',
@@ -208,7 +213,8 @@ export class ReadingWriter {
   private async instruments(sql: SqlEntityManager, ids: readonly number[]) {
     const unique = [...new Set(ids)];
     const rows = unique.length
-      ? await sql.execute<(InstrumentRecord & { active: number | boolean })[]>(
+      ? await plainSql<(InstrumentRecord & { active: number | boolean })[]>(
+          sql,
           `select id, kind, name, serial, resolution, resolution_unit as "resolutionUnit",
                   calibration_due_on as "calibrationDueOn", active
              from instruments where id in (${unique.map(() => '?').join(', ')})`,
@@ -234,14 +240,16 @@ export class ReadingWriter {
       before,
       () => evidenceOf(sql, lot),
       async () => {
-        const [d] = await sql.execute<{ n: number | string }[]>(
+        const [d] = await plainSql<{ n: number | string }[]>(
+          sql,
           'select count(*) as n from decisions where lot_id = ?',
           [lot.id],
         );
         return Number(d.n) > 0;
       },
     );
-    await sql.execute(
+    await plainSql(
+      sql,
       'update lots set status = ?, updated_at = ?, version = version + 1 where id = ?',
       [after, new Date(), lot.id],
       'run',

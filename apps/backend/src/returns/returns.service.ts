@@ -13,6 +13,7 @@ import { UpdateReturnDto } from './dto/update-return.dto';
 import { VendorReturn, type ReturnStatus } from './entities/vendor-return.entity';
 import { canMove, chargeback, cleanCosts, OPEN_RETURN } from './return-rules';
 import { returnView, type ReturnView } from './return-view';
+import { plainSql } from '../common/plain-sql';
 
 const POPULATE = ['supplier', 'lots', 'createdBy'] as const;
 
@@ -119,12 +120,14 @@ export class ReturnsService {
   /** Number and lot ids of a return, read without loading its lots (the CSV's needs). */
   async ref(id: number): Promise<ReturnRef> {
     const sql = this.em as SqlEntityManager;
-    const [ret] = await sql.execute<{ id: number; number: string }[]>(
+    const [ret] = await plainSql<{ id: number; number: string }[]>(
+      sql,
       'select id, number from vendor_returns where id = ?',
       [id],
     );
     if (!ret) throw new NotFoundException(`There is no return ${id}`);
-    const lots = await sql.execute<{ lotId: number }[]>(
+    const lots = await plainSql<{ lotId: number }[]>(
+      sql,
       'select lot_id as "lotId" from vendor_return_lots where vendor_return_id = ? order by lot_id',
       [id],
     );
