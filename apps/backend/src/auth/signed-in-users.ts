@@ -1,6 +1,5 @@
-import { Injectable, type OnModuleDestroy, type OnModuleInit } from '@nestjs/common';
-import { EntityManager } from '@mikro-orm/core';
-import { WriteInvalidatedCache } from '../common/write-invalidated-cache';
+import { Injectable } from '@nestjs/common';
+import { CacheProvider, WriteInvalidatedCache } from '../common/write-invalidated-cache';
 import { User } from '../users/entities/user.entity';
 import { plainSql } from '../common/plain-sql';
 
@@ -21,22 +20,14 @@ const MAX_ENTRIES = 1_000;
  * lot-list request).
  */
 @Injectable()
-export class SignedInUsers implements OnModuleInit, OnModuleDestroy {
+export class SignedInUsers extends CacheProvider {
   private readonly cache = new WriteInvalidatedCache<SignedInUser | null>(
     [User],
     MAX_AGE_MS,
     MAX_ENTRIES,
   );
 
-  constructor(private readonly em: EntityManager) {}
-
-  onModuleInit() {
-    this.cache.watch(this.em);
-  }
-
-  onModuleDestroy() {
-    this.cache.unwatch();
-  }
+  protected readonly caches = [this.cache];
 
   /** The account with this id, or null when there is none. */
   byId(id: number): Promise<SignedInUser | null> {

@@ -1,4 +1,10 @@
-import type { EntityManager, EntityName, EventSubscriber, FlushEventArgs } from '@mikro-orm/core';
+import { Injectable, type OnModuleDestroy, type OnModuleInit } from '@nestjs/common';
+import {
+  EntityManager,
+  type EntityName,
+  type EventSubscriber,
+  type FlushEventArgs,
+} from '@mikro-orm/core';
 import { onSqlWrite } from './sql-writes';
 
 interface Entry<T> {
@@ -82,5 +88,24 @@ export class WriteInvalidatedCache<T> implements EventSubscriber {
       this.entries.set(key, { value, generation, at: Date.now() });
     }
     return value;
+  }
+}
+
+/**
+ * A Nest provider that holds caches: they watch the writes while its module runs. A
+ * subclass lists its caches in `caches` and needs no constructor of its own.
+ */
+@Injectable()
+export abstract class CacheProvider implements OnModuleInit, OnModuleDestroy {
+  protected abstract readonly caches: readonly WriteInvalidatedCache<unknown>[];
+
+  constructor(protected readonly em: EntityManager) {}
+
+  onModuleInit() {
+    for (const cache of this.caches) cache.watch(this.em);
+  }
+
+  onModuleDestroy() {
+    for (const cache of this.caches) cache.unwatch();
   }
 }

@@ -1,7 +1,6 @@
-import { Injectable, type OnModuleDestroy, type OnModuleInit } from '@nestjs/common';
-import { EntityManager } from '@mikro-orm/core';
+import { Injectable } from '@nestjs/common';
 import type { JsonAnswer } from '../common/json-answer';
-import { WriteInvalidatedCache } from '../common/write-invalidated-cache';
+import { CacheProvider, WriteInvalidatedCache } from '../common/write-invalidated-cache';
 import { Product } from '../products/entities/product.entity';
 import { Supplier } from '../suppliers/entities/supplier.entity';
 import { User } from '../users/entities/user.entity';
@@ -32,7 +31,7 @@ const MAX_PAGES = 200;
  * write of `Lot`).
  */
 @Injectable()
-export class LotListCache implements OnModuleInit, OnModuleDestroy {
+export class LotListCache extends CacheProvider {
   private readonly totals = new WriteInvalidatedCache<number>([Lot], MAX_AGE_MS, MAX_ENTRIES);
   private readonly pages = new WriteInvalidatedCache<JsonAnswer>(
     [Lot, Product, Supplier, User],
@@ -40,17 +39,7 @@ export class LotListCache implements OnModuleInit, OnModuleDestroy {
     MAX_PAGES,
   );
 
-  constructor(private readonly em: EntityManager) {}
-
-  onModuleInit() {
-    this.totals.watch(this.em);
-    this.pages.watch(this.em);
-  }
-
-  onModuleDestroy() {
-    this.totals.unwatch();
-    this.pages.unwatch();
-  }
+  protected readonly caches = [this.totals, this.pages];
 
   total(key: string, count: () => Promise<number>): Promise<number> {
     return this.totals.get(key, count);

@@ -1,6 +1,5 @@
-import { Injectable, type OnModuleDestroy, type OnModuleInit } from '@nestjs/common';
-import { EntityManager } from '@mikro-orm/core';
-import { WriteInvalidatedCache } from '../common/write-invalidated-cache';
+import { Injectable } from '@nestjs/common';
+import { CacheProvider, WriteInvalidatedCache } from '../common/write-invalidated-cache';
 import { CorrectiveAction } from '../corrective-actions/entities/corrective-action.entity';
 import { Decision } from '../decisions/entities/decision.entity';
 import { Reading } from '../inspection/entities/reading.entity';
@@ -24,7 +23,7 @@ const MAX_ENTRIES = 50;
  * evidence under it changes.
  */
 @Injectable()
-export class ScorecardCache implements OnModuleInit, OnModuleDestroy {
+export class ScorecardCache extends CacheProvider {
   private readonly cache = new WriteInvalidatedCache<ScorecardList>(
     [
       Lot,
@@ -41,15 +40,7 @@ export class ScorecardCache implements OnModuleInit, OnModuleDestroy {
     MAX_ENTRIES,
   );
 
-  constructor(private readonly em: EntityManager) {}
-
-  onModuleInit() {
-    this.cache.watch(this.em);
-  }
-
-  onModuleDestroy() {
-    this.cache.unwatch();
-  }
+  protected readonly caches = [this.cache];
 
   list(key: string, compute: () => Promise<ScorecardList>): Promise<ScorecardList> {
     return this.cache.get(key, compute);
