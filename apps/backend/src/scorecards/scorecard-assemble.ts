@@ -11,7 +11,7 @@ export interface SupplierIdentity {
   id: number;
   name: string;
   code: string;
-  status: string;
+  status: ScorecardRow['status'];
 }
 
 /** The aggregate rows of one supplier, as the metric queries returned them. */

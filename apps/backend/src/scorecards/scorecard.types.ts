@@ -1,90 +1,11 @@
-/** Response shapes of the scorecards (docs/api-conventions.md, "Scorecards"). */
-
-export interface TrendPoint {
-  /** `YYYY-MM` */
-  month: string;
-  lots: number;
-  lotsAccepted: number;
-  lotsDecided: number;
-  /** lotsAccepted ÷ lotsDecided, null without decided lots. */
-  acceptanceRate: number | null;
-  /** Mean areaRatio of the month's non-voided readings, null without readings. */
-  meanAreaRatio: number | null;
-}
-
-export interface ScorecardRow {
-  supplierId: number;
-  name: string;
-  code: string;
-  status: string;
-  lotsReceived: number;
-  lotsAccepted: number;
-  lotsAcceptedOnConcession: number;
-  lotsRejected: number;
-  lotsPending: number;
-  acceptanceRate: number | null;
-  samplesTested: number;
-  nonconformingSamples: number;
-  dppm: number | null;
-  readings: number;
-  meanAreaRatio: number | null;
-  lowestAreaRatio: number | null;
-  materialMismatches: number;
-  worstSizesShort: number | null;
-  openCorrectiveActions: number;
-  overdueCorrectiveActions: number;
-  meanResponseDays: number | null;
-  chargebacks: number;
-  trend: TrendPoint[];
-}
-
-export interface ScorecardList {
-  from: string;
-  to: string;
-  items: ScorecardRow[];
-}
-
-export interface HistogramBin {
-  /** Lower edge, inclusive (null for the open-ended bin below the first edge). */
-  from: number | null;
-  /** Upper edge, exclusive (null for the open-ended bin at and above the last edge). */
-  to: number | null;
-  count: number;
-}
-
-export interface PurposeCount {
-  purpose: string;
-  samplesTested: number;
-  nonconformingSamples: number;
-}
-
-export interface ProductSeverity {
-  productId: number;
-  sku: string;
-  description: string;
-  active: boolean;
-  minAreaRatio: number;
-  severity: string;
-  reason: string | null;
-}
-
-export interface WorstLot {
-  lotId: number;
-  poNumber: string;
-  receivedAt: string;
-  status: string;
-  sku: string;
-  label: string | null;
-  measuresAs: string | null;
-  lowestAreaRatio: number;
-  sizesShort: number | null;
-}
-
-export interface SupplierScorecard extends ScorecardRow {
-  from: string;
-  to: string;
-  histogram: HistogramBin[];
-  byPurpose: PurposeCount[];
-  products: ProductSeverity[];
-  worstLots: WorstLot[];
-}
+/** Response shapes of the scorecards, shared with the client (libs/api-types). */
+export type {
+  TrendPoint,
+  ScorecardRow,
+  ScorecardList,
+  HistogramBin,
+  PurposeCount,
+  ProductSeverity,
+  WorstLot,
+  SupplierScorecard,
+} from '@gaugeproof/api-types';

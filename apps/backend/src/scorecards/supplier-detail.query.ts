@@ -152,7 +152,7 @@ export class SupplierDetailQuery {
       description: String(r.description),
       active: Boolean(r.active),
       minAreaRatio: num(r.min_area_ratio),
-      severity: r.severity === null || r.severity === undefined ? 'normal' : String(r.severity),
+      severity: (r.severity ?? 'normal') as ProductSeverity['severity'],
       reason: r.reason === null || r.reason === undefined ? null : String(r.reason),
     }));
   }
