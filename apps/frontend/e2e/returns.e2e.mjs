@@ -1,35 +1,14 @@
 import assert from 'node:assert/strict';
 import { readFile } from 'node:fs/promises';
 import { after, before, test } from 'node:test';
-import { DEMO_PASSWORD, launchBrowser, screenshot, signIn, url } from './browser.mjs';
+import { apiAs, lotAwaitingReject } from './api-fixtures.mjs';
+import { launchBrowser, screenshot, signIn, url } from './browser.mjs';
 
 const STAMP = Date.now().toString(36).toUpperCase();
 
-/** Calls the API with a bearer token from one sign-in (the sign-in throttle counts each). */
-async function apiAs(email) {
-  const login = await fetch(url('/api/auth/login'), {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
-  });
-  assert.equal(login.status, 200, `${email} signs in through the API`);
-  const { accessToken } = await login.json();
-  return async (method, path, body) => {
-    const response = await fetch(url(`/api${path}`), {
-      method,
-      headers: { Authorization: `Bearer ${accessToken}`, 'Content-Type': 'application/json' },
-      body: body === undefined ? undefined : JSON.stringify(body),
-    });
-    const data = await response.json();
-    assert.ok(response.ok, `${method} ${path} → ${response.status} ${JSON.stringify(data)}`);
-    return data;
-  };
-}
-
 /**
  * A rejected lot not yet on a return: the one decisions.e2e.mjs rejected when it ran first
- * in this server, otherwise one built and rejected here through the API (S-3, AQL 15, 50
- * spools: 3 units, reject on 2; 76.1 g over 1000 mm of copper measures as 8 AWG).
+ * in this server, otherwise one built (lotAwaitingReject) and rejected here.
  */
 async function rejectedLot(request) {
   const found = await request.get(url('/api/lots?status=rejected&q=PO-E2E-DEC-&pageSize=1'));
@@ -37,50 +16,17 @@ async function rejectedLot(request) {
   const { items } = await found.json();
   if (items[0]) return items[0];
   const call = await apiAs('admin@demo.example');
-  const supplier = await call('POST', '/suppliers', {
-    name: `Copperline Return Wire ${STAMP}`,
-    code: `CRW${STAMP}`.slice(0, 32),
-    contactEmail: 'returns@copperline-test.example',
-  });
-  const product = await call('POST', '/products', {
-    supplierId: supplier.id,
+  const lot = await lotAwaitingReject(call, {
+    supplier: `Copperline Return Wire ${STAMP}`,
+    code: `CRW${STAMP}`,
     sku: `CRW-4-${STAMP}`,
-    kind: 'spool',
-    description: '4 AWG ground cable, black, 30 m spool',
-    inspectionLevel: 'S-3',
-    aql: '15',
-    conductors: [{ purpose: 'ground', gauge: '4 AWG', claimedMaterial: 'copper' }],
-  });
-  const instruments = await call('GET', '/instruments?pageSize=100');
-  const balance = instruments.items.find(
-    (i) => i.kind === 'balance' && i.active && i.calibrationStatus !== 'overdue',
-  );
-  const lot = await call('POST', '/lots', {
-    productId: product.id,
+    purpose: 'ground',
     poNumber: `PO-E2E-RET-${STAMP}`,
-    quantity: 50,
-    unit: 'spools',
   });
-  for (const [seq, massG] of [
-    [1, 76.1],
-    [2, 76.1],
-    [3, 195],
-  ]) {
-    const sample = await call('POST', `/lots/${lot.id}/samples`, {
-      conductorId: product.conductors[0].id,
-      seq,
-    });
-    await call('POST', `/samples/${sample.id}/readings`, {
-      method: 'mass',
-      massG,
-      lengthMm: 1000,
-      instrumentIds: [balance.id],
-    });
-  }
   await call('POST', `/lots/${lot.id}/decisions`, {
     outcome: 'reject',
     reason: 'Two of three units measure as 8 AWG.',
-    version: (await call('GET', `/lots/${lot.id}`)).version,
+    version: lot.version,
   });
   return call('GET', `/lots/${lot.id}`);
 }
