@@ -38,7 +38,13 @@ test('a QA lead rejects a lot with a reason, sees the NCR number and prints the 
   await signIn(page, 'qa@demo.example');
   await page.waitForURL((u) => u.pathname === `/lots/${lot.id}`);
   const panel = page.locator('[aria-label="Decision panel"]');
+  // On a laptop screen the decision is below the readings: the recommendation leads to it.
+  await page.getByRole('button', { name: 'Go to the decision' }).click();
   await panel.getByText('Recommendation:').waitFor();
+  await page.waitForFunction(() => {
+    const top = globalThis.document.getElementById('decision')?.getBoundingClientRect().top ?? -1;
+    return top >= 0 && top < globalThis.innerHeight / 2;
+  });
   assert.ok(await panel.getByRole('radio', { name: 'Reject (recommended)' }).isChecked());
   await page.getByRole('heading', { name: 'Timeline' }).waitFor();
   await page.locator('[aria-label="Lot events"] li').first().waitFor();

@@ -1,4 +1,4 @@
-import { Alert, Button, CircularProgress, Grid, Stack, Typography } from '@mui/material';
+import { Alert, Box, Button, CircularProgress, Grid, Stack, Typography } from '@mui/material';
 import { Link as RouterLink, useParams } from 'react-router-dom';
 import { SectionBoundary } from '@/components/section-boundary';
 import { paths } from '@/config/paths';
@@ -72,6 +72,17 @@ export function LotRoute() {
   const data = lot.data;
   const open = OPEN_STATUSES.includes(data.status);
   const canRecord = open && RECORDERS.includes(user.role);
+  // On a laptop screen the decision sits below the readings and photos: a QA lead gets a
+  // way straight to it from the recommendation.
+  const toDecision =
+    data.status === 'awaiting_decision' && DECIDERS.includes(user.role) ? (
+      <Button
+        color="inherit"
+        onClick={() => document.getElementById('decision')?.scrollIntoView({ behavior: 'smooth' })}
+      >
+        Go to the decision
+      </Button>
+    ) : undefined;
   const sampleOptions = data.samples.map((s) => {
     const conductor = data.product.conductors.find((c) => c.id === s.conductorId);
     return {
@@ -87,7 +98,7 @@ export function LotRoute() {
         <Grid size={{ xs: 12, xl: 8 }}>
           <Stack spacing={3}>
             <SectionBoundary name="evaluation">
-              <EvaluationCard evaluation={data.evaluation} />
+              <EvaluationCard evaluation={data.evaluation} action={toDecision} />
             </SectionBoundary>
             <SectionBoundary name="samples and readings">
               <InspectionPanel
@@ -125,13 +136,15 @@ export function LotRoute() {
                 </Button>
               )}
             </Stack>
-            <SectionBoundary name="decision">
-              {DECIDERS.includes(user.role) ? (
-                <DecisionPanel lot={data} />
-              ) : (
-                <DecisionsCard lotId={data.id} />
-              )}
-            </SectionBoundary>
+            <Box id="decision" sx={{ scrollMarginTop: 80 }}>
+              <SectionBoundary name="decision">
+                {DECIDERS.includes(user.role) ? (
+                  <DecisionPanel lot={data} />
+                ) : (
+                  <DecisionsCard lotId={data.id} />
+                )}
+              </SectionBoundary>
+            </Box>
             <SectionBoundary name="timeline">
               <LotTimeline lotId={data.id} />
             </SectionBoundary>

@@ -1,4 +1,5 @@
 import { Alert, Box, Button, Card, CardContent, Skeleton, Stack, Typography } from '@mui/material';
+import { useState } from 'react';
 import { useLotTimeline } from '@/features/audit/api/get-lot-timeline';
 import type { TimelineEvent } from '@/features/audit/types';
 import { errorMessage } from '@/lib/query-client';
@@ -39,9 +40,22 @@ function Entry({ event, last }: { event: TimelineEvent; last: boolean }) {
   );
 }
 
-/** Everything that happened to the lot, from the append-only audit trail, oldest first. */
+/**
+ * Events shown before the clerk asks for the earlier ones: a lot read by a CSV import has
+ * hundreds, which made the Lot page several screens of timeline (our choice).
+ */
+export const RECENT_EVENTS = 10;
+
+/**
+ * Everything that happened to the lot, from the append-only audit trail, oldest first:
+ * the latest RECENT_EVENTS, and the earlier ones on request.
+ */
 export function LotTimeline({ lotId }: { lotId: number }) {
   const timeline = useLotTimeline(lotId);
+  const [all, setAll] = useState(false);
+  const events = timeline.data ?? [];
+  const earlier = all ? 0 : Math.max(0, events.length - RECENT_EVENTS);
+  const shown = events.slice(earlier);
   return (
     <Card aria-label="Timeline">
       <CardContent>
@@ -66,10 +80,15 @@ export function LotTimeline({ lotId }: { lotId: number }) {
         {timeline.isSuccess && timeline.data.length === 0 && (
           <Typography color="text.secondary">Nothing recorded yet.</Typography>
         )}
-        {timeline.isSuccess && timeline.data.length > 0 && (
+        {earlier > 0 && (
+          <Button size="small" onClick={() => setAll(true)} sx={{ mb: 1 }}>
+            Show the {earlier} earlier {earlier === 1 ? 'event' : 'events'}
+          </Button>
+        )}
+        {shown.length > 0 && (
           <Box component="ol" sx={{ m: 0, p: 0 }} aria-label="Lot events">
-            {timeline.data.map((event, i) => (
-              <Entry key={event.id} event={event} last={i === timeline.data.length - 1} />
+            {shown.map((event, i) => (
+              <Entry key={event.id} event={event} last={i === shown.length - 1} />
             ))}
           </Box>
         )}

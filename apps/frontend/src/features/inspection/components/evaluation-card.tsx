@@ -1,4 +1,5 @@
 import { Alert, Card, CardContent, Stack, Typography } from '@mui/material';
+import type { ReactNode } from 'react';
 import type { Evaluation } from '@/features/inspection/types';
 
 const recommendationText: Record<Evaluation['recommendation'], string> = {
@@ -21,8 +22,17 @@ function Figure({ label, value }: { label: string; value: number }) {
   );
 }
 
-/** The evaluation so far, counted by unit as ISO 2859 counts nonconforming units. */
-export function EvaluationCard({ evaluation }: { evaluation: Evaluation }) {
+/**
+ * The evaluation so far, counted by unit as ISO 2859 counts nonconforming units. `action`
+ * sits beside the recommendation (the Lot page puts "Go to the decision" there).
+ */
+export function EvaluationCard({
+  evaluation,
+  action,
+}: {
+  evaluation: Evaluation;
+  action?: ReactNode;
+}) {
   return (
     <Card aria-label="Evaluation">
       <CardContent>
@@ -35,7 +45,7 @@ export function EvaluationCard({ evaluation }: { evaluation: Evaluation }) {
           <Figure label="nonconforming" value={evaluation.nonconforming} />
           <Figure label="inconclusive" value={evaluation.inconclusive} />
         </Stack>
-        <Alert severity={recommendationSeverity[evaluation.recommendation]}>
+        <Alert severity={recommendationSeverity[evaluation.recommendation]} action={action}>
           <strong>{recommendationText[evaluation.recommendation]}.</strong> {evaluation.message}
         </Alert>
       </CardContent>
