@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { GroupCommit } from '../common/group-commit';
 import { InspectionController } from './inspection.controller';
 import { LotDetailController } from './lot-detail.controller';
 import { LotDetailService } from './lot-detail.service';
@@ -14,6 +15,7 @@ import { SamplesService } from './samples.service';
 @Module({
   controllers: [InspectionController, LotDetailController, ReadingsImportController],
   providers: [
+    GroupCommit,
     LotEvaluationService,
     LotDetailService,
     LotStatusService,

@@ -1,5 +1,4 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
-import { EntityManager } from '@mikro-orm/core';
 import type { SqlEntityManager } from '@mikro-orm/knex';
 import type { MaterialId } from '@gaugeproof/standards';
 import { AuditService, type AuditEntry } from '../audit/audit.service';
@@ -16,6 +15,7 @@ import { assertLotOpen, evidenceOf, nextStatus, statusChange } from './lot-statu
 import { computeReading, type ComputedReading, type ReadingInputs } from './reading-compute';
 import { auditShape, outcomeOf } from './reading-rules';
 import { readingFactsView } from './views';
+import { GroupCommit } from '../common/group-commit';
 import { plainSql } from '../common/plain-sql';
 
 /** Row of the sample with what its reading needs of lot, product and conductor. */
@@ -78,7 +78,7 @@ const computedValues = (c: ComputedReading) => [
 @Injectable()
 export class ReadingWriter {
   constructor(
-    private readonly em: EntityManager,
+    private readonly commits: GroupCommit,
     private readonly audit: AuditService,
   ) {}
 
@@ -89,7 +89,8 @@ export class ReadingWriter {
     dto: CreateReadingDto,
     actor: RequestUser,
   ) {
-    const view = await this.em.transactional(async (em) => {
+    // Readings posted at the same moment share one commit (common/group-commit.ts).
+    const view = await this.commits.run(async (em) => {
       const sql = em as SqlEntityManager;
       const [sample] = await plainSql<SampleRow[]>(
         sql,

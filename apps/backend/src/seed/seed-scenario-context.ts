@@ -16,6 +16,7 @@ import type { StorageService } from '../storage/storage.service';
 import { User } from '../users/entities/user.entity';
 import type { DemoCatalog } from './seed-catalog';
 import { SeedRandom } from './seed-scenario-random';
+import { GroupCommit } from '../common/group-commit';
 
 /** The story's own time: services stamp "now", the seed moves what they stamp to this. */
 export class SeedClock {
@@ -91,7 +92,12 @@ export async function scenarioContext(
     audit,
     lots: new LotsService(em, audit),
     samples: new SamplesService(em, audit),
-    readings: new ReadingsService(em, audit, lotStatus, new ReadingWriter(em, audit)),
+    readings: new ReadingsService(
+      em,
+      audit,
+      lotStatus,
+      new ReadingWriter(new GroupCommit(em), audit),
+    ),
     lotStatus,
     evaluations,
     decisions: new DecisionsService(em, audit, evaluations, new InspectionStreams(audit)),
