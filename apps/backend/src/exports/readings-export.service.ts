@@ -5,7 +5,12 @@ import type { RequestUser } from '../auth/request-user';
 import { addDays, isCalendarDate } from '../common/calendar';
 import { Supplier } from '../suppliers/entities/supplier.entity';
 import { csvHeader, csvLines } from './readings-csv';
-import { ReadingsExportQuery, type ExportRange, type ExportScope } from './readings-export.query';
+import {
+  EXPORT_PAGE_SIZE,
+  ReadingsExportQuery,
+  type ExportRange,
+  type ExportScope,
+} from './readings-export.query';
 
 export interface ReadingsExport {
   filename: string;
@@ -73,6 +78,8 @@ export class ReadingsExportService {
       const page = await this.query.page(scope, after);
       if (page.length === 0) return;
       yield csvLines(page);
+      // A short page is the last: no query for an empty one.
+      if (page.length < EXPORT_PAGE_SIZE) return;
       const last = page[page.length - 1];
       after = { lotId: last.lotId, readingId: last.id };
     }
