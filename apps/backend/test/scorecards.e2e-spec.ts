@@ -2,7 +2,7 @@ import { MikroORM } from '@mikro-orm/core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CorrectiveActionStatus } from '../src/corrective-actions/entities/corrective-action.entity';
 import { AuditEvent } from '../src/audit/entities/audit-event.entity';
-import type { ScorecardRow, SupplierScorecard } from '../src/scorecards/scorecard.types';
+import type { ScorecardRow, SupplierScorecard } from '@gaugeproof/api-types';
 import { Sample } from '../src/inspection/entities/sample.entity';
 import { createBench, GOOD_4AWG_MASS } from './helpers/fixtures';
 import { ScorecardFixtures } from './helpers/scorecard-fixtures';

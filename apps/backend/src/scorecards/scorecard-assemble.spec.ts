@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { acceptanceRate, compareWorstFirst, dppm, trendOf } from './scorecard-assemble';
 import { monthBuckets } from './scorecard-range';
-import type { ScorecardRow } from './scorecard.types';
+import type { ScorecardRow } from '@gaugeproof/api-types';
 
 describe('scorecard arithmetic', () => {
   it('rates only decided lots and gives null without any', () => {

@@ -1,5 +1,5 @@
 import type { MonthBucket } from './scorecard-range';
-import type { ScorecardRow, TrendPoint } from './scorecard.types';
+import type { ScorecardRow, TrendPoint } from '@gaugeproof/api-types';
 import type {
   CorrectiveActionRow,
   LotMonthRow,

@@ -9,7 +9,7 @@ import { ConductorSpec } from '../products/entities/conductor-spec.entity';
 import { Product } from '../products/entities/product.entity';
 import { VendorReturn } from '../returns/entities/vendor-return.entity';
 import { Supplier } from '../suppliers/entities/supplier.entity';
-import type { ScorecardList } from './scorecard.types';
+import type { ScorecardList } from '@gaugeproof/api-types';
 
 /** Writes from outside this process show within this (common practice, no source). */
 const MAX_AGE_MS = 60_000;

@@ -1,5 +1,5 @@
 import Papa from 'papaparse';
-import type { ScorecardRow, SupplierScorecard } from './scorecard.types';
+import type { ScorecardRow, SupplierScorecard } from '@gaugeproof/api-types';
 
 type Cell = string | number | boolean | null;
 

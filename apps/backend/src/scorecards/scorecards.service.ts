@@ -6,7 +6,7 @@ import { Supplier } from '../suppliers/entities/supplier.entity';
 import { assembleRow, compareWorstFirst, type SupplierIdentity } from './scorecard-assemble';
 import { ScorecardCache } from './scorecard-cache';
 import type { ScorecardRange } from './scorecard-range';
-import type { ScorecardList, ScorecardRow, SupplierScorecard } from './scorecard.types';
+import type { ScorecardList, ScorecardRow, SupplierScorecard } from '@gaugeproof/api-types';
 import { SupplierDetailQuery } from './supplier-detail.query';
 import { SupplierMetricsQuery } from './supplier-metrics.query';
 

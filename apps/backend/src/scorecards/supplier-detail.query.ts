@@ -2,7 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import type { Knex, SqlEntityManager } from '@mikro-orm/knex';
 import type { ScorecardRange } from './scorecard-range';
-import type { HistogramBin, ProductSeverity, WorstLot } from './scorecard.types';
+import type { HistogramBin, ProductSeverity, WorstLot } from '@gaugeproof/api-types';
 import { dateParam, num, numOrNull, sizesShort } from './scorecard-sql';
 
 /**
