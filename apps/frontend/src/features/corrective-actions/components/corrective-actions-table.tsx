@@ -3,9 +3,8 @@ import { Link as RouterLink, useNavigate } from 'react-router-dom';
 import {
   createDataTableColumnHelper,
   DataTable,
-  type Page,
+  type DataTableProps,
 } from '@/components/data-table/data-table';
-import type { ListSort } from '@/components/data-table/use-list-params';
 import { paths } from '@/config/paths';
 import { CarStatusChip } from '@/features/corrective-actions/components/car-status-chip';
 import type { CorrectiveAction } from '@/features/corrective-actions/types';
@@ -61,19 +60,10 @@ const columns = helper.columns([
   }),
 ]);
 
-interface CorrectiveActionsTableProps {
-  data: Page<CorrectiveAction> | undefined;
-  loading: boolean;
-  error: unknown;
-  onRetry: () => void;
-  emptyMessage: string;
-  page: number;
-  pageSize: number;
-  sort: ListSort | null;
-  onPageChange: (page: number) => void;
-  onPageSizeChange: (pageSize: number) => void;
-  onSortChange: (sort: ListSort | null) => void;
-}
+type CorrectiveActionsTableProps = Omit<
+  DataTableProps<CorrectiveAction>,
+  'columns' | 'label' | 'getRowId' | 'onRowClick'
+>;
 
 export function CorrectiveActionsTable(props: CorrectiveActionsTableProps) {
   const navigate = useNavigate();

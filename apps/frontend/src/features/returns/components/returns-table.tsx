@@ -3,9 +3,8 @@ import { Link as RouterLink, useNavigate } from 'react-router-dom';
 import {
   createDataTableColumnHelper,
   DataTable,
-  type Page,
+  type DataTableProps,
 } from '@/components/data-table/data-table';
-import type { ListSort } from '@/components/data-table/use-list-params';
 import { paths } from '@/config/paths';
 import { ReturnStatusChip } from '@/features/returns/components/return-status-chip';
 import { formatMoney } from '@/features/returns/lib/chargeback';
@@ -56,19 +55,10 @@ const columns = helper.columns([
   }),
 ]);
 
-interface ReturnsTableProps {
-  data: Page<VendorReturn> | undefined;
-  loading: boolean;
-  error: unknown;
-  onRetry: () => void;
-  emptyMessage: string;
-  page: number;
-  pageSize: number;
-  sort: ListSort | null;
-  onPageChange: (page: number) => void;
-  onPageSizeChange: (pageSize: number) => void;
-  onSortChange: (sort: ListSort | null) => void;
-}
+type ReturnsTableProps = Omit<
+  DataTableProps<VendorReturn>,
+  'columns' | 'label' | 'getRowId' | 'onRowClick'
+>;
 
 export function ReturnsTable(props: ReturnsTableProps) {
   const navigate = useNavigate();
