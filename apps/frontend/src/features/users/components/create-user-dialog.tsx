@@ -8,13 +8,13 @@ import {
   DialogTitle,
   TextField,
 } from '@mui/material';
-import { Controller, useForm } from 'react-hook-form';
+import { useForm } from 'react-hook-form';
 import {
   createUserSchema,
   useCreateUser,
   type CreateUserInput,
 } from '@/features/users/api/create-user';
-import { roleOptions } from '@/features/users/components/role-options';
+import { RoleField } from '@/features/users/components/role-options';
 import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 
@@ -70,21 +70,7 @@ export function CreateUserDialog({ open, onClose }: { open: boolean; onClose: ()
             helperText={errors.name?.message}
             {...form.register('name')}
           />
-          <Controller
-            control={form.control}
-            name="role"
-            render={({ field, fieldState }) => (
-              <TextField
-                select
-                label="Role"
-                {...field}
-                error={!!fieldState.error}
-                helperText={fieldState.error?.message}
-              >
-                {roleOptions}
-              </TextField>
-            )}
-          />
+          <RoleField control={form.control} />
           <TextField
             label="Password"
             type="password"

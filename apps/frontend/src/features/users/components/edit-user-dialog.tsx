@@ -8,14 +8,14 @@ import {
   DialogTitle,
   TextField,
 } from '@mui/material';
-import { Controller, useForm } from 'react-hook-form';
+import { useForm } from 'react-hook-form';
 import {
   editToPatch,
   editUserSchema,
   useUpdateUser,
   type EditUserInput,
 } from '@/features/users/api/update-user';
-import { roleOptions } from '@/features/users/components/role-options';
+import { RoleField } from '@/features/users/components/role-options';
 import type { User } from '@/features/users/types';
 import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
@@ -60,21 +60,7 @@ export function EditUserDialog({ user, onClose }: { user: User; onClose: () => v
             helperText={errors.name?.message}
             {...form.register('name')}
           />
-          <Controller
-            control={form.control}
-            name="role"
-            render={({ field, fieldState }) => (
-              <TextField
-                select
-                label="Role"
-                {...field}
-                error={!!fieldState.error}
-                helperText={fieldState.error?.message}
-              >
-                {roleOptions}
-              </TextField>
-            )}
-          />
+          <RoleField control={form.control} />
           <TextField
             label="New password"
             type="password"
