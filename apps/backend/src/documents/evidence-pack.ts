@@ -1,5 +1,5 @@
 import { drawCrossSections, type CrossSection } from './cross-section';
-import { COLOURS, paperDate, renderPdf, type Pdf } from './pdf';
+import { COLOURS, FONT, paperDate, renderPdf, type Pdf } from './pdf';
 
 export interface EvidenceReading {
   unit: number;
@@ -54,7 +54,7 @@ const COLS: [string, number][] = [
 
 function heading(doc: Pdf, text: string) {
   if (doc.y > BOTTOM - 60) doc.addPage();
-  doc.moveDown(0.6).font('Helvetica-Bold').fontSize(12).fillColor(COLOURS.ink).text(text, M);
+  doc.moveDown(0.6).font(FONT.bold).fontSize(12).fillColor(COLOURS.ink).text(text, M);
   doc
     .moveTo(M, doc.y + 2)
     .lineTo(PAGE_W - M, doc.y + 2)
@@ -69,7 +69,7 @@ function readingsTable(doc: Pdf, readings: EvidenceReading[]) {
     const y = doc.y;
     let x = M;
     doc
-      .font(bold ? 'Helvetica-Bold' : 'Helvetica')
+      .font(bold ? FONT.bold : FONT.body)
       .fontSize(7)
       .fillColor(colour);
     cells.forEach((c, i) => {
@@ -111,7 +111,7 @@ function readingsTable(doc: Pdf, readings: EvidenceReading[]) {
 
 function lotSection(doc: Pdf, lot: EvidenceLot) {
   heading(doc, lot.title);
-  doc.font('Helvetica').fontSize(9).fillColor(COLOURS.ink);
+  doc.font(FONT.body).fontSize(9).fillColor(COLOURS.ink);
   doc
     .text(`Sampling plan: ${lot.plan}`, M)
     .text(`Counts: ${lot.counts}`, M)
@@ -134,14 +134,14 @@ function lotSection(doc: Pdf, lot: EvidenceLot) {
   doc.x = M;
   doc.y = x === M ? y : y + 150;
   doc
-    .font('Helvetica-Bold')
+    .font(FONT.bold)
     .fontSize(9)
     .fillColor(COLOURS.ink)
     .text('Every reading, with its expanded uncertainty', M);
   doc.moveDown(0.3);
   readingsTable(doc, lot.readings);
   if (lot.thumbnails.length) {
-    doc.moveDown(0.5).font('Helvetica-Bold').fontSize(9).text('Photos', M);
+    doc.moveDown(0.5).font(FONT.bold).fontSize(9).text('Photos', M);
     let px = M;
     let py = doc.y + 4;
     for (const t of lot.thumbnails) {
@@ -151,7 +151,7 @@ function lotSection(doc: Pdf, lot: EvidenceLot) {
       }
       doc.image(t.image, px, py, { fit: [110, 82] });
       doc
-        .font('Helvetica')
+        .font(FONT.body)
         .fontSize(6)
         .fillColor(COLOURS.muted)
         .text(t.caption, px, py + 84, { width: 110, height: 16, ellipsis: true });
@@ -173,23 +173,23 @@ export function evidencePackPdf(data: EvidencePackData): Promise<Buffer> {
     (doc) => {
       doc.rect(0, 0, PAGE_W, 70).fill(COLOURS.rejected);
       doc
-        .font('Helvetica-Bold')
+        .font(FONT.bold)
         .fontSize(20)
         .fillColor('#FFFFFF')
         .text(`Return to vendor ${data.number}`, M, 18);
-      doc.font('Helvetica').fontSize(10).text(`Evidence pack · ${data.supplier}`, M, 44);
+      doc.font(FONT.body).fontSize(10).text(`Evidence pack · ${data.supplier}`, M, 44);
       doc.y = 84;
-      doc.font('Helvetica').fontSize(9).fillColor(COLOURS.ink);
+      doc.font(FONT.body).fontSize(9).fillColor(COLOURS.ink);
       doc.text(
         `Status: ${data.status}    RMA: ${data.rmaNumber ?? 'not given yet'}    Raised: ${paperDate(data.createdAt)}`,
         M,
       );
       heading(doc, 'Chargeback');
-      doc.font('Helvetica').fontSize(9).fillColor(COLOURS.ink);
+      doc.font(FONT.body).fontSize(9).fillColor(COLOURS.ink);
       for (const line of data.chargeback) doc.text(line, M);
       for (const lot of data.lots) lotSection(doc, lot);
       heading(doc, 'Safety caution');
-      doc.font('Helvetica').fontSize(8.5).fillColor(COLOURS.ink);
+      doc.font(FONT.body).fontSize(8.5).fillColor(COLOURS.ink);
       doc.text(
         'Undersized or aluminium conductors drop more voltage and run hotter than the label promises; a fuse sized for the label may not protect them.',
         M,

@@ -1,6 +1,6 @@
 import QRCode from 'qrcode';
 import type { LotStatus } from '../lots/entities/lot.entity';
-import { COLOURS, label, paperDate, renderPdf } from './pdf';
+import { COLOURS, fitText, label, paperDate, renderPdf } from './pdf';
 
 export interface LotTagData {
   lotId: number;
@@ -43,60 +43,64 @@ export function tagBanner(status: LotStatus): { word: string; colour: string; no
 const W = 288; // 4 × 6 in label (common thermal label stock), points
 const H = 432;
 
-/** A printable 4 × 6 in tag for the lot's place on the shelf. */
+/**
+ * A printable 4 × 6 in tag for the lot's place on the shelf. Every field has a fixed box and its
+ * text wraps (and shrinks, then is cut with an ellipsis) inside it, so a long supplier name or
+ * description can never run over the next field.
+ */
 export async function lotTagPdf(data: LotTagData): Promise<Buffer> {
   const qr = await QRCode.toBuffer(data.url, { margin: 1, width: 240, errorCorrectionLevel: 'M' });
   const banner = tagBanner(data.status);
   return renderPdf({ size: [W, H], margin: 0, info: { Title: `Lot ${data.lotId} tag` } }, (doc) => {
     doc.rect(0, 0, W, 86).fill(banner.colour);
-    doc
-      .font('Helvetica-Bold')
-      .fontSize(40)
-      .fillColor('#FFFFFF')
-      .text(banner.word, 14, 14, { width: W - 28, align: 'center' });
-    doc
-      .font('Helvetica')
-      .fontSize(9)
-      .text(banner.note, 14, 62, { width: W - 28, align: 'center' });
+    fitText(doc, banner.word, 14, 14, W - 28, 44, {
+      bold: true,
+      size: 40,
+      minSize: 20,
+      colour: '#FFFFFF',
+      align: 'center',
+    });
+    fitText(doc, banner.note, 14, 62, W - 28, 20, {
+      size: 9,
+      colour: '#FFFFFF',
+      align: 'center',
+    });
     doc
       .rect(8, 94, W - 16, H - 102)
       .lineWidth(2)
       .stroke(banner.colour);
 
     const x = 18;
-    const col = (W - 36) / 2;
-    doc
-      .font('Helvetica-Bold')
-      .fontSize(22)
-      .fillColor(COLOURS.ink)
-      .text(`LOT ${data.lotId}`, x, 102);
-    label(doc, x, 130, 'PO', data.poNumber, col);
-    label(doc, x + col, 130, 'Status', data.status.replace(/_/g, ' '), col);
-    label(doc, x, 156, 'Product', `${data.sku} · ${data.quantity}`, W - 36);
-    doc
-      .font('Helvetica')
-      .fontSize(8)
-      .fillColor(COLOURS.ink)
-      .text(data.description, x, 180, { width: W - 36, height: 22, ellipsis: true });
-    label(doc, x, 204, 'Supplier', data.supplier, W - 36);
-    label(doc, x, 230, 'Received', paperDate(data.receivedAt), col);
-    label(doc, x + col, 230, 'NCR', data.ncrNumber ?? '—', col);
+    const full = W - 36;
+    const col = full / 2;
+    fitText(doc, `LOT ${data.lotId}`, x, 100, full, 26, { bold: true, size: 22, minSize: 12 });
+    label(doc, x, 128, 'PO', data.poNumber, col);
+    label(doc, x + col, 128, 'Status', data.status.replace(/_/g, ' '), col);
+    label(doc, x, 155, 'Product', `${data.sku} · ${data.quantity}`, full);
+    fitText(doc, data.description, x, 181, full, 22, { size: 8, minSize: 6 });
+    label(doc, x, 204, 'Supplier', data.supplier, full);
+    label(doc, x, 231, 'Received', paperDate(data.receivedAt), col);
+    label(doc, x + col, 231, 'NCR', data.ncrNumber ?? '—', col);
     label(
       doc,
       x,
-      256,
+      258,
       'Decision',
       data.decision ? `${data.decision}, ${paperDate(data.decidedAt)}` : 'not decided yet',
-      W - 36,
+      full,
+      30,
     );
 
-    doc.image(qr, x, 290, { width: 120 });
-    doc.font('Helvetica').fontSize(7).fillColor(COLOURS.muted);
-    doc.text('Scan for the lot page, its readings and its history.', x + 130, 300, {
-      width: W - 36 - 130,
+    doc.image(qr, x, 294, { width: 120 });
+    const side = full - 130;
+    fitText(doc, 'Scan for the lot page, its readings and its history.', x + 130, 298, side, 26, {
+      size: 7,
+      colour: COLOURS.muted,
     });
-    doc.text(data.url, x + 130, 330, { width: W - 36 - 130 });
-    doc.font('Helvetica-Bold').fontSize(7).fillColor(COLOURS.ink);
-    doc.text('Gaugeproof receiving inspection', x + 130, 392, { width: W - 36 - 130 });
+    fitText(doc, data.url, x + 130, 326, side, 60, { size: 7, minSize: 5, colour: COLOURS.muted });
+    fitText(doc, 'Gaugeproof receiving inspection', x + 130, 392, side, 18, {
+      bold: true,
+      size: 7,
+    });
   });
 }
