@@ -1,4 +1,16 @@
-import { UnprocessableEntityException, UnsupportedMediaTypeException } from '@nestjs/common';
+import {
+  ServiceUnavailableException,
+  UnprocessableEntityException,
+  UnsupportedMediaTypeException,
+} from '@nestjs/common';
+import {
+  DecodePoolBusyError,
+  DecodeTimeoutError,
+  decodePool,
+  type DecodeJob,
+  type DecodeResult,
+} from './decode-pool';
+import { ImageBoundError, jpegLayout, MAX_JPEG_DECODE_MB, pngLayout } from './image-bounds';
 import { readImageHeader, sniffImageType, webpComplete, type ImageType } from './image-header';
 
 /** 40 megapixels: above any phone camera; a guard against decompression bombs (no source). */
@@ -21,7 +33,9 @@ const corrupt = () =>
 
 /**
  * Judges an upload by its bytes: the type from its magic, the size from its header (refused
- * above 40 MP before any decoding), then a full decode and a thumbnail with jimp.
+ * above 40 MP before any decoding), the bounds of its structure (a PNG's data may inflate to
+ * exactly what its pixels need, a JPEG's frame and scans are limited), then a full decode and
+ * a thumbnail with jimp in a decode thread (decode-pool.ts).
  */
 export async function checkImage(data: Buffer): Promise<CheckedImage> {
   if (!sniffImageType(data)) {
@@ -41,21 +55,57 @@ export async function checkImage(data: Buffer): Promise<CheckedImage> {
     if (!webpComplete(data)) throw corrupt();
     return { ...header, thumbnail: null };
   }
-  // jimp is loaded on the first photo, not at start (about 14 MB of resident memory).
-  const { Jimp } = await import('jimp');
-  let image: Awaited<ReturnType<typeof Jimp.fromBuffer>>;
+  // Bounds from the file's structure, before any decoding.
+  let png: DecodeJob['png'];
   try {
-    image = await Jimp.fromBuffer(data);
-  } catch {
+    if (header.mimeType === 'image/png') {
+      const layout = pngLayout(data);
+      png = { rawBytes: layout.rawBytes, idat: layout.idat };
+    } else {
+      jpegLayout(data);
+    }
+  } catch (e) {
+    if (!(e instanceof ImageBoundError)) throw e;
+    if (e.kind === 'refused') {
+      throw new UnprocessableEntityException(
+        `The image was refused before decoding: ${e.message}.`,
+      );
+    }
     throw corrupt();
   }
-  if (image.bitmap.width !== header.width || image.bitmap.height !== header.height) throw corrupt();
-  if (Math.max(header.width, header.height) > THUMBNAIL_PX) {
-    image.scaleToFit({ w: THUMBNAIL_PX, h: THUMBNAIL_PX });
+  let result: DecodeResult;
+  try {
+    result = await decodePool().run({
+      data,
+      mimeType: header.mimeType,
+      png,
+      thumbnailPx: THUMBNAIL_PX,
+      jpegMaxMemoryMb: MAX_JPEG_DECODE_MB,
+    });
+  } catch (e) {
+    if (e instanceof DecodePoolBusyError) {
+      throw new ServiceUnavailableException(
+        'Too many photos are being processed right now; nothing was saved. Try again in a few seconds.',
+      );
+    }
+    if (e instanceof DecodeTimeoutError) {
+      throw new UnprocessableEntityException(
+        'The image took too long to decode and was refused; nothing was saved. Export it again at a smaller size.',
+      );
+    }
+    throw e;
   }
-  const thumb =
-    header.mimeType === 'image/jpeg'
-      ? await image.getBuffer('image/jpeg', { quality: 80 })
-      : await image.getBuffer('image/png');
-  return { ...header, thumbnail: { data: thumb, mimeType: header.mimeType } };
+  if (!result.ok) {
+    if (result.reason === 'inflates') {
+      throw new UnprocessableEntityException(
+        `The image's compressed data inflates to more than its ${header.width} × ${header.height} pixels need; it was refused before decoding (a damaged file or a decompression bomb).`,
+      );
+    }
+    throw corrupt();
+  }
+  if (result.width !== header.width || result.height !== header.height) throw corrupt();
+  return {
+    ...header,
+    thumbnail: { data: Buffer.from(result.thumbnail), mimeType: header.mimeType },
+  };
 }
