@@ -181,9 +181,10 @@ describe('GET /api/lots/:id/tag.pdf', () => {
       .buffer(true)
       .parse(collect);
     expect(res.status).toBe(200);
-    expect(pdfText(res.body as Buffer)).toMatch(
-      /HOLD[\s\S]*Do not use until the QA lead decides[\s\S]*not decided yet/,
-    );
+    const text = pdfText(res.body as Buffer);
+    expect(text).toMatch(/HOLD[\s\S]*Do not use until the QA lead decides[\s\S]*not decided yet/);
+    // A held lot's QR code opens bench mode.
+    expect(text).toContain(`${ORIGIN}/lots/${lot.id}/bench`);
     expect((await t.http.get('/api/lots/99999/tag.pdf').set(auth(qa))).status).toBe(404);
   });
 });

@@ -9,14 +9,20 @@ export const SCREENSHOT_DIR =
   process.env.SCREENSHOT_DIR ?? join(process.cwd(), 'test-output/screenshots');
 export const DEMO_PASSWORD = 'gaugeproof-demo';
 
-/** A fresh browser profile per launch, removed again by close(). */
-export async function launchBrowser() {
+/**
+ * A fresh browser profile per launch, removed again by close(). `options` go to
+ * playwright's launchPersistentContext (a phone: viewport, hasTouch, isMobile); `args`
+ * are added to the usual ones.
+ */
+export async function launchBrowser({ args = [], ...options } = {}) {
   const freshDir = await mkdtemp(join(tmpdir(), 'gaugeproof-chromium-'));
   const context = await chromium.launchPersistentContext(freshDir, {
     executablePath: '/usr/bin/chromium',
     headless: true,
     viewport: { width: 1280, height: 800 },
+    ...options,
     args: [
+      ...args,
       '--no-sandbox',
       '--disable-gpu',
       '--disable-quic',

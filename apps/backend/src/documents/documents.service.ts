@@ -7,6 +7,9 @@ import { ncrNumberOfLot } from '../decisions/decision-view';
 import { Lot } from '../lots/entities/lot.entity';
 import { lotTagPdf } from './lot-tag';
 
+/** Lot statuses that are still on hold: not yet decided. */
+const HELD: readonly string[] = ['on_hold', 'inspecting', 'awaiting_decision'];
+
 const OUTCOME_WORDS: Record<string, string> = {
   accept: 'accepted',
   accept_on_concession: 'accepted on concession',
@@ -43,7 +46,11 @@ export class DocumentsService {
         : null,
       decidedAt: decision?.decidedAt ?? null,
       ncrNumber: await ncrNumberOfLot(this.em, lot.id),
-      url: `${this.config.publicUrl}/lots/${lot.id}`,
+      // A held lot's tag opens bench mode, where the clerk records its samples; a decided
+      // lot's tag opens its page.
+      url: HELD.includes(lot.status)
+        ? `${this.config.publicUrl}/lots/${lot.id}/bench`
+        : `${this.config.publicUrl}/lots/${lot.id}`,
     });
   }
 }

@@ -13,6 +13,7 @@ import { useSessionUser } from '@/features/auth/auth-context';
 /** Each screen's code loads on its first visit (first-screen budget of issue 7). */
 const TodayRoute = lazyRoute(() => import('@/app/routes/today'), 'TodayRoute');
 const LotRoute = lazyRoute(() => import('@/app/routes/lot'), 'LotRoute');
+const LotBenchRoute = lazyRoute(() => import('@/app/routes/lot-bench'), 'LotBenchRoute');
 const LotsRoute = lazyRoute(() => import('@/app/routes/lots'), 'LotsRoute');
 const ReceivingRoute = lazyRoute(() => import('@/app/routes/receiving'), 'ReceivingRoute');
 const UsersRoute = lazyRoute(() => import('@/app/routes/users'), 'UsersRoute');
@@ -84,6 +85,14 @@ const shellRoutes: RouteObject[] = [
     element: (
       <RoleGate>
         <LotRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.lotBench.path,
+    element: (
+      <RoleGate>
+        <LotBenchRoute />
       </RoleGate>
     ),
   },

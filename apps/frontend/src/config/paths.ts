@@ -18,6 +18,7 @@ export const paths = {
     getHref: (status?: string) => (status ? `/lots?status=${encodeURIComponent(status)}` : '/lots'),
   },
   lot: { path: '/lots/:id', getHref: (id: number | string) => `/lots/${id}` },
+  lotBench: { path: '/lots/:id/bench', getHref: (id: number | string) => `/lots/${id}/bench` },
   scorecards: { path: '/scorecards', getHref: () => '/scorecards' },
   supplierScorecard: {
     path: '/scorecards/:supplierId',

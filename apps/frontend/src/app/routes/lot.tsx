@@ -1,3 +1,4 @@
+import PhoneIphoneOutlined from '@mui/icons-material/PhoneIphoneOutlined';
 import { Alert, Box, Button, CircularProgress, Grid, Stack, Typography } from '@mui/material';
 import { Link as RouterLink, useParams } from 'react-router-dom';
 import { SectionBoundary } from '@/components/section-boundary';
@@ -93,7 +94,21 @@ export function LotRoute() {
 
   return (
     <Stack spacing={3}>
-      <LotHeader lot={data} />
+      <LotHeader
+        lot={data}
+        actions={
+          canRecord ? (
+            <Button
+              variant="contained"
+              startIcon={<PhoneIphoneOutlined />}
+              component={RouterLink}
+              to={paths.lotBench.getHref(data.id)}
+            >
+              Bench mode
+            </Button>
+          ) : undefined
+        }
+      />
       <Grid container spacing={3}>
         <Grid size={{ xs: 12, xl: 8 }}>
           <Stack spacing={3}>

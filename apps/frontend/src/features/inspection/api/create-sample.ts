@@ -6,6 +6,8 @@ export interface CreateSampleRequest {
   conductorId: number;
   /** Which physical unit the piece was cut from ("spool 7"), if the clerk notes it. */
   unitRef?: string;
+  /** Unit number 1..n of the plan; the server takes the next free unit when omitted. */
+  seq?: number;
 }
 
 export const createSample = (lotId: number, request: CreateSampleRequest) =>

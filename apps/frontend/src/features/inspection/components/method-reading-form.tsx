@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Alert, Button, InputAdornment, Stack, TextField, Typography } from '@mui/material';
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { Controller, useForm, useWatch, type Resolver } from 'react-hook-form';
 import { useCreateReading } from '@/features/inspection/api/create-reading';
 import { ConductorCaution } from '@/features/inspection/components/conductor-caution';
@@ -15,19 +15,49 @@ import {
   toReadingRequest,
   type FieldName,
   type ReadingFormValues,
+  type ReadingRequest,
 } from '@/features/inspection/lib/reading-form';
 import type { MethodDefinition } from '@/features/inspection/lib/reading-methods';
 import { previewReading } from '@/features/inspection/lib/reading-preview';
-import type { Conductor, Instrument } from '@/features/inspection/types';
+import type { Conductor, Instrument, Reading, ReadingMethod } from '@/features/inspection/types';
 import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 
-interface MethodReadingFormProps {
+export interface MethodReadingFormProps {
   definition: MethodDefinition;
   sampleId: number;
   conductor: Conductor;
   minAreaRatio: number;
   instruments: readonly Instrument[];
+  /** Values and instruments to start from per method (bench mode: what this device used last). */
+  initial?: (definition: MethodDefinition) => Partial<ReadingFormValues>;
+  /**
+   * Records the request another way than posting it to `sampleId` (bench mode creates the
+   * sample first and keeps the reading on the device while offline): the stored reading, or
+   * null when it was queued.
+   */
+  record?: (request: ReadingRequest) => Promise<Reading | null>;
+  /** After a reading was recorded (or queued), with what the form held. */
+  onRecorded?: (reading: Reading | null, values: ReadingFormValues, method: ReadingMethod) => void;
+  /** Focus the first empty field on mount (bench mode: the clerk only types). */
+  autoFocus?: boolean;
+}
+
+/** The form's starting values: empty, with what `initial` gives for this method's fields and slots. */
+function startingValues(
+  definition: MethodDefinition,
+  initial?: Partial<ReadingFormValues>,
+): ReadingFormValues {
+  const empty = emptyReadingForm(definition);
+  for (const f of definition.fields) {
+    const v = initial?.values?.[f.name];
+    if (v) empty.values[f.name] = v;
+  }
+  for (const s of definition.instruments) {
+    const v = initial?.instruments?.[s.slot];
+    if (v) empty.instruments[s.slot] = v;
+  }
+  return empty;
 }
 
 export function MethodReadingForm({
@@ -36,13 +66,19 @@ export function MethodReadingForm({
   conductor,
   minAreaRatio,
   instruments,
+  initial,
+  record,
+  onRecorded,
+  autoFocus,
 }: MethodReadingFormProps) {
   const create = useCreateReading(sampleId);
   const fieldNames = useMemo(() => definition.fields.map((f) => f.name), [definition]);
+  const [startValues] = useState(() => startingValues(definition, initial?.(definition)));
+  const firstEmpty = definition.fields.find((f) => !startValues.values[f.name])?.name;
   const form = useForm<ReadingFormValues>({
     resolver: zodResolver(buildReadingSchema(definition)) as Resolver<ReadingFormValues>,
     mode: 'onChange',
-    defaultValues: emptyReadingForm(definition),
+    defaultValues: startValues,
   });
   const watched = useWatch({ control: form.control }) as ReadingFormValues;
   const inputs = readingInputs(definition, { values: watched.values ?? {}, instruments: {} });
@@ -62,14 +98,21 @@ export function MethodReadingForm({
           minAreaRatio,
         });
   const { errors, isSubmitting } = form.formState;
-  const formErrors = create.isError ? splitServerErrors(create.error, fieldNames).formErrors : [];
+  const [submitError, setSubmitError] = useState<unknown>(null);
+  const formErrors =
+    submitError !== null ? splitServerErrors(submitError, fieldNames).formErrors : [];
 
   const onSubmit = form.handleSubmit(async (values) => {
+    setSubmitError(null);
     try {
-      const reading = await create.mutateAsync(toReadingRequest(definition, values));
-      toasts.success(`Recorded: measures as ${reading.measuresAs}.`);
-      form.reset(emptyReadingForm(definition));
+      const request = toReadingRequest(definition, values);
+      const reading = record ? await record(request) : await create.mutateAsync(request);
+      if (!record && reading) toasts.success(`Recorded: measures as ${reading.measuresAs}.`);
+      // The instruments stay chosen for the next reading: the clerk is at the same bench.
+      form.reset({ ...emptyReadingForm(definition), instruments: values.instruments });
+      onRecorded?.(reading, values, definition.method);
     } catch (error) {
+      setSubmitError(error);
       const { fieldErrors } = splitServerErrors<FieldName>(error, fieldNames);
       for (const name of fieldNames) {
         const message = fieldErrors[name];
@@ -90,14 +133,19 @@ export function MethodReadingForm({
             <TextField
               key={field.name}
               label={field.label}
-              inputMode="decimal"
-              error={!!errors.values?.[field.name]}
-              helperText={errors.values?.[field.name]?.message ?? field.helper}
+              autoFocus={autoFocus && field.name === firstEmpty}
               slotProps={{
+                htmlInput: {
+                  inputMode: field.integer ? 'numeric' : 'decimal',
+                  enterKeyHint: 'done',
+                  autoComplete: 'off',
+                },
                 input: {
                   endAdornment: <InputAdornment position="end">{field.unit}</InputAdornment>,
                 },
               }}
+              error={!!errors.values?.[field.name]}
+              helperText={errors.values?.[field.name]?.message ?? field.helper}
               {...form.register(`values.${field.name}`)}
             />
           ))}

@@ -1,4 +1,6 @@
 import { Alert, Card, CardContent, Grid, Stack, Typography } from '@mui/material';
+import { HoldBanner } from '@/features/lots/components/hold-banner';
+import type { ReactNode } from 'react';
 import { LotStatusChip } from '@/features/lots/components/lot-status-chip';
 import { SamplingPlanSummary } from '@/features/lots/components/sampling-plan-summary';
 import { SupplierStatusAlert } from '@/features/lots/components/supplier-status-alert';
@@ -19,22 +21,19 @@ function Fact({ label, value }: { label: string; value: string }) {
 
 interface LotHeaderProps {
   lot: LotSummary & { notes?: string | null; supplierWarning?: string | null };
+  /** Buttons beside the title (bench mode). */
+  actions?: ReactNode;
 }
 
-export function LotHeader({ lot }: LotHeaderProps) {
+export function LotHeader({ lot, actions }: LotHeaderProps) {
   return (
     <Stack spacing={2}>
       <Stack direction="row" spacing={2} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
         <Typography variant="h1">Lot {lot.id}</Typography>
         <LotStatusChip status={lot.status} size="medium" />
+        {actions}
       </Stack>
-      {lot.status === 'on_hold' && (
-        <Alert severity="warning" variant="filled" role="status">
-          <strong>On hold.</strong> Nothing from this lot may be used or shipped until it is
-          inspected and a QA lead decides. Cut the samples the plan asks for and record their
-          readings.
-        </Alert>
-      )}
+      <HoldBanner status={lot.status} />
       {lot.supplierWarning ? (
         <Alert severity="error">{lot.supplierWarning}</Alert>
       ) : (

@@ -1,0 +1,147 @@
+import assert from 'node:assert/strict';
+import { after, before, test } from 'node:test';
+import { apiAs } from './api-fixtures.mjs';
+import { launchBrowser, screenshot, signIn, url } from './browser.mjs';
+
+// Bench mode on a phone (issue 15): a mass sample in at most three touches plus its digits.
+// A touch is a tap on the screen or a key of the on-screen keyboard other than the digits
+// and the decimal mark (Enter counts): counted in the page by an init script.
+
+const PHONE = { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true };
+const STAMP = Date.now().toString(36).toUpperCase();
+
+const COUNT_TOUCHES = () => {
+  globalThis.__touches = 0;
+  globalThis.__keys = [];
+  globalThis.addEventListener('touchstart', () => (globalThis.__touches += 1), true);
+  globalThis.addEventListener(
+    'keydown',
+    (e) => {
+      if (!/^[0-9.,]$/.test(e.key)) globalThis.__keys.push(e.key);
+    },
+    true,
+  );
+};
+
+/** Touches since the last call, and the non-digit keys among them. */
+async function takeTouches(page) {
+  return page.evaluate(() => {
+    const result = { taps: globalThis.__touches, keys: [...globalThis.__keys] };
+    globalThis.__touches = 0;
+    globalThis.__keys = [];
+    return { ...result, total: result.taps + result.keys.length };
+  });
+}
+
+let browser;
+let page;
+let lot;
+let admin;
+before(async () => {
+  // S-3 at AQL 15 on 50 spools is code letter B: 3 units, accept 1, reject 2
+  // (ISO 2859-1 Tables I and II-A).
+  admin = await apiAs('admin@demo.example');
+  const supplier = await admin('POST', '/suppliers', {
+    name: `Bench Test Wire ${STAMP}`,
+    code: `BTW-${STAMP}`.slice(0, 32),
+    contactEmail: 'quality@bench-test.example',
+  });
+  const product = await admin('POST', '/products', {
+    supplierId: supplier.id,
+    sku: `BT-4AWG-${STAMP}`,
+    kind: 'spool',
+    description: '4 AWG power cable, 30 m spool',
+    inspectionLevel: 'S-3',
+    aql: '15',
+    conductors: [{ purpose: 'power', gauge: '4 AWG', claimedMaterial: 'copper' }],
+  });
+  lot = await admin('POST', '/lots', {
+    productId: product.id,
+    poNumber: `PO-BENCH-${STAMP}`,
+    quantity: 50,
+    unit: 'spools',
+  });
+  assert.equal(lot.samplingPlan.sampleSize, 3);
+  browser = await launchBrowser(PHONE);
+  page = await browser.context.newPage();
+  await page.addInitScript(COUNT_TOUCHES);
+});
+after(async () => {
+  await browser?.close();
+});
+
+test('a clerk records a full small plan in bench mode on a phone, in three touches a sample', async () => {
+  await signIn(page, 'clerk@demo.example');
+  await page.waitForURL((u) => u.pathname === '/today');
+  await page.goto(url(`/lots/${lot.id}/bench`));
+  await page.getByRole('heading', { name: 'Unit 1' }).waitFor();
+  await assert.doesNotReject(page.getByTestId('hold-banner').waitFor());
+
+  const mass = page.getByRole('textbox', { name: 'Mass of the strands' });
+  assert.equal(await mass.getAttribute('inputmode'), 'decimal', 'the phone shows its number pad');
+  await screenshot(page, 'bench-phone-first-piece');
+
+  // First piece on a new device: the balance and the cut length are chosen once.
+  await takeTouches(page);
+  await page.getByRole('combobox', { name: 'Balance' }).tap();
+  await page.getByRole('option').filter({ hasNotText: 'overdue' }).first().tap();
+  await page.getByRole('textbox', { name: 'Cut length' }).tap();
+  await page.keyboard.type('1000');
+  const setup = await takeTouches(page);
+
+  // 195 g over 1000 mm of copper is about 21.5 mm², a good 4 AWG (nominal 21.15 mm²);
+  // 76.1 g is about 8.4 mm², which measures as 8 AWG (A = m / (ρ L (1 + k)), ρ 8.89 g/cm³).
+  const pieces = [
+    { unit: 1, massG: '195', verdict: 'Conforms' },
+    { unit: 2, massG: '76.1', verdict: 'Nonconforming' },
+    { unit: 3, massG: '194.2', verdict: 'Conforms' },
+  ];
+  const counts = [];
+  for (const piece of pieces) {
+    await page.getByRole('heading', { name: `Unit ${piece.unit}` }).waitFor();
+    await mass.tap();
+    await page.keyboard.type(piece.massG);
+    await page.keyboard.press('Enter');
+    const verdict = page.getByRole('status', { name: `Unit ${piece.unit}: ${piece.verdict}` });
+    await verdict.waitFor();
+    if (piece.unit === 1) await screenshot(page, 'bench-phone-verdict');
+    const next = page.getByRole('button', { name: /^Next: / });
+    if (piece.unit < pieces.length) await next.tap();
+    const touches = await takeTouches(page);
+    counts.push(touches.total);
+    assert.ok(
+      touches.total <= 3,
+      `unit ${piece.unit}: ${touches.total} touches (${touches.taps} taps, keys ${touches.keys.join(' ')}) plus the digits`,
+    );
+  }
+  assert.ok(setup.total <= 3, `setting the bench up once took ${setup.total} touches`);
+  await page.getByText('Every planned piece has a reading').waitFor();
+  await page.getByText('3 of 3 pieces recorded').waitFor();
+  await screenshot(page, 'bench-phone-done');
+
+  // Exactly one sample and one reading per piece reached the server, with the balance.
+  const stored = await admin('GET', `/lots/${lot.id}`);
+  assert.deepEqual(stored.samples.map((s) => [s.seq, s.readings.length, s.verdict]).sort(), [
+    [1, 1, 'conforms'],
+    [2, 1, 'nonconforming'],
+    [3, 1, 'conforms'],
+  ]);
+  assert.ok(
+    stored.samples.every((s) => s.readings[0].instruments.some((i) => i.kind === 'balance')),
+  );
+  assert.equal(stored.status, 'awaiting_decision');
+  // Still held until a QA lead decides.
+  await page.reload();
+  await page.getByTestId('hold-banner').waitFor();
+  console.log(`touches per mass sample: ${counts.join(', ')} (set-up once: ${setup.total})`);
+});
+
+test('bench mode on a laptop screen, and the instruments stay remembered on this device', async () => {
+  await page.setViewportSize({ width: 1366, height: 768 });
+  await page.goto(url(`/lots/${lot.id}/bench`));
+  await page.getByRole('combobox', { name: 'Piece' }).waitFor();
+  await page.getByRole('button', { name: /Another reading|Next/ }).count();
+  await screenshot(page, 'bench-laptop');
+  const balance = page.getByRole('combobox', { name: 'Balance' });
+  assert.notEqual((await balance.textContent()).trim(), '', 'the balance is remembered');
+});

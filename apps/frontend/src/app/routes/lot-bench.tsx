@@ -1,0 +1,95 @@
+import { Alert, Box, Button, CircularProgress, Stack, Typography } from '@mui/material';
+import { Link as RouterLink, useParams } from 'react-router-dom';
+import { SectionBoundary } from '@/components/section-boundary';
+import { paths } from '@/config/paths';
+import { useSessionUser } from '@/features/auth/auth-context';
+import { useInstruments } from '@/features/inspection/api/get-instruments';
+import { useLot } from '@/features/inspection/api/get-lot';
+import { BenchPanel } from '@/features/inspection/components/bench/bench-panel';
+import { HoldBanner } from '@/features/lots/components/hold-banner';
+import { LotStatusChip } from '@/features/lots/components/lot-status-chip';
+import { isApiError } from '@/lib/api-client';
+import { errorMessage } from '@/lib/query-client';
+import type { Role } from '@/lib/roles';
+
+const RECORDERS: readonly Role[] = ['clerk', 'qa_lead', 'admin'];
+const OPEN_STATUSES = ['on_hold', 'inspecting', 'awaiting_decision'];
+
+/** Bench mode of a lot: phone and tablet first, one piece at a time (issue 15). */
+export function LotBenchRoute() {
+  const { id } = useParams();
+  const lotId = Number(id);
+  const user = useSessionUser();
+  const lot = useLot(lotId);
+  const instruments = useInstruments({ active: true });
+
+  if (
+    !Number.isInteger(lotId) ||
+    lotId <= 0 ||
+    (lot.isError && isApiError(lot.error) && lot.error.status === 404)
+  ) {
+    return <Alert severity="info">There is no lot {id}.</Alert>;
+  }
+  // The bench starts from the instruments remembered on this device: wait for the register.
+  if (lot.isPending || instruments.isPending) {
+    return (
+      <Stack direction="row" spacing={2} sx={{ alignItems: 'center' }}>
+        <CircularProgress size={24} aria-label={`Loading lot ${lotId}`} />
+        <Typography>Loading lot {lotId}…</Typography>
+      </Stack>
+    );
+  }
+  if (lot.isError) {
+    return (
+      <Alert
+        severity="error"
+        action={
+          <Button color="inherit" onClick={() => void lot.refetch()}>
+            Try again
+          </Button>
+        }
+      >
+        Lot {lotId} could not be loaded: {errorMessage(lot.error)}
+      </Alert>
+    );
+  }
+  const data = lot.data;
+  const canRecord = OPEN_STATUSES.includes(data.status) && RECORDERS.includes(user.role);
+  return (
+    <Box sx={{ maxWidth: 720, mx: 'auto' }}>
+      <Stack spacing={2}>
+        <Stack
+          direction="row"
+          spacing={1}
+          sx={{ alignItems: 'center', flexWrap: 'wrap', rowGap: 1 }}
+        >
+          <Typography variant="h5" component="h1" sx={{ fontWeight: 700 }}>
+            Lot {data.id} · bench
+          </Typography>
+          <LotStatusChip status={data.status} />
+          <Box sx={{ flexGrow: 1 }} />
+          <Button size="small" component={RouterLink} to={paths.lot.getHref(data.id)}>
+            Lot page
+          </Button>
+        </Stack>
+        <Typography variant="body2" color="text.secondary">
+          {data.product.sku} — {data.product.description} · PO {data.poNumber} ·{' '}
+          {data.supplier.name}
+        </Typography>
+        <HoldBanner status={data.status} compact />
+        {canRecord && instruments.isError && (
+          <Alert severity="error">
+            The instrument register cannot be loaded: {errorMessage(instruments.error)}
+          </Alert>
+        )}
+        <SectionBoundary name="bench">
+          <BenchPanel
+            lot={data}
+            instruments={instruments.data?.items ?? []}
+            canRecord={canRecord}
+          />
+        </SectionBoundary>
+      </Stack>
+    </Box>
+  );
+}

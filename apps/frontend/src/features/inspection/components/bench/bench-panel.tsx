@@ -1,0 +1,234 @@
+import ArrowForwardOutlined from '@mui/icons-material/ArrowForwardOutlined';
+import {
+  Alert,
+  Box,
+  Button,
+  LinearProgress,
+  MenuItem,
+  Stack,
+  TextField,
+  Typography,
+} from '@mui/material';
+import { useQueryClient } from '@tanstack/react-query';
+import { useMemo, useState } from 'react';
+import { recordBenchReading } from '@/features/inspection/api/record-bench-reading';
+import { BenchVerdict } from '@/features/inspection/components/bench/bench-verdict';
+import { ReadingForm } from '@/features/inspection/components/reading-form';
+import {
+  benchTargets,
+  isDone,
+  nextTarget,
+  preferredMethod,
+  targetKey,
+  type BenchTarget,
+} from '@/features/inspection/lib/bench';
+import {
+  checkRemembered,
+  readBenchMemory,
+  writeBenchMemory,
+  type BenchMemory,
+} from '@/features/inspection/lib/bench-memory';
+import { conductorLabel, verdictLabels } from '@/features/inspection/lib/labels';
+import type { MethodDefinition } from '@/features/inspection/lib/reading-methods';
+import type { ReadingFormValues, ReadingRequest } from '@/features/inspection/lib/reading-form';
+import type { Instrument, LotDetail, Reading, ReadingMethod } from '@/features/inspection/types';
+
+/** Fields whose value a bench keeps from one piece to the next, per method. */
+const KEPT_FIELDS = ['lengthMm'] as const;
+
+interface BenchPanelProps {
+  lot: LotDetail;
+  instruments: readonly Instrument[];
+  canRecord: boolean;
+}
+
+const pieceLabel = (
+  t: { seq: number; conductor: BenchTarget['conductor'] },
+  oneConductor: boolean,
+) => (oneConductor ? `Unit ${t.seq}` : `Unit ${t.seq} · ${conductorLabel(t.conductor)}`);
+
+/**
+ * Bench mode: one planned piece at a time, the fields to type, Enter to record, the verdict
+ * large, then the next piece. The instruments and the cut length stay from piece to piece
+ * on this device.
+ */
+export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
+  const queryClient = useQueryClient();
+  const targets = useMemo(() => benchTargets(lot), [lot]);
+  const oneConductor = lot.product.conductors.length === 1;
+  const [recorded, setRecorded] = useState<ReadonlyMap<string, number>>(new Map());
+  const recordedKeys = useMemo(() => new Set(recorded.keys()), [recorded]);
+  const [chosenKey, setChosenKey] = useState<string | undefined>(undefined);
+  const [last, setLast] = useState<{ key: string; reading: Reading | null } | null>(null);
+  const [memory, setMemory] = useState<BenchMemory>(() => readBenchMemory());
+  const remembered = useMemo(
+    () => checkRemembered(memory.instruments, instruments),
+    [memory.instruments, instruments],
+  );
+
+  const current =
+    targets.find((t) => targetKey(t) === chosenKey) ??
+    nextTarget(targets, undefined, recordedKeys) ??
+    targets[0];
+  const doneCount = targets.filter((t) => isDone(t) || recordedKeys.has(targetKey(t))).length;
+  const following = current ? nextTarget(targets, targetKey(current), recordedKeys) : undefined;
+
+  if (!current) {
+    return <Alert severity="info">This product has no active conductor to sample.</Alert>;
+  }
+  const key = targetKey(current);
+  const label = pieceLabel(current, oneConductor);
+
+  const initial = (definition: MethodDefinition): Partial<ReadingFormValues> => ({
+    instruments: remembered.usable,
+    values: Object.fromEntries(
+      KEPT_FIELDS.map((f) => [f, memory.values[`${definition.method}:${f}`] ?? '']),
+    ),
+  });
+
+  const record = async (request: ReadingRequest): Promise<Reading | null> => {
+    const reading = await recordBenchReading(
+      {
+        lotId: lot.id,
+        conductorId: current.conductor.id,
+        seq: current.seq,
+        sampleId: current.sample?.id ?? recorded.get(key),
+      },
+      request,
+    );
+    void queryClient.invalidateQueries({ queryKey: ['lots'] });
+    return reading;
+  };
+
+  const onRecorded = (
+    reading: Reading | null,
+    values: ReadingFormValues,
+    method: ReadingMethod,
+  ) => {
+    const next: BenchMemory = {
+      instruments: { ...memory.instruments, ...values.instruments },
+      values: { ...memory.values },
+    };
+    for (const f of KEPT_FIELDS) {
+      const v = values.values[f];
+      if (v) next.values[`${method}:${f}`] = v;
+    }
+    writeBenchMemory(next);
+    setMemory(next);
+    setRecorded((m) => new Map(m).set(key, reading?.sampleId ?? m.get(key) ?? 0));
+    // Stay on this piece to show its verdict; "next" moves on.
+    setChosenKey(key);
+    setLast({ key, reading });
+  };
+
+  const goTo = (t: BenchTarget | undefined) => {
+    setLast(null);
+    setChosenKey(t ? targetKey(t) : undefined);
+  };
+
+  return (
+    <Stack spacing={2}>
+      <Box>
+        <Stack direction="row" sx={{ justifyContent: 'space-between', alignItems: 'baseline' }}>
+          <Typography component="p" sx={{ fontWeight: 700 }}>
+            {doneCount} of {targets.length} pieces recorded
+          </Typography>
+          <Typography variant="body2" color="text.secondary">
+            plan: {lot.samplingPlan.sampleSize} unit{lot.samplingPlan.sampleSize === 1 ? '' : 's'}
+            {oneConductor ? '' : ` × ${lot.product.conductors.length} conductors`}
+          </Typography>
+        </Stack>
+        <LinearProgress
+          variant="determinate"
+          value={targets.length ? (100 * doneCount) / targets.length : 0}
+          aria-label="Progress through the plan"
+          sx={{ height: 10, borderRadius: 5, mt: 0.5 }}
+        />
+      </Box>
+
+      <TextField
+        select
+        size="small"
+        label="Piece"
+        value={key}
+        onChange={(e) => goTo(targets.find((t) => targetKey(t) === e.target.value))}
+      >
+        {targets.map((t) => {
+          const k = targetKey(t);
+          const state = recordedKeys.has(k)
+            ? 'recorded here'
+            : t.sample
+              ? verdictLabels[t.sample.verdict].toLowerCase()
+              : 'not cut';
+          return (
+            <MenuItem key={k} value={k}>
+              {pieceLabel(t, oneConductor)} — {state}
+            </MenuItem>
+          );
+        })}
+      </TextField>
+
+      <Box>
+        <Typography variant="h4" component="h2" sx={{ fontWeight: 700 }}>
+          {label}
+        </Typography>
+        <Typography color="text.secondary">
+          {conductorLabel(current.conductor)} ·{' '}
+          {current.sample || recorded.has(key)
+            ? 'piece already cut'
+            : `cut a piece from unit ${current.seq}`}{' '}
+          ·{' '}
+          {preferredMethod(current.conductor) === 'mass'
+            ? 'strip it and weigh all its strands'
+            : 'measure its diameter'}
+        </Typography>
+      </Box>
+
+      {remembered.refused.map((reason) => (
+        <Alert key={reason} severity="warning">
+          {reason}
+        </Alert>
+      ))}
+
+      {last?.key === key ? (
+        <Stack spacing={2}>
+          <BenchVerdict reading={last.reading} label={label} />
+          {following ? (
+            <Button
+              variant="contained"
+              size="large"
+              autoFocus
+              endIcon={<ArrowForwardOutlined />}
+              onClick={() => goTo(following)}
+              sx={{ py: 1.5, fontSize: '1.1rem' }}
+            >
+              Next: {pieceLabel(following, oneConductor)}
+            </Button>
+          ) : (
+            <Alert severity="success">
+              Every planned piece has a reading. A QA lead decides the lot from here.
+            </Alert>
+          )}
+          <Button onClick={() => setLast(null)}>Another reading on {label}</Button>
+        </Stack>
+      ) : canRecord ? (
+        <ReadingForm
+          key={key}
+          sampleId={current.sample?.id ?? recorded.get(key) ?? 0}
+          conductor={current.conductor}
+          minAreaRatio={lot.product.minAreaRatio}
+          instruments={instruments}
+          defaultMethod={preferredMethod(current.conductor)}
+          initial={initial}
+          record={record}
+          onRecorded={onRecorded}
+          autoFocus
+        />
+      ) : (
+        <Alert severity="info">
+          This lot is no longer open, or your role does not record readings.
+        </Alert>
+      )}
+    </Stack>
+  );
+}
