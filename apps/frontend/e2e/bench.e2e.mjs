@@ -36,6 +36,7 @@ async function takeTouches(page) {
 let browser;
 let page;
 let lot;
+let serialLot;
 let admin;
 before(async () => {
   // S-3 at AQL 15 on 50 spools is code letter B: 3 units, accept 1, reject 2
@@ -62,6 +63,12 @@ before(async () => {
     unit: 'spools',
   });
   assert.equal(lot.samplingPlan.sampleSize, 3);
+  serialLot = await admin('POST', '/lots', {
+    productId: product.id,
+    poNumber: `PO-SERIAL-${STAMP}`,
+    quantity: 50,
+    unit: 'spools',
+  });
   browser = await launchBrowser(PHONE);
   page = await browser.context.newPage();
   await page.addInitScript(COUNT_TOUCHES);
@@ -144,4 +151,57 @@ test('bench mode on a laptop screen, and the instruments stay remembered on this
   await screenshot(page, 'bench-laptop');
   const balance = page.getByRole('combobox', { name: 'Balance' });
   assert.notEqual((await balance.textContent()).trim(), '', 'the balance is remembered');
+});
+
+// A fake serial port in the page: Web Serial's getPorts/requestPort/open/readable, fed by
+// the test with lines as a balance sends them.
+const FAKE_SERIAL = () => {
+  const port = {
+    readable: null,
+    async open() {
+      this.readable = new ReadableStream({
+        start(controller) {
+          globalThis.__balanceSends = (text) => controller.enqueue(new TextEncoder().encode(text));
+        },
+      });
+    },
+    async close() {},
+    getInfo: () => ({}),
+  };
+  Object.defineProperty(globalThis.navigator, 'serial', {
+    configurable: true,
+    value: { getPorts: async () => [], requestPort: async () => port },
+  });
+};
+
+test('a balance on a (fake) serial port fills the mass once it settles', async () => {
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.addInitScript(FAKE_SERIAL);
+  await page.goto(url(`/lots/${serialLot.id}/bench`));
+  await page.getByRole('heading', { name: 'Unit 1' }).waitFor();
+  await page.getByRole('button', { name: 'Read the balance' }).tap();
+  const status = page.getByRole('status', { name: 'Balance' });
+  await status.getByText('waiting for a weight').waitFor();
+  const send = (text) => page.evaluate((t) => globalThis.__balanceSends(t), text);
+  const mass = page.getByRole('textbox', { name: 'Mass of the strands' });
+
+  await send('QT,GS,+00012 PC\r\n');
+  await status.getByText('«QT,GS,+00012 PC»').waitFor();
+  await send('US,GS,+00190.12  g\r\nUS,GS,+00194.80  g\r');
+  await status.getByText('194.80 g — settling').waitFor();
+  assert.equal(await mass.inputValue(), '', 'an unsettled weight is not taken');
+  await send('\nST,GS,+00195.04  g\r\n');
+  await status.getByText('filled in 195.04 g').waitFor();
+  assert.equal(await mass.inputValue(), '195.04');
+  await screenshot(page, 'bench-phone-serial-balance');
+  await mass.press('Enter');
+  await page.getByRole('status', { name: 'Unit 1: Conforms' }).waitFor();
+
+  const stored = await admin('GET', `/lots/${serialLot.id}`);
+  const [reading] = stored.samples[0].readings;
+  assert.equal(reading.inputs.massG, 195.04);
+  assert.ok(
+    reading.instruments.some((i) => i.kind === 'balance'),
+    'the balance is kept',
+  );
 });

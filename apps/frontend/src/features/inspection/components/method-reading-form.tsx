@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Alert, Button, InputAdornment, Stack, TextField, Typography } from '@mui/material';
-import { useMemo, useState } from 'react';
+import { useMemo, useState, type ReactNode } from 'react';
 import { Controller, useForm, useWatch, type Resolver } from 'react-hook-form';
 import { useCreateReading } from '@/features/inspection/api/create-reading';
 import { ConductorCaution } from '@/features/inspection/components/conductor-caution';
@@ -17,7 +17,7 @@ import {
   type ReadingFormValues,
   type ReadingRequest,
 } from '@/features/inspection/lib/reading-form';
-import type { MethodDefinition } from '@/features/inspection/lib/reading-methods';
+import type { InputField, MethodDefinition } from '@/features/inspection/lib/reading-methods';
 import { previewReading } from '@/features/inspection/lib/reading-preview';
 import type { Conductor, Instrument, Reading, ReadingMethod } from '@/features/inspection/types';
 import { splitServerErrors } from '@/lib/server-field-errors';
@@ -41,6 +41,8 @@ export interface MethodReadingFormProps {
   onRecorded?: (reading: Reading | null, values: ReadingFormValues, method: ReadingMethod) => void;
   /** Focus the first empty field on mount (bench mode: the clerk only types). */
   autoFocus?: boolean;
+  /** Something shown under a field that can fill it (bench mode: read the balance). */
+  fieldAction?: (field: InputField, fill: (text: string) => void) => ReactNode;
 }
 
 /** The form's starting values: empty, with what `initial` gives for this method's fields and slots. */
@@ -70,6 +72,7 @@ export function MethodReadingForm({
   record,
   onRecorded,
   autoFocus,
+  fieldAction,
 }: MethodReadingFormProps) {
   const create = useCreateReading(sampleId);
   const fieldNames = useMemo(() => definition.fields.map((f) => f.name), [definition]);
@@ -98,6 +101,18 @@ export function MethodReadingForm({
           minAreaRatio,
         });
   const { errors, isSubmitting } = form.formState;
+  const { setValue } = form;
+  const fillers = useMemo(
+    () =>
+      Object.fromEntries(
+        definition.fields.map((f) => [
+          f.name,
+          (text: string) =>
+            setValue(`values.${f.name}`, text, { shouldValidate: true, shouldDirty: true }),
+        ]),
+      ) as Record<FieldName, (text: string) => void>,
+    [definition, setValue],
+  );
   const [submitError, setSubmitError] = useState<unknown>(null);
   const formErrors =
     submitError !== null ? splitServerErrors(submitError, fieldNames).formErrors : [];
@@ -130,24 +145,28 @@ export function MethodReadingForm({
         {formErrors.length > 0 && <Alert severity="error">{formErrors.join(' ')}</Alert>}
         <Stack direction={{ xs: 'column', md: 'row' }} spacing={2}>
           {definition.fields.map((field) => (
-            <TextField
-              key={field.name}
-              label={field.label}
-              autoFocus={autoFocus && field.name === firstEmpty}
-              slotProps={{
-                htmlInput: {
-                  inputMode: field.integer ? 'numeric' : 'decimal',
-                  enterKeyHint: 'done',
-                  autoComplete: 'off',
-                },
-                input: {
-                  endAdornment: <InputAdornment position="end">{field.unit}</InputAdornment>,
-                },
-              }}
-              error={!!errors.values?.[field.name]}
-              helperText={errors.values?.[field.name]?.message ?? field.helper}
-              {...form.register(`values.${field.name}`)}
-            />
+            <Stack key={field.name} spacing={0.5} sx={{ flex: 1 }}>
+              <TextField
+                label={field.label}
+                autoFocus={autoFocus && field.name === firstEmpty}
+                slotProps={{
+                  htmlInput: {
+                    inputMode: field.integer ? 'numeric' : 'decimal',
+                    enterKeyHint: 'done',
+                    autoComplete: 'off',
+                  },
+                  input: {
+                    endAdornment: <InputAdornment position="end">{field.unit}</InputAdornment>,
+                  },
+                  // A value filled in by the page (the balance) must lift the label too.
+                  inputLabel: watched.values?.[field.name] ? { shrink: true } : undefined,
+                }}
+                error={!!errors.values?.[field.name]}
+                helperText={errors.values?.[field.name]?.message ?? field.helper}
+                {...form.register(`values.${field.name}`)}
+              />
+              {fieldAction?.(field, fillers[field.name])}
+            </Stack>
           ))}
         </Stack>
         <Stack direction={{ xs: 'column', md: 'row' }} spacing={2}>

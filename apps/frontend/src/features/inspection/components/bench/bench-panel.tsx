@@ -10,7 +10,7 @@ import {
   Typography,
 } from '@mui/material';
 import { useQueryClient } from '@tanstack/react-query';
-import { useMemo, useState } from 'react';
+import { lazy, Suspense, useMemo, useState, type ReactNode } from 'react';
 import { recordBenchReading } from '@/features/inspection/api/record-bench-reading';
 import { BenchVerdict } from '@/features/inspection/components/bench/bench-verdict';
 import { ReadingForm } from '@/features/inspection/components/reading-form';
@@ -29,9 +29,20 @@ import {
   type BenchMemory,
 } from '@/features/inspection/lib/bench-memory';
 import { conductorLabel, verdictLabels } from '@/features/inspection/lib/labels';
-import type { MethodDefinition } from '@/features/inspection/lib/reading-methods';
+import type { InputField, MethodDefinition } from '@/features/inspection/lib/reading-methods';
 import type { ReadingFormValues, ReadingRequest } from '@/features/inspection/lib/reading-form';
 import type { Instrument, LotDetail, Reading, ReadingMethod } from '@/features/inspection/types';
+
+// The serial code loads only where the browser has serial ports, on first use of bench mode.
+const BalanceButton = lazy(() => import('@/features/inspection/components/bench/balance-button'));
+const hasSerial = () => typeof navigator !== 'undefined' && 'serial' in navigator;
+
+const balanceAction = (field: InputField, fill: (text: string) => void): ReactNode =>
+  field.name === 'massG' && hasSerial() ? (
+    <Suspense fallback={null}>
+      <BalanceButton onValue={fill} />
+    </Suspense>
+  ) : null;
 
 /** Fields whose value a bench keeps from one piece to the next, per method. */
 const KEPT_FIELDS = ['lengthMm'] as const;
@@ -223,6 +234,7 @@ export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
           record={record}
           onRecorded={onRecorded}
           autoFocus
+          fieldAction={balanceAction}
         />
       ) : (
         <Alert severity="info">
