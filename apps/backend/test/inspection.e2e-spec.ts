@@ -158,7 +158,7 @@ describe('readings', () => {
       bench.rule.serial,
     ]);
     expect(res.body.reasons[0]).toMatch(/Measures as 8 AWG/);
-    expect(res.body.budget.map((b: { name: string }) => b.name)).toContain('mass reading');
+    expect(res.body.budget.map((b: { name: string }) => b.name)).toContain('mass: resolution');
   });
 
   it('identifies CCA sold as copper from mass and resistance: nonconforming whatever its area', async () => {

@@ -18,9 +18,11 @@ describe('assessSample (ILAC-G8:09/2019 §4.2 guard bands; ASTM B496 98 %)', () 
       UMm2: area.UMm2,
     });
     expect(r.verdict).toBe('nonconforming');
-    expect(r.measuresAs.gauge.label).toBe('8 AWG');
+    expect(r.measuresAs.label).toBe('8 AWG'); // 8.3923 ≥ 0.98 × 8.367 (ASTM B258; B496)
     expect(r.areaRatio).toBeCloseTo(8.3923 / 21.15, 4); // ≈ 0.40 of 21.15 mm² (ASTM B258)
-    expect(r.reasons[0]).toBe('Measures as 8 AWG: 40 % of the copper a 4 AWG label promises.');
+    expect(r.reasons[0]).toBe('Measures as 8 AWG: 39.7 % of the copper a 4 AWG label promises.');
+    expect(r.consequence?.treatAs).toBe('8 AWG');
+    expect(r.consequence?.text).toMatch(/^Treat as 8 AWG for fusing and voltage drop/);
     expect(r.minimumAreaMm2).toBeCloseTo(0.98 * 21.15, 10);
     expect(r.lengthForConclusiveMm).toBeUndefined();
   });
@@ -139,15 +141,20 @@ describe('assessSample (ILAC-G8:09/2019 §4.2 guard bands; ASTM B496 98 %)', () 
       UMm2: 0.1,
       minAreaRatio: 0.95,
     });
+    // metric copper is judged by resistance (IEC 60228): 0.017241 × 1.02 × 1000 / 24 = 0.7327 Ω/km
+    // against 0.780 Ω/km (IEC 60228 Table 3, class 5 plain): 93.9 % of the maximum
     expect(r.verdict).toBe('conforms');
-    expect(r.measuresAs.gauge.label).toBe('25 mm²');
-    expect(r.reasons[0]).toBe('Measures as 25 mm²: 96 % of the copper a 25 mm² label promises.');
+    expect(r.criterion).toBe('resistance');
+    expect(r.measuresAs.label).toBe('25 mm²');
+    expect(r.reasons[0]).toBe(
+      'Measures as 25 mm²: resistance 93.9 % of the maximum a 25 mm² class 5 conductor may have.',
+    );
     const an = assessSample({
       gauge: '8 AWG',
       claimedMaterial: 'copper',
       areaMm2: 5.3,
       UMm2: 0.01,
     });
-    expect(an.reasons[0]).toBe('Measures as 10 AWG: 63 % of the copper an 8 AWG label promises.');
+    expect(an.reasons[0]).toBe('Measures as 10 AWG: 63.3 % of the copper an 8 AWG label promises.');
   });
 });

@@ -21,11 +21,33 @@ export { METRIC_AREAS_MM2, METRIC_SIZES, metricGauge, metricLabel } from './gaug
 export { parseGauge } from './gauges/parse.js';
 export { formatGaugeLabel } from './gauges/format.js';
 export {
+  BELOW_SMALLEST_SIZE,
+  conductorMeasuresAs,
   largestSizeReached,
   measuresAs,
+  nextSmallerSize,
   standardSizes,
+  type ConductorMeasuresAs,
+  type ConductorMeasuresAsInput,
   type MeasuresAs,
 } from './gauges/measures-as.js';
+export {
+  CONDUCTOR_CLASSES,
+  DEFAULT_CONDUCTOR_CLASS,
+  iec60228MaxResistance,
+  requireConductorClass,
+  type ConductorClass,
+  type CopperCoating,
+  type ResistanceLimit,
+} from './conductors/iec60228.js';
+export {
+  formatPercent,
+  formatValueAtUncertainty,
+  formatWithUncertainty,
+  roundWithUncertainty,
+  UNCERTAINTY_SIGNIFICANT_FIGURES,
+  type RoundedMeasurement,
+} from './format.js';
 
 export {
   MATERIAL_IDS,
@@ -33,6 +55,8 @@ export {
   iec60228CopperFactor,
   massResistivity,
   materialById,
+  parallelAlpha,
+  TINNED_COPPER_MASS_RESISTIVITY,
   resistanceFactor,
   type Material,
   type MaterialFamily,
@@ -41,7 +65,12 @@ export {
 
 export {
   COVERAGE_FACTOR,
+  calibrationStandardUncertainty,
   combinedRelative,
+  coverageFactorFor,
+  instrumentComponents,
+  welchSatterthwaite,
+  type InstrumentAccuracy,
   meanUncertainty,
   resolutionUncertainty,
   toleranceUncertainty,
@@ -50,8 +79,17 @@ export {
 } from './uncertainty.js';
 export { STANDARD_STRANDING_INCREMENT } from './methods/common.js';
 export { areaFromMass, type AreaFromMassInput } from './methods/mass.js';
-export { areaFromStrands, type AreaFromStrandsInput } from './methods/strands.js';
-export { areaFromResistance, type AreaFromResistanceInput } from './methods/resistance.js';
+export {
+  areaFromStrands,
+  MAX_STRAND_DIAMETERS,
+  RECOMMENDED_STRAND_DIAMETERS,
+  type AreaFromStrandsInput,
+} from './methods/strands.js';
+export {
+  areaFromResistance,
+  DEFAULT_TEMPERATURE_DIFFERENCE_C,
+  type AreaFromResistanceInput,
+} from './methods/resistance.js';
 export { areaFromDiameter, type AreaFromDiameterInput } from './methods/diameter.js';
 
 export {
@@ -63,11 +101,26 @@ export {
 } from './identify-material.js';
 export {
   assessSample,
+  PRACTICAL_SPECIMEN_LENGTH_MM,
   type AssessSampleInput,
+  type Criterion,
   type MaterialCheck,
+  type ReadingMethod,
   type SampleAssessment,
   type Verdict,
 } from './assess-sample.js';
+export {
+  installerConsequence,
+  SHORT_CONDUCTOR_CAUTIONS,
+  type InstallerConsequence,
+} from './installer.js';
+export {
+  PLAUSIBLE_AREA_RATIO,
+  questionReading,
+  STRAND_COUNT_TOLERANCE,
+  type PlausibilityInput,
+  type PlausibilityQuestion,
+} from './plausibility.js';
 
 export {
   AQLS,
@@ -85,8 +138,13 @@ export {
   aqlKey,
   codeLetterFor,
   lotOutcome,
+  MAX_AQL_NONCONFORMING_UNITS,
+  requireAqlForNonconformingUnits,
+  SAMPLING_PLAN_NAME,
+  sampleProgress,
   samplingPlan,
   type LotOutcome,
+  type SampleProgress,
   type SamplingPlan,
   type SamplingPlanInput,
 } from './sampling/plan.js';

@@ -6,6 +6,7 @@ import {
   MATERIALS,
   massResistivity,
   materialById,
+  parallelAlpha,
   resistanceFactor,
 } from './materials.js';
 
@@ -51,5 +52,31 @@ describe('materials (REFERENCE §2)', () => {
   it('refuses unknown materials with the field named', () => {
     expect(() => materialById('brass')).toThrow(StandardsInputError);
     expect(() => materialById('gold', 'claimedMaterial')).toThrow(/claimedMaterial/);
+  });
+});
+
+describe('tinned copper and CCA (issue 13)', () => {
+  it('tinned copper has its own resistivity: ASTM B33 Table 2, 0.15940 Ω·g/m² ÷ 8.89 g/cm³', () => {
+    expect(MATERIALS.tinned_copper.resistivityOhmMm2PerM).toBeCloseTo(0.01793, 5); // ASTM B33 Table 2
+    expect(massResistivity(MATERIALS.tinned_copper)).toBeCloseTo(0.1594, 6); // ASTM B33 Table 2
+    expect(MATERIALS.tinned_copper.sources.resistivity).toMatch(/ASTM B33 Table 2/);
+    // 96.2 % IACS: above plain copper's 1/58 (IACS, NBS Handbook 100)
+    expect(1 / 58 / MATERIALS.tinned_copper.resistivityOhmMm2PerM).toBeCloseTo(0.962, 3);
+  });
+
+  it('CCA α₂₀ comes from its two metals in parallel, ≈ 0.0040 /°C (derivation in materials.ts)', () => {
+    // G_Cu = 0.10 × 58 = 5.80, G_Al = 0.90 / 0.028264 = 31.84; α = Σ Gα / Σ G
+    const gCu = 0.1 * 58;
+    const gAl = 0.9 / 0.028264; // IEC 60287-1-1 Table 1
+    expect(MATERIALS.cca10.alpha20PerC).toBeCloseTo(
+      (gCu * 0.00393 + gAl * 0.00403) / (gCu + gAl),
+      12,
+    );
+    expect(MATERIALS.cca10.alpha20PerC).toBeCloseTo(0.004015, 6);
+    expect(MATERIALS.cca15.alpha20PerC).toBeCloseTo(0.004008, 6);
+    // between its metals' own (0.00393 copper, 0.00403 aluminium; IACS, IEC 60287-1-1)
+    expect(parallelAlpha(0)).toBeCloseTo(0.00403, 12);
+    expect(parallelAlpha(1)).toBeCloseTo(0.00393, 12);
+    expect(MATERIALS.cca15.sources.alpha).toMatch(/in parallel/);
   });
 });

@@ -53,9 +53,14 @@ describe('every function refuses bad input with StandardsInputError and the fiel
     expect(fieldOf(() => areaFromMass({ massG: 1, lengthMm: 1, lengthResolutionMm: NaN }))).toBe(
       'lengthResolutionMm',
     );
-    expect(fieldOf(() => areaFromMass({ massG: 1, lengthMm: 1, massToleranceG: Infinity }))).toBe(
-      'massToleranceG',
-    );
+    expect(
+      fieldOf(() =>
+        areaFromMass({ massG: 1, lengthMm: 1, balance: { accuracyPercentOfReading: Infinity } }),
+      ),
+    ).toBe('balance.accuracyPercentOfReading');
+    expect(
+      fieldOf(() => areaFromMass({ massG: 1, lengthMm: 1, rule: { calibrationUncertainty: -1 } })),
+    ).toBe('rule.calibrationUncertainty');
   });
 
   it.each(BAD_SIZES)('the other methods refuse %s', (bad) => {

@@ -92,7 +92,7 @@ export async function seedExportLot(t: TestApp, input: ExportLotInput): Promise<
     uMm2: area.uMm2,
     expandedUMm2: area.UMm2,
     areaRatio: assessment.areaRatio,
-    measuresAs: assessment.measuresAs.gauge.label,
+    measuresAs: assessment.measuresAs.label,
     verdict: assessment.verdict,
     result: { reasons: assessment.reasons },
     takenBy: clerk.id,

@@ -1,5 +1,11 @@
 import { StandardsInputError } from '../errors.js';
-import { meanUncertainty, resolutionUncertainty, toleranceUncertainty } from '../uncertainty.js';
+import {
+  component,
+  meanUncertainty,
+  resolutionUncertainty,
+  type BudgetComponent,
+  type InstrumentAccuracy,
+} from '../uncertainty.js';
 import { requireNonNegative, requirePositive } from '../validate.js';
 
 /** ASTM B496 standard stranding increment for mass and resistance: 2 % (REFERENCE §3). */
@@ -45,9 +51,50 @@ export function reading(
   return { value, uResolution, uSpread: meanUncertainty(checked), count: checked.length };
 }
 
-/** u of an optional stated tolerance ±a (a/√3, GUM 4.3.7), 0 when none is given. */
-export function optionalTolerance(field: string, halfWidth: unknown): number {
-  return halfWidth === undefined ? 0 : toleranceUncertainty(requireNonNegative(field, halfWidth));
+/** An instrument's stated accuracy and calibration, each checked: absent, or zero or more. */
+export function checkAccuracy(field: string, accuracy: unknown): InstrumentAccuracy | undefined {
+  if (accuracy === undefined || accuracy === null) return undefined;
+  if (typeof accuracy !== 'object') {
+    throw new StandardsInputError(field, `${field} must be an object of stated accuracies.`);
+  }
+  const a = accuracy as Record<string, unknown>;
+  const out: InstrumentAccuracy = {};
+  for (const key of [
+    'accuracyPercentOfReading',
+    'accuracyAbsolute',
+    'calibrationUncertainty',
+  ] as const) {
+    if (a[key] !== undefined && a[key] !== null)
+      out[key] = requireNonNegative(`${field}.${key}`, a[key]);
+  }
+  return out;
+}
+
+/**
+ * The Type A line of several repeated readings: the standard deviation of their mean s/√n
+ * (GUM 4.2.3) with ν = n − 1 degrees of freedom (GUM G.3.3), so few readings widen k through
+ * Welch–Satterthwaite. None for a single reading.
+ */
+export function spreadComponent(
+  name: string,
+  r: Reading,
+  unit: string,
+  sensitivity: number,
+): BudgetComponent[] {
+  if (r.count < 2) return [];
+  return [
+    {
+      ...component(
+        name,
+        r.value,
+        unit,
+        r.uSpread,
+        sensitivity,
+        `Type A: standard deviation of the mean of ${r.count} readings s/√n (GUM 4.2.3), ν = ${r.count - 1}`,
+      ),
+      degreesOfFreedom: r.count - 1,
+    },
+  ];
 }
 
 /** 0.02 → "2 %". */

@@ -1,13 +1,13 @@
 import { materialById, type MaterialId } from '../materials.js';
 import {
   areaResult,
-  component,
   exactConstant,
+  instrumentComponents,
   type AreaResult,
-  type BudgetComponent,
+  type InstrumentAccuracy,
 } from '../uncertainty.js';
 import {
-  optionalTolerance,
+  checkAccuracy,
   percentText,
   reading,
   requireIncrement,
@@ -26,93 +26,56 @@ export interface AreaFromMassInput {
   massResolutionG?: number;
   /** Length rule division, mm. Default 1 mm: ASTM B263 asks for divisions no larger (REFERENCE §3). */
   lengthResolutionMm?: number;
-  /** Optional stated accuracy ±a of the balance, g (from its calibration), taken as a/√3. */
-  massToleranceG?: number;
-  /** Optional stated accuracy ±a of the length rule, mm, taken as a/√3. */
-  lengthToleranceMm?: number;
+  /** The balance's stated accuracy and calibration uncertainty, g (instrument register). */
+  balance?: InstrumentAccuracy;
+  /** The length rule's stated accuracy and calibration uncertainty, mm (instrument register). */
+  rule?: InstrumentAccuracy;
 }
 
 /**
  * Cross-section by mass (ASTM B263): A = m / (ρ · L · (1 + k)), ρ the assumed material's
- * density. Density and increment are conventional and treated as exact.
+ * density. Density and increment are conventional and treated as exact. The balance and the
+ * rule each contribute resolution, stated accuracy and calibration (GUM 4.3); the cut length
+ * is read at both ends of the specimen.
  */
 export function areaFromMass(input: AreaFromMassInput): AreaResult {
   const material = materialById(input.material ?? 'copper');
   const k = requireIncrement(input.strandingIncrement ?? STANDARD_STRANDING_INCREMENT);
-  const mass = reading('massG', input.massG, 'massResolutionG', input.massResolutionG ?? 0.1);
-  const length = reading(
-    'lengthMm',
-    input.lengthMm,
-    'lengthResolutionMm',
-    input.lengthResolutionMm ?? 1,
-  );
-  const uMassTol = optionalTolerance('massToleranceG', input.massToleranceG);
-  const uLengthTol = optionalTolerance('lengthToleranceMm', input.lengthToleranceMm);
+  const massResolution = input.massResolutionG ?? 0.1;
+  const lengthResolution = input.lengthResolutionMm ?? 1;
+  const mass = reading('massG', input.massG, 'massResolutionG', massResolution);
+  const length = reading('lengthMm', input.lengthMm, 'lengthResolutionMm', lengthResolution);
+  const balance = checkAccuracy('balance', input.balance);
+  const rule = checkAccuracy('rule', input.rule);
 
   const densityGPerMm3 = material.densityGPerCm3 / 1000;
   const areaMm2 = mass.value / (densityGPerMm3 * length.value * (1 + k));
 
-  const budget: BudgetComponent[] = [
-    component(
-      'mass reading',
-      mass.value,
-      'g',
-      mass.uResolution,
-      1,
-      'balance resolution δ/√12 (GUM F.2.2.1)',
-    ),
-    component(
-      'cut length',
-      length.value,
-      'mm',
-      length.uResolution,
-      -1,
-      'rule division δ/√12 (GUM F.2.2.1)',
-    ),
-  ];
-  if (uMassTol > 0) {
-    budget.push(
-      component(
-        'balance accuracy',
-        mass.value,
-        'g',
-        uMassTol,
-        1,
-        'stated tolerance a/√3 (GUM 4.3.7)',
-      ),
-    );
-  }
-  if (uLengthTol > 0) {
-    budget.push(
-      component(
-        'rule accuracy',
-        length.value,
-        'mm',
-        uLengthTol,
-        -1,
-        'stated tolerance a/√3 (GUM 4.3.7)',
-      ),
-    );
-  }
-  budget.push(
-    exactConstant(
-      `density of ${material.name}`,
-      material.densityGPerCm3,
-      'g/cm³',
-      -1,
-      material.sources.density,
-    ),
-    exactConstant(
-      'stranding factor 1 + k',
-      1 + k,
-      '1',
-      -1,
-      'ASTM B496 standard increment when k = 0.02',
-    ),
-  );
   return areaResult(
     areaMm2,
-    budget,
-    `Density (${material.densityGPerCm3} g/cm³) and stranding increment (${percentText(k)}) are conventional constants treated as exact: the uncertainty covers the readings only.`,
+    [
+      ...instrumentComponents('mass', mass.value, 'g', 1, massResolution, balance, {
+        resolutionNote: 'balance resolution',
+      }),
+      ...instrumentComponents('cut length', length.value, 'mm', -1, lengthResolution, rule, {
+        readings: 2,
+        resolutionNote: 'rule division',
+      }),
+      exactConstant(
+        `density of ${material.name}`,
+        material.densityGPerCm3,
+        'g/cm³',
+        -1,
+        material.sources.density,
+      ),
+      exactConstant(
+        'stranding factor 1 + k',
+        1 + k,
+        '1',
+        -1,
+        'ASTM B496 standard increment when k = 0.02',
+      ),
+    ],
+    `Density (${material.densityGPerCm3} g/cm³) and stranding increment (${percentText(k)}) are conventional constants treated as exact: the uncertainty covers the instruments (resolution, stated accuracy, calibration) and the cut length.`,
   );
 }

@@ -19,12 +19,26 @@ describe('areaFromStrands (A = n · π d² / 4, REFERENCE §3)', () => {
   it('averages several readings and adds their spread (common practice; GUM 4.2.3)', () => {
     const r = areaFromStrands({ count: 168, strandDiameterMm: [0.253, 0.254, 0.255] });
     expect(r.budget[0].value).toBeCloseTo(0.254, 12);
-    const spread = r.budget.find((c) => c.name === 'spread of strand readings');
+    const spread = r.budget.find((c) => c.name === 'spread of strand diameters');
     expect(spread?.standardUncertainty).toBeCloseTo(0.001 / Math.sqrt(3), 12); // s = 0.001, n = 3
+    expect(spread?.degreesOfFreedom).toBe(2); // ν = n − 1 (GUM G.3.3)
     // diameter sensitivity 2: u_rel(A)² = 4 (u_res² + u_spread²) / d²
-    const expected =
-      (2 * Math.sqrt((0.001 / Math.sqrt(12)) ** 2 + (0.001 / Math.sqrt(3)) ** 2)) / 0.254;
+    const uRes = 0.001 / Math.sqrt(12);
+    const uSpread = 0.001 / Math.sqrt(3);
+    const expected = (2 * Math.sqrt(uRes ** 2 + uSpread ** 2)) / 0.254;
     expect(r.uMm2 / r.areaMm2).toBeCloseTo(expected, 12);
+    // Welch–Satterthwaite (GUM G.4.1): ν_eff = u⁴ / (u_spread⁴ / 2) = 2 · (1 + 1/4)² = 3.125
+    expect(r.effectiveDegreesOfFreedom).toBeCloseTo(3.125, 10);
+    expect(r.coverageFactor).toBe(3.31); // GUM Table G.2, ν = 3, p = 95.45 %
+    expect(r.UMm2).toBeCloseTo(3.31 * r.uMm2, 12);
+  });
+
+  it('takes 1 to 10 strand readings and recommends three (issue 13)', () => {
+    const diameters = Array.from({ length: 11 }, () => 0.254);
+    expect(() => areaFromStrands({ count: 7, strandDiameterMm: diameters })).toThrow(/1 to 10/);
+    expect(areaFromStrands({ count: 7, strandDiameterMm: [0.25, 0.26] }).note).toMatch(
+      /three or more are recommended/,
+    );
   });
 
   it('uncertainty is never negative and grows with a coarser micrometer (property)', () => {

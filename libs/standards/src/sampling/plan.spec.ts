@@ -1,7 +1,17 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { StandardsInputError } from '../errors.js';
-import { acceptedAtTighterAql, aqlKey, codeLetterFor, lotOutcome, samplingPlan } from './plan.js';
+import {
+  acceptedAtTighterAql,
+  aqlKey,
+  codeLetterFor,
+  lotOutcome,
+  MAX_AQL_NONCONFORMING_UNITS,
+  requireAqlForNonconformingUnits,
+  SAMPLING_PLAN_NAME,
+  sampleProgress,
+  samplingPlan,
+} from './plan.js';
 import {
   AQLS,
   CODE_LETTERS,
@@ -150,5 +160,30 @@ describe('lotOutcome', () => {
     expect(acceptedAtTighterAql(plan, 1)).toBe(true);
     expect(acceptedAtTighterAql(plan, 2)).toBe(false);
     expect(acceptedAtTighterAql(samplingPlan({ lotSize: 800, aql: '0.010' }), 0)).toBe(false);
+  });
+});
+
+describe('curtailed rejection and AQL limits (issue 13 points 5 and 8)', () => {
+  // lot 501–1200, level II → J, n = 80, AQL 1.0: Ac 2, Re 3 (REFERENCE §6, MIL-STD-105E)
+  const plan = samplingPlan({ lotSize: 1000, aql: '1.0' });
+
+  it('rejects as soon as the count reaches Re, accepts only after every planned unit', () => {
+    expect(sampleProgress(plan, 21, 3)).toBe('reject');
+    expect(sampleProgress(plan, 3, 3)).toBe('reject');
+    expect(sampleProgress(plan, 79, 0)).toBe('in_progress');
+    expect(sampleProgress(plan, 79, 2)).toBe('in_progress');
+    expect(sampleProgress(plan, 80, 2)).toBe('accept');
+    expect(() => sampleProgress(plan, 2, 3)).toThrow(/cannot come from 2 inspected/);
+  });
+
+  it('refuses AQLs above 10 for plans counting nonconforming units (Z1.4; ISO 2859-1)', () => {
+    expect(requireAqlForNonconformingUnits('10')).toBe('10');
+    expect(requireAqlForNonconformingUnits(6.5)).toBe('6.5');
+    expect(() => requireAqlForNonconformingUnits('65')).toThrow(/nonconformities per 100 units/);
+    expect(() => requireAqlForNonconformingUnits(1000)).toThrow(/AQL 10 or below/);
+    expect(MAX_AQL_NONCONFORMING_UNITS).toBe(10);
+    expect(SAMPLING_PLAN_NAME).toMatch(
+      /ANSI\/ASQ Z1\.4 \/ MIL-STD-105E single sampling; switching per ISO 2859-1/,
+    );
   });
 });

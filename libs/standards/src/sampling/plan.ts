@@ -128,3 +128,57 @@ export function acceptedAtTighterAql(plan: SamplingPlan, nonconformingCount: num
   const count = requireInteger('nonconformingCount', nonconformingCount, 0);
   return count <= PLAN_TABLE.normal[plan.codeLetter][index - 1][1];
 }
+
+/**
+ * How a sampling plan is named wherever it is printed (issue 13 point 8): the single
+ * sampling tables of ANSI/ASQ Z1.4 (the same as MIL-STD-105E), switching per ISO 2859-1.
+ */
+export const SAMPLING_PLAN_NAME =
+  'ANSI/ASQ Z1.4 / MIL-STD-105E single sampling; switching per ISO 2859-1';
+
+/**
+ * The largest AQL for a plan that counts nonconforming units: 10. ANSI/ASQ Z1.4 and ISO 2859-1
+ * give AQLs above 10 for nonconformities per 100 units only (a percentage of units cannot
+ * exceed 100, and their plans accept more "defects" than units).
+ */
+export const MAX_AQL_NONCONFORMING_UNITS = 10;
+
+/** `StandardsInputError('aql')` when the AQL is above 10, with the reason (Z1.4; ISO 2859-1). */
+export function requireAqlForNonconformingUnits(aql: unknown): Aql {
+  const key = aqlKey(aql);
+  if (Number(key) > MAX_AQL_NONCONFORMING_UNITS) {
+    throw new StandardsInputError(
+      'aql',
+      `AQL ${key} is for nonconformities per 100 units; a plan that counts nonconforming units takes AQL 10 or below (ANSI/ASQ Z1.4; ISO 2859-1).`,
+    );
+  }
+  return key;
+}
+
+/** Where a lot stands while its sample is inspected. */
+export type SampleProgress = 'in_progress' | LotOutcome;
+
+/**
+ * Curtailed rejection (issue 13 point 5): once the nonconforming count reaches the reject
+ * number the lot can be rejected at once, whatever the units still to inspect (more
+ * nonconforming units cannot undo it); acceptance still needs every planned unit.
+ * `inspectedUnits` is the count of units with a verdict, `nonconformingUnits` of those
+ * nonconforming (a kit with one short conductor is one nonconforming unit).
+ */
+export function sampleProgress(
+  plan: SamplingPlan,
+  inspectedUnits: number,
+  nonconformingUnits: number,
+): SampleProgress {
+  const inspected = requireInteger('inspectedUnits', inspectedUnits, 0);
+  const count = requireInteger('nonconformingUnits', nonconformingUnits, 0);
+  if (count > inspected) {
+    throw new StandardsInputError(
+      'nonconformingUnits',
+      `${count} nonconforming units cannot come from ${inspected} inspected.`,
+    );
+  }
+  if (count >= plan.reject) return 'reject';
+  if (inspected < plan.sampleSize) return 'in_progress';
+  return lotOutcome(plan, count);
+}

@@ -21,7 +21,7 @@ export function ReadingPreviewPanel({ preview }: { preview: ReadingPreview | nul
     >
       <Typography variant="overline">Preview — the server recomputes</Typography>
       <Typography variant="h5" component="p">
-        Measures as {assessment.measuresAs.gauge.label} <VerdictChip verdict={assessment.verdict} />
+        Measures as {assessment.measuresAs.label} <VerdictChip verdict={assessment.verdict} />
       </Typography>
       <Typography>
         {formatAreaMm2(area.areaMm2)} ± {formatAreaMm2(area.UMm2)} (k = 2):{' '}

@@ -121,7 +121,7 @@ describe('live preview', () => {
     if (!preview.ok) return;
     // A = m / (ρ L (1 + k)) = 76.1 / (0.00889 × 1000 × 1.02) = 8.392 mm² (ASTM B263, B496 k = 2 %).
     expect(preview.area.areaMm2).toBeCloseTo(8.392, 3);
-    expect(preview.assessment.measuresAs.gauge.label).toBe('8 AWG');
+    expect(preview.assessment.measuresAs.label).toBe('8 AWG');
     expect(preview.assessment.verdict).toBe('nonconforming');
     expect(preview.assessment.areaRatio).toBeCloseTo(8.392 / 21.15, 2);
   });
