@@ -29,8 +29,16 @@ async function create(body: Record<string, unknown>, token = buyer) {
   return t.http.post('/api/corrective-actions').set(auth(token)).send(body);
 }
 
-const patch = (id: number, body: Record<string, unknown>, token = buyer) =>
-  t.http.patch(`/api/corrective-actions/${id}`).set(auth(token)).send(body);
+/** A change made on the copy as it is now (its current version), unless one is given. */
+async function patch(id: number, body: Record<string, unknown>, token = buyer) {
+  const version =
+    body.version ??
+    (await t.http.get(`/api/corrective-actions/${id}`).set(auth(token))).body.version;
+  return t.http
+    .patch(`/api/corrective-actions/${id}`)
+    .set(auth(token))
+    .send({ version, ...body });
+}
 
 describe('POST /api/corrective-actions', () => {
   it('opens a numbered request against the supplier with its lots, audited on the lot timeline', async () => {
@@ -232,5 +240,44 @@ describe('roles on corrective actions', () => {
         (await t.http.get('/api/corrective-actions').set(auth(await t.token(email)))).status,
       ).toBe(200);
     }
+  });
+});
+
+describe('versions of a SCAR (issue 17, item 7)', () => {
+  it('answers a stale edit with 409 and the request as it is now, and lets one of two steps at once win', async () => {
+    const supplier = await fx.supplier('Birchwood Cable Works');
+    const created = await t.http.post('/api/corrective-actions').set(auth(buyer)).send({
+      supplierId: supplier.id,
+      lotIds: [],
+      problem: 'Undersized conductors',
+      dueOn: '2099-01-31',
+    });
+    expect(created.status).toBe(201);
+    expect(created.body.version).toBe(1);
+    const id = created.body.id;
+    expect((await patch(id, { version: 1, dueOn: '2099-02-28' })).status).toBe(200);
+    const stale = await patch(id, { version: 1, dueOn: '2099-03-31' });
+    expect(stale.status).toBe(409);
+    expect(stale.body.current).toMatchObject({ id, version: 2, dueOn: '2099-02-28' });
+    const answer = {
+      version: 2,
+      status: 'responded',
+      containment: 'Stock quarantined',
+      rootCause: 'Die worn',
+      correctiveAction: 'Die replaced',
+    };
+    const both = await Promise.all([patch(id, answer), patch(id, answer)]);
+    expect(both.map((r) => r.status).sort()).toEqual([200, 409]);
+    const now = await t.http.get(`/api/corrective-actions/${id}`).set(auth(buyer));
+    expect(now.body).toMatchObject({ status: 'responded', version: 3 });
+    const events = await t.http
+      .get('/api/audit?entityType=corrective_action&action=corrective_action.update&pageSize=100')
+      .set(auth(await t.token(DEMO.admin)));
+    expect(events.status).toBe(200);
+    const responded = events.body.items.filter(
+      (e: { entityId: number; after: { status?: string } | null }) =>
+        e.entityId === id && e.after?.status === 'responded',
+    );
+    expect(responded).toHaveLength(1); // the loser wrote nothing
   });
 });

@@ -108,62 +108,183 @@ describe('POST /api/returns', () => {
 });
 
 describe('GET and PATCH /api/returns', () => {
-  it('moves draft → sent → acknowledged → closed, returns the lots when sent, refuses skips with 422', async () => {
+  const step = (id: number, name: string, body: Record<string, unknown> = {}) =>
+    t.http.post(`/api/returns/${id}/${name}`).set(auth(buyer)).send(body);
+
+  it('moves draft → shipped → acknowledged → credited → closed, returning the lots, refusing skips with 422', async () => {
     const { lots } = await supplierWithRejects('Lakeshore Harness Supply');
     const created = (await createReturn([lots[0].id])).body;
-    const skip = await t.http
-      .patch(`/api/returns/${created.id}`)
-      .set(auth(buyer))
-      .send({ status: 'acknowledged' });
+    expect(created).toMatchObject({ version: 1, currency: 'USD' }); // CURRENCY unset: USD
+    const skip = await step(created.id, 'acknowledge');
     expect(skip.status).toBe(422);
-    expect(skip.body.message).toMatch(/cannot go from draft to acknowledged/);
-    const sent = await t.http
+    expect(skip.body.message).toMatch(
+      /is draft: it can go on to notice e-mailed or shipped or cancelled, not acknowledged/,
+    );
+    const edited = await t.http
       .patch(`/api/returns/${created.id}`)
       .set(auth(buyer))
-      .send({ status: 'sent', costs: { other: 12.5 } });
-    expect(sent.status).toBe(200);
-    expect(sent.body).toMatchObject({
-      status: 'sent',
-      chargebackTotal: 12.5,
+      .send({ version: 1, costs: { other: 12.5 }, currency: 'EUR' });
+    expect(edited.status).toBe(200);
+    expect(edited.body).toMatchObject({ version: 2, chargebackTotal: 12.5, currency: 'EUR' });
+    const badShip = await step(created.id, 'ship', { carrier: 'X', shippedOn: '2026-02-30' });
+    expect(badShip.status).toBe(400);
+    expect(badShip.body.message).toEqual(
+      expect.arrayContaining([
+        'carrier must be at least 2 characters',
+        'quantity must be a number',
+      ]),
+    );
+    const shipped = await step(created.id, 'ship', {
+      version: 2,
+      carrier: 'Northline Freight',
+      trackingNumber: 'NF 4471 2200',
+      shippedOn: '2026-11-30',
+      quantity: 5,
+    });
+    expect(shipped.status).toBe(200);
+    expect(shipped.body).toMatchObject({
+      status: 'shipped',
+      version: 3,
+      shipment: {
+        carrier: 'Northline Freight',
+        trackingNumber: 'NF 4471 2200',
+        shippedOn: '2026-11-30',
+        quantity: 5,
+      },
       lots: [{ id: lots[0].id, status: 'returned' }],
     });
-    const back = await t.http
+    const costsLate = await t.http
       .patch(`/api/returns/${created.id}`)
       .set(auth(buyer))
-      .send({ status: 'draft' });
-    expect(back.status).toBe(422);
-    for (const status of ['acknowledged', 'closed']) {
-      const res = await t.http
-        .patch(`/api/returns/${created.id}`)
-        .set(auth(buyer))
-        .send({ status });
-      expect(res.status).toBe(200);
-    }
+      .send({ version: 3, costs: { other: 1 } });
+    expect(costsLate.status).toBe(422);
+    expect(costsLate.body.message).toMatch(/the costs can change only while it is a draft/);
+    const cancelLate = await step(created.id, 'cancel', { reason: 'changed our mind' });
+    expect(cancelLate.status).toBe(422);
+    expect((await step(created.id, 'acknowledge', { rmaNumber: 'RMA-77' })).body).toMatchObject({
+      status: 'acknowledged',
+      rmaNumber: 'RMA-77',
+    });
+    const credited = await step(created.id, 'credit', {
+      creditNoteNumber: 'CN-20931',
+      creditAmount: 12.5,
+    });
+    expect(credited.body).toMatchObject({
+      status: 'credited',
+      credit: { creditNoteNumber: 'CN-20931', amount: 12.5 },
+    });
+    expect((await step(created.id, 'close')).body.status).toBe('closed');
     const closed = await t.http
       .patch(`/api/returns/${created.id}`)
       .set(auth(buyer))
-      .send({ notes: 'late note' });
+      .send({ version: 6, notes: 'late note' });
     expect(closed.status).toBe(422);
     const timeline = await t.http.get(`/api/lots/${lots[0].id}/timeline`).set(auth(buyer));
     const actions = timeline.body.map((e: { action: string }) => e.action);
     expect(actions).toEqual(
       expect.arrayContaining([
-        'decision.create',
-        'ncr.create',
         'return.create',
-        'lot.returned',
         'return.update',
+        'lot.returned',
+        'return.ship',
+        'return.acknowledge',
+        'return.credit',
+        'return.close',
       ]),
     );
-    const summaries = timeline.body.map((e: { summary: string }) => e.summary).join('\n');
-    expect(summaries).toMatch(new RegExp(`updated return ${created.number} from draft to sent`));
+  });
+
+  it('edits the lots of a draft, and a cancelled draft frees its lots and leaves the scorecard', async () => {
+    const { supplier, lots } = await supplierWithRejects('Millbrook Wire Traders', 3);
+    const other = await supplierWithRejects('Quarry Lane Cables');
+    const ret = (await createReturn([lots[0].id, lots[1].id], { costs: { other: 40 } })).body;
+    const foreign = await t.http
+      .patch(`/api/returns/${ret.id}`)
+      .set(auth(buyer))
+      .send({ version: 1, lotIds: [lots[0].id, other.lots[0].id] });
+    expect(foreign.status).toBe(422);
+    const swapped = await t.http
+      .patch(`/api/returns/${ret.id}`)
+      .set(auth(buyer))
+      .send({ version: 1, lotIds: [lots[0].id, lots[2].id] });
+    expect(swapped.status).toBe(200);
+    expect(swapped.body.lots.map((l: { id: number }) => l.id)).toEqual([lots[0].id, lots[2].id]);
+    // The lot taken off is free for another return; the one put on is taken.
+    expect((await createReturn([lots[2].id])).status).toBe(422);
+    const freed = await createReturn([lots[1].id]);
+    expect(freed.status).toBe(201);
+    await step(freed.body.id, 'cancel', { reason: 'raised by mistake' });
+
+    const noReason = await step(ret.id, 'cancel', { reason: '' });
+    expect(noReason.status).toBe(400);
+    expect(noReason.body.message).toEqual(['reason must be at least 5 characters']);
+    const cancelled = await step(ret.id, 'cancel', { version: 2, reason: 'Wrong lots ticked' });
+    expect(cancelled.status).toBe(200);
+    expect(cancelled.body).toMatchObject({
+      status: 'cancelled',
+      cancelReason: 'Wrong lots ticked',
+      lots: [{ status: 'rejected' }, { status: 'rejected' }],
+    });
+    expect(
+      (await step(ret.id, 'ship', { carrier: 'Any', shippedOn: '2026-11-30', quantity: 1 })).status,
+    ).toBe(422);
+    const again = await createReturn([lots[0].id, lots[1].id, lots[2].id], { costs: { other: 7 } });
+    expect(again.status).toBe(201);
+    const card = await t.http.get(`/api/suppliers/${supplier.id}/scorecard`).set(auth(buyer));
+    expect(card.status).toBe(200);
+    expect(card.body.chargebacks).toBe(7); // the two cancelled returns (40, 0) count nowhere
+  });
+
+  it('answers a stale edit and a stale step with 409 and the return as it is now', async () => {
+    const { lots } = await supplierWithRejects('Oakridge Conductor Co');
+    const ret = (await createReturn([lots[0].id])).body;
+    const first = await t.http
+      .patch(`/api/returns/${ret.id}`)
+      .set(auth(buyer))
+      .send({ version: 1, notes: 'first' });
+    expect(first.status).toBe(200);
+    const second = await t.http
+      .patch(`/api/returns/${ret.id}`)
+      .set(auth(buyer))
+      .send({ version: 1, notes: 'second' });
+    expect(second.status).toBe(409);
+    expect(second.body.current).toMatchObject({ id: ret.id, version: 2, notes: 'first' });
+    const noVersion = await t.http.patch(`/api/returns/${ret.id}`).set(auth(buyer)).send({});
+    expect(noVersion.status).toBe(400);
+    expect(noVersion.body.message).toContain('version must be a whole number');
+    const staleStep = await step(ret.id, 'cancel', { version: 1, reason: 'no longer needed' });
+    expect(staleStep.status).toBe(409);
+    expect(staleStep.body.current.status).toBe('draft');
+  });
+
+  it('makes one open return of four raised at once for one lot, and one of two steps at once', async () => {
+    const { lots } = await supplierWithRejects('Fernhill Electrical Supply');
+    const raced = await Promise.all([1, 2, 3, 4].map(() => createReturn([lots[0].id])));
+    expect(raced.map((r) => r.status).sort()).toEqual([201, 422, 422, 422]);
+    const open = await t.http
+      .get(`/api/returns?supplierId=${raced[0].body.supplier?.id ?? lots[0].supplier.id}`)
+      .set(auth(buyer));
+    expect(open.body.total).toBe(1);
+    const id = open.body.items[0].id;
+    const both = await Promise.all([
+      step(id, 'cancel', { reason: 'first clerk cancels' }),
+      step(id, 'ship', { carrier: 'Northline Freight', shippedOn: '2026-11-30', quantity: 5 }),
+    ]);
+    const codes = both.map((r) => r.status).sort();
+    expect(codes[0]).toBe(200);
+    expect([409, 422]).toContain(codes[1]); // 409 when both read version 1, 422 when one came after
+    const now = await t.http.get(`/api/returns/${id}`).set(auth(buyer));
+    expect(now.body.version).toBe(2);
   });
 
   it('lists returns paged with status and supplier filters, and as CSV', async () => {
     const { supplier, lots } = await supplierWithRejects('Ironside Cable Depot', 2);
     const one = (await createReturn([lots[0].id])).body;
     await createReturn([lots[1].id]);
-    await t.http.patch(`/api/returns/${one.id}`).set(auth(buyer)).send({ status: 'sent' });
+    await t.http
+      .post(`/api/returns/${one.id}/ship`)
+      .set(auth(buyer))
+      .send({ carrier: 'Northline Freight', shippedOn: '2026-11-30', quantity: 1 });
     const drafts = await t.http
       .get(`/api/returns?supplierId=${supplier.id}&status=draft`)
       .set(auth(buyer));
@@ -171,13 +292,13 @@ describe('GET and PATCH /api/returns', () => {
     expect(drafts.body).toMatchObject({ total: 1, page: 1, pageSize: 25 });
     expect(drafts.body.items[0].lots[0].id).toBe(lots[1].id);
     const both = await t.http
-      .get(`/api/returns?supplierId=${supplier.id}&status=draft,sent&pageSize=1`)
+      .get(`/api/returns?supplierId=${supplier.id}&status=draft,shipped&pageSize=1`)
       .set(auth(buyer));
     expect(both.body.total).toBe(2);
     expect(both.body.items).toHaveLength(1);
     expect((await t.http.get('/api/returns?status=lost').set(auth(buyer))).status).toBe(400);
     const got = await t.http.get(`/api/returns/${one.id}`).set(auth(buyer));
-    expect(got.body).toMatchObject({ id: one.id, status: 'sent' });
+    expect(got.body).toMatchObject({ id: one.id, status: 'shipped' });
     expect((await t.http.get('/api/returns/99999').set(auth(buyer))).status).toBe(404);
     const csv = await t.http
       .get(`/api/returns/export.csv?supplierId=${supplier.id}`)

@@ -161,9 +161,12 @@ describe('demo scenario seeded on an empty database', () => {
 
   it('returned the CCA lots with a chargeback and e-mail, and has an overdue SCAR', async () => {
     const returns = await em.find(VendorReturn, {}, { populate: ['lots'] });
-    const sent = returns.filter((r) => r.status === 'sent');
-    expect(sent.length).toBeGreaterThan(0);
-    expect(sent[0].rmaNumber).toBeTruthy();
+    expect(returns.map((r) => r.status).sort()).toEqual(['closed', 'shipped']);
+    const shipped = returns.find((r) => r.status === 'shipped')!;
+    expect(shipped.rmaNumber).toBeTruthy();
+    expect(shipped).toMatchObject({ carrier: expect.any(String), currency: 'EUR' });
+    const closed = returns.find((r) => r.status === 'closed')!;
+    expect(closed.creditAmount).toBe(closed.chargebackTotal);
     expect(returns.every((r) => r.chargebackTotal > 0)).toBe(true);
     expect(returns.flatMap((r) => r.lots.getItems()).every((l) => l.status === 'returned')).toBe(
       true,

@@ -69,7 +69,8 @@ test('purchasing raises a return for a rejected lot, downloads its CSV and e-mai
   await page.waitForURL((u) => /^\/returns\/\d+$/.test(u.pathname));
   await page.getByRole('heading', { name: /^Return RTV-\d{4}-\d{4}$/ }).waitFor();
   await page.getByRole('list', { name: 'Lots on the return' }).getByText(`Lot ${lot.id}`).waitFor();
-  await page.getByRole('button', { name: 'Mark as sent' }).waitFor();
+  await page.getByRole('button', { name: 'Record shipment' }).waitFor();
+  await page.getByRole('button', { name: 'Cancel the return' }).waitFor();
 
   // The readings CSV: one row per reading, with the lot and the verdicts.
   const [download] = await Promise.all([
@@ -92,6 +93,25 @@ test('purchasing raises a return for a rejected lot, downloads its CSV and e-mai
   const row = page.getByRole('list', { name: 'Outbound messages' }).getByRole('listitem').first();
   await row.getByText('Logged, not sent').waitFor();
   await row.getByText(/readings\.csv, RTV-\d{4}-\d{4}-evidence\.pdf/).waitFor();
+  // E-mailing the draft marked it e-mailed (before its documents were built).
+  await page
+    .getByRole('list', { name: 'Return history' })
+    .getByText(/^Notice e-mailed/)
+    .waitFor();
+
+  // The goods leave: carrier, tracking, date and quantity; a missing carrier is named.
+  await page.getByRole('button', { name: 'Record shipment' }).click();
+  const ship = page.getByRole('dialog');
+  await ship.getByRole('button', { name: 'Record the shipment' }).click();
+  await ship.getByText('Name the carrier.').waitFor();
+  await ship.getByLabel('Carrier').fill('Northline Freight');
+  await ship.getByLabel('Tracking number').fill('NF-4471-2200');
+  await ship.getByRole('button', { name: 'Record the shipment' }).click();
+  await page
+    .getByRole('list', { name: 'Return history' })
+    .getByText(/^Shipped .* by Northline Freight, tracking NF-4471-2200/)
+    .waitFor();
+  await page.getByRole('button', { name: 'Mark as acknowledged' }).waitFor();
   await screenshot(page, 'return-detail');
 
   await page.getByRole('link', { name: 'Returns' }).first().click();

@@ -11,6 +11,8 @@ export interface AppConfig {
   uploadDir: string;
   smtpUrl: string | null;
   mailFrom: string;
+  /** ISO 4217 code of new returns' amounts unless purchasing picks another (CURRENCY). */
+  currency: string;
   jwtSecret: string;
   seedDemo: boolean;
   /** SEED_DEMO=catalog seeds users and catalog only, without the scenario's history. */
@@ -60,6 +62,11 @@ function persistentSecret(dataDir: string): string {
   return secret;
 }
 
+/** An ISO 4217 code the runtime knows (Intl lists the active codes). */
+export function isCurrencyCode(code: string): boolean {
+  return /^[A-Z]{3}$/.test(code) && Intl.supportedValuesOf('currency').includes(code);
+}
+
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const problems: string[] = [];
   const port = Number(env.PORT ?? '3000');
@@ -97,6 +104,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   if (env.S3_ENDPOINT && !/^https?:\/\//.test(env.S3_ENDPOINT)) {
     problems.push('S3_ENDPOINT must start with http:// or https://');
   }
+  const currency = (env.CURRENCY || 'USD').trim().toUpperCase();
+  if (!isCurrencyCode(currency)) {
+    problems.push(`CURRENCY must be an ISO 4217 code such as EUR or USD (got "${env.CURRENCY}")`);
+  }
   if (problems.length > 0) throw new ConfigError(problems);
   const storage: StorageConfig = bucket
     ? {
@@ -117,6 +128,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     uploadDir,
     smtpUrl,
     mailFrom: env.MAIL_FROM || 'Gaugeproof <gaugeproof@localhost>',
+    currency,
     jwtSecret: jwtSecret || persistentSecret(dirname(dbPath)),
     seedDemo: seedRaw !== 'false',
     seedHistory: seedRaw === 'true',

@@ -9,6 +9,7 @@ export function correctiveActionView(c: CorrectiveAction, today: string) {
     id: c.id,
     number: c.number,
     status: c.status,
+    version: c.version,
     supplier: {
       id: c.supplier.id,
       name: c.supplier.name,

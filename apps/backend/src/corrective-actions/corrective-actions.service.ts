@@ -1,10 +1,11 @@
 import {
   BadRequestException,
+  ConflictException,
   Injectable,
   NotFoundException,
   UnprocessableEntityException,
 } from '@nestjs/common';
-import { EntityManager, type FilterQuery } from '@mikro-orm/core';
+import { EntityManager, OptimisticLockError, type FilterQuery } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
 import { isCalendarDate, isoDate } from '../common/calendar';
@@ -163,41 +164,61 @@ export class CorrectiveActionsService {
     }
   }
 
-  update(
+  /** The 409 with the request as it stands now. */
+  private async stale(id: number, em: EntityManager = this.em.fork()) {
+    const current = await this.load(em, id);
+    return new ConflictException({
+      message: `Someone changed ${current.number} first; review it as it is now and try again`,
+      current: correctiveActionView(current, today()),
+    });
+  }
+
+  /**
+   * Edits and steps are taken on the version the client saw; the row is written with
+   * `where version = ?`, so of two changes made at once, one wins and the other gets 409.
+   */
+  async update(
     id: number,
     dto: UpdateCorrectiveActionDto,
     actor: RequestUser,
   ): Promise<CorrectiveActionView> {
     if (dto.dueOn !== undefined) checkDate('dueOn', dto.dueOn);
-    return this.em.transactional(async (tx) => {
-      const car = await this.load(tx, id);
-      if (car.status === 'closed')
-        throw new UnprocessableEntityException(`${car.number} is closed; it cannot change`);
-      const before = audited(car);
-      const to = dto.status ?? car.status;
-      if (!canMove(car.status, to)) {
-        const next = allowedNext(car.status);
-        throw new UnprocessableEntityException(
-          `${car.number} is ${car.status}: it can go to ${next.join(' or ')}, not to ${to}`,
-        );
-      }
-      if (dto.problem !== undefined) car.problem = dto.problem.trim();
-      if (dto.dueOn !== undefined) car.dueOn = dto.dueOn;
-      for (const f of RESPONSE_FIELDS) if (dto[f] !== undefined) car[f] = dto[f].trim() || null;
-      if (to === 'responded' && car.status !== 'responded') {
-        const missing = RESPONSE_FIELDS.filter((f) => !car[f]);
-        if (missing.length) {
+    try {
+      return await this.em.transactional(async (tx) => {
+        const car = await this.load(tx, id);
+        if (dto.version !== car.version) throw await this.stale(id, tx);
+        if (car.status === 'closed')
+          throw new UnprocessableEntityException(`${car.number} is closed; it cannot change`);
+        const before = audited(car);
+        const to = dto.status ?? car.status;
+        if (!canMove(car.status, to)) {
+          const next = allowedNext(car.status);
           throw new UnprocessableEntityException(
-            `Record the supplier's ${missing.join(', ')} before marking ${car.number} responded`,
+            `${car.number} is ${car.status}: it can go to ${next.join(' or ')}, not to ${to}`,
           );
         }
-        car.respondedAt = new Date();
-      }
-      if (to === 'closed') car.closedAt = new Date();
-      car.status = to;
-      await tx.flush();
-      this.record(tx, actor, car, 'corrective_action.update', before);
-      return correctiveActionView(car, today());
-    });
+        if (dto.problem !== undefined) car.problem = dto.problem.trim();
+        if (dto.dueOn !== undefined) car.dueOn = dto.dueOn;
+        for (const f of RESPONSE_FIELDS) if (dto[f] !== undefined) car[f] = dto[f].trim() || null;
+        if (to === 'responded' && car.status !== 'responded') {
+          const missing = RESPONSE_FIELDS.filter((f) => !car[f]);
+          if (missing.length) {
+            throw new UnprocessableEntityException(
+              `Record the supplier's ${missing.join(', ')} before marking ${car.number} responded`,
+            );
+          }
+          car.respondedAt = new Date();
+        }
+        if (to === 'closed') car.closedAt = new Date();
+        car.status = to;
+        car.updatedAt = new Date();
+        await tx.flush();
+        this.record(tx, actor, car, 'corrective_action.update', before);
+        return correctiveActionView(car, today());
+      });
+    } catch (e) {
+      if (e instanceof OptimisticLockError) throw await this.stale(id);
+      throw e;
+    }
   }
 }

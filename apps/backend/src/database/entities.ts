@@ -11,6 +11,7 @@ import { Photo } from '../photos/entities/photo.entity';
 import { ConductorSpec } from '../products/entities/conductor-spec.entity';
 import { InspectionState } from '../products/entities/inspection-state.entity';
 import { Product } from '../products/entities/product.entity';
+import { OpenReturnLot } from '../returns/entities/open-return-lot.entity';
 import { VendorReturn } from '../returns/entities/vendor-return.entity';
 import { Supplier } from '../suppliers/entities/supplier.entity';
 import { User } from '../users/entities/user.entity';
@@ -30,6 +31,7 @@ export const ENTITIES = [
   Decision,
   Nonconformance,
   VendorReturn,
+  OpenReturnLot,
   CorrectiveAction,
   AuditEvent,
   OutboundMessage,

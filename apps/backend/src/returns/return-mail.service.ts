@@ -11,6 +11,11 @@ import { ReturnsService, type ReturnRef } from './returns.service';
 
 const RELATED = 'vendor_return';
 
+/** An amount with its ISO 4217 code, e.g. "EUR 1,234.50". */
+export function money(amount: number, currency: string): string {
+  return `${currency} ${amount.toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 })}`;
+}
+
 /** E-mails a return to the supplier with its CSV and evidence pack attached. */
 @Injectable()
 export class ReturnMailService implements OnModuleInit {
@@ -46,13 +51,17 @@ export class ReturnMailService implements OnModuleInit {
 
   async email(id: number, dto: EmailReturnDto, actor: RequestUser): Promise<MessageView> {
     const em = this.em.fork();
-    const ret = await this.returns.load(em, id);
-    const to = dto.to ?? ret.supplier.contactEmail;
+    const draft = await this.returns.load(em, id);
+    const to = dto.to ?? draft.supplier.contactEmail;
     if (!to) {
       throw new UnprocessableEntityException(
-        `${ret.supplier.name} has no contact e-mail: add one to the supplier or give an address`,
+        `${draft.supplier.name} has no contact e-mail: add one to the supplier or give an address`,
       );
     }
+    // The return is marked e-mailed before its documents are built, so they say so.
+    await this.returns.markEmailed(id, actor);
+    em.clear();
+    const ret = await this.returns.load(em, id);
     const lots = ret.lots
       .getItems()
       .map((l) => `lot ${l.id} (PO ${l.poNumber})`)
@@ -61,7 +70,7 @@ export class ReturnMailService implements OnModuleInit {
       dto.message?.trim(),
       `Return to vendor ${ret.number}${ret.rmaNumber ? `, your RMA ${ret.rmaNumber}` : ''}.`,
       `We rejected ${lots} at receiving inspection: the attached evidence pack shows the sampling plan, every reading with its uncertainty and the decision; the CSV holds the readings.`,
-      `Chargeback: ${ret.chargebackTotal.toFixed(2)}.`,
+      `Chargeback: ${money(ret.chargebackTotal, ret.currency)}.`,
       'Please confirm the return and send us your corrective action.',
     ]
       .filter(Boolean)

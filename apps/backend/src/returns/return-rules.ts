@@ -1,15 +1,25 @@
 import type { ReturnCosts, ReturnStatus } from './entities/vendor-return.entity';
 
-/** A return moves one step at a time: draft → sent → acknowledged → closed. */
-const NEXT: Record<ReturnStatus, ReturnStatus | null> = {
-  draft: 'sent',
-  sent: 'acknowledged',
-  acknowledged: 'closed',
-  closed: null,
+/**
+ * Where a return may go next. The notice and the goods are separate steps: a draft is
+ * e-mailed or shipped first, either way round; a draft may be cancelled, nothing later may.
+ */
+const NEXT: Record<ReturnStatus, readonly ReturnStatus[]> = {
+  draft: ['emailed', 'shipped', 'cancelled'],
+  emailed: ['shipped'],
+  shipped: ['acknowledged'],
+  acknowledged: ['credited', 'closed'],
+  credited: ['closed'],
+  closed: [],
+  cancelled: [],
 };
 
 export function canMove(from: ReturnStatus, to: ReturnStatus): boolean {
-  return from === to || NEXT[from] === to;
+  return NEXT[from].includes(to);
+}
+
+export function allowedNext(from: ReturnStatus): readonly ReturnStatus[] {
+  return NEXT[from];
 }
 
 /** Chargeback = inspection hours × hourly rate + freight + other, to the cent. */
@@ -30,4 +40,14 @@ export function cleanCosts(costs: ReturnCosts | undefined): ReturnCosts {
   return out;
 }
 
-export const OPEN_RETURN: readonly ReturnStatus[] = ['draft', 'sent', 'acknowledged'];
+/** A lot on a return in one of these is taken: no second return may claim it. */
+export const OPEN_RETURN: readonly ReturnStatus[] = [
+  'draft',
+  'emailed',
+  'shipped',
+  'acknowledged',
+  'credited',
+];
+
+/** Returns that count in scorecards and chargebacks: all but the cancelled. */
+export const COUNTED_RETURN: readonly ReturnStatus[] = OPEN_RETURN.concat('closed');

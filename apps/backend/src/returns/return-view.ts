@@ -6,6 +6,7 @@ export function returnView(r: VendorReturn) {
     id: r.id,
     number: r.number,
     status: r.status,
+    version: r.version,
     supplier: {
       id: r.supplier.id,
       name: r.supplier.name,
@@ -25,8 +26,28 @@ export function returnView(r: VendorReturn) {
       })),
     rmaNumber: r.rmaNumber,
     notes: r.notes,
+    supplierNote: r.supplierNote,
+    shareDecisionReason: r.shareDecisionReason,
     costs: r.costs,
     chargebackTotal: r.chargebackTotal,
+    currency: r.currency,
+    emailedAt: r.emailedAt,
+    shipment: r.shippedOn
+      ? {
+          carrier: r.carrier,
+          trackingNumber: r.trackingNumber,
+          shippedOn: r.shippedOn,
+          quantity: r.shippedQuantity,
+        }
+      : null,
+    acknowledgedAt: r.acknowledgedAt,
+    credit:
+      r.creditNoteNumber !== null
+        ? { creditNoteNumber: r.creditNoteNumber, amount: r.creditAmount, creditedAt: r.creditedAt }
+        : null,
+    closedAt: r.closedAt,
+    cancelReason: r.cancelReason,
+    cancelledAt: r.cancelledAt,
     createdBy: { id: r.createdBy.id, name: r.createdBy.name },
     createdAt: r.createdAt,
     updatedAt: r.updatedAt,

@@ -1,4 +1,14 @@
-import { Body, Controller, Get, Param, Patch, Post, Query, StreamableFile } from '@nestjs/common';
+import {
+  Body,
+  Controller,
+  Get,
+  HttpCode,
+  Param,
+  Patch,
+  Post,
+  Query,
+  StreamableFile,
+} from '@nestjs/common';
 import { ApiProduces, ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
@@ -6,6 +16,13 @@ import { attachmentName, CSV_CONTENT_TYPE, csvStream } from '../common/csv';
 import { CreateReturnDto } from './dto/create-return.dto';
 import { EmailReturnDto } from './dto/email-return.dto';
 import { ListReturnsDto } from './dto/list-returns.dto';
+import {
+  AcknowledgeReturnDto,
+  CancelReturnDto,
+  CreditReturnDto,
+  ReturnStepDto,
+  ShipReturnDto,
+} from './dto/return-steps.dto';
 import { UpdateReturnDto } from './dto/update-return.dto';
 import { ReturnDocuments } from './return-documents';
 import { ReturnMailService } from './return-mail.service';
@@ -57,6 +74,59 @@ export class ReturnsController {
     @CurrentUser() actor: RequestUser,
   ) {
     return this.returns.update(id, dto, actor);
+  }
+
+  /** A draft that should not go: its lots are freed for another return. */
+  @Post(':id/cancel')
+  @HttpCode(200)
+  cancel(
+    @Param('id', IdPipe) id: number,
+    @Body() dto: CancelReturnDto,
+    @CurrentUser() actor: RequestUser,
+  ) {
+    return this.returns.cancel(id, dto, actor);
+  }
+
+  /** The goods left, with carrier, tracking number, date and quantity. */
+  @Post(':id/ship')
+  @HttpCode(200)
+  ship(
+    @Param('id', IdPipe) id: number,
+    @Body() dto: ShipReturnDto,
+    @CurrentUser() actor: RequestUser,
+  ) {
+    return this.returns.ship(id, dto, actor);
+  }
+
+  @Post(':id/acknowledge')
+  @HttpCode(200)
+  acknowledge(
+    @Param('id', IdPipe) id: number,
+    @Body() dto: AcknowledgeReturnDto,
+    @CurrentUser() actor: RequestUser,
+  ) {
+    return this.returns.acknowledge(id, dto, actor);
+  }
+
+  /** The supplier's credit note for the chargeback. */
+  @Post(':id/credit')
+  @HttpCode(200)
+  credit(
+    @Param('id', IdPipe) id: number,
+    @Body() dto: CreditReturnDto,
+    @CurrentUser() actor: RequestUser,
+  ) {
+    return this.returns.credit(id, dto, actor);
+  }
+
+  @Post(':id/close')
+  @HttpCode(200)
+  close(
+    @Param('id', IdPipe) id: number,
+    @Body() dto: ReturnStepDto,
+    @CurrentUser() actor: RequestUser,
+  ) {
+    return this.returns.close(id, dto, actor);
   }
 
   /** One row per reading of every lot on the return. */

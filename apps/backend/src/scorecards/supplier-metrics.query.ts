@@ -227,6 +227,7 @@ export class SupplierMetricsQuery {
       k('vendor_returns as vr')
         .select('vr.supplier_id')
         .select(k.raw('sum(vr.chargeback_total) as total'))
+        .whereNot('vr.status', 'cancelled')
         .groupBy('vr.supplier_id'),
       'vr.created_at',
       range,

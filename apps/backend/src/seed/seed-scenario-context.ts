@@ -66,6 +66,9 @@ export interface ScenarioContext {
   returns: ReturnsService;
 }
 
+/** The demo shop's currency (ISO 4217), invented for the story. */
+export const DEMO_CURRENCY = 'EUR';
+
 /** The real services, built on the seed's unit of work, with the story's clock on audit. */
 export async function scenarioContext(
   em: EntityManager,
@@ -102,6 +105,6 @@ export async function scenarioContext(
     evaluations,
     decisions: new DecisionsService(em, audit, evaluations, new InspectionStreams(audit)),
     photos: new PhotosService(em, audit, storage),
-    returns: new ReturnsService(em, audit),
+    returns: new ReturnsService(em, audit, { currency: DEMO_CURRENCY }),
   };
 }

@@ -1,11 +1,7 @@
 import { Nonconformance } from '../decisions/entities/nonconformance.entity';
 import { Lot } from '../lots/entities/lot.entity';
 import { OutboundMessage } from '../mail/entities/outbound-message.entity';
-import {
-  VendorReturn,
-  type ReturnCosts,
-  type ReturnStatus,
-} from '../returns/entities/vendor-return.entity';
+import { VendorReturn, type ReturnCosts } from '../returns/entities/vendor-return.entity';
 import type { ScenarioContext } from './seed-scenario-context';
 
 const DAY_MS = 86_400_000;
@@ -20,7 +16,7 @@ interface ReturnStory {
   rmaNumber: string;
   costs: ReturnCosts;
   notes: string;
-  /** Days ago of each step: raised, then sent (and acknowledged, closed when given). */
+  /** Days ago of each step: raised, then e-mailed (shipped, acknowledged, credited, closed when given). */
   steps: number[];
   mail: 'sent' | 'logged';
 }
@@ -33,11 +29,34 @@ async function returnLot(ctx: ScenarioContext, r: ReturnStory): Promise<void> {
     { lotIds: [r.lot.id], rmaNumber: r.rmaNumber, notes: r.notes, costs: r.costs },
     ctx.users.buyer,
   );
-  const statuses: ReturnStatus[] = ['sent', 'acknowledged', 'closed'];
+  const steps: ((at: Date) => Promise<unknown>)[] = [
+    async () => {
+      await ctx.returns.markEmailed(view.id, ctx.users.buyer);
+      mailReturn(ctx, r, view.id, view.number, view.chargebackTotal);
+    },
+    (at) =>
+      ctx.returns.ship(
+        view.id,
+        {
+          carrier: 'Harbourline Freight',
+          trackingNumber: `HF${r.rmaNumber.replace(/\D/g, '')}07`,
+          shippedOn: at.toISOString().slice(0, 10),
+          quantity: r.lot.quantity,
+        },
+        ctx.users.buyer,
+      ),
+    () => ctx.returns.acknowledge(view.id, {}, ctx.users.buyer),
+    () =>
+      ctx.returns.credit(
+        view.id,
+        { creditNoteNumber: `CN-${r.rmaNumber.slice(-4)}`, creditAmount: view.chargebackTotal },
+        ctx.users.buyer,
+      ),
+    () => ctx.returns.close(view.id, {}, ctx.users.buyer),
+  ];
   for (const [i, days] of later.entries()) {
     ctx.clock.set(daysAgo(ctx, days, 9));
-    await ctx.returns.update(view.id, { status: statuses[i] }, ctx.users.buyer);
-    if (statuses[i] === 'sent') mailReturn(ctx, r, view.id, view.number, view.chargebackTotal);
+    await steps[i](daysAgo(ctx, days, 9));
   }
   const ncr = await ctx.em.findOneOrFail(Nonconformance, { lot: r.lot });
   ncr.disposition = 'return_to_vendor';
@@ -98,7 +117,7 @@ export async function seedReturns(ctx: ScenarioContext, lot: LotByKey) {
     rmaNumber: 'QAS-RMA-5521',
     costs: { inspectionHours: 3.5, hourlyRate: 48, freight: 85 },
     notes: 'Sold as copper; mass and four-wire resistance identify copper-clad aluminium.',
-    steps: [132, 131, 126, 112],
+    steps: [132, 131, 130, 126, 118, 112],
     mail: 'sent',
   });
   await returnLot(ctx, {
@@ -106,7 +125,7 @@ export async function seedReturns(ctx: ScenarioContext, lot: LotByKey) {
     rmaNumber: 'QAS-RMA-5870',
     costs: { inspectionHours: 4, hourlyRate: 48, freight: 95, other: 30 },
     notes: 'Second delivery of copper-clad aluminium sold as copper; see SCAR.',
-    steps: [48, 47],
+    steps: [48, 47, 46],
     mail: 'logged',
   });
 }

@@ -199,6 +199,7 @@ export class ScorecardFixtures {
       number: `RTV-T-${Math.random().toString(36).slice(2, 8)}`,
       supplier: em.getReference(Supplier, supplierId),
       chargebackTotal,
+      currency: 'EUR',
       createdAt: new Date(createdAt),
       createdBy: await this.clerk(em),
     });

@@ -1,8 +1,22 @@
-import { ApiPropertyOptional } from '@nestjs/swagger';
-import { IsIn, IsOptional, IsString, Matches, MaxLength, MinLength } from 'class-validator';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import {
+  IsIn,
+  IsInt,
+  IsOptional,
+  IsString,
+  Matches,
+  MaxLength,
+  Min,
+  MinLength,
+} from 'class-validator';
 import { CAR_STATUSES, type CorrectiveActionStatus } from '../entities/corrective-action.entity';
 
 export class UpdateCorrectiveActionDto {
+  @ApiProperty({ description: 'The version the change was made on; a stale one gets 409' })
+  @IsInt({ message: 'version must be a whole number' })
+  @Min(1, { message: 'version must be a whole number' })
+  readonly version: number;
+
   @ApiPropertyOptional({
     enum: CAR_STATUSES,
     description: 'open → responded → verified | reopened; reopened → responded; verified → closed',

@@ -41,6 +41,10 @@ export class CorrectiveAction {
   @Enum({ items: () => CAR_STATUSES, type: 'string' })
   status: Opt<CorrectiveActionStatus> = 'open';
 
+  /** Optimistic lock: an edit or a step taken on a stale copy is refused with 409. */
+  @Property({ type: 'integer', version: true })
+  version!: Opt<number>;
+
   @Property({ type: 'text', nullable: true })
   containment: string | null = null;
 

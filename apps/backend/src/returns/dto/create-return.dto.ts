@@ -8,6 +8,7 @@ import {
   IsInt,
   IsOptional,
   IsString,
+  Matches,
   MaxLength,
   Min,
   ValidateNested,
@@ -35,6 +36,17 @@ export class CreateReturnDto {
   @IsString()
   @MaxLength(4000, { message: 'notes must be at most 4000 characters' })
   readonly notes?: string;
+
+  @ApiPropertyOptional({ description: 'Why the goods come back, written for the supplier' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(4000, { message: 'supplierNote must be at most 4000 characters' })
+  readonly supplierNote?: string;
+
+  @ApiPropertyOptional({ example: 'EUR', description: 'ISO 4217 code; CURRENCY by default' })
+  @IsOptional()
+  @Matches(/^[A-Z]{3}$/, { message: 'currency must be an ISO 4217 code such as EUR or USD' })
+  readonly currency?: string;
 
   @ApiPropertyOptional({ type: ReturnCostsDto })
   @IsOptional()

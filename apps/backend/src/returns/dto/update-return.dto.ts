@@ -1,17 +1,27 @@
-import { ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsIn, IsOptional, IsString, MaxLength, ValidateNested } from 'class-validator';
-import { RETURN_STATUSES, type ReturnStatus } from '../entities/vendor-return.entity';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  ArrayUnique,
+  IsArray,
+  IsBoolean,
+  IsInt,
+  IsOptional,
+  IsString,
+  Matches,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
 import { ReturnCostsDto } from './return-costs.dto';
 
+/** An edit of a return, made on the copy the client loaded (`version`). */
 export class UpdateReturnDto {
-  @ApiPropertyOptional({
-    enum: RETURN_STATUSES,
-    description: 'draft → sent → acknowledged → closed',
-  })
-  @IsOptional()
-  @IsIn(RETURN_STATUSES, { message: `status must be one of ${RETURN_STATUSES.join(', ')}` })
-  readonly status?: ReturnStatus;
+  @ApiProperty({ description: 'The version the edit was made on; a stale one gets 409' })
+  @IsInt({ message: 'version must be a whole number' })
+  @Min(1, { message: 'version must be a whole number' })
+  readonly version: number;
 
   @ApiPropertyOptional()
   @IsOptional()
@@ -19,15 +29,44 @@ export class UpdateReturnDto {
   @MaxLength(64, { message: 'rmaNumber must be at most 64 characters' })
   readonly rmaNumber?: string;
 
-  @ApiPropertyOptional()
+  @ApiPropertyOptional({ description: "Purchasing's own notes; never sent to the supplier" })
   @IsOptional()
   @IsString()
   @MaxLength(4000, { message: 'notes must be at most 4000 characters' })
   readonly notes?: string;
 
-  @ApiPropertyOptional({ type: ReturnCostsDto, description: 'Replaces the costs' })
+  @ApiPropertyOptional({ description: 'Why the goods come back, written for the supplier' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(4000, { message: 'supplierNote must be at most 4000 characters' })
+  readonly supplierNote?: string;
+
+  @ApiPropertyOptional({ description: "Put the QA lead's reason in the supplier's documents" })
+  @IsOptional()
+  @IsBoolean({ message: 'shareDecisionReason must be true or false' })
+  readonly shareDecisionReason?: boolean;
+
+  @ApiPropertyOptional({ type: ReturnCostsDto, description: 'Replaces the costs (draft only)' })
   @IsOptional()
   @ValidateNested()
   @Type(() => ReturnCostsDto)
   readonly costs?: ReturnCostsDto;
+
+  @ApiPropertyOptional({ example: 'EUR', description: 'ISO 4217 code (draft only)' })
+  @IsOptional()
+  @Matches(/^[A-Z]{3}$/, { message: 'currency must be an ISO 4217 code such as EUR or USD' })
+  readonly currency?: string;
+
+  @ApiPropertyOptional({
+    type: [Number],
+    description: 'The lots on the return, replacing the list (draft only)',
+  })
+  @IsOptional()
+  @IsArray({ message: 'lotIds must be a list of lot ids' })
+  @ArrayMinSize(1, { message: 'lotIds must name at least one lot; cancel the return instead' })
+  @ArrayMaxSize(100, { message: 'lotIds can name at most 100 lots' })
+  @ArrayUnique({ message: 'lotIds must not repeat a lot' })
+  @IsInt({ each: true, message: 'each lot id must be a whole number' })
+  @Min(1, { each: true, message: 'each lot id must be a whole number' })
+  readonly lotIds?: number[];
 }

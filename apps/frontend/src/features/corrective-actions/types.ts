@@ -6,6 +6,8 @@ export interface CorrectiveAction {
   id: number;
   number: string;
   status: CorrectiveActionStatus;
+  /** Optimistic lock: send it back with every change. */
+  version: number;
   supplier: { id: number; name: string; code: string; status: string };
   lots: { id: number; poNumber: string; status: string }[];
   problem: string;

@@ -1,5 +1,13 @@
 /** VendorReturn as GET /api/returns/:id shows it. */
-export const RETURN_STATUSES = ['draft', 'sent', 'acknowledged', 'closed'] as const;
+export const RETURN_STATUSES = [
+  'draft',
+  'emailed',
+  'shipped',
+  'acknowledged',
+  'credited',
+  'closed',
+  'cancelled',
+] as const;
 export type ReturnStatus = (typeof RETURN_STATUSES)[number];
 
 export interface ReturnCosts {
@@ -21,12 +29,31 @@ export interface VendorReturn {
   id: number;
   number: string;
   status: ReturnStatus;
+  /** Optimistic lock: send it back with every change. */
+  version: number;
   supplier: { id: number; name: string; code: string; status: string; contactEmail: string | null };
   lots: ReturnLot[];
   rmaNumber: string | null;
   notes: string | null;
+  /** Why the goods come back, written for the supplier. */
+  supplierNote: string | null;
+  shareDecisionReason: boolean;
   costs: ReturnCosts;
   chargebackTotal: number;
+  /** ISO 4217 code of every amount. */
+  currency: string;
+  emailedAt: string | null;
+  shipment: {
+    carrier: string;
+    trackingNumber: string | null;
+    shippedOn: string;
+    quantity: number;
+  } | null;
+  acknowledgedAt: string | null;
+  credit: { creditNoteNumber: string; amount: number; creditedAt: string } | null;
+  closedAt: string | null;
+  cancelReason: string | null;
+  cancelledAt: string | null;
   createdBy: { id: number; name: string };
   createdAt: string;
   updatedAt: string;
@@ -41,7 +68,10 @@ export interface Page<T> {
 
 export const returnStatusLabels: Record<ReturnStatus, string> = {
   draft: 'Draft',
-  sent: 'Sent',
+  emailed: 'Notice e-mailed',
+  shipped: 'Shipped',
   acknowledged: 'Acknowledged',
+  credited: 'Credited',
   closed: 'Closed',
+  cancelled: 'Cancelled',
 };

@@ -19,6 +19,8 @@ export const responseSchema = z.object({
 export type ResponseInput = z.infer<typeof responseSchema>;
 
 export interface CorrectiveActionPatch extends Partial<ResponseInput> {
+  /** The version the change was made on; the server answers 409 when it moved on. */
+  version: number;
   status?: CorrectiveActionStatus;
 }
 
@@ -35,6 +37,7 @@ export function useUpdateCorrectiveAction({ inlineErrors = false } = {}) {
   return useMutation({
     mutationFn: updateCorrectiveAction,
     meta: { inlineErrors },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['corrective-actions'] }),
+    // A 409 means someone else changed it: reload it either way.
+    onSettled: () => queryClient.invalidateQueries({ queryKey: ['corrective-actions'] }),
   });
 }

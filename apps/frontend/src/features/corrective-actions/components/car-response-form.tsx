@@ -45,7 +45,7 @@ export function CarResponseForm({ car }: { car: CorrectiveAction }) {
     try {
       const saved = await update.mutateAsync({
         id: car.id,
-        patch: { ...input, status: 'responded' },
+        patch: { ...input, version: car.version, status: 'responded' },
       });
       toasts.success(`The supplier's response to ${saved.number} is recorded.`);
     } catch (error) {

@@ -110,7 +110,7 @@ export function CorrectiveActionDetail({
               loading={move.isPending && move.variables.patch.status === next}
               onClick={() =>
                 move.mutate(
-                  { id: car.id, patch: { status: next } },
+                  { id: car.id, patch: { version: car.version, status: next } },
                   {
                     onSuccess: (c) =>
                       toasts.success(`${c.number} is ${carStatusLabels[c.status].toLowerCase()}.`),

@@ -27,6 +27,11 @@ export function useEmailReturn() {
   return useMutation({
     mutationFn: emailReturn,
     meta: { inlineErrors: true },
-    onSettled: () => queryClient.invalidateQueries({ queryKey: ['messages'] }),
+    // E-mailing a draft marks it e-mailed and its lots returned.
+    onSettled: async () => {
+      await queryClient.invalidateQueries({ queryKey: ['messages'] });
+      await queryClient.invalidateQueries({ queryKey: ['returns'] });
+      await queryClient.invalidateQueries({ queryKey: ['lots'] });
+    },
   });
 }

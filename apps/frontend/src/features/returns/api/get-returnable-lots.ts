@@ -14,7 +14,7 @@ export interface ReturnableLot {
 
 /**
  * A supplier's rejected lots that are not on an open return yet. A draft return keeps its
- * lots `rejected` (they become `returned` when it is sent), so drafts are subtracted here.
+ * lots `rejected` (they become `returned` when it is e-mailed or shipped), so drafts are subtracted here.
  */
 export async function getReturnableLots(supplierId: number, signal?: AbortSignal) {
   const [lots, open] = await Promise.all([
@@ -22,10 +22,7 @@ export async function getReturnableLots(supplierId: number, signal?: AbortSignal
       `/lots?status=rejected&supplierId=${supplierId}&pageSize=100&sort=receivedAt:asc`,
       signal,
     ),
-    getReturns(
-      { supplierId: String(supplierId), status: 'draft,sent,acknowledged', pageSize: '100' },
-      signal,
-    ),
+    getReturns({ supplierId: String(supplierId), status: 'draft', pageSize: '100' }, signal),
   ]);
   const taken = new Set(open.items.flatMap((r) => r.lots.map((l) => l.id)));
   return lots.items.filter((l) => !taken.has(l.id));

@@ -2,20 +2,32 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { costsSchema } from '@/features/returns/api/cost-schema';
-import type { ReturnCosts, ReturnStatus, VendorReturn } from '@/features/returns/types';
+import type { ReturnCosts, VendorReturn } from '@/features/returns/types';
 
 export const editReturnSchema = z.object({
   rmaNumber: z.string().trim().max(64, 'At most 64 characters.'),
   notes: z.string().trim().max(4000, 'At most 4000 characters.'),
+  supplierNote: z.string().trim().max(4000, 'At most 4000 characters.'),
+  shareDecisionReason: z.boolean(),
+  currency: z
+    .string()
+    .trim()
+    .toUpperCase()
+    .regex(/^[A-Z]{3}$/, 'Enter an ISO 4217 code such as EUR or USD.'),
   costs: costsSchema,
 });
 export type EditReturnForm = z.input<typeof editReturnSchema>;
 
 export interface ReturnPatch {
-  status?: ReturnStatus;
+  /** The version the edit was made on; a stale one is answered 409. */
+  version: number;
   rmaNumber?: string;
   notes?: string;
+  supplierNote?: string;
+  shareDecisionReason?: boolean;
+  currency?: string;
   costs?: ReturnCosts;
+  lotIds?: number[];
 }
 
 export const updateReturn = ({ id, patch }: { id: number; patch: ReturnPatch }) =>
@@ -26,9 +38,9 @@ export function useUpdateReturn({ inlineErrors = false } = {}) {
   return useMutation({
     mutationFn: updateReturn,
     meta: { inlineErrors },
-    onSuccess: async () => {
+    // A 409 means someone else changed it first: reload it either way.
+    onSettled: async () => {
       await queryClient.invalidateQueries({ queryKey: ['returns'] });
-      // Sending a return marks its lots returned.
       await queryClient.invalidateQueries({ queryKey: ['lots'] });
     },
   });

@@ -8,12 +8,14 @@ type CostName = keyof CostsForm;
 interface CostFieldsProps {
   /** The form's current costs (watched), for the live total. */
   costs: CostsForm;
+  /** ISO 4217 code of the amounts; a new return takes the server's default. */
+  currency?: string;
   register: (name: CostName) => UseFormRegisterReturn;
   errors: Partial<Record<CostName, FieldError>> | undefined;
 }
 
 /** The chargeback's parts with the total worked out as they are typed. */
-export function CostFields({ costs, register, errors }: CostFieldsProps) {
+export function CostFields({ costs, currency, register, errors }: CostFieldsProps) {
   const total = chargebackTotal(costsFromForm(costs));
   const field = (name: CostName, label: string, unit?: string) => (
     <TextField
@@ -42,7 +44,10 @@ export function CostFields({ costs, register, errors }: CostFieldsProps) {
         {field('other', 'Other')}
       </Stack>
       <Typography role="status" aria-label="Chargeback total">
-        Chargeback total: <strong>{formatMoney(total)}</strong>
+        Chargeback total:{' '}
+        <strong>
+          {currency ? formatMoney(total, currency) : `${total.toFixed(2)} (shop currency)`}
+        </strong>
         <Typography component="span" variant="body2" color="text.secondary">
           {' '}
           (hours × rate + freight + other)

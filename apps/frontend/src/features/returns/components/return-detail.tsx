@@ -6,24 +6,29 @@ import {
   Button,
   Card,
   CardContent,
+  IconButton,
   Link,
   List,
   ListItem,
   ListItemText,
   Stack,
+  Tooltip,
   Typography,
 } from '@mui/material';
+import RemoveCircleOutline from '@mui/icons-material/RemoveCircleOutlineOutlined';
 import { useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
 import { downloadCsv } from '@/components/data-table/csv-download-button';
 import { paths } from '@/config/paths';
+import { useReturnStep } from '@/features/returns/api/return-steps';
 import { useUpdateReturn } from '@/features/returns/api/update-return';
 import { EditReturnForm } from '@/features/returns/components/edit-return-form';
+import { ReturnStepDialog } from '@/features/returns/components/return-step-dialogs';
 import { EmailSupplierDialog } from '@/features/returns/components/email-supplier-dialog';
 import { ReturnStatusChip } from '@/features/returns/components/return-status-chip';
 import { ReturnStatusStepper } from '@/features/returns/components/return-status-stepper';
 import { formatMoney } from '@/features/returns/lib/chargeback';
-import { returnEditable } from '@/features/returns/lib/return-steps';
+import { draftOnly, returnEditable, type ReturnStep } from '@/features/returns/lib/return-steps';
 import { returnStatusLabels, type VendorReturn } from '@/features/returns/types';
 import { errorMessage } from '@/lib/query-client';
 import { toasts } from '@/lib/toast-store';
@@ -32,8 +37,10 @@ const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
 
 /** One return to vendor: its lots, status, costs, documents and the e-mail to the supplier. */
 export function ReturnDetail({ ret }: { ret: VendorReturn }) {
-  const advance = useUpdateReturn({ inlineErrors: true });
+  const quick = useReturnStep();
+  const edit = useUpdateReturn({ inlineErrors: true });
   const [emailing, setEmailing] = useState(false);
+  const [dialog, setDialog] = useState<'ship' | 'credit' | 'cancel' | null>(null);
   const [csvBusy, setCsvBusy] = useState(false);
 
   const downloadReadings = () => {
@@ -42,6 +49,27 @@ export function ReturnDetail({ ret }: { ret: VendorReturn }) {
       .catch((e: unknown) => toasts.error(errorMessage(e)))
       .finally(() => setCsvBusy(false));
   };
+  const onStep = (step: ReturnStep) => {
+    if (step === 'ship' || step === 'credit' || step === 'cancel') return setDialog(step);
+    quick.mutate(
+      { id: ret.id, step, version: ret.version },
+      {
+        onSuccess: (r) =>
+          toasts.success(`Return ${r.number} is ${returnStatusLabels[r.status].toLowerCase()}.`),
+      },
+    );
+  };
+  const takeOff = (lotId: number) =>
+    edit.mutate(
+      {
+        id: ret.id,
+        patch: {
+          version: ret.version,
+          lotIds: ret.lots.map((l) => l.id).filter((id) => id !== lotId),
+        },
+      },
+      { onSuccess: () => toasts.success(`Lot ${lotId} is off return ${ret.number}.`) },
+    );
 
   return (
     <Stack spacing={3}>
@@ -52,35 +80,27 @@ export function ReturnDetail({ ret }: { ret: VendorReturn }) {
       <Typography color="text.secondary">
         To {ret.supplier.name} ({ret.supplier.code}) · raised{' '}
         {dateFormat.format(new Date(ret.createdAt))} by {ret.createdBy.name} · chargeback{' '}
-        <strong>{formatMoney(ret.chargebackTotal)}</strong>
+        <strong>{formatMoney(ret.chargebackTotal, ret.currency)}</strong>
       </Typography>
       <Card>
         <CardContent>
           <ReturnStatusStepper
             status={ret.status}
-            busy={advance.isPending}
-            onAdvance={(status) =>
-              advance.mutate(
-                { id: ret.id, patch: { status } },
-                {
-                  onSuccess: (r) =>
-                    toasts.success(
-                      `Return ${r.number} is ${returnStatusLabels[r.status].toLowerCase()}.`,
-                    ),
-                },
-              )
-            }
+            busy={quick.isPending ? quick.variables.step : null}
+            onStep={onStep}
           />
-          {advance.isError && (
+          {quick.isError && (
             <Alert severity="error" sx={{ mt: 2 }}>
-              {errorMessage(advance.error)}
+              {errorMessage(quick.error)}
             </Alert>
           )}
           {ret.status === 'draft' && (
             <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
-              Marking it sent records the lots as returned to the supplier.
+              E-mailing the notice or recording the shipment records the lots as returned to the
+              supplier.
             </Typography>
           )}
+          <ReturnFacts ret={ret} />
         </CardContent>
       </Card>
       <Stack direction="row" spacing={1} sx={{ flexWrap: 'wrap' }}>
@@ -101,7 +121,12 @@ export function ReturnDetail({ ret }: { ret: VendorReturn }) {
         >
           Download evidence pack (PDF)
         </Button>
-        <Button variant="contained" startIcon={<MailOutlined />} onClick={() => setEmailing(true)}>
+        <Button
+          variant="contained"
+          startIcon={<MailOutlined />}
+          disabled={!returnEditable(ret.status)}
+          onClick={() => setEmailing(true)}
+        >
           E-mail supplier
         </Button>
       </Stack>
@@ -112,7 +137,24 @@ export function ReturnDetail({ ret }: { ret: VendorReturn }) {
           </Typography>
           <List dense disablePadding aria-label="Lots on the return">
             {ret.lots.map((lot) => (
-              <ListItem key={lot.id} disableGutters>
+              <ListItem
+                key={lot.id}
+                disableGutters
+                secondaryAction={
+                  draftOnly(ret.status) && ret.lots.length > 1 ? (
+                    <Tooltip title="Take this lot off the return">
+                      <IconButton
+                        edge="end"
+                        aria-label={`Take lot ${lot.id} off the return`}
+                        disabled={edit.isPending}
+                        onClick={() => takeOff(lot.id)}
+                      >
+                        <RemoveCircleOutline />
+                      </IconButton>
+                    </Tooltip>
+                  ) : undefined
+                }
+              >
                 <ListItemText
                   primary={
                     <Link component={RouterLink} to={paths.lot.getHref(lot.id)}>
@@ -124,6 +166,7 @@ export function ReturnDetail({ ret }: { ret: VendorReturn }) {
               </ListItem>
             ))}
           </List>
+          {edit.isError && <Alert severity="error">{errorMessage(edit.error)}</Alert>}
         </CardContent>
       </Card>
       <Card>
@@ -132,16 +175,46 @@ export function ReturnDetail({ ret }: { ret: VendorReturn }) {
             RMA, notes and costs
           </Typography>
           {returnEditable(ret.status) ? (
-            <EditReturnForm key={ret.updatedAt} ret={ret} />
+            <EditReturnForm key={ret.id} ret={ret} />
           ) : (
             <Typography>
               RMA {ret.rmaNumber ?? '—'} · {ret.notes ?? 'no notes'} · chargeback{' '}
-              {formatMoney(ret.chargebackTotal)}. A closed return does not change.
+              {formatMoney(ret.chargebackTotal, ret.currency)}. A {ret.status} return does not
+              change.
             </Typography>
           )}
         </CardContent>
       </Card>
       {emailing && <EmailSupplierDialog ret={ret} onClose={() => setEmailing(false)} />}
+      {dialog && <ReturnStepDialog ret={ret} step={dialog} onClose={() => setDialog(null)} />}
     </Stack>
+  );
+}
+
+/** What each step recorded: e-mail, shipment, credit, cancellation. */
+function ReturnFacts({ ret }: { ret: VendorReturn }) {
+  const facts: string[] = [];
+  const day = (iso: string) => dateFormat.format(new Date(iso));
+  if (ret.emailedAt) facts.push(`Notice e-mailed ${day(ret.emailedAt)}`);
+  if (ret.shipment)
+    facts.push(
+      `Shipped ${day(`${ret.shipment.shippedOn}T12:00:00Z`)} by ${ret.shipment.carrier}${ret.shipment.trackingNumber ? `, tracking ${ret.shipment.trackingNumber}` : ''}, ${ret.shipment.quantity} ${ret.lots[0]?.unit ?? ''}`.trim(),
+    );
+  if (ret.acknowledgedAt) facts.push(`Acknowledged ${day(ret.acknowledgedAt)}`);
+  if (ret.credit)
+    facts.push(
+      `Credit note ${ret.credit.creditNoteNumber}: ${formatMoney(ret.credit.amount, ret.currency)}`,
+    );
+  if (ret.cancelReason && ret.cancelledAt)
+    facts.push(`Cancelled ${day(ret.cancelledAt)}: ${ret.cancelReason}`);
+  if (!facts.length) return null;
+  return (
+    <List dense disablePadding aria-label="Return history" sx={{ mt: 2 }}>
+      {facts.map((f) => (
+        <ListItem key={f} disableGutters>
+          <ListItemText primary={f} />
+        </ListItem>
+      ))}
+    </List>
   );
 }

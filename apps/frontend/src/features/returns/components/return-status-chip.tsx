@@ -3,11 +3,21 @@ import { returnStatusLabels, type ReturnStatus } from '@/features/returns/types'
 
 const colours = {
   draft: 'default',
-  sent: 'info',
+  emailed: 'info',
+  shipped: 'info',
   acknowledged: 'warning',
+  credited: 'warning',
   closed: 'success',
+  cancelled: 'default',
 } as const;
 
 export function ReturnStatusChip({ status }: { status: ReturnStatus }) {
-  return <Chip size="small" color={colours[status]} label={returnStatusLabels[status]} />;
+  return (
+    <Chip
+      size="small"
+      color={colours[status]}
+      variant={status === 'cancelled' ? 'outlined' : 'filled'}
+      label={returnStatusLabels[status]}
+    />
+  );
 }

@@ -1,35 +1,46 @@
-import { Button, Stack, Step, StepLabel, Stepper } from '@mui/material';
-import { nextReturnStatus, nextStepLabels } from '@/features/returns/lib/return-steps';
-import { RETURN_STATUSES, returnStatusLabels, type ReturnStatus } from '@/features/returns/types';
+import { Alert, Button, Stack, Step, StepLabel, Stepper } from '@mui/material';
+import {
+  RETURN_PATH,
+  returnSteps,
+  stepLabels,
+  type ReturnStep,
+} from '@/features/returns/lib/return-steps';
+import { returnStatusLabels, type ReturnStatus } from '@/features/returns/types';
 
 interface ReturnStatusStepperProps {
   status: ReturnStatus;
-  busy: boolean;
-  onAdvance: (next: ReturnStatus) => void;
+  busy: ReturnStep | null;
+  onStep: (step: ReturnStep) => void;
 }
 
-/** draft → sent → acknowledged → closed, offering only the next step. */
-export function ReturnStatusStepper({ status, busy, onAdvance }: ReturnStatusStepperProps) {
-  const next = nextReturnStatus(status);
-  const active = RETURN_STATUSES.indexOf(status);
+/** draft → notice e-mailed → shipped → acknowledged → credited → closed, offering the next steps. */
+export function ReturnStatusStepper({ status, busy, onStep }: ReturnStatusStepperProps) {
+  if (status === 'cancelled') {
+    return <Alert severity="info">This return was cancelled; its lots are free again.</Alert>;
+  }
+  const active = RETURN_PATH.indexOf(status);
   return (
-    <Stack
-      direction={{ xs: 'column', md: 'row' }}
-      spacing={2}
-      sx={{ alignItems: { md: 'center' } }}
-    >
-      <Stepper activeStep={active} sx={{ flex: 1 }} aria-label="Return status">
-        {RETURN_STATUSES.map((s, i) => (
+    <Stack spacing={2}>
+      <Stepper activeStep={active} alternativeLabel aria-label="Return status">
+        {RETURN_PATH.map((s, i) => (
           <Step key={s} completed={i < active || status === 'closed'}>
             <StepLabel>{returnStatusLabels[s]}</StepLabel>
           </Step>
         ))}
       </Stepper>
-      {next && (
-        <Button variant="contained" loading={busy} onClick={() => onAdvance(next)}>
-          {nextStepLabels[status]}
-        </Button>
-      )}
+      <Stack direction="row" spacing={1} sx={{ flexWrap: 'wrap', justifyContent: 'flex-end' }}>
+        {returnSteps(status).map((step) => (
+          <Button
+            key={step}
+            variant={step === 'cancel' ? 'outlined' : 'contained'}
+            color={step === 'cancel' ? 'error' : 'primary'}
+            loading={busy === step}
+            onClick={() => onStep(step)}
+          >
+            {stepLabels[step]}
+          </Button>
+        ))}
+      </Stack>
     </Stack>
   );
 }

@@ -48,7 +48,9 @@ export function ReturnsPanel() {
           sx={{ width: 200 }}
         >
           <MenuItem value="">All</MenuItem>
-          <MenuItem value="draft,sent,acknowledged">Open (not closed)</MenuItem>
+          <MenuItem value="draft,emailed,shipped,acknowledged,credited">
+            Open (not closed or cancelled)
+          </MenuItem>
           {RETURN_STATUSES.map((s) => (
             <MenuItem key={s} value={s}>
               {returnStatusLabels[s]}

@@ -51,7 +51,7 @@ const columns = helper.columns([
   helper.accessor('chargebackTotal', {
     header: 'Chargeback',
     enableSorting: true,
-    cell: (info) => formatMoney(info.getValue()),
+    cell: (info) => formatMoney(info.getValue(), info.row.original.currency),
   }),
 ]);
 

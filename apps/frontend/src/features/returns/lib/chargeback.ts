@@ -11,9 +11,10 @@ export function chargebackTotal(costs: ReturnCosts): number {
   return Math.round(total * 100) / 100;
 }
 
-const money = new Intl.NumberFormat(undefined, {
+const money = new Intl.NumberFormat('en-US', {
   minimumFractionDigits: 2,
   maximumFractionDigits: 2,
 });
-/** An amount in the shop's currency; the product keeps no currency code. */
-export const formatMoney = (value: number) => money.format(value);
+/** An amount with its ISO 4217 code, as on the evidence pack and in the e-mail: "EUR 1,234.50". */
+export const formatMoney = (value: number, currency: string) =>
+  `${currency} ${money.format(value)}`;

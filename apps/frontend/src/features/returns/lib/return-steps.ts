@@ -1,18 +1,45 @@
-import { RETURN_STATUSES, type ReturnStatus } from '@/features/returns/types';
+import type { ReturnStatus } from '@/features/returns/types';
 
-/** A return moves one step at a time: draft → sent → acknowledged → closed (issue 5). */
-export function nextReturnStatus(status: ReturnStatus): ReturnStatus | null {
-  const i = RETURN_STATUSES.indexOf(status);
-  return RETURN_STATUSES[i + 1] ?? null;
-}
+/** The way a return goes when nothing is cancelled (the stepper's steps). */
+export const RETURN_PATH: readonly ReturnStatus[] = [
+  'draft',
+  'emailed',
+  'shipped',
+  'acknowledged',
+  'credited',
+  'closed',
+];
 
-/** The command that moves a return on, in purchasing's words. */
-export const nextStepLabels: Record<ReturnStatus, string> = {
-  draft: 'Mark as sent',
-  sent: 'Mark as acknowledged',
-  acknowledged: 'Close the return',
-  closed: '',
+/** A step purchasing takes on a return, as the server names it (POST /returns/:id/<step>). */
+export type ReturnStep = 'ship' | 'acknowledge' | 'credit' | 'close' | 'cancel';
+
+/**
+ * The steps a return in `status` may take, as the server allows them: a draft is e-mailed
+ * (from the e-mail dialog) or shipped, or cancelled; then acknowledged, credited, closed.
+ */
+const STEPS: Record<ReturnStatus, readonly ReturnStep[]> = {
+  draft: ['ship', 'cancel'],
+  emailed: ['ship'],
+  shipped: ['acknowledge'],
+  acknowledged: ['credit', 'close'],
+  credited: ['close'],
+  closed: [],
+  cancelled: [],
+};
+export const returnSteps = (status: ReturnStatus) => STEPS[status];
+
+/** The command that takes each step, in purchasing's words. */
+export const stepLabels: Record<ReturnStep, string> = {
+  ship: 'Record shipment',
+  acknowledge: 'Mark as acknowledged',
+  credit: 'Record credit note',
+  close: 'Close the return',
+  cancel: 'Cancel the return',
 };
 
-/** Only an open return may be edited; a closed one is the record. */
-export const returnEditable = (status: ReturnStatus) => status !== 'closed';
+/** Only an open return may be edited; a closed or cancelled one is the record. */
+export const returnEditable = (status: ReturnStatus) =>
+  status !== 'closed' && status !== 'cancelled';
+
+/** Lots, costs and currency change only while a draft. */
+export const draftOnly = (status: ReturnStatus) => status === 'draft';

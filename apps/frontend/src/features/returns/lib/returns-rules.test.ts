@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { chargebackTotal } from '@/features/returns/lib/chargeback';
-import { nextReturnStatus, returnEditable } from '@/features/returns/lib/return-steps';
+import { chargebackTotal, formatMoney } from '@/features/returns/lib/chargeback';
+import { returnEditable, returnSteps } from '@/features/returns/lib/return-steps';
 
 describe('chargeback arithmetic', () => {
   it('is hours × rate + freight + other', () => {
@@ -23,18 +23,26 @@ describe('chargeback arithmetic', () => {
     // 1.15 h × 33.33 = 38.3295 → 38.33
     expect(chargebackTotal({ inspectionHours: 1.15, hourlyRate: 33.33 })).toBe(38.33);
   });
+
+  it('writes every amount with its ISO 4217 code', () => {
+    expect(formatMoney(1234.5, 'EUR')).toMatch(/^EUR\s1,234\.50$/);
+    expect(formatMoney(0, 'USD')).toMatch(/^USD\s0\.00$/);
+  });
 });
 
 describe('return steps', () => {
-  it('allows only the next step', () => {
-    expect(nextReturnStatus('draft')).toBe('sent');
-    expect(nextReturnStatus('sent')).toBe('acknowledged');
-    expect(nextReturnStatus('acknowledged')).toBe('closed');
-    expect(nextReturnStatus('closed')).toBeNull();
+  it('offers what the server allows: ship or cancel a draft, then one step at a time', () => {
+    expect(returnSteps('draft')).toEqual(['ship', 'cancel']);
+    expect(returnSteps('emailed')).toEqual(['ship']);
+    expect(returnSteps('shipped')).toEqual(['acknowledge']);
+    expect(returnSteps('acknowledged')).toEqual(['credit', 'close']);
+    expect(returnSteps('closed')).toEqual([]);
+    expect(returnSteps('cancelled')).toEqual([]);
   });
 
-  it('keeps a closed return as it is', () => {
+  it('keeps a closed or cancelled return as it is', () => {
     expect(returnEditable('acknowledged')).toBe(true);
     expect(returnEditable('closed')).toBe(false);
+    expect(returnEditable('cancelled')).toBe(false);
   });
 });
