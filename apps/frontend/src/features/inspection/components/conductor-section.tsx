@@ -1,5 +1,16 @@
-import { Card, CardContent, Stack, Typography } from '@mui/material';
-import { useState } from 'react';
+import ExpandLessOutlined from '@mui/icons-material/ExpandLessOutlined';
+import ExpandMoreOutlined from '@mui/icons-material/ExpandMoreOutlined';
+import {
+  Card,
+  CardContent,
+  Collapse,
+  IconButton,
+  Stack,
+  Typography,
+  useMediaQuery,
+  type Theme,
+} from '@mui/material';
+import { useEffect, useRef, useState } from 'react';
 import { AddSampleButton } from '@/features/inspection/components/add-sample-button';
 import { ConductorCaution } from '@/features/inspection/components/conductor-caution';
 import { SamplePanel } from '@/features/inspection/components/sample-panel';
@@ -17,12 +28,25 @@ interface ConductorSectionProps {
   instruments: readonly Instrument[];
   canRecord: boolean;
   canVoid: boolean;
+  /** The overview grid asked to show this sample (ignored when it is another conductor's). */
+  jump?: { sampleId: number; at: number } | null;
 }
 
 export function ConductorSection(props: ConductorSectionProps) {
   const { conductor, samples } = props;
   const { formatAreaMm2 } = useUnits();
   const [selectedId, setSelectedId] = useState<number | null>(null);
+  // On a phone the sections start folded: the overview grid above is the way in.
+  const phone = useMediaQuery((theme: Theme) => theme.breakpoints.down('md'));
+  const [open, setOpen] = useState(!phone);
+  const ref = useRef<HTMLElement>(null);
+  const { jump } = props;
+  useEffect(() => {
+    if (!jump || !samples.some((s) => s.id === jump.sampleId)) return;
+    setSelectedId(jump.sampleId);
+    setOpen(true);
+    ref.current?.scrollIntoView({ behavior: 'smooth', block: 'start' });
+  }, [jump, samples]);
   const selected = samples.find((s) => s.id === selectedId) ?? samples.at(-1);
   const label = conductorLabel(conductor);
   const caution = needsCaution(
@@ -33,7 +57,12 @@ export function ConductorSection(props: ConductorSectionProps) {
   const nextUnit = Math.max(0, ...samples.map((s) => s.seq)) + 1;
 
   return (
-    <Card component="section" aria-label={`${label} conductor`}>
+    <Card
+      component="section"
+      aria-label={`${label} conductor`}
+      ref={ref}
+      sx={{ scrollMarginTop: 72 }}
+    >
       <CardContent>
         <Stack spacing={2}>
           <Stack
@@ -52,42 +81,55 @@ export function ConductorSection(props: ConductorSectionProps) {
                 units cut
               </Typography>
             </div>
-            {props.canRecord && (
-              <AddSampleButton
-                lotId={props.lotId}
-                conductorId={conductor.id}
-                conductorLabel={label}
-                nextUnit={nextUnit}
-                onAdded={(s) => setSelectedId(s.id)}
-              />
-            )}
+            <Stack direction="row" spacing={1} sx={{ alignItems: 'flex-start' }}>
+              {props.canRecord && open && (
+                <AddSampleButton
+                  lotId={props.lotId}
+                  conductorId={conductor.id}
+                  conductorLabel={label}
+                  nextUnit={nextUnit}
+                  onAdded={(s) => setSelectedId(s.id)}
+                />
+              )}
+              <IconButton
+                aria-label={open ? `Fold the ${label} conductor` : `Unfold the ${label} conductor`}
+                aria-expanded={open}
+                onClick={() => setOpen((o) => !o)}
+              >
+                {open ? <ExpandLessOutlined /> : <ExpandMoreOutlined />}
+              </IconButton>
+            </Stack>
           </Stack>
-          <UnitGrid
-            units={props.plannedUnits}
-            samples={samples}
-            selectedSampleId={selected?.id ?? null}
-            onSelect={(s) => setSelectedId(s.id)}
-          />
-          <ConductorCaution
-            label={label}
-            undersized={caution.undersized}
-            notCopper={caution.notCopper}
-          />
-          {selected ? (
-            <SamplePanel
-              key={selected.id}
-              sample={selected}
-              conductor={conductor}
-              minAreaRatio={props.minAreaRatio}
-              instruments={props.instruments}
-              canRecord={props.canRecord}
-              canVoid={props.canVoid}
-            />
-          ) : (
-            <Typography color="text.secondary">
-              No sample of this conductor yet. Cut one from the first unit and add it here.
-            </Typography>
-          )}
+          <Collapse in={open} unmountOnExit>
+            <Stack spacing={2}>
+              <UnitGrid
+                units={props.plannedUnits}
+                samples={samples}
+                selectedSampleId={selected?.id ?? null}
+                onSelect={(s) => setSelectedId(s.id)}
+              />
+              <ConductorCaution
+                label={label}
+                undersized={caution.undersized}
+                notCopper={caution.notCopper}
+              />
+              {selected ? (
+                <SamplePanel
+                  key={selected.id}
+                  sample={selected}
+                  conductor={conductor}
+                  minAreaRatio={props.minAreaRatio}
+                  instruments={props.instruments}
+                  canRecord={props.canRecord}
+                  canVoid={props.canVoid}
+                />
+              ) : (
+                <Typography color="text.secondary">
+                  No sample of this conductor yet. Cut one from the first unit and add it here.
+                </Typography>
+              )}
+            </Stack>
+          </Collapse>
         </Stack>
       </CardContent>
     </Card>

@@ -1,5 +1,7 @@
-import { Alert, Stack } from '@mui/material';
+import { Alert, Card, CardContent, Stack } from '@mui/material';
+import { useState } from 'react';
 import { useInstruments } from '@/features/inspection/api/get-instruments';
+import { LotOverviewGrid } from '@/features/inspection/components/lot-overview-grid';
 import { ConductorSection } from '@/features/inspection/components/conductor-section';
 import type { LotDetail } from '@/features/inspection/types';
 import { errorMessage } from '@/lib/query-client';
@@ -14,8 +16,20 @@ interface InspectionPanelProps {
 export function InspectionPanel({ lot, canRecord, canVoid }: InspectionPanelProps) {
   const instruments = useInstruments({ active: true });
   const conductors = [...lot.product.conductors].sort((a, b) => a.position - b.position);
+  // A cell of the overview chose this sample; `at` makes a second click on it jump again.
+  const [jump, setJump] = useState<{ sampleId: number; at: number } | null>(null);
   return (
     <Stack spacing={3}>
+      <Card>
+        <CardContent>
+          <LotOverviewGrid
+            units={lot.samplingPlan.sampleSize}
+            conductors={conductors}
+            samples={lot.samples}
+            onJump={(s) => setJump({ sampleId: s.id, at: Date.now() })}
+          />
+        </CardContent>
+      </Card>
       {canRecord && instruments.isError && (
         <Alert severity="error">
           The instrument register cannot be loaded: {errorMessage(instruments.error)}
@@ -34,6 +48,7 @@ export function InspectionPanel({ lot, canRecord, canVoid }: InspectionPanelProp
           instruments={instruments.data?.items ?? []}
           canRecord={canRecord}
           canVoid={canVoid}
+          jump={jump}
         />
       ))}
     </Stack>

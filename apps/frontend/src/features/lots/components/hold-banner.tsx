@@ -14,13 +14,13 @@ export function HoldBanner({ status, compact = false }: { status: LotStatus; com
       ? 'Cut the samples the plan asks for and record their readings.'
       : status === 'inspecting'
         ? 'Inspection is under way.'
-        : 'The readings are in; a QA lead decides.';
+        : 'The readings are in; the decision is next.';
   return (
     <Alert severity="warning" variant="filled" role="status" data-testid="hold-banner">
       <strong>On hold.</strong>{' '}
       {compact
         ? `Nothing from this lot may be used until a QA lead decides. ${stage}`
-        : `Nothing from this lot may be used or shipped until it is inspected and a QA lead decides. ${stage}`}
+        : `Nothing from this lot may be used or shipped until a QA lead decides. ${stage}`}
     </Alert>
   );
 }
