@@ -21,6 +21,7 @@ const screenRoles = {
   Products: ALL,
   Instruments: ['clerk', 'qa_lead', 'admin'],
   Returns: ['purchasing', 'admin'],
+  Messages: ['purchasing', 'admin'],
   'Corrective actions': ['purchasing', 'qa_lead', 'admin'],
   Scorecards: ['purchasing', 'qa_lead', 'admin'],
   Reference: ALL,

@@ -114,6 +114,23 @@ test('purchasing raises a return for a rejected lot, downloads its CSV and e-mai
   await page.getByRole('button', { name: 'Mark as acknowledged' }).waitFor();
   await screenshot(page, 'return-detail');
 
+  // Every message, with its fate, on the Messages screen.
+  await page.getByRole('link', { name: 'Messages' }).first().click();
+  await page.waitForURL((u) => u.pathname === '/messages');
+  const sent = page.getByRole('list', { name: 'Outbound messages' });
+  await sent
+    .getByText(/· Return RTV-\d{4}-\d{4}: rejected cable from/)
+    .first()
+    .waitFor();
+  await sent
+    .getByText(/replies to buyer@demo\.example/)
+    .first()
+    .waitFor();
+  await screenshot(page, 'messages');
+  // Dismiss the toasts this test queued (raised, logged, shipped) so none waits for the next.
+  const toast = page.locator('.MuiSnackbar-root').getByRole('button', { name: 'Close' });
+  while ((await toast.count()) > 0) await toast.first().click();
+
   await page.getByRole('link', { name: 'Returns' }).first().click();
   await page.waitForURL((u) => u.pathname === '/returns');
   await page.getByRole('table', { name: 'Returns' }).getByText(`RMA-${STAMP}`).waitFor();

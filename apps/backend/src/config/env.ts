@@ -11,6 +11,8 @@ export interface AppConfig {
   uploadDir: string;
   smtpUrl: string | null;
   mailFrom: string;
+  /** The outbound queue: how often each server looks for due mail, back-off and attempts. */
+  mail: { queuePollMs: number; retryBaseMs: number; maxAttempts: number };
   /** ISO 4217 code of new returns' amounts unless purchasing picks another (CURRENCY). */
   currency: string;
   jwtSecret: string;
@@ -104,6 +106,20 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   if (env.S3_ENDPOINT && !/^https?:\/\//.test(env.S3_ENDPOINT)) {
     problems.push('S3_ENDPOINT must start with http:// or https://');
   }
+  const whole = (name: string, fallback: number, min: number, max: number) => {
+    const raw = env[name];
+    const n = raw === undefined || raw === '' ? fallback : Number(raw);
+    if (!Number.isInteger(n) || n < min || n > max) {
+      problems.push(`${name} must be a whole number from ${min} to ${max} (got "${raw}")`);
+      return fallback;
+    }
+    return n;
+  };
+  const mail = {
+    queuePollMs: whole('MAIL_QUEUE_POLL_MS', 5_000, 0, 3_600_000),
+    retryBaseMs: whole('MAIL_RETRY_BASE_MS', 60_000, 100, 86_400_000),
+    maxAttempts: whole('MAIL_MAX_ATTEMPTS', 6, 1, 50),
+  };
   const currency = (env.CURRENCY || 'USD').trim().toUpperCase();
   if (!isCurrencyCode(currency)) {
     problems.push(`CURRENCY must be an ISO 4217 code such as EUR or USD (got "${env.CURRENCY}")`);
@@ -128,6 +144,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     uploadDir,
     smtpUrl,
     mailFrom: env.MAIL_FROM || 'Gaugeproof <gaugeproof@localhost>',
+    mail,
     currency,
     jwtSecret: jwtSecret || persistentSecret(dirname(dbPath)),
     seedDemo: seedRaw !== 'false',

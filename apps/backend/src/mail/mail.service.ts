@@ -1,7 +1,11 @@
 import {
+  ConflictException,
   Inject,
   Injectable,
+  Logger,
   NotFoundException,
+  OnApplicationBootstrap,
+  OnModuleDestroy,
   UnprocessableEntityException,
 } from '@nestjs/common';
 import { EntityManager, type FilterQuery } from '@mikro-orm/core';
@@ -21,7 +25,7 @@ export interface MailAttachment {
   content: Buffer;
 }
 
-/** Rebuilds the attachments of a message about one record (e.g. a return), for a retry. */
+/** Rebuilds the attachments of a message about one record (e.g. a return), for each attempt. */
 export type AttachmentSource = (relatedId: number) => Promise<MailAttachment[]>;
 
 export interface OutgoingMail {
@@ -33,16 +37,40 @@ export interface OutgoingMail {
   relatedId: number;
 }
 
-/** Give up on an unreachable SMTP server quickly: the message is kept and can be retried. */
+/** Give up on an unreachable SMTP server quickly: the message is kept and tried again. */
 const SMTP_TIMEOUT_MS = 10_000;
+/** A server holds a message this long while it sends it (three SMTP timeouts and some). */
+const LEASE_MS = 45_000;
+/** The longest wait between two attempts (common practice, no source). */
+const MAX_BACKOFF_MS = 6 * 3_600_000;
+
+/** Wait before attempt n + 1 after n failed ones: base × 4^(n−1), at most six hours. */
+export function backoffMs(failedAttempts: number, baseMs: number): number {
+  return Math.min(baseMs * 4 ** Math.max(0, failedAttempts - 1), MAX_BACKOFF_MS);
+}
+
+/** What the SMTP server answered ("550 5.1.1 …"), else the connection error. */
+function smtpAnswer(e: unknown): string {
+  const err = e as { response?: unknown; message?: unknown };
+  if (typeof err?.response === 'string' && err.response) return err.response;
+  return e instanceof Error ? e.message : String(e);
+}
 
 /**
- * Sends e-mail over SMTP_URL with nodemailer and keeps every message with its fate:
- * `sent`, `failed` (with the error, retryable) or `logged` when no SMTP server is set.
+ * Outbound e-mail with a durable queue in the database. A message is stored `queued`
+ * before anything is tried; one attempt is made at once, and a failed one is tried again
+ * with back-off by the queue, which every server runs (`MAIL_QUEUE_POLL_MS`). A server
+ * claims a message with a conditional update (a lease), so two servers never send one
+ * message twice, and a message whose server died mid-attempt is tried again once its
+ * lease runs out. The sender's name and address come from MAIL_FROM; Reply-To is the
+ * signed-in user who sent it, so the supplier's answer reaches a person.
  */
 @Injectable()
-export class MailService {
+export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
   private readonly sources = new Map<string, AttachmentSource>();
+  private readonly logger = new Logger('MailQueue');
+  private timer: NodeJS.Timeout | null = null;
+  private draining: Promise<void> | null = null;
 
   constructor(
     private readonly em: EntityManager,
@@ -50,11 +78,25 @@ export class MailService {
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
+  onApplicationBootstrap(): void {
+    const every = this.config.mail.queuePollMs;
+    if (every <= 0) return;
+    this.timer = setInterval(() => void this.drain(), every);
+    this.timer.unref();
+    void this.drain(); // what a crash left behind goes out at once
+  }
+
+  async onModuleDestroy(): Promise<void> {
+    if (this.timer) clearInterval(this.timer);
+    this.timer = null;
+    await this.draining;
+  }
+
   registerAttachmentSource(relatedType: string, source: AttachmentSource): void {
     this.sources.set(relatedType, source);
   }
 
-  /** Stores the message first, then tries to deliver it; never throws for a failed send. */
+  /** Stores the message, then makes its first attempt; never throws for a failed send. */
   async send(mail: OutgoingMail, actor: RequestUser): Promise<MessageView> {
     const em = this.em.fork();
     const message = em.create(OutboundMessage, {
@@ -65,10 +107,12 @@ export class MailService {
       relatedType: mail.relatedType,
       relatedId: mail.relatedId,
       sentById: actor.id,
+      replyTo: actor.email,
+      nextAttemptAt: new Date(),
     });
     await em.flush();
-    await this.deliver(em, message, mail.attachments);
-    return messageView(message);
+    await this.attempt(message.id, mail.attachments);
+    return messageView(await this.em.fork().findOneOrFail(OutboundMessage, message.id));
   }
 
   async retry(id: number, actor: RequestUser): Promise<MessageView> {
@@ -78,19 +122,23 @@ export class MailService {
     if (message.status === 'sent') {
       throw new UnprocessableEntityException('This message was already sent; nothing to retry');
     }
-    const source = this.sources.get(message.relatedType);
-    const attachments = source && message.relatedId !== null ? await source(message.relatedId) : [];
+    if (message.leaseUntil && message.leaseUntil > new Date()) {
+      throw new ConflictException('This message is being sent right now; look again shortly');
+    }
     const before = { status: message.status, error: message.error, attempts: message.attempts };
-    await this.deliver(em, message, attachments);
+    message.nextAttemptAt = new Date();
+    await em.flush();
+    await this.attempt(id);
+    const after = await this.em.fork().findOneOrFail(OutboundMessage, id);
     this.audit.record(em, actor, {
       action: 'message.retry',
       entityType: 'outbound_message',
-      entityId: message.id,
+      entityId: id,
       before,
-      after: { status: message.status, error: message.error, attempts: message.attempts },
+      after: { status: after.status, error: after.error, attempts: after.attempts },
     });
     await em.flush();
-    return messageView(message);
+    return messageView(after);
   }
 
   async list(q: ListMessagesDto): Promise<Page<MessageView>> {
@@ -107,34 +155,97 @@ export class MailService {
     return { items: items.map(messageView), total, page, pageSize };
   }
 
-  private async deliver(em: EntityManager, message: OutboundMessage, files: MailAttachment[]) {
+  /** Sends every message that is due, one after another; one drain at a time per server. */
+  drain(): Promise<void> {
+    if (this.draining) return this.draining;
+    this.draining = (async () => {
+      try {
+        for (;;) {
+          const now = new Date();
+          const due = await this.em.fork().find(
+            OutboundMessage,
+            {
+              status: { $in: ['queued', 'failed'] },
+              nextAttemptAt: { $ne: null, $lte: now },
+              $or: [{ leaseUntil: null }, { leaseUntil: { $lt: now } }],
+            },
+            { fields: ['id'], orderBy: { nextAttemptAt: 'asc', id: 'asc' }, limit: 20 },
+          );
+          if (!due.length) return;
+          let sentAny = false;
+          for (const m of due) sentAny = (await this.attempt(m.id)) || sentAny;
+          if (!sentAny) return;
+        }
+      } catch (e) {
+        this.logger.error(`The mail queue stopped for now: ${smtpAnswer(e)}`);
+      } finally {
+        this.draining = null;
+      }
+    })();
+    return this.draining;
+  }
+
+  /**
+   * One attempt at a due message. The claim is a conditional update: only one server (and
+   * one drain) gets it. Returns false when someone else has it or it is not due.
+   */
+  private async attempt(id: number, files?: MailAttachment[]): Promise<boolean> {
+    const em = this.em.fork();
+    const now = new Date();
+    const claimed = await em.nativeUpdate(
+      OutboundMessage,
+      {
+        id,
+        status: { $in: ['queued', 'failed', 'logged'] },
+        nextAttemptAt: { $ne: null, $lte: now },
+        $or: [{ leaseUntil: null }, { leaseUntil: { $lt: now } }],
+      },
+      { leaseUntil: new Date(now.getTime() + LEASE_MS), lastAttemptAt: now },
+    );
+    if (!claimed) return false;
+    const message = await em.findOneOrFail(OutboundMessage, id);
     message.attempts += 1;
+    message.leaseUntil = null;
     const url = this.config.smtpUrl;
     if (!url) {
       message.status = 'logged';
       message.error = 'No SMTP server is set (SMTP_URL): the message was stored, not sent';
+      message.nextAttemptAt = null;
       await em.flush();
-      return;
+      return true;
     }
     const transport = nodemailer.createTransport(smtpOptions(url));
     try {
+      const source = this.sources.get(message.relatedType);
+      const attachments =
+        files ?? (source && message.relatedId !== null ? await source(message.relatedId) : []);
       await transport.sendMail({
         from: this.config.mailFrom,
+        replyTo: message.replyTo ?? undefined,
         to: message.to,
         subject: message.subject,
         text: message.body,
-        attachments: files.map((f) => ({ ...f })),
+        // One id for every attempt, so a receiving server can tell a repeat.
+        messageId: `<gp-message-${message.id}@${new URL(this.config.publicUrl).hostname}>`,
+        attachments: attachments.map((f) => ({ ...f })),
       });
       message.status = 'sent';
       message.error = null;
       message.sentAt = new Date();
+      message.nextAttemptAt = null;
     } catch (e) {
       message.status = 'failed';
-      message.error = e instanceof Error ? e.message : String(e);
+      message.error = smtpAnswer(e);
+      const { maxAttempts, retryBaseMs } = this.config.mail;
+      message.nextAttemptAt =
+        message.attempts >= maxAttempts
+          ? null
+          : new Date(Date.now() + backoffMs(message.attempts, retryBaseMs));
     } finally {
       transport.close();
     }
     await em.flush();
+    return true;
   }
 }
 

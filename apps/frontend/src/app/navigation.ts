@@ -10,6 +10,7 @@ import StorefrontOutlined from '@mui/icons-material/StorefrontOutlined';
 import InsightsOutlined from '@mui/icons-material/InsightsOutlined';
 import AssignmentReturnOutlined from '@mui/icons-material/AssignmentReturnOutlined';
 import FactCheckOutlined from '@mui/icons-material/FactCheckOutlined';
+import OutboxOutlined from '@mui/icons-material/OutboxOutlined';
 import { paths } from '@/config/paths';
 import { ROLES, type Role } from '@/lib/roles';
 
@@ -76,6 +77,12 @@ export const navItems: readonly NavItem[] = [
     path: paths.correctiveActions.path,
     icon: FactCheckOutlined,
     roles: ['purchasing', 'qa_lead', 'admin'],
+  },
+  {
+    label: 'Messages',
+    path: paths.messages.path,
+    icon: OutboxOutlined,
+    roles: ['purchasing', 'admin'],
   },
   { label: 'Users', path: paths.users.path, icon: ManageAccountsOutlined, roles: ['admin'] },
 ];

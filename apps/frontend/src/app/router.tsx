@@ -27,6 +27,7 @@ const ProductsRoute = lazyRoute(() => import('@/app/routes/products'), 'Products
 const ReferenceRoute = lazyRoute(() => import('@/app/routes/reference'), 'ReferenceRoute');
 const SuppliersRoute = lazyRoute(() => import('@/app/routes/suppliers'), 'SuppliersRoute');
 const ReturnsRoute = lazyRoute(() => import('@/app/routes/returns'), 'ReturnsRoute');
+const MessagesRoute = lazyRoute(() => import('@/app/routes/messages'), 'MessagesRoute');
 const ReturnDetailRoute = lazyRoute(
   () => import('@/app/routes/return-detail'),
   'ReturnDetailRoute',
@@ -141,6 +142,14 @@ const shellRoutes: RouteObject[] = [
     element: (
       <RoleGate>
         <SupplierScorecardRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.messages.path,
+    element: (
+      <RoleGate>
+        <MessagesRoute />
       </RoleGate>
     ),
   },

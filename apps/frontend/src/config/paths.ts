@@ -30,6 +30,7 @@ export const paths = {
       raise ? `/returns?raiseLot=${raise.lotId}&raiseSupplier=${raise.supplierId}` : '/returns',
   },
   returnDetail: { path: '/returns/:id', getHref: (id: number | string) => `/returns/${id}` },
+  messages: { path: '/messages', getHref: () => '/messages' },
   correctiveActions: { path: '/corrective-actions', getHref: () => '/corrective-actions' },
   correctiveActionDetail: {
     path: '/corrective-actions/:id',

@@ -1,9 +1,18 @@
 import { Entity, Enum, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
 
+/**
+ * `queued`: waiting for its first attempt; `sent`; `failed`: the last attempt failed (with
+ * the SMTP answer in `error`), tried again at `nextAttemptAt` or, once that is null, given
+ * up until someone retries it; `logged`: no SMTP server is set.
+ */
 export const MESSAGE_STATUSES = ['queued', 'sent', 'failed', 'logged'] as const;
 export type MessageStatus = (typeof MESSAGE_STATUSES)[number];
 
-/** Every e-mail the product sends, with its fate; a failed one can be retried. */
+/**
+ * Every e-mail the product sends, with its fate. The table is the outbound queue: a message
+ * is stored before any attempt, and the queue (mail-queue.ts) sends what is due, so a
+ * message outlives a crash between a failed attempt and its retry.
+ */
 @Entity({ tableName: 'outbound_messages' })
 export class OutboundMessage {
   @PrimaryKey({ type: 'integer' })
@@ -18,7 +27,7 @@ export class OutboundMessage {
   @Property({ type: 'text' })
   body!: string;
 
-  /** File names and kinds of what was attached; the files are rebuilt on retry. */
+  /** File names and kinds of what was attached; the files are rebuilt on each attempt. */
   @Property({ type: 'json' })
   attachments: Opt<{ filename: string; contentType: string }[]> = [];
 
@@ -46,4 +55,19 @@ export class OutboundMessage {
 
   @Property({ type: 'Date', nullable: true })
   sentAt: Date | null = null;
+
+  /** Where the supplier's answer goes: the signed-in buyer who sent it. */
+  @Property({ type: 'string', length: 254, nullable: true })
+  replyTo: string | null = null;
+
+  /** When the queue tries it next; null when sent, logged or given up. */
+  @Property({ type: 'Date', nullable: true })
+  nextAttemptAt: Date | null = null;
+
+  /** A server is sending it until then; after a crash the lease runs out and another tries. */
+  @Property({ type: 'Date', nullable: true })
+  leaseUntil: Date | null = null;
+
+  @Property({ type: 'Date', nullable: true })
+  lastAttemptAt: Date | null = null;
 }

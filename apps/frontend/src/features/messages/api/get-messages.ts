@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { OutboundMessage, Page } from '@/features/messages/types';
+import type { MessageStatus, OutboundMessage, Page } from '@/features/messages/types';
 
 export interface RelatedRecord {
   /** e.g. 'vendor_return' */
@@ -8,21 +8,33 @@ export interface RelatedRecord {
   relatedId: number;
 }
 
+/** Which messages: those about one record, or all of them (the Messages screen). */
+export interface MessagesQuery {
+  related?: RelatedRecord;
+  status?: MessageStatus | '';
+}
+
 export const messagesKeys = {
   all: ['messages'] as const,
-  related: (r: RelatedRecord) => [...messagesKeys.all, 'list', r] as const,
+  list: (q: MessagesQuery) => [...messagesKeys.all, 'list', q] as const,
 };
 
-export const getMessages = (r: RelatedRecord, signal?: AbortSignal) =>
-  api.get<Page<OutboundMessage>>(
-    `/messages?relatedType=${encodeURIComponent(r.relatedType)}&relatedId=${r.relatedId}&pageSize=100`,
-    signal,
-  );
+export function getMessages(q: MessagesQuery, signal?: AbortSignal) {
+  const params = new URLSearchParams({ pageSize: '100' });
+  if (q.related) {
+    params.set('relatedType', q.related.relatedType);
+    params.set('relatedId', String(q.related.relatedId));
+  }
+  if (q.status) params.set('status', q.status);
+  return api.get<Page<OutboundMessage>>(`/messages?${params.toString()}`, signal);
+}
 
-export const messagesQueryOptions = (r: RelatedRecord) =>
+export const messagesQueryOptions = (q: MessagesQuery) =>
   queryOptions({
-    queryKey: messagesKeys.related(r),
-    queryFn: ({ signal }) => getMessages(r, signal),
+    queryKey: messagesKeys.list(q),
+    queryFn: ({ signal }) => getMessages(q, signal),
+    // The queue retries on its own: keep the list fresh while it is open.
+    refetchInterval: 15_000,
   });
 
-export const useMessages = (r: RelatedRecord) => useQuery(messagesQueryOptions(r));
+export const useMessages = (q: MessagesQuery) => useQuery(messagesQueryOptions(q));
