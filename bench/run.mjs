@@ -11,6 +11,7 @@ import { firstScreenJs, lotPageReady } from './lib/client.mjs';
 import { cachedDataset, scratchCopy } from './lib/dataset.mjs';
 import { lotListPhase, scorecardsPhase } from './lib/phase-reads.mjs';
 import { exportsPhase, readingsPhase } from './lib/phase-writes.mjs';
+import { importPhase } from './lib/phase-import.mjs';
 import { judge } from './lib/budgets.mjs';
 import { Report } from './lib/report.mjs';
 import { signIn, startServer } from './lib/server.mjs';
@@ -84,6 +85,9 @@ try {
         seconds,
         connections: writeConnections,
       }),
+    );
+    m.import = await phase('readings import', () =>
+      importPhase({ base: server.base, token: clerk, dbPath }),
     );
     m.client = await phase('client', async () => {
       const db = new Database(dbPath, { readonly: true });

@@ -32,6 +32,9 @@ export function judge(report, m) {
   const rd = m.readings ?? {};
   const perS = f('readings created', rd.rps, '/s');
   f('readings created p95', rd.p95, 'ms');
+  const im = m.import ?? {};
+  f(`readings import of ${im.rows ?? 2000} rows`, im.ms, 'ms', 0);
+  f('health check slowest answer during the import', im.healthMaxMs, 'ms', 0);
   const ex = m.exports ?? {};
   const retRate = f('return export', ex.returnRowsPerS, 'rows/s', 0);
   const supRate = f('supplier readings export', ex.supplierRowsPerS, 'rows/s', 0);

@@ -1,5 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { MikroORM } from '@mikro-orm/core';
+import { AuditEvent } from '../src/audit/entities/audit-event.entity';
+import { MAX_IMPORT_ROWS } from '../src/inspection/readings-import.service';
 import { Reading } from '../src/inspection/entities/reading.entity';
 import { Sample } from '../src/inspection/entities/sample.entity';
 import {
@@ -127,5 +129,121 @@ describe('readings CSV import', () => {
     const big = await send(lotId, `${HEADER}\n${'x'.repeat(2 * 1024 * 1024)}`);
     expect(big.status).toBe(413);
     expect(big.body.message).toMatch(/larger than 2 MB/);
+  });
+});
+
+describe('readings CSV import, one write per file', () => {
+  const audits = (lotId: number, action: string) =>
+    t.app.get(MikroORM).em.fork().count(AuditEvent, { lotId, action });
+  const massRow = (u: number) => `${u},power,mass,195,1000,,,,,,${bench.balance.serial},`;
+  const resistanceRow = (u: number) =>
+    `${u},power,resistance,,1000,,,0.000805,20.5,,${bench.meter.serial};${bench.thermometer.serial},`;
+
+  it('computes every reading with all of its sample’s readings in the file, and moves the lot once', async () => {
+    const lotId = await createLot(t, kit);
+    const res = await send(lotId, [HEADER, massRow(1), resistanceRow(1)].join('\n'));
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    // The mass reading comes first in the file, yet knows the material the pair identifies.
+    expect(
+      res.body.readings.map((r: { identifiedMaterial: string }) => r.identifiedMaterial),
+    ).toEqual(['copper', 'copper']);
+    expect(await audits(lotId, 'reading.create')).toBe(2);
+    expect(await audits(lotId, 'reading.recompute')).toBe(0);
+    expect(await audits(lotId, 'lot.status')).toBe(1);
+  });
+
+  it('recomputes the readings stored before the file, audited as reading.recompute', async () => {
+    const lotId = await createLot(t, kit);
+    expect((await send(lotId, [HEADER, massRow(1)].join('\n'))).status).toBe(201);
+    const second = await send(lotId, [HEADER, resistanceRow(1)].join('\n'));
+    expect(second.status, JSON.stringify(second.body)).toBe(201);
+    const detail = await as(t, DEMO.qa, 'get', `/api/lots/${lotId}`);
+    const mass = detail.body.samples[0].readings.find(
+      (r: { method: string }) => r.method === 'mass',
+    );
+    expect(mass.identifiedMaterial).toBe('copper');
+    expect(await audits(lotId, 'reading.recompute')).toBe(1);
+  });
+
+  it('answers a retry with the same Idempotency-Key with the first answer and records nothing', async () => {
+    const lotId = await createLot(t, kit);
+    const csv = [HEADER, massRow(1), massRow(2)].join('\n');
+    const withKey = async (key: string, body = csv) =>
+      t.http
+        .post(`/api/lots/${lotId}/readings/import`)
+        .set('Authorization', `Bearer ${await t.token(DEMO.clerk)}`)
+        .set('Idempotency-Key', key)
+        .attach('file', Buffer.from(body), { filename: 'bench.csv', contentType: 'text/csv' });
+    const first = await withKey('bench-2026-12-03-a');
+    expect(first.status).toBe(201);
+    const before = await count(Reading);
+    const retry = await withKey('bench-2026-12-03-a');
+    expect(retry.status).toBe(201);
+    expect(retry.headers['idempotent-replayed']).toBe('true');
+    expect(retry.body).toEqual(first.body);
+    expect(await count(Reading)).toBe(before);
+    const other = await withKey('bench-2026-12-03-a', [HEADER, massRow(3)].join('\n'));
+    expect(other.status).toBe(422);
+    expect(other.body.message).toMatch(/Idempotency-Key was already used/);
+    const bad = await withKey('two words');
+    expect(bad.status).toBe(400);
+    expect(bad.body.message).toEqual([expect.stringMatching(/^Idempotency-Key must be/)]);
+    expect(await count(Reading)).toBe(before);
+  });
+
+  it('answers the same file sent again without a key with the first answer', async () => {
+    const lotId = await createLot(t, kit);
+    const csv = [HEADER, massRow(1)].join('\n');
+    const first = await send(lotId, csv);
+    const before = await count(Reading);
+    const again = await send(lotId, csv);
+    expect(again.status).toBe(201);
+    expect(again.headers['idempotent-replayed']).toBe('true');
+    expect(again.body).toEqual(first.body);
+    expect(await count(Reading)).toBe(before);
+  });
+
+  it('records two retries sent at the same moment once', async () => {
+    const lotId = await createLot(t, kit);
+    const csv = [HEADER, massRow(1), massRow(2), massRow(3)].join('\n');
+    const before = await count(Reading);
+    const token = await t.token(DEMO.clerk);
+    const post = () =>
+      t.http
+        .post(`/api/lots/${lotId}/readings/import`)
+        .set('Authorization', `Bearer ${token}`)
+        .set('Idempotency-Key', 'twice-at-once')
+        .attach('file', Buffer.from(csv), { filename: 'bench.csv', contentType: 'text/csv' });
+    const answers = await Promise.all([post(), post()]);
+    expect(answers.map((a) => a.status)).toEqual([201, 201]);
+    expect(answers[0].body).toEqual(answers[1].body);
+    expect(await count(Reading)).toBe(before + 3);
+  });
+
+  it(`refuses a file of more than ${MAX_IMPORT_ROWS} rows, and numbers a person would not write`, async () => {
+    const lotId = await createLot(t, kit);
+    const before = await count(Reading);
+    const rows = Array.from({ length: MAX_IMPORT_ROWS + 1 }, () => massRow(1));
+    const big = await send(lotId, [HEADER, ...rows].join('\n'));
+    expect(big.status).toBe(422);
+    expect(big.body.errors).toEqual([
+      {
+        row: MAX_IMPORT_ROWS + 2,
+        column: null,
+        message: expect.stringContaining(`at most ${MAX_IMPORT_ROWS}`),
+      },
+    ]);
+    const hex = await send(
+      lotId,
+      [HEADER, `1,power,mass,0x10,1000,,,,,,${bench.balance.serial},`].join('\n'),
+    );
+    expect(hex.status).toBe(422);
+    expect(hex.body.errors).toContainEqual({
+      row: 2,
+      column: 'massG',
+      message: 'massG must be a number (got "0x10")',
+    });
+    expect(hex.body.errors.every((e: { column: string }) => e.column === 'massG')).toBe(true);
+    expect(await count(Reading)).toBe(before);
   });
 });

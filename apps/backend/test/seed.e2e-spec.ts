@@ -79,9 +79,15 @@ describe('demo scenario seeded on an empty database', () => {
       { populate: ['sample.conductor', 'sample.lot.product'], orderBy: { id: 'asc' } },
     );
     expect(readings.length).toBeGreaterThan(300);
-    const live = new Map<number, Reading[]>();
+    // A reading is computed with the other readings of its sample that stood with it (all
+    // live ones; for a voided one, those taken before its void), newest first.
+    const stoodWith = (r: Reading) =>
+      readings
+        .filter((s) => s !== r && s.sample.id === r.sample.id && !s.voided)
+        .filter((s) => !r.voidedAt || s.takenAt <= r.voidedAt)
+        .reverse();
     for (const r of readings) {
-      const siblings = (live.get(r.sample.id) ?? []).slice().reverse();
+      const siblings = stoodWith(r);
       const computed = computeReading({
         method: r.method,
         inputs: r.inputs as ReadingInputs,
@@ -99,7 +105,6 @@ describe('demo scenario seeded on an empty database', () => {
       expect(r.verdict, `reading ${r.id}`).toBe(computed.verdict);
       expect(r.measuresAs).toBe(computed.measuresAs);
       expect(r.identifiedMaterial).toBe(computed.identifiedMaterial);
-      if (!r.voided) live.set(r.sample.id, [...(live.get(r.sample.id) ?? []), r]);
     }
     // By hand for one mass reading: A = m / (ρ · L · (1 + k)), copper 8.89 g/cm³, k = 0.02.
     const mass = readings.find((r) => r.method === 'mass' && !r.voided) as Reading;
@@ -128,6 +133,25 @@ describe('demo scenario seeded on an empty database', () => {
     const byR = areaFromResistance({ ...r.inputs, material: 'copper' } as never);
     expect(r.areaMm2).toBeCloseTo(byR.areaMm2, 6);
     expect(['rejected', 'returned']).toContain(r.sample.lot.status);
+  });
+
+  it('shows on each mass reading the material that its sample’s resistance reading found with it', async () => {
+    const found = await em.find(Reading, {
+      method: 'resistance',
+      voided: false,
+      identifiedMaterial: 'cca',
+    });
+    expect(found.length).toBeGreaterThan(0);
+    for (const r of found) {
+      const masses = await em.find(Reading, { sample: r.sample, method: 'mass', voided: false });
+      expect(masses.length, `sample ${r.sample.id}`).toBeGreaterThan(0);
+      for (const m of masses) {
+        expect(m, `reading ${m.id}`).toMatchObject({
+          identifiedMaterial: 'cca',
+          materialMismatch: true,
+        });
+      }
+    }
   });
 
   it('never used an instrument outside its calibration period', async () => {

@@ -17,6 +17,9 @@ export interface AuditEntry {
  * Appends audit events. Pass the EntityManager of the unit of work the change is in,
  * so the event is stored in the same transaction as the change, or not at all.
  */
+/** Events per insert statement (our choice: nine values each, far below the limits). */
+const APPEND_BATCH = 100;
+
 @Injectable()
 export class AuditService {
   record(em: EntityManager, actor: RequestUser | null, entry: AuditEntry): AuditEvent {
@@ -36,29 +39,36 @@ export class AuditService {
   }
 
   /**
-   * The same events as `record`, written at once with one insert through `em`'s current
-   * transaction, for the paths that write their rows with SQL (reading entry).
+   * The same events as `record`, written through `em`'s current transaction with one
+   * insert per hundred events (bound values stay under every driver's limit), for the
+   * paths that write their rows with SQL (reading entry). `at`: when they happened.
    */
-  async append(em: EntityManager, actor: RequestUser | null, entries: readonly AuditEntry[]) {
-    if (entries.length === 0) return;
-    const at = new Date();
+  async append(
+    em: EntityManager,
+    actor: RequestUser | null,
+    entries: readonly AuditEntry[],
+    at = new Date(),
+  ) {
     const json = (v: Record<string, unknown> | null | undefined) => (v ? JSON.stringify(v) : null);
-    await plainSql(
-      em,
-      `insert into audit_events (actor_id, actor_email, action, entity_type, entity_id, lot_id,
-         before, after, at) values ${entries.map(() => '(?, ?, ?, ?, ?, ?, ?, ?, ?)').join(', ')}`,
-      entries.flatMap((e) => [
-        actor?.id ?? null,
-        actor?.email ?? 'system',
-        e.action,
-        e.entityType,
-        e.entityId ?? null,
-        e.lotId ?? null,
-        json(e.before),
-        json(e.after),
-        at,
-      ]),
-      'run',
-    );
+    for (let i = 0; i < entries.length; i += APPEND_BATCH) {
+      const batch = entries.slice(i, i + APPEND_BATCH);
+      await plainSql(
+        em,
+        `insert into audit_events (actor_id, actor_email, action, entity_type, entity_id, lot_id,
+           before, after, at) values ${batch.map(() => '(?, ?, ?, ?, ?, ?, ?, ?, ?)').join(', ')}`,
+        batch.flatMap((e) => [
+          actor?.id ?? null,
+          actor?.email ?? 'system',
+          e.action,
+          e.entityType,
+          e.entityId ?? null,
+          e.lotId ?? null,
+          json(e.before),
+          json(e.after),
+          at,
+        ]),
+        'run',
+      );
+    }
   }
 }

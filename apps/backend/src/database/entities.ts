@@ -3,6 +3,7 @@ import { CorrectiveAction } from '../corrective-actions/entities/corrective-acti
 import { Decision } from '../decisions/entities/decision.entity';
 import { Nonconformance } from '../decisions/entities/nonconformance.entity';
 import { Reading } from '../inspection/entities/reading.entity';
+import { ReadingImport } from '../inspection/entities/reading-import.entity';
 import { Sample } from '../inspection/entities/sample.entity';
 import { Instrument } from '../instruments/entities/instrument.entity';
 import { Lot } from '../lots/entities/lot.entity';
@@ -26,6 +27,7 @@ export const ENTITIES = [
   Lot,
   Sample,
   Reading,
+  ReadingImport,
   Instrument,
   Photo,
   Decision,

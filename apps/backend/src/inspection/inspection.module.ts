@@ -4,7 +4,6 @@ import { InspectionController } from './inspection.controller';
 import { LotDetailController } from './lot-detail.controller';
 import { LotDetailService } from './lot-detail.service';
 import { LotEvaluationService } from './lot-evaluation';
-import { LotStatusService } from './lot-status';
 import { ReadingsImportController } from './readings-import.controller';
 import { ReadingsImportService } from './readings-import.service';
 import { ReadingsService } from './readings.service';
@@ -18,7 +17,6 @@ import { SamplesService } from './samples.service';
     GroupCommit,
     LotEvaluationService,
     LotDetailService,
-    LotStatusService,
     SamplesService,
     ReadingsService,
     ReadingWriter,

@@ -1,9 +1,7 @@
-import { Injectable, UnprocessableEntityException } from '@nestjs/common';
+import { UnprocessableEntityException } from '@nestjs/common';
 import type { EntityManager } from '@mikro-orm/core';
 import type { SqlEntityManager } from '@mikro-orm/knex';
-import { AuditService, type AuditEntry } from '../audit/audit.service';
-import type { RequestUser } from '../auth/request-user';
-import { Decision } from '../decisions/entities/decision.entity';
+import type { AuditEntry } from '../audit/audit.service';
 import type { Lot, LotStatus } from '../lots/entities/lot.entity';
 import { plainSql } from '../common/plain-sql';
 
@@ -89,35 +87,4 @@ export function statusChange(lotId: number, before: LotStatus, after: LotStatus)
     before: { status: before },
     after: { status: after },
   };
-}
-
-/**
- * Moves the lot along on_hold → inspecting → awaiting_decision after its evidence changed,
- * and back to inspecting when a void leaves a planned unit unread (only before any decision).
- * Always touches the lot so its optimistic version bumps: a decision taken on the old
- * evidence then meets a 409. Call after flushing the reading change.
- */
-@Injectable()
-export class LotStatusService {
-  constructor(private readonly audit: AuditService) {}
-
-  async refresh(em: EntityManager, lot: Lot, actor: RequestUser): Promise<void> {
-    const before = lot.status;
-    const next = await nextStatus(
-      before,
-      () =>
-        evidenceOf(em, {
-          id: lot.id,
-          productId: lot.product.id,
-          sampleSize: lot.samplingPlan.sampleSize,
-        }),
-      async () => (await em.count(Decision, { lot })) > 0,
-    );
-    lot.updatedAt = new Date();
-    if (next !== before) {
-      lot.status = next;
-      this.audit.record(em, actor, statusChange(lot.id, before, next));
-    }
-    await em.flush();
-  }
 }

@@ -1,14 +1,14 @@
-import { Injectable, NotFoundException } from '@nestjs/common';
-import type { SqlEntityManager } from '@mikro-orm/knex';
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import type { EntityManager } from '@mikro-orm/core';
 import type { MaterialId } from '@gaugeproof/standards';
 import { AuditService, type AuditEntry } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
 import { usableInstruments, type InstrumentRecord } from '../instruments/instruments.service';
 import type { InstrumentKind } from '../instruments/entities/instrument.entity';
 import { announceSqlWrite } from '../common/sql-writes';
-import { jsonOf } from '../common/sql-values';
+import { instantOf, jsonOf } from '../common/sql-values';
+import { isoDate } from '../common/calendar';
 import type { LotStatus } from '../lots/entities/lot.entity';
-import type { CreateReadingDto } from './dto/create-reading.dto';
 import type { InstrumentSnapshot, ReadingMethod, Verdict } from './entities/reading.entity';
 import { resolutionsFor, snapshot } from './instrument-resolutions';
 import { assertLotOpen, evidenceOf, nextStatus, statusChange } from './lot-status';
@@ -18,8 +18,38 @@ import { readingFactsView } from './views';
 import { GroupCommit } from '../common/group-commit';
 import { plainSql } from '../common/plain-sql';
 
-/** Row of the sample with what its reading needs of lot, product and conductor. */
+/** One reading to record: on a sample, by a method, with the register's instruments used. */
+export interface NewReading {
+  sampleId: number;
+  method: ReadingMethod;
+  /** The method's inputs only (see `methodInputs`). */
+  inputs: ReadingInputs;
+  instrumentIds: readonly number[];
+}
+
+export interface WriteOptions {
+  /**
+   * Write inside this transaction (the import's, the seed's) instead of one of the writer's
+   * own; the caller then commits, and announces the write to the caches after its commit.
+   */
+  em?: EntityManager;
+  /** When the readings are taken and audited (default: now); the seed's story time. */
+  at?: Date;
+}
+
+/**
+ * Entries of one call that were refused, by their index in the call. Nothing of the call
+ * was written. `error` is what the entry alone would have been answered with.
+ */
+export class ReadingsRefused extends Error {
+  constructor(readonly refusals: readonly { index: number; error: unknown }[]) {
+    super(`${refusals.length} reading(s) refused`);
+  }
+}
+
+/** Row of the sample with what its readings need of lot, product and conductor. */
 interface SampleRow {
+  id: number;
   lotId: number;
   status: LotStatus;
   poNumber: string;
@@ -30,17 +60,16 @@ interface SampleRow {
   claimedMaterial: string;
 }
 
-/** A live reading of the sample as stored (JSON as text on SQLite, parsed on PostgreSQL). */
-interface ReadingRow {
+/** A live reading of a sample as the writer holds it (stored, or about to be). */
+interface LiveReading extends ComputedReading {
+  /** 0 until inserted. */
   id: number;
+  sampleId: number;
   method: ReadingMethod;
-  inputs: string | ReadingInputs;
-  instruments: string | InstrumentSnapshot[];
-  areaMm2: number;
-  measuresAs: string;
-  identifiedMaterial: string | null;
-  materialMismatch: number | boolean;
-  verdict: Verdict;
+  inputs: ReadingInputs;
+  instruments: InstrumentSnapshot[];
+  /** Index of the entry in this call; undefined for a reading stored before it. */
+  entry?: number;
 }
 
 /** Columns a computation fills, in the order of COMPUTED_VALUES. */
@@ -66,14 +95,44 @@ const computedValues = (c: ComputedReading) => [
   c.verdict,
   JSON.stringify(c.result),
 ];
+const computedOf = (r: ComputedReading): ComputedReading => ({
+  areaMm2: r.areaMm2,
+  uMm2: r.uMm2,
+  expandedUMm2: r.expandedUMm2,
+  areaRatio: r.areaRatio,
+  measuresAs: r.measuresAs,
+  identifiedMaterial: r.identifiedMaterial,
+  materialMismatch: r.materialMismatch,
+  verdict: r.verdict,
+  result: r.result,
+});
+
+const SAMPLE_SELECT = `select s.id, s.lot_id as "lotId", l.status, l.po_number as "poNumber",
+       l.product_id as "productId", l.sampling_plan as "samplingPlan",
+       p.min_area_ratio as "minAreaRatio", c.gauge_label as "gaugeLabel",
+       c.claimed_material as "claimedMaterial"
+  from samples s join lots l on l.id = s.lot_id join products p on p.id = l.product_id
+  join conductor_specs c on c.id = s.conductor_id`;
+const READING_SELECT = `select id, sample_id as "sampleId", method, inputs, instruments,
+       area_mm2 as "areaMm2", u_mm2 as "uMm2", expanded_umm2 as "expandedUMm2",
+       area_ratio as "areaRatio", measures_as as "measuresAs",
+       identified_material as "identifiedMaterial", material_mismatch as "materialMismatch",
+       verdict, result
+  from readings`;
+/** Values bound in one `in (…)` list at the most: well under SQLite's and PostgreSQL's limits. */
+const CHUNK = 500;
 
 /**
- * Reading entry, the busiest write of the product, in one transaction of plain SQL: the
- * same rules as the unit-of-work path of `ReadingsService` (instrument check, computation,
- * recompute of the sample's other live readings, audit, lot status) in about ten small
- * statements, without hydrating and change-tracking the sample, lot, product, conductor,
- * instruments, user and siblings it reads (that was most of a reading's time). Portable
- * SQL: the PostgreSQL pass runs it too.
+ * The one way readings are written and voided: the clerk's form, the CSV import and the
+ * demo seed all call `write`, QA's void calls `void`. Each call is one transaction: the
+ * instrument check and computation of every entry, the recompute of the other live readings
+ * of each sample touched (a material finding needs mass and resistance together, and must
+ * follow when one of them arrives or is voided), the audit and the lot status, once per
+ * call however many readings it holds, so an import costs time in proportion to its rows.
+ *
+ * Plain, portable SQL in about ten statements for one reading, without hydrating and
+ * change-tracking the sample, lot, product, conductor, instruments, user and siblings it
+ * reads (that was most of a reading's time). The PostgreSQL pass runs it too.
  */
 @Injectable()
 export class ReadingWriter {
@@ -82,111 +141,210 @@ export class ReadingWriter {
     private readonly audit: AuditService,
   ) {}
 
-  async create(
-    sampleId: number,
-    method: ReadingMethod,
-    inputs: ReadingInputs,
-    dto: CreateReadingDto,
-    actor: RequestUser,
-  ) {
+  /**
+   * Records the entries, in order (a later entry is the newer reading), and returns their
+   * views in the same order. Throws `ReadingsRefused` listing every refused entry; then
+   * nothing of the call is written.
+   */
+  async write(entries: readonly NewReading[], actor: RequestUser, options: WriteOptions = {}) {
+    const at = options.at ?? new Date();
+    if (options.em) return this.writeIn(options.em, entries, actor, at);
     // Readings posted at the same moment share one commit (common/group-commit.ts).
-    const view = await this.commits.run(async (em) => {
-      const sql = em as SqlEntityManager;
-      const [sample] = await plainSql<SampleRow[]>(
-        sql,
-        `select s.lot_id as "lotId", l.status, l.po_number as "poNumber", l.product_id as "productId",
-                l.sampling_plan as "samplingPlan", p.min_area_ratio as "minAreaRatio",
-                c.gauge_label as "gaugeLabel", c.claimed_material as "claimedMaterial"
-           from samples s join lots l on l.id = s.lot_id join products p on p.id = l.product_id
-           join conductor_specs c on c.id = s.conductor_id
-          where s.id = ?`,
-        [sampleId],
+    const views = await this.commits.run((em) => this.writeIn(em, entries, actor, at));
+    announceSqlWrite(['Reading', 'Lot', 'AuditEvent']);
+    return views;
+  }
+
+  /** Voids a reading with a reason; its sample's other live readings are computed again. */
+  async void(id: number, reason: string, actor: RequestUser, options: WriteOptions = {}) {
+    const at = options.at ?? new Date();
+    if (options.em) return this.voidIn(options.em, id, reason, actor, at);
+    const view = await this.commits.run((em) => this.voidIn(em, id, reason, actor, at));
+    announceSqlWrite(['Reading', 'Lot', 'AuditEvent']);
+    return view;
+  }
+
+  private async voidIn(
+    em: EntityManager,
+    id: number,
+    reason: string,
+    actor: RequestUser,
+    at: Date,
+  ) {
+    const [row] = await plainSql<(LiveRow & VoidFacts)[]>(
+      em,
+      `${READING_SELECT.replace('from readings', VOID_FACTS)} where id = ?`,
+      [id],
+    );
+    if (!row) throw new NotFoundException('No such record');
+    if (row.voided) {
+      throw new ConflictException(
+        `This reading was already voided on ${isoDate(instantOf(row.voidedAt))}: ${row.voidReason}`,
       );
-      if (!sample) throw new NotFoundException(`Sample ${sampleId} not found`);
-      assertLotOpen(sample);
-      const instruments = await this.instruments(sql, dto.instrumentIds);
-      const siblings = (
-        await plainSql<ReadingRow[]>(
-          sql,
-          `select id, method, inputs, instruments, area_mm2 as "areaMm2", measures_as as "measuresAs",
-                  identified_material as "identifiedMaterial", material_mismatch as "materialMismatch", verdict
-             from readings where sample_id = ? and voided = ? order by taken_at desc, id desc`,
-          [sampleId, false],
+    }
+    const reading = liveOf(row);
+    const [sample] = await this.samples(em, [reading.sampleId]);
+    await plainSql(
+      em,
+      'update readings set voided = ?, void_reason = ?, voided_by_id = ?, voided_at = ? where id = ?',
+      [true, reason, actor.id, at, id],
+      'run',
+    );
+    const shaped = { ...reading, inputs: reading.inputs as Record<string, number>, ...NOT_VOIDED };
+    const events: AuditEntry[] = [
+      {
+        action: 'reading.void',
+        entityType: 'reading',
+        entityId: id,
+        lotId: sample.lotId,
+        before: auditShape(shaped),
+        after: auditShape({ ...shaped, voided: true, voidReason: reason }),
+      },
+    ];
+    await this.settle(em, [sample], await this.liveReadings(em, [sample.id]), events, at);
+    await this.audit.append(em, actor, events, at);
+    return readingFactsView({
+      ...shaped,
+      takenAt: instantOf(row.takenAt),
+      takenBy: row.takenById ? { id: row.takenById, name: row.takenByName } : null,
+      voided: true,
+      voidReason: reason,
+      voidedAt: at,
+      voidedBy: { id: actor.id, name: actor.name },
+    });
+  }
+
+  private async writeIn(
+    em: EntityManager,
+    entries: readonly NewReading[],
+    actor: RequestUser,
+    at: Date,
+  ) {
+    const samples = new Map(
+      (
+        await this.samples(
+          em,
+          entries.map((e) => e.sampleId),
         )
-      ).map((r) => ({
-        ...r,
-        inputs: jsonOf<ReadingInputs>(r.inputs),
-        instruments: jsonOf<InstrumentSnapshot[]>(r.instruments),
-        materialMismatch: Boolean(r.materialMismatch),
-      }));
-      const context = {
-        gaugeLabel: sample.gaugeLabel,
-        claimedMaterial: sample.claimedMaterial as MaterialId,
-        minAreaRatio: sample.minAreaRatio,
-      };
-      const computed = computeReading({
-        ...context,
-        method,
-        inputs,
-        resolutions: resolutionsFor(method, instruments),
-        siblings,
+      ).map((s) => [s.id, s]),
+    );
+    const register = await this.register(
+      em,
+      entries.flatMap((e) => e.instrumentIds),
+    );
+    const live = await this.liveReadings(em, [...samples.keys()]);
+    const refusals: { index: number; error: unknown }[] = [];
+    const added: LiveReading[] = [];
+    entries.forEach((entry, index) => {
+      try {
+        const sample = samples.get(entry.sampleId);
+        if (!sample) throw new NotFoundException(`Sample ${entry.sampleId} not found`);
+        assertLotOpen(sample);
+        const instruments = usableInstruments(entry.instrumentIds, register, at);
+        const siblings = live.get(sample.id) ?? [];
+        const computed = computeReading({
+          ...context(sample),
+          method: entry.method,
+          inputs: entry.inputs,
+          resolutions: resolutionsFor(entry.method, instruments),
+          siblings,
+        });
+        const reading: LiveReading = {
+          ...computed,
+          id: 0,
+          sampleId: sample.id,
+          method: entry.method,
+          inputs: entry.inputs,
+          instruments: instruments.map(snapshot),
+          entry: index,
+        };
+        live.set(sample.id, [reading, ...siblings]);
+        added.push(reading);
+      } catch (error) {
+        refusals.push({ index, error });
+      }
+    });
+    if (refusals.length) throw new ReadingsRefused(refusals);
+
+    const touched = [...new Set(added.map((r) => r.sampleId))].map(
+      (id) => samples.get(id) as SampleRow,
+    );
+    const events: AuditEntry[] = [];
+    // The entries' final results: computed with every reading of their sample that stands.
+    for (const sample of touched) {
+      const all = live.get(sample.id) as LiveReading[];
+      all.forEach((r, i) => {
+        if (r.entry === undefined || i === 0) return; // the newest already saw all the others
+        Object.assign(r, recomputed(sample, r, all));
       });
-      const takenAt = new Date();
-      const snapshots = instruments.map(snapshot);
+    }
+    for (const r of added) {
       const [{ id }] = await plainSql<{ id: number }[]>(
-        sql,
+        em,
         `insert into readings (sample_id, method, inputs, instruments, ${COMPUTED_COLUMNS.join(', ')},
            taken_by_id, taken_at, voided) values (?, ?, ?, ?, ${COMPUTED_COLUMNS.map(() => '?').join(', ')}, ?, ?, ?)
          returning id`,
         [
-          sampleId,
-          method,
-          JSON.stringify(inputs),
-          JSON.stringify(snapshots),
-          ...computedValues(computed),
+          r.sampleId,
+          r.method,
+          JSON.stringify(r.inputs),
+          JSON.stringify(r.instruments),
+          ...computedValues(r),
           actor.id,
-          takenAt,
+          at,
           false,
         ],
         'all',
       );
-      const reading = {
-        id,
-        sampleId,
-        method,
-        inputs: inputs as Record<string, number>,
-        instruments: snapshots,
-        ...computed,
-        voided: false,
-        voidReason: null,
-      };
-      const events: AuditEntry[] = [
-        {
-          action: 'reading.create',
-          entityType: 'reading',
-          entityId: id,
-          lotId: sample.lotId,
-          after: auditShape(reading),
-        },
-      ];
-      // The sample's other live readings, computed again with the new one among them.
-      const live = [{ ...reading, areaMm2: computed.areaMm2 }, ...siblings];
-      for (const r of siblings) {
-        const again = computeReading({
-          ...context,
-          method: r.method,
-          inputs: r.inputs,
-          resolutions: resolutionsFor(r.method, r.instruments.map(asInstrument)),
-          siblings: live.filter((o) => o.id !== r.id),
-        });
+      r.id = id;
+      events.push({
+        action: 'reading.create',
+        entityType: 'reading',
+        entityId: id,
+        lotId: (samples.get(r.sampleId) as SampleRow).lotId,
+        after: auditShape({ ...r, inputs: r.inputs as Record<string, number>, ...NOT_VOIDED }),
+      });
+    }
+    await this.settle(em, touched, live, events, at);
+    await this.audit.append(em, actor, events, at);
+    return added.map((r) =>
+      readingFactsView({
+        ...r,
+        inputs: r.inputs as Record<string, number>,
+        ...NOT_VOIDED,
+        takenAt: at,
+        takenBy: { id: actor.id, name: actor.name },
+        voidedBy: null,
+        voidedAt: null,
+      }),
+    );
+  }
+
+  /**
+   * After readings of `touched` samples were added or voided: every reading stored before
+   * that still stands is computed again with the others (`live`), updated and audited as
+   * `reading.recompute` where its outcome changed; then the status of each lot concerned.
+   */
+  private async settle(
+    em: EntityManager,
+    touched: readonly SampleRow[],
+    live: Map<number, LiveReading[]>,
+    events: AuditEntry[],
+    at: Date,
+  ) {
+    for (const sample of touched) {
+      const all = live.get(sample.id) ?? [];
+      for (const r of all) {
+        if (r.entry !== undefined) continue;
+        const again = recomputed(sample, r, all);
         if (outcomeOf(again) === outcomeOf(r)) continue;
         await plainSql(
-          sql,
+          em,
           `update readings set ${COMPUTED_COLUMNS.map((c) => `${c} = ?`).join(', ')} where id = ?`,
           [...computedValues(again), r.id],
           'run',
         );
-        const shaped = { ...r, sampleId, voided: false, voidReason: null };
+        const shaped = { ...r, inputs: r.inputs as Record<string, number>, ...NOT_VOIDED };
         events.push({
           action: 'reading.recompute',
           entityType: 'reading',
@@ -195,42 +353,61 @@ export class ReadingWriter {
           before: auditShape(shaped),
           after: auditShape({ ...shaped, ...again }),
         });
+        Object.assign(r, again);
       }
-      await this.lotStatus(sql, sample, events);
-      await this.audit.append(em, actor, events);
-      const view = readingFactsView({
-        ...reading,
-        takenAt,
-        takenBy: { id: actor.id, name: actor.name },
-        voidedBy: null,
-        voidedAt: null,
-      });
-      return view;
-    });
-    announceSqlWrite(['Reading', 'Lot', 'AuditEvent']);
-    return view;
+    }
+    const lots = new Map(touched.map((s) => [s.lotId, s]));
+    for (const sample of lots.values()) await this.lotStatus(em, sample, events, at);
   }
 
-  private async instruments(sql: SqlEntityManager, ids: readonly number[]) {
-    const unique = [...new Set(ids)];
-    const rows = unique.length
-      ? await plainSql<(InstrumentRecord & { active: number | boolean })[]>(
-          sql,
-          `select id, kind, name, serial, resolution, resolution_unit as "resolutionUnit",
-                  calibration_due_on as "calibrationDueOn", active
-             from instruments where id in (${unique.map(() => '?').join(', ')})`,
-          unique,
-        )
-      : [];
-    return usableInstruments(
-      ids,
-      rows.map((r) => ({ ...r, active: Boolean(r.active) })),
-      new Date(),
-    );
+  /** The samples of `ids` with their lot, product and conductor facts. */
+  private async samples(em: EntityManager, ids: readonly number[]): Promise<SampleRow[]> {
+    const rows: SampleRow[] = [];
+    for (const chunk of chunks([...new Set(ids)])) {
+      rows.push(
+        ...(await plainSql<SampleRow[]>(
+          em,
+          `${SAMPLE_SELECT} where s.id in (${marks(chunk)})`,
+          chunk,
+        )),
+      );
+    }
+    return rows;
   }
 
-  /** The lot's next status, and a touch that bumps its version (see LotStatusService). */
-  private async lotStatus(sql: SqlEntityManager, sample: SampleRow, events: AuditEntry[]) {
+  /** The live readings of each sample, newest first (the order identification picks from). */
+  private async liveReadings(em: EntityManager, sampleIds: readonly number[]) {
+    const live = new Map<number, LiveReading[]>(sampleIds.map((id) => [id, []]));
+    for (const chunk of chunks(sampleIds)) {
+      const rows = await plainSql<LiveRow[]>(
+        em,
+        `${READING_SELECT} where sample_id in (${marks(chunk)}) and voided = ?
+          order by taken_at desc, id desc`,
+        [...chunk, false],
+      );
+      for (const row of rows) live.get(row.sampleId)?.push(liveOf(row));
+    }
+    return live;
+  }
+
+  /** The register rows of the instruments named (the usability rule reads them). */
+  private async register(em: EntityManager, ids: readonly number[]) {
+    const rows: InstrumentRecord[] = [];
+    for (const chunk of chunks([...new Set(ids)])) {
+      const found = await plainSql<(InstrumentRecord & { active: number | boolean })[]>(
+        em,
+        `select id, kind, name, serial, resolution, resolution_unit as "resolutionUnit",
+                calibration_due_on as "calibrationDueOn", active
+           from instruments where id in (${marks(chunk)})`,
+        chunk,
+      );
+      rows.push(...found.map((r) => ({ ...r, active: Boolean(r.active) })));
+    }
+    return rows;
+  }
+
+  /** The lot's next status, and a touch that bumps its version (a decision on the old evidence meets 409). */
+  private async lotStatus(em: EntityManager, sample: SampleRow, events: AuditEntry[], at: Date) {
     const before = sample.status;
     const lot = {
       id: sample.lotId,
@@ -239,10 +416,10 @@ export class ReadingWriter {
     };
     const after = await nextStatus(
       before,
-      () => evidenceOf(sql, lot),
+      () => evidenceOf(em, lot),
       async () => {
         const [d] = await plainSql<{ n: number | string }[]>(
-          sql,
+          em,
           'select count(*) as n from decisions where lot_id = ?',
           [lot.id],
         );
@@ -250,14 +427,80 @@ export class ReadingWriter {
       },
     );
     await plainSql(
-      sql,
+      em,
       'update lots set status = ?, updated_at = ?, version = version + 1 where id = ?',
-      [after, new Date(), lot.id],
+      [after, at, lot.id],
       'run',
     );
     if (after !== before) events.push(statusChange(lot.id, before, after));
   }
 }
+
+const NOT_VOIDED = { voided: false, voidReason: null } as const;
+
+/** A reading as stored (JSON as text on SQLite, parsed on PostgreSQL; booleans 0/1 or true/false). */
+interface LiveRow extends Omit<
+  LiveReading,
+  'inputs' | 'instruments' | 'materialMismatch' | 'result'
+> {
+  inputs: string | ReadingInputs;
+  instruments: string | InstrumentSnapshot[];
+  materialMismatch: number | boolean;
+  verdict: Verdict;
+  result: string | Record<string, unknown>;
+}
+/** What a void reads beyond the computation: the state and who took the reading. */
+const VOID_FACTS = `, voided, void_reason as "voidReason", voided_at as "voidedAt",
+       taken_at as "takenAt", taken_by_id as "takenById",
+       (select u.name from users u where u.id = taken_by_id) as "takenByName"
+  from readings`;
+interface VoidFacts {
+  voided: number | boolean;
+  voidReason: string | null;
+  voidedAt: unknown;
+  takenAt: unknown;
+  takenById: number;
+  takenByName: string;
+}
+
+function liveOf(row: LiveRow): LiveReading {
+  return {
+    id: row.id,
+    sampleId: row.sampleId,
+    method: row.method,
+    inputs: jsonOf<ReadingInputs>(row.inputs),
+    instruments: jsonOf<InstrumentSnapshot[]>(row.instruments),
+    ...computedOf({
+      ...row,
+      materialMismatch: Boolean(row.materialMismatch),
+      result: jsonOf<Record<string, unknown>>(row.result),
+    }),
+  };
+}
+
+const context = (s: SampleRow) => ({
+  gaugeLabel: s.gaugeLabel,
+  claimedMaterial: s.claimedMaterial as MaterialId,
+  minAreaRatio: s.minAreaRatio,
+});
+
+/** `r` computed again with the sample's other live readings (`all`, newest first). */
+function recomputed(sample: SampleRow, r: LiveReading, all: readonly LiveReading[]) {
+  return computeReading({
+    ...context(sample),
+    method: r.method,
+    inputs: r.inputs,
+    resolutions: resolutionsFor(r.method, r.instruments.map(asInstrument)),
+    siblings: all.filter((o) => o !== r),
+  });
+}
+
+function chunks<T>(values: readonly T[]): T[][] {
+  const out: T[][] = [];
+  for (let i = 0; i < values.length; i += CHUNK) out.push(values.slice(i, i + CHUNK));
+  return out;
+}
+const marks = (values: readonly unknown[]) => values.map(() => '?').join(', ');
 
 /** A reading's instrument snapshot, as the resolution rules read it. */
 export function asInstrument(s: InstrumentSnapshot) {

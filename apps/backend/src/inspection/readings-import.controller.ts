@@ -1,9 +1,18 @@
-import { Controller, Param, Post, UploadedFile, UseInterceptors } from '@nestjs/common';
-import { ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
+import {
+  Controller,
+  Headers,
+  Param,
+  Post,
+  Res,
+  UploadedFile,
+  UseInterceptors,
+} from '@nestjs/common';
+import { ApiBody, ApiConsumes, ApiHeader, ApiTags } from '@nestjs/swagger';
+import type { Response } from 'express';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
 import { singleFileInterceptor } from '../storage/single-file.interceptor';
-import { ReadingsImportService } from './readings-import.service';
+import { MAX_IMPORT_ROWS, ReadingsImportService } from './readings-import.service';
 import { IdPipe } from '../common/id.pipe';
 
 /** 2 MB holds tens of thousands of bench-logger rows (issue 4; no source). */
@@ -21,6 +30,12 @@ export class ReadingsImportController {
   @Roles('clerk', 'qa_lead', 'admin')
   @UseInterceptors(CsvUpload)
   @ApiConsumes('multipart/form-data')
+  @ApiHeader({
+    name: 'Idempotency-Key',
+    required: false,
+    description:
+      "A key of the client's choosing (1 to 200 visible characters). A retry with the same key and file is answered with the first import's answer (header Idempotent-Replayed: true) and records nothing; without a key the file's SHA-256 serves as one.",
+  })
   @ApiBody({
     schema: {
       type: 'object',
@@ -29,17 +44,20 @@ export class ReadingsImportController {
         file: {
           type: 'string',
           format: 'binary',
-          description:
-            'CSV with a header row: unit, conductor, method, massG, lengthMm, count, strandDiameterMm, resistanceOhm, temperatureC, diameterMm, strandingIncrement, instruments (serials separated by ;), unitRef',
+          description: `CSV with a header row: unit, conductor, method, massG, lengthMm, count, strandDiameterMm, resistanceOhm, temperatureC, diameterMm, strandingIncrement, instruments (serials separated by ;), unitRef. At most ${MAX_IMPORT_ROWS} reading rows.`,
         },
       },
     },
   })
-  import(
+  async import(
     @Param('id', IdPipe) lotId: number,
     @UploadedFile() file: Express.Multer.File | undefined,
     @CurrentUser() actor: RequestUser,
+    @Headers('idempotency-key') key: string | undefined,
+    @Res({ passthrough: true }) res: Response,
   ) {
-    return this.imports.import(lotId, file, actor);
+    const { replayed, ...answer } = await this.imports.import(lotId, file, actor, key);
+    if (replayed) res.setHeader('Idempotent-Replayed', 'true');
+    return answer;
   }
 }

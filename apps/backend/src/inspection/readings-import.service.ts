@@ -4,21 +4,25 @@ import {
   Injectable,
   UnprocessableEntityException,
 } from '@nestjs/common';
-import { EntityManager } from '@mikro-orm/core';
+import { EntityManager, UniqueConstraintViolationException } from '@mikro-orm/core';
 import { plainToInstance } from 'class-transformer';
 import { validateSync } from 'class-validator';
+import { createHash } from 'node:crypto';
 import Papa from 'papaparse';
 import type { RequestUser } from '../auth/request-user';
-import { assertUsableInstruments } from '../instruments/instruments.service';
+import { announceSqlWrite } from '../common/sql-writes';
 import { Instrument } from '../instruments/entities/instrument.entity';
 import { Lot } from '../lots/entities/lot.entity';
 import type { ConductorSpec } from '../products/entities/conductor-spec.entity';
+import { User } from '../users/entities/user.entity';
 import { CreateReadingDto, INPUT_FIELDS } from './dto/create-reading.dto';
+import { ReadingImport } from './entities/reading-import.entity';
 import { Sample } from './entities/sample.entity';
-import { assertLotOpen, LotStatusService } from './lot-status';
-import { methodInputs, ReadingsService } from './readings.service';
-import { SamplesService } from './samples.service';
-import { readingView, type ReadingView } from './views';
+import { assertLotOpen } from './lot-status';
+import { ReadingsRefused, ReadingWriter, type NewReading } from './reading-writer';
+import { methodInputs } from './readings.service';
+import { SamplesService, unitFor } from './samples.service';
+import type { ReadingView } from './views';
 
 export interface RowError {
   /** Spreadsheet row: the header is row 1, the first reading row 2. */
@@ -28,7 +32,22 @@ export interface RowError {
 }
 type Row = Record<string, string | undefined>;
 
+/**
+ * Reading rows one import takes at the most (our choice, stated in the README): a full
+ * day's bench log of a large lot. An import answers in time proportional to its rows.
+ */
+export const MAX_IMPORT_ROWS = 5000;
+
+export interface ImportAnswer {
+  imported: number;
+  readings: ReadingView[];
+}
+
 const REQUIRED = ['unit', 'conductor', 'method', 'instruments'] as const;
+/** A decimal number as a person writes it (a decimal comma allowed); not 0x10 nor 1e3. */
+const DECIMAL = /^[-+]?(\d+(\.\d*)?|\.\d+)$/;
+const KEY = /^[\x21-\x7e]{1,200}$/;
+
 const messageOf = (e: unknown): string => {
   if (e instanceof HttpException) {
     const body = e.getResponse();
@@ -39,130 +58,259 @@ const messageOf = (e: unknown): string => {
 };
 
 /**
- * Readings from a bench logger's CSV, all or nothing: every row is checked and recorded
- * inside one transaction; any problem rolls it all back and lists every error.
+ * Readings from a bench logger's CSV, all or nothing: every row is checked, then all are
+ * recorded through the one reading write path in one transaction; any problem rolls it
+ * all back and lists every error. Lookups are made once per file, never per row, so the
+ * time grows with the rows, not their square. A retry (same Idempotency-Key, or the same
+ * file) is answered with the first import's answer.
  */
 @Injectable()
 export class ReadingsImportService {
   constructor(
     private readonly em: EntityManager,
     private readonly samples: SamplesService,
-    private readonly readings: ReadingsService,
-    private readonly lotStatus: LotStatusService,
+    private readonly writer: ReadingWriter,
   ) {}
 
-  async import(lotId: number, file: Express.Multer.File | undefined, actor: RequestUser) {
+  async import(
+    lotId: number,
+    file: Express.Multer.File | undefined,
+    actor: RequestUser,
+    idempotencyKey?: string,
+  ): Promise<ImportAnswer & { replayed: boolean }> {
     if (!file) throw new BadRequestException(['file is required: attach the CSV of readings']);
-    const parsed = Papa.parse<Row>(file.buffer.toString('utf8').replace(/^\uFEFF/, ''), {
-      header: true,
-      skipEmptyLines: 'greedy',
-      transformHeader: (h) => h.trim(),
-    });
-    const errors: RowError[] = parsed.errors.map((e) => ({
-      row: (e.row ?? 0) + 2,
-      column: null,
-      message: e.message,
-    }));
-    const headers = parsed.meta.fields ?? [];
-    const missing = REQUIRED.filter((c) => !headers.includes(c));
-    for (const c of missing) errors.push({ row: 1, column: c, message: `column ${c} is missing` });
-    if (!missing.length && parsed.data.length === 0) {
-      errors.push({ row: 2, column: null, message: 'the file has no reading rows' });
+    if (idempotencyKey !== undefined && !KEY.test(idempotencyKey)) {
+      throw new BadRequestException([
+        'Idempotency-Key must be 1 to 200 visible characters (letters, digits, punctuation)',
+      ]);
+    }
+    const fileSha256 = createHash('sha256').update(file.buffer).digest('hex');
+    const key = idempotencyKey ?? `sha256:${fileSha256}`;
+    const rows = parse(file.buffer);
+    try {
+      const answer = await this.em.transactional(async (tx) => {
+        const first = await tx.findOne(ReadingImport, { lot: lotId, key });
+        if (first) return { ...replay(first, fileSha256), replayed: true };
+        const lot = await tx.findOneOrFail(
+          Lot,
+          { id: lotId },
+          { populate: ['product.conductors'] },
+        );
+        assertLotOpen(lot);
+        // Taken first: a retry sent while this import runs waits for it, then replays it.
+        const record = tx.create(ReadingImport, {
+          lot,
+          key,
+          fileSha256,
+          importedBy: tx.getReference(User, actor.id),
+        });
+        await tx.flush();
+        const answer = await this.record(tx, lot, rows, actor);
+        record.answer = answer as unknown as Record<string, unknown>;
+        await tx.flush();
+        return { ...answer, replayed: false };
+      });
+      if (!answer.replayed) announceSqlWrite(['Reading', 'Sample', 'Lot', 'AuditEvent']);
+      return answer;
+    } catch (e) {
+      if (!(e instanceof UniqueConstraintViolationException)) throw e;
+      // The same import committed first on another connection: answer with its answer.
+      const first = await this.em.fork().findOne(ReadingImport, { lot: lotId, key });
+      if (!first) throw e;
+      return { ...replay(first, fileSha256), replayed: true };
+    }
+  }
+
+  /** Checks every row, creates the samples they need and records their readings. */
+  private async record(
+    em: EntityManager,
+    lot: Lot,
+    rows: Row[],
+    actor: RequestUser,
+  ): Promise<ImportAnswer> {
+    const errors: RowError[] = [];
+    const checked = rows.map((row, i) => checkRow(lot, row, i + 2, errors));
+    const serials = [...new Set(checked.flatMap((c) => c.serials))];
+    const register = serials.length
+      ? await em.find(Instrument, { serial: { $in: serials } }, { fields: ['id', 'serial'] })
+      : [];
+    const idOf = new Map(register.map((i) => [i.serial, i.id]));
+    for (const c of checked) {
+      for (const s of c.serials.filter((s) => !idOf.has(s))) {
+        errors.push({
+          row: c.rowNo,
+          column: 'instruments',
+          message: `no instrument with serial ${s} in the register`,
+        });
+      }
+    }
+    const valid = checked.filter(
+      (c): c is CheckedRow => c.ok && c.serials.every((s) => idOf.has(s)),
+    );
+    const sampleIds = await this.samplesFor(em, lot, valid, errors, actor);
+    const entries: { rowNo: number; entry: NewReading }[] = [];
+    for (const c of valid) {
+      const sampleId = sampleIds.get(c);
+      if (sampleId === undefined) continue;
+      entries.push({
+        rowNo: c.rowNo,
+        entry: {
+          sampleId,
+          method: c.method,
+          inputs: c.inputs,
+          instrumentIds: c.serials.map((s) => idOf.get(s) as number),
+        },
+      });
+    }
+    let readings: ReadingView[] = [];
+    try {
+      readings = await this.writer.write(
+        entries.map((e) => e.entry),
+        actor,
+        { em },
+      );
+    } catch (e) {
+      if (!(e instanceof ReadingsRefused)) throw e;
+      for (const { index, error } of e.refusals) {
+        errors.push({
+          row: entries[index].rowNo,
+          column: columnOf(error),
+          message: messageOf(error),
+        });
+      }
     }
     if (errors.length) throw refusal(errors);
-
-    return this.em.transactional(async (tx) => {
-      const lot = await tx.findOneOrFail(Lot, { id: lotId }, { populate: ['product.conductors'] });
-      assertLotOpen(lot);
-      const saved: ReadingView[] = [];
-      for (const [i, row] of parsed.data.entries()) {
-        const reading = await this.row(tx, lot, row, i + 2, errors, actor);
-        if (reading) saved.push(reading);
-      }
-      if (errors.length) throw refusal(errors);
-      await this.lotStatus.refresh(tx, lot, actor);
-      return { imported: saved.length, readings: saved };
-    });
+    return { imported: readings.length, readings };
   }
 
-  /** Checks and records one row; pushes its problems to `errors` and returns null if any. */
-  private async row(
+  /** The sample of each row: the lot's existing one of that conductor and unit, or a new one. */
+  private async samplesFor(
     em: EntityManager,
     lot: Lot,
-    row: Row,
-    rowNo: number,
+    rows: readonly CheckedRow[],
     errors: RowError[],
     actor: RequestUser,
-  ): Promise<ReadingView | null> {
-    const before = errors.length;
-    const fail = (column: string | null, message: string) =>
-      errors.push({ row: rowNo, column, message });
-    const cell = (c: string) => row[c]?.trim() ?? '';
-
-    const unit = Number(cell('unit'));
-    if (!Number.isInteger(unit) || unit < 1)
-      fail('unit', `unit must be a whole unit number of at least 1 (got "${cell('unit')}")`);
-    const conductor = conductorFor(lot, cell('conductor'));
-    if (typeof conductor === 'string') fail('conductor', conductor);
-
-    const body: Record<string, unknown> = { method: cell('method'), instrumentIds: [0] };
-    for (const f of INPUT_FIELDS) {
-      if (cell(f) === '') continue;
-      const n = Number(cell(f).replace(',', '.'));
-      if (Number.isFinite(n)) body[f] = n;
-      else fail(f, `${f} must be a number (got "${cell(f)}")`);
+  ): Promise<Map<CheckedRow, number>> {
+    const keyOf = (conductorId: number, seq: number) => `${conductorId}:${seq}`;
+    const existing = await em.find(Sample, { lot }, { fields: ['id', 'seq', 'conductor'] });
+    const ids = new Map(existing.map((s) => [keyOf(s.conductor.id, s.seq), s.id]));
+    const wanted = new Map<
+      string,
+      { conductor: ConductorSpec; seq: number; unitRef: string | null }
+    >();
+    const refused = new Map<string, string>();
+    for (const c of rows) {
+      const key = keyOf(c.conductor.id, c.unit);
+      if (ids.has(key) || wanted.has(key) || refused.has(key)) continue;
+      try {
+        unitFor(lot, c.conductor, c.unit, new Set());
+        wanted.set(key, { conductor: c.conductor, seq: c.unit, unitRef: c.unitRef || null });
+      } catch (e) {
+        refused.set(key, messageOf(e));
+      }
     }
-    const dto = plainToInstance(CreateReadingDto, body);
-    for (const v of validateSync(dto)) {
-      for (const m of Object.values(v.constraints ?? {})) fail(v.property, m);
+    const created = await this.samples.add(em, lot, [...wanted.values()], actor);
+    for (const s of created) ids.set(keyOf(s.conductor.id, s.seq), s.id);
+    const out = new Map<CheckedRow, number>();
+    for (const c of rows) {
+      const key = keyOf(c.conductor.id, c.unit);
+      const id = ids.get(key);
+      if (id !== undefined) out.set(c, id);
+      else errors.push({ row: c.rowNo, column: 'unit', message: refused.get(key) as string });
     }
-    const serials = cell('instruments')
-      .split(';')
-      .map((s) => s.trim())
-      .filter(Boolean);
-    const found = serials.length ? await em.find(Instrument, { serial: { $in: serials } }) : [];
-    for (const s of serials.filter((s) => !found.some((i) => i.serial === s))) {
-      fail('instruments', `no instrument with serial ${s} in the register`);
-    }
-    if (serials.length === 0)
-      fail('instruments', 'instruments must list the serials used, separated by ;');
-    if (errors.length > before || typeof conductor === 'string') return null;
-
-    try {
-      const inputs = methodInputs(dto);
-      const ids = serials.map((s) => (found.find((i) => i.serial === s) as Instrument).id);
-      const instruments = await assertUsableInstruments(em, ids, new Date());
-      const sample = await this.sampleFor(em, lot, conductor, unit, cell('unitRef'), actor);
-      const reading = await this.readings.record(
-        em,
-        sample,
-        dto.method,
-        inputs,
-        instruments,
-        actor,
-      );
-      return readingView(reading);
-    } catch (e) {
-      fail(columnOf(e), messageOf(e));
-      return null;
-    }
+    return out;
   }
+}
 
-  private async sampleFor(
-    em: EntityManager,
-    lot: Lot,
-    conductor: ConductorSpec,
-    unit: number,
-    unitRef: string,
-    actor: RequestUser,
-  ): Promise<Sample> {
-    const existing = await em.findOne(Sample, { lot, conductor, seq: unit });
-    if (existing) return existing;
-    try {
-      return await this.samples.createIn(em, lot, conductor, unit, unitRef || null, actor);
-    } catch (e) {
-      throw Object.assign(e as object, { column: 'unit' });
-    }
+/** A row checked on its own: its serials, and when `ok` what its reading is. */
+type RowCheck = CheckedRow | { ok: false; rowNo: number; serials: string[] };
+interface CheckedRow {
+  ok: true;
+  rowNo: number;
+  unit: number;
+  conductor: ConductorSpec;
+  method: NewReading['method'];
+  inputs: NewReading['inputs'];
+  serials: string[];
+  unitRef: string;
+}
+
+/** Parses the file; 422 listing the problems of its form (columns, no rows, too many rows). */
+function parse(buffer: Buffer): Row[] {
+  const parsed = Papa.parse<Row>(buffer.toString('utf8').replace(/^\uFEFF/, ''), {
+    header: true,
+    skipEmptyLines: 'greedy',
+    transformHeader: (h) => h.trim(),
+  });
+  const errors: RowError[] = parsed.errors.map((e) => ({
+    row: (e.row ?? 0) + 2,
+    column: null,
+    message: e.message,
+  }));
+  const headers = parsed.meta.fields ?? [];
+  const missing = REQUIRED.filter((c) => !headers.includes(c));
+  for (const c of missing) errors.push({ row: 1, column: c, message: `column ${c} is missing` });
+  if (!missing.length && parsed.data.length === 0) {
+    errors.push({ row: 2, column: null, message: 'the file has no reading rows' });
+  }
+  if (parsed.data.length > MAX_IMPORT_ROWS) {
+    errors.push({
+      row: MAX_IMPORT_ROWS + 2,
+      column: null,
+      message: `the file has ${parsed.data.length} reading rows; one import takes at most ${MAX_IMPORT_ROWS}: split it into several files`,
+    });
+  }
+  if (errors.length) throw refusal(errors);
+  return parsed.data;
+}
+
+/** Checks one row on its own (no database); pushes its problems to `errors`. */
+function checkRow(lot: Lot, row: Row, rowNo: number, errors: RowError[]): RowCheck {
+  const before = errors.length;
+  const fail = (column: string | null, message: string) =>
+    errors.push({ row: rowNo, column, message });
+  const cell = (c: string) => row[c]?.trim() ?? '';
+
+  const unit = Number(cell('unit'));
+  if (!/^\d+$/.test(cell('unit')) || !Number.isInteger(unit) || unit < 1)
+    fail('unit', `unit must be a whole unit number of at least 1 (got "${cell('unit')}")`);
+  const conductor = conductorFor(lot, cell('conductor'));
+  if (typeof conductor === 'string') fail('conductor', conductor);
+
+  const body: Record<string, unknown> = { method: cell('method'), instrumentIds: [0] };
+  for (const f of INPUT_FIELDS) {
+    if (cell(f) === '') continue;
+    const text = cell(f).replace(',', '.');
+    if (DECIMAL.test(text)) body[f] = Number(text);
+    else fail(f, `${f} must be a number (got "${cell(f)}")`);
+  }
+  const dto = plainToInstance(CreateReadingDto, body);
+  for (const v of validateSync(dto)) {
+    for (const m of Object.values(v.constraints ?? {})) fail(v.property, m);
+  }
+  const serials = cell('instruments')
+    .split(';')
+    .map((s) => s.trim())
+    .filter(Boolean);
+  if (serials.length === 0)
+    fail('instruments', 'instruments must list the serials used, separated by ;');
+  const refused = { ok: false as const, rowNo, serials };
+  if (errors.length > before || typeof conductor === 'string') return refused;
+  try {
+    const inputs = methodInputs(dto);
+    return {
+      ok: true,
+      rowNo,
+      unit,
+      conductor,
+      method: dto.method,
+      inputs,
+      serials,
+      unitRef: cell('unitRef'),
+    };
+  } catch (e) {
+    fail(null, messageOf(e));
+    return refused;
   }
 }
 
@@ -183,9 +331,17 @@ function conductorFor(lot: Lot, text: string): ConductorSpec | string {
 }
 
 function columnOf(e: unknown): string | null {
-  const c = (e as { column?: unknown }).column;
-  if (typeof c === 'string') return c;
   return e instanceof UnprocessableEntityException ? 'instruments' : null;
+}
+
+/** The first import's answer to a retry; 422 when the key came with another file. */
+function replay(first: ReadingImport, fileSha256: string): ImportAnswer {
+  if (first.fileSha256 !== fileSha256 || !first.answer) {
+    throw new UnprocessableEntityException(
+      `This Idempotency-Key was already used on ${first.importedAt.toISOString().slice(0, 10)} for another file on this lot: send a new key with a new file.`,
+    );
+  }
+  return first.answer as unknown as ImportAnswer;
 }
 
 function refusal(errors: RowError[]) {

@@ -52,7 +52,7 @@ export class SamplesService {
 
   /**
    * Creates the sample of unit `seq` (the next free unit when omitted) for a conductor,
-   * within the plan, audited; the caller flushes. Used by the route and the CSV import.
+   * within the plan, audited; the caller flushes.
    */
   async createIn(
     em: EntityManager,
@@ -62,43 +62,77 @@ export class SamplesService {
     unitRef: string | null,
     actor: RequestUser,
   ): Promise<Sample> {
-    const planned = lot.samplingPlan.sampleSize;
     const taken = new Set(
       (await em.find(Sample, { lot, conductor }, { fields: ['seq'] })).map((s) => s.seq),
     );
-    let unit = seq;
-    if (unit === undefined) {
-      unit = Array.from({ length: planned }, (_, i) => i + 1).find((n) => !taken.has(n));
-      if (unit === undefined) {
-        throw new UnprocessableEntityException(
-          `All planned units already have a ${conductor.purpose} sample: ${planText(lot)}.`,
-        );
-      }
-    } else if (unit > planned) {
-      throw new UnprocessableEntityException(
-        `Unit ${unit} is beyond the plan: ${planText(lot)}, numbered 1 to ${planned}.`,
-      );
-    } else if (taken.has(unit)) {
-      throw new ConflictException(
-        `Unit ${unit} already has a ${conductor.purpose} sample in this lot; add readings to it instead.`,
-      );
-    }
-    const sample = em.create(Sample, {
-      lot,
-      conductor,
-      seq: unit,
-      unitRef: unitRef?.trim() || null,
-      createdBy: await em.findOneOrFail(User, { id: actor.id }),
-    });
-    em.persist(sample);
-    await em.flush();
-    this.audit.record(em, actor, {
-      action: 'sample.create',
-      entityType: 'sample',
-      entityId: sample.id,
-      lotId: lot.id,
-      after: { seq: sample.seq, conductorId: conductor.id, unitRef: sample.unitRef },
-    });
+    const unit = unitFor(lot, conductor, seq, taken);
+    const [sample] = await this.add(em, lot, [{ conductor, seq: unit, unitRef }], actor);
     return sample;
   }
+
+  /**
+   * New samples of the lot, with one flush, each audited; the caller flushes again. Their
+   * units must have passed `unitFor`. Used by `createIn` and the CSV import.
+   */
+  async add(
+    em: EntityManager,
+    lot: Lot,
+    wanted: readonly { conductor: ConductorSpec; seq: number; unitRef: string | null }[],
+    actor: RequestUser,
+  ): Promise<Sample[]> {
+    const createdBy = await em.findOneOrFail(User, { id: actor.id });
+    const samples = wanted.map((w) =>
+      em.create(Sample, {
+        lot,
+        conductor: w.conductor,
+        seq: w.seq,
+        unitRef: w.unitRef?.trim() || null,
+        createdBy,
+      }),
+    );
+    await em.flush();
+    for (const sample of samples) {
+      this.audit.record(em, actor, {
+        action: 'sample.create',
+        entityType: 'sample',
+        entityId: sample.id,
+        lotId: lot.id,
+        after: { seq: sample.seq, conductorId: sample.conductor.id, unitRef: sample.unitRef },
+      });
+    }
+    return samples;
+  }
+}
+
+/**
+ * The unit a new sample of `conductor` takes: `seq`, or the next free planned unit when
+ * omitted; 422 beyond the plan or with every unit taken, 409 when `seq` is taken.
+ */
+export function unitFor(
+  lot: Lot,
+  conductor: ConductorSpec,
+  seq: number | undefined,
+  taken: ReadonlySet<number>,
+): number {
+  const planned = lot.samplingPlan.sampleSize;
+  if (seq === undefined) {
+    const unit = Array.from({ length: planned }, (_, i) => i + 1).find((n) => !taken.has(n));
+    if (unit === undefined) {
+      throw new UnprocessableEntityException(
+        `All planned units already have a ${conductor.purpose} sample: ${planText(lot)}.`,
+      );
+    }
+    return unit;
+  }
+  if (seq > planned) {
+    throw new UnprocessableEntityException(
+      `Unit ${seq} is beyond the plan: ${planText(lot)}, numbered 1 to ${planned}.`,
+    );
+  }
+  if (taken.has(seq)) {
+    throw new ConflictException(
+      `Unit ${seq} already has a ${conductor.purpose} sample in this lot; add readings to it instead.`,
+    );
+  }
+  return seq;
 }

@@ -4,11 +4,13 @@ import { Migration20261202001640 } from './postgresql/Migration20261202001640';
 import { Migration20261202004244 } from './postgresql/Migration20261202004244';
 import { Migration20261203101920 } from './postgresql/Migration20261203101920';
 import { Migration20261203105417 } from './postgresql/Migration20261203105417';
+import { Migration20261203113010 } from './postgresql/Migration20261203113010';
 import { Migration20261201224334 } from './sqlite/Migration20261201224334';
 import { Migration20261202001630 } from './sqlite/Migration20261202001630';
 import { Migration20261202004800 } from './sqlite/Migration20261202004800';
 import { Migration20261203101930 } from './sqlite/Migration20261203101930';
 import { Migration20261203105427 } from './sqlite/Migration20261203105427';
+import { Migration20261203113000 } from './sqlite/Migration20261203113000';
 
 /**
  * Migrations per driver, in order, each driver in its own folder; listed in code so the
@@ -21,6 +23,7 @@ export const SQLITE_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261202004800', class: Migration20261202004800 },
   { name: 'Migration20261203101930', class: Migration20261203101930 },
   { name: 'Migration20261203105427', class: Migration20261203105427 },
+  { name: 'Migration20261203113000', class: Migration20261203113000 },
 ];
 
 export const POSTGRES_MIGRATIONS: MigrationObject[] = [
@@ -29,4 +32,5 @@ export const POSTGRES_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261202004244', class: Migration20261202004244 },
   { name: 'Migration20261203101920', class: Migration20261203101920 },
   { name: 'Migration20261203105417', class: Migration20261203105417 },
+  { name: 'Migration20261203113010', class: Migration20261203113010 },
 ];

@@ -5,9 +5,7 @@ import type { RequestUser } from '../auth/request-user';
 import { DecisionsService } from '../decisions/decisions.service';
 import { InspectionStreams } from '../decisions/inspection-streams';
 import { LotEvaluationService } from '../inspection/lot-evaluation';
-import { LotStatusService } from '../inspection/lot-status';
 import { ReadingWriter } from '../inspection/reading-writer';
-import { ReadingsService } from '../inspection/readings.service';
 import { SamplesService } from '../inspection/samples.service';
 import { LotsService } from '../lots/lots.service';
 import { PhotosService } from '../photos/photos.service';
@@ -58,8 +56,7 @@ export interface ScenarioContext {
   audit: AuditService;
   lots: LotsService;
   samples: SamplesService;
-  readings: ReadingsService;
-  lotStatus: LotStatusService;
+  writer: ReadingWriter;
   evaluations: LotEvaluationService;
   decisions: DecisionsService;
   photos: PhotosService;
@@ -78,7 +75,6 @@ export async function scenarioContext(
 ): Promise<ScenarioContext> {
   const clock = new SeedClock(now);
   const audit = new ClockedAudit(clock);
-  const lotStatus = new LotStatusService(audit);
   const evaluations = new LotEvaluationService(em);
   const users = {} as Record<DemoRole, RequestUser>;
   for (const role of ['clerk', 'qa', 'buyer', 'admin'] as const) {
@@ -95,13 +91,7 @@ export async function scenarioContext(
     audit,
     lots: new LotsService(em, audit),
     samples: new SamplesService(em, audit),
-    readings: new ReadingsService(
-      em,
-      audit,
-      lotStatus,
-      new ReadingWriter(new GroupCommit(em), audit),
-    ),
-    lotStatus,
+    writer: new ReadingWriter(new GroupCommit(em), audit),
     evaluations,
     decisions: new DecisionsService(em, audit, evaluations, new InspectionStreams(audit)),
     photos: new PhotosService(em, audit, storage),

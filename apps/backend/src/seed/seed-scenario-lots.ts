@@ -64,8 +64,11 @@ export async function runLot(
     },
     ctx.users.clerk,
   );
-  const lot = await ctx.em.findOneOrFail(Lot, created.id, { populate: ['product.conductors'] });
-  await inspect(ctx, bench, lot, story);
+  const load = () => ctx.em.findOneOrFail(Lot, created.id, { populate: ['product.conductors'] });
+  await inspect(ctx, bench, await load(), story);
+  // The reading writer wrote readings, lot status and version with SQL: read them afresh.
+  ctx.em.clear();
+  const lot = await load();
   if (story.photo) {
     const first = await ctx.em.findOne(Sample, { lot, seq: 1 }, { orderBy: { id: 'asc' } });
     await photograph(ctx, lot, first, story.photo);

@@ -1,0 +1,35 @@
+import { Entity, ManyToOne, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
+import { Lot } from '../../lots/entities/lot.entity';
+import { User } from '../../users/entities/user.entity';
+
+/**
+ * A readings CSV import that was recorded, kept so that a retry of it (the same
+ * `Idempotency-Key`, or the same file when the client sent no key) is answered with this
+ * answer instead of recording the readings twice. Stored in the import's own transaction.
+ */
+@Entity({ tableName: 'reading_imports' })
+@Unique({ properties: ['lot', 'key'] })
+export class ReadingImport {
+  @PrimaryKey({ type: 'integer' })
+  id!: number;
+
+  @ManyToOne(() => Lot)
+  lot!: Lot;
+
+  /** The client's Idempotency-Key, or `sha256:` and the file's hash. */
+  @Property({ type: 'string', length: 200 })
+  key!: string;
+
+  @Property({ type: 'string', length: 64 })
+  fileSha256!: string;
+
+  @ManyToOne(() => User)
+  importedBy!: User;
+
+  @Property({ type: 'Date' })
+  importedAt: Opt<Date> = new Date();
+
+  /** The answer the import gave (null only inside its own transaction). */
+  @Property({ type: 'json', nullable: true })
+  answer: Opt<Record<string, unknown>> | null = null;
+}
