@@ -9,6 +9,7 @@ import { Logger } from 'nestjs-pino';
 import { AppModule } from './app.module';
 import { AllExceptionsFilter } from './common/all-exceptions.filter';
 import { BodyDepthPipe } from './common/body-depth.pipe';
+import { BootQuietLogger } from './common/boot-quiet.logger';
 import type { AppConfig } from './config/env';
 import { StorageService } from './storage/storage.service';
 
@@ -23,7 +24,7 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
     // JSON bodies are parsed by JsonBodyMiddleware (AppModule), so their errors reach our filter.
     bodyParser: false,
   });
-  app.useLogger(app.get(Logger));
+  app.useLogger(new BootQuietLogger(app.get(Logger)));
   app.set('trust proxy', 'loopback');
   app.use(
     helmet({

@@ -1,10 +1,13 @@
 import { randomBytes } from 'node:crypto';
 import { chmodSync, existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { isIP } from 'node:net';
 import { dirname, join, resolve } from 'node:path';
 
 /** Everything the server reads from its environment, checked once at start-up. */
 export interface AppConfig {
   port: number;
+  /** Address the server listens on: 127.0.0.1 (this machine only) unless HOST says otherwise. */
+  host: string;
   dbPath: string;
   /** postgresql://… when set; the SQLite file is used otherwise. */
   dbUrl: string | null;
@@ -75,6 +78,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   if (!Number.isInteger(port) || port < 1 || port > 65535) {
     problems.push(`PORT must be a whole number from 1 to 65535 (got "${env.PORT}")`);
   }
+  const host = env.HOST?.trim() || '127.0.0.1';
+  if (isIP(host) === 0 && !/^[a-zA-Z0-9]([a-zA-Z0-9.-]{0,251}[a-zA-Z0-9])?$/.test(host)) {
+    problems.push(
+      `HOST must be an IP address or a host name, e.g. 0.0.0.0 for every network (got "${env.HOST}")`,
+    );
+  }
   const dbPath = fromRepo(env.DB_PATH || 'data/gaugeproof.sqlite');
   const dbUrl = env.DB_URL?.trim() || null;
   if (dbUrl && !/^postgres(ql)?:\/\//.test(dbUrl)) {
@@ -139,6 +148,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const publicUrl = (env.PUBLIC_URL || `http://localhost:${port}`).replace(/\/$/, '');
   return {
     port,
+    host,
     dbPath,
     dbUrl,
     uploadDir,

@@ -18,3 +18,16 @@ export async function seedUsers(em: EntityManager): Promise<User[]> {
   await em.persist(users).flush();
   return users;
 }
+
+/** The demo accounts this database holds and can sign in with (for the start banner). */
+export async function demoAccountsPresent(
+  em: EntityManager,
+): Promise<{ email: string; role: Role }[]> {
+  const found = await em.find(
+    User,
+    { email: { $in: DEMO_USERS.map((u) => u.email) }, active: true },
+    { fields: ['email', 'role'] },
+  );
+  const present = new Set(found.map((u) => u.email));
+  return DEMO_USERS.filter((u) => present.has(u.email)).map(({ email, role }) => ({ email, role }));
+}
