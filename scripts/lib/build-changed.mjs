@@ -138,8 +138,11 @@ export async function buildChanged(
         }
         // The tools may leave their output's time alone when they judge it current; the
         // marker must not be older than the inputs just built (nor than a clock-skewed one).
+        // (A time read back from the disk can lie a fraction of a millisecond above the
+        // whole millisecond it was set to: round up and add one.)
         const stamp = new Date(
-          Math.max(Date.now(), ...part.inputs.map((i) => newestInput(join(root, i)))),
+          Math.ceil(Math.max(Date.now(), ...part.inputs.map((i) => newestInput(join(root, i))))) +
+            1,
         );
         utimesSync(join(root, part.marker), stamp, stamp);
         rebuilt.add(part.name);
