@@ -2,6 +2,7 @@
 // until the Lot page shows its readings in headless Chromium.
 import { mkdtemp, rm } from 'node:fs/promises';
 import { readFileSync } from 'node:fs';
+import { createServer } from 'node:http';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
@@ -71,12 +72,25 @@ async function launch() {
   };
 }
 
+/** A server of one blank page, for the browser's own cost of opening a page. */
+async function blankServer() {
+  const server = createServer((req, res) => {
+    res.writeHead(200, { 'content-type': 'text/html; charset=utf-8' });
+    res.end('<!doctype html><html><head><title>blank</title></head><body></body></html>');
+  });
+  await new Promise((resolve) => server.listen(0, '127.0.0.1', resolve));
+  return { url: `http://127.0.0.1:${server.address().port}/`, close: () => server.close() };
+}
+
 /**
  * Signs in through the form once, then loads /lots/:id `loads` times in a new tab each
- * and times from navigation start until a row of a Readings table is visible.
+ * and times from navigation start until a row of a Readings table is visible; then, in
+ * the same browser, the time until a blank page has loaded (`blank`), so the Lot page can
+ * be read as a multiple of what the browser costs on this machine at this moment.
  */
 export async function lotPageReady(base, lotId, email, password, loads) {
   const browser = await launch();
+  const blank = await blankServer();
   try {
     const page = await browser.context.newPage();
     await page.goto(`${base}/sign-in`);
@@ -86,6 +100,7 @@ export async function lotPageReady(base, lotId, email, password, loads) {
     await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'), { timeout: 30_000 });
     await page.close();
     const times = [];
+    const blanks = [];
     for (let i = 0; i < loads; i++) {
       const tab = await browser.context.newPage();
       const t0 = performance.now();
@@ -98,9 +113,15 @@ export async function lotPageReady(base, lotId, email, password, loads) {
         .waitFor({ state: 'visible', timeout: 30_000 });
       times.push(performance.now() - t0);
       await tab.close();
+      const other = await browser.context.newPage();
+      const b0 = performance.now();
+      await other.goto(blank.url, { waitUntil: 'load' });
+      blanks.push(performance.now() - b0);
+      await other.close();
     }
-    return times;
+    return { times, blanks };
   } finally {
+    blank.close();
     await browser.close();
   }
 }

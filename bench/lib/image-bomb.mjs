@@ -38,6 +38,11 @@ function rgbaPng(w, h, interlaced, raw) {
   ]);
 }
 
+/** The bomb itself: a 1 × 1 interlaced PNG whose data inflates to `inflateMb` MiB. */
+export function bombPng(inflateMb) {
+  return rgbaPng(1, 1, true, Buffer.alloc(inflateMb * 1024 * 1024));
+}
+
 async function measure(checkImage, file) {
   let peak = process.memoryUsage.rss();
   const base = peak;
@@ -62,7 +67,7 @@ async function measure(checkImage, file) {
 
 export async function imageBombFigures({ inflateMb = 1024 } = {}) {
   const { checkImage } = require(join(ROOT, 'apps/backend/dist/photos/image-check.js'));
-  const bomb = rgbaPng(1, 1, true, Buffer.alloc(inflateMb * 1024 * 1024));
+  const bomb = bombPng(inflateMb);
   const rowBytes = 1 + 4000 * 4;
   const raw = Buffer.alloc(rowBytes * 3000, 0x40);
   for (let y = 0; y < 3000; y++) raw[y * rowBytes] = 0; // filter type None on every row

@@ -19,15 +19,7 @@ export function median(values) {
  * request) and returns requests per second over 2xx answers, latency percentiles in ms and
  * the count of answers that were not 2xx (a broken path: the caller treats them as failure).
  */
-export async function load({
-  url,
-  connections,
-  seconds,
-  method = 'GET',
-  headers,
-  body,
-  nextRequest,
-}) {
+export function load({ url, connections, seconds, method = 'GET', headers, body, nextRequest }) {
   const latencies = [];
   const statuses = new Map();
   let firstError = null;
@@ -47,20 +39,31 @@ export async function load({
     if (statusCode >= 200 && statusCode < 300) latencies.push(responseTime);
   });
   instance.on('reqError', (e) => (firstError ??= e));
-  const result = await instance;
-  latencies.sort((a, b) => a - b);
-  const ok = latencies.length;
-  const refused = [...statuses].filter(([s]) => s < 200 || s >= 300).reduce((n, [, c]) => n + c, 0);
-  return {
-    rps: ok / (result.duration || seconds),
-    p50: percentile(latencies, 50),
-    p95: percentile(latencies, 95),
-    p99: percentile(latencies, 99),
-    ok,
-    // Answers other than 2xx, or none at all: a broken path, the caller gives up on it.
-    failed: refused + (ok === 0 ? 1 : 0),
-    timeouts: result.timeouts,
-    statuses: Object.fromEntries(statuses),
-    firstError,
-  };
+  const started = performance.now();
+  const finished = summarise();
+  // `stop()` ends the load early (a phase that lasts as long as something else does).
+  finished.stop = () => instance.stop();
+  return finished;
+
+  async function summarise() {
+    const result = await instance;
+    const elapsed = (performance.now() - started) / 1000;
+    latencies.sort((a, b) => a - b);
+    const ok = latencies.length;
+    const refused = [...statuses]
+      .filter(([s]) => s < 200 || s >= 300)
+      .reduce((n, [, c]) => n + c, 0);
+    return {
+      rps: ok / (Math.min(elapsed, result.duration || seconds) || seconds),
+      p50: percentile(latencies, 50),
+      p95: percentile(latencies, 95),
+      p99: percentile(latencies, 99),
+      ok,
+      // Answers other than 2xx, or none at all: a broken path, the caller gives up on it.
+      failed: refused + (ok === 0 ? 1 : 0),
+      timeouts: result.timeouts,
+      statuses: Object.fromEntries(statuses),
+      firstError,
+    };
+  }
 }

@@ -2,6 +2,7 @@
 // /api/health polled meanwhile to show the import does not hold the server.
 import Database from 'better-sqlite3';
 import { MATERIALS } from '@gaugeproof/standards';
+import { percentile } from './load.mjs';
 
 /** Rows of the timed file: the example, 34 minutes before the one write path. */
 export const IMPORT_ROWS = 2000;
@@ -74,6 +75,10 @@ export async function importPhase({ base, token, dbPath }) {
     ms,
     rows: IMPORT_ROWS,
     healthMaxMs: Math.max(...healthMs),
+    healthP95Ms: percentile(
+      [...healthMs].sort((a, b) => a - b),
+      95,
+    ),
     healthCalls: healthMs.length,
   };
 }

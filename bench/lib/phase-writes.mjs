@@ -3,7 +3,9 @@
 import Database from 'better-sqlite3';
 import { MATERIALS } from '@gaugeproof/standards';
 import { load } from './load.mjs';
-import { peakRssMb } from './server.mjs';
+import { startRaw } from './phase-reads.mjs';
+import { rawExports } from './raw-exports.mjs';
+import { freePort, peakRssMb } from './server.mjs';
 
 /** Open lots (with their conductors and samples) and a usable balance and rule. */
 function openLots(dbPath, limit) {
@@ -55,39 +57,80 @@ async function prepareSamples(base, token, dbPath) {
   return { samples, instruments };
 }
 
-/** Mass readings posted round-robin over the prepared samples under load. */
-export async function readingsPhase({ base, token, dbPath, seconds, connections }) {
-  const { samples, instruments } = await prepareSamples(base, token, dbPath);
-  let i = 0;
+/** One mass reading's body: 1000 mm of the sample's nominal area of copper, a little scatter. */
+function readingBody(s, i, instruments) {
   const density = MATERIALS.copper.densityGPerCm3 / 1000;
-  const nextRequest = () => {
-    const s = samples[i++ % samples.length];
-    // 1000 mm of the nominal area of copper, ASTM B496's 2 % lay increment, a little scatter.
-    const massG =
-      Math.round(s.areaMm2 * density * 1000 * 1.02 * (0.99 + (i % 7) / 200) * 100) / 100;
-    return {
-      method: 'POST',
-      path: `/api/samples/${s.id}/readings`,
-      body: JSON.stringify({
-        method: 'mass',
-        massG,
-        lengthMm: 1000,
-        strandingIncrement: 0.02,
-        instrumentIds: instruments,
-      }),
+  // ASTM B496's 2 % lay increment.
+  const massG = Math.round(s.areaMm2 * density * 1000 * 1.02 * (0.99 + (i % 7) / 200) * 100) / 100;
+  return JSON.stringify({
+    method: 'mass',
+    massG,
+    lengthMm: 1000,
+    strandingIncrement: 0.02,
+    instrumentIds: instruments,
+  });
+}
+
+/**
+ * Mass readings posted round-robin under load, through the API on half of the prepared
+ * samples and through the raw server (raw-readings-server.mjs) on the other half, so each
+ * starts from samples in the same state. `apiOnly` skips the raw server.
+ */
+export async function readingsPhase({
+  base,
+  token,
+  dbPath,
+  seconds,
+  connections,
+  clerkId,
+  apiOnly,
+}) {
+  const { samples, instruments } = await prepareSamples(base, token, dbPath);
+  const half = (odd) => samples.filter((_, k) => k % 2 === (odd ? 1 : 0) || samples.length === 1);
+  const requests = (list, prefix) => {
+    let i = 0;
+    return () => {
+      const s = list[i++ % list.length];
+      return {
+        method: 'POST',
+        path: `${prefix}/samples/${s.id}/readings`,
+        body: readingBody(s, i, instruments),
+      };
     };
   };
-  const result = await load({
-    url: base,
-    connections,
-    seconds,
-    headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' },
-    nextRequest,
-  });
-  if (result.failed) {
-    throw new Error(`readings: ${result.failed} failed answers ${JSON.stringify(result.statuses)}`);
+  const checked = (name, r) => {
+    if (r.failed)
+      throw new Error(`${name}: ${r.failed} failed answers ${JSON.stringify(r.statuses)}`);
+    return r;
+  };
+  const api = checked(
+    'readings',
+    await load({
+      url: base,
+      connections,
+      seconds,
+      headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' },
+      nextRequest: requests(half(false), '/api'),
+    }),
+  );
+  if (apiOnly) return { api, samples, instruments };
+  const port = await freePort();
+  const child = await startRaw('raw-readings-server.mjs', [dbPath, String(port), String(clerkId)]);
+  try {
+    const raw = checked(
+      'raw readings',
+      await load({
+        url: `http://127.0.0.1:${port}`,
+        connections,
+        seconds,
+        headers: { 'content-type': 'application/json' },
+        nextRequest: requests(half(true), ''),
+      }),
+    );
+    return { api, raw, samples, instruments };
+  } finally {
+    child.kill('SIGTERM');
   }
-  return result;
 }
 
 /** Downloads a CSV, counting data rows as they stream in (never holding the file). */
@@ -144,11 +187,23 @@ export async function exportsPhase({ base, token, dbPath, pid }) {
     token,
   );
   if (supplier.rows === 0) throw new Error(`supplier ${supplierId} readings export has no rows`);
+  // The server's peak first: the raw exports run in this process, not the server's.
+  const peakMb = peakRssMb(pid);
+  const raw = await rawExports(dbPath, { returnId, supplierId });
+  if (
+    Math.round(raw.returnRows) !== Math.round(ret.rows / ret.calls) ||
+    raw.supplierRows !== supplier.rows
+  ) {
+    console.error(
+      `  note: raw exports wrote ${raw.returnRows} and ${raw.supplierRows} rows, the API ${ret.rows / ret.calls} and ${supplier.rows}`,
+    );
+  }
   return {
+    raw,
     returnRowsPerS: ret.rows / (ret.ms / 1000),
     returnRows: ret.rows / ret.calls,
     supplierRowsPerS: supplier.rows / (supplier.ms / 1000),
     supplierRows: supplier.rows,
-    peakMb: peakRssMb(pid),
+    peakMb,
   };
 }

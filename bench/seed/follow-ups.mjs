@@ -29,7 +29,7 @@ export function seedReturns(w, r, rejected, users, now) {
   for (const lots of groups.values()) {
     const createdAt = Math.max(...lots.map((l) => l.decidedAt)) + DAY;
     const age = (now - createdAt) / DAY;
-    const status = age > 60 ? 'closed' : age > 30 ? 'acknowledged' : age > 10 ? 'sent' : 'draft';
+    const status = age > 60 ? 'closed' : age > 30 ? 'acknowledged' : age > 10 ? 'emailed' : 'draft';
     const id = w.nextId('vendor_returns');
     const costs = { inspectionHours: lots.length * 1.5, hourlyRate: 48, freight: r.int(40, 180) };
     const buyer = users.purchasing[id % users.purchasing.length];
@@ -42,11 +42,17 @@ export function seedReturns(w, r, rejected, users, now) {
       status,
       costs,
       chargeback_total: costs.inspectionHours * costs.hourlyRate + costs.freight,
+      currency: 'USD',
       created_by_id: buyer.id,
       created_at: createdAt,
       updated_at: createdAt,
     });
-    for (const l of lots) w.insert('vendor_return_lots', { vendor_return_id: id, lot_id: l.lotId });
+    for (const l of lots) {
+      w.insert('vendor_return_lots', { vendor_return_id: id, lot_id: l.lotId });
+      // A lot is on at most one open return (the table's key says so).
+      if (status !== 'closed')
+        w.insert('open_return_lots', { vendor_return_id: id, lot_id: l.lotId });
+    }
     w.insert('audit_events', {
       id: w.nextId('audit_events'),
       actor_id: buyer.id,
@@ -90,11 +96,15 @@ function seedRecall(w, rejected, users, now, counters) {
     status: 'draft',
     costs,
     chargeback_total: costs.inspectionHours * costs.hourlyRate + costs.freight,
+    currency: 'USD',
     created_by_id: buyer.id,
     created_at: now - DAY,
     updated_at: now - DAY,
   });
-  for (const l of lots) w.insert('vendor_return_lots', { vendor_return_id: id, lot_id: l.lotId });
+  for (const l of lots) {
+    w.insert('vendor_return_lots', { vendor_return_id: id, lot_id: l.lotId });
+    w.insert('open_return_lots', { vendor_return_id: id, lot_id: l.lotId });
+  }
   return id;
 }
 

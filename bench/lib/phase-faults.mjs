@@ -1,0 +1,82 @@
+// Faults as figures (the readings import is bench/lib/phase-import.mjs): a backup of the bench set while readings keep coming, and the server's peak memory when
+// it is handed a PNG that inflates to a huge bitmap. Measured on whatever the code does
+// today; they carry no budget of their own (issue 19: "faults as figures").
+import { spawn } from 'node:child_process';
+import { join } from 'node:path';
+import { bombPng } from './image-bomb.mjs';
+import { peakRssMb } from './server.mjs';
+
+const ROOT = join(import.meta.dirname, '..', '..');
+
+/**
+ * `npm run backup` of the bench file while one reading a second is posted through the API;
+ * the time until the backup finishes, and the readings answered meanwhile.
+ */
+export async function backupPhase({ base, token, dbPath, uploadDir, sampleId, instruments, out }) {
+  let posting = true;
+  let answered = 0;
+  const failures = [];
+  const poster = (async () => {
+    while (posting) {
+      const t = performance.now();
+      const res = await fetch(`${base}/api/samples/${sampleId}/readings`, {
+        method: 'POST',
+        headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' },
+        body: JSON.stringify({
+          method: 'mass',
+          massG: 100,
+          lengthMm: 1000,
+          instrumentIds: instruments,
+        }),
+      });
+      if (res.status === 201) answered++;
+      else failures.push(`${res.status} ${(await res.text()).slice(0, 200)}`);
+      await new Promise((r) => setTimeout(r, Math.max(0, 1000 - (performance.now() - t))));
+    }
+  })();
+  const t0 = performance.now();
+  const code = await new Promise((resolve) => {
+    const child = spawn(
+      process.execPath,
+      [join(ROOT, 'apps/backend/dist/ops/backup.js'), '--to', out],
+      {
+        cwd: ROOT,
+        env: { ...process.env, DB_PATH: dbPath, UPLOAD_DIR: uploadDir, LOG_LEVEL: 'warn' },
+        stdio: ['ignore', 'ignore', 'inherit'],
+      },
+    );
+    child.on('exit', resolve);
+  });
+  const ms = performance.now() - t0;
+  posting = false;
+  await poster;
+  if (code !== 0) throw new Error(`backup exited with ${code}`);
+  if (failures.length) throw new Error(`readings during the backup failed: ${failures[0]}`);
+  return { ms, readingsDuring: answered };
+}
+
+/**
+ * The server's peak memory (VmHWM) before and after it is handed a PNG whose data inflates
+ * to `inflateMb` MiB (bench/lib/image-bomb.mjs), and its answer.
+ */
+export async function pngPhase({ base, token, pid, lotId, inflateMb }) {
+  const png = bombPng(inflateMb);
+  const before = peakRssMb(pid);
+  const form = new FormData();
+  form.append('file', new Blob([png], { type: 'image/png' }), 'inflating.png');
+  const t0 = performance.now();
+  const res = await fetch(`${base}/api/lots/${lotId}/photos`, {
+    method: 'POST',
+    headers: { authorization: `Bearer ${token}` },
+    body: form,
+  });
+  await res.text();
+  const ms = performance.now() - t0;
+  return {
+    status: res.status,
+    ms,
+    fileKb: png.length / 1000,
+    peakBeforeMb: before,
+    peakAfterMb: peakRssMb(pid),
+  };
+}
