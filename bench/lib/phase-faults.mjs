@@ -2,6 +2,7 @@
 // it is handed a PNG that inflates to a huge bitmap. Measured on whatever the code does
 // today; they carry no budget of their own (issue 19: "faults as figures").
 import { spawn } from 'node:child_process';
+import { request } from 'node:http';
 import { join } from 'node:path';
 import { bombPng } from './image-bomb.mjs';
 import { peakRssMb } from './server.mjs';
@@ -56,6 +57,32 @@ export async function backupPhase({ base, token, dbPath, uploadDir, sampleId, in
 }
 
 /**
+ * POST of a multipart form with node:http, reading the answer even when the server
+ * answers and closes before the upload is through (fetch then fails with EPIPE).
+ */
+async function postForm(url, token, form) {
+  const encoded = new Response(form);
+  const body = Buffer.from(await encoded.arrayBuffer());
+  return new Promise((resolve, reject) => {
+    const req = request(url, {
+      method: 'POST',
+      agent: false,
+      headers: {
+        authorization: `Bearer ${token}`,
+        'content-type': encoded.headers.get('content-type'),
+        'content-length': body.length,
+      },
+    });
+    req.on('response', (res) => {
+      res.resume();
+      res.on('end', () => resolve(res.statusCode));
+    });
+    req.on('error', (e) => (e.code === 'EPIPE' || e.code === 'ECONNRESET' ? null : reject(e)));
+    req.end(body);
+  });
+}
+
+/**
  * The server's peak memory (VmHWM) before and after it is handed a PNG whose data inflates
  * to `inflateMb` MiB (bench/lib/image-bomb.mjs), and its answer.
  */
@@ -65,15 +92,10 @@ export async function pngPhase({ base, token, pid, lotId, inflateMb }) {
   const form = new FormData();
   form.append('file', new Blob([png], { type: 'image/png' }), 'inflating.png');
   const t0 = performance.now();
-  const res = await fetch(`${base}/api/lots/${lotId}/photos`, {
-    method: 'POST',
-    headers: { authorization: `Bearer ${token}` },
-    body: form,
-  });
-  await res.text();
+  const status = await postForm(`${base}/api/lots/${lotId}/photos`, token, form);
   const ms = performance.now() - t0;
   return {
-    status: res.status,
+    status,
     ms,
     fileKb: png.length / 1000,
     peakBeforeMb: before,
