@@ -25,7 +25,7 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
     bodyParser: false,
   });
   app.useLogger(new BootQuietLogger(app.get(Logger)));
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', config.trustProxy);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -59,6 +59,11 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
     // Loaded only when demo data is wanted: it draws its photos with jimp.
     const { seedDemo } = await import('./seed/seed-demo.js');
     await seedDemo(orm.em.fork(), app.get(StorageService), config.seedHistory);
+  } else {
+    // A real start: say so at every start while the published demo sign-ins still work.
+    const { openDemoAccounts, demoAccountsWarning } = await import('./seed/demo-accounts.js');
+    const open = await openDemoAccounts(orm.em.fork());
+    if (open.length > 0) app.get(Logger).warn(demoAccountsWarning(open));
   }
   return app;
 }

@@ -91,7 +91,10 @@ describe('sessions', () => {
   });
 
   it('requires the app Origin on cookie-authenticated writes, not on bearer ones', async () => {
-    const token = await t.token(DEMO.buyer);
+    const signIn = async () =>
+      (await t.http.post('/api/auth/login').send({ email: DEMO.buyer, password: DEMO_PASSWORD }))
+        .body.accessToken as string;
+    const token = await signIn();
     const noOrigin = await t.http.post('/api/auth/logout').set('Cookie', `gp_session=${token}`);
     expect(noOrigin.status).toBe(403);
     const foreign = await t.http
@@ -105,7 +108,12 @@ describe('sessions', () => {
       .set('Origin', ORIGIN);
     expect(own.status).toBe(204);
     expect(String(own.headers['set-cookie'])).toMatch(/gp_session=;/);
-    const bearer = await t.http.post('/api/auth/logout').set('Authorization', `Bearer ${token}`);
+    // Signed out: the token is dead. A new sign-in's token signs out by bearer, no Origin.
+    const again = await t.http.post('/api/auth/logout').set('Authorization', `Bearer ${token}`);
+    expect(again.status).toBe(401);
+    const bearer = await t.http
+      .post('/api/auth/logout')
+      .set('Authorization', `Bearer ${await signIn()}`);
     expect(bearer.status).toBe(204);
   });
 });

@@ -6,7 +6,7 @@ import { AuthService } from './auth.service';
 import { CurrentUser, Public, Roles } from './decorators';
 import { LoginDto } from './dto/login.dto';
 import { LoginThrottlerGuard } from './login-throttler.guard';
-import { SESSION_COOKIE, SESSION_HOURS, type RequestUser } from './request-user';
+import { SESSION_COOKIE, SESSION_IDLE_MINUTES, type RequestUser } from './request-user';
 import { ALL_ROLES } from './roles';
 
 @ApiTags('auth')
@@ -30,7 +30,7 @@ export class AuthController {
       sameSite: 'strict',
       secure: req.secure,
       path: '/',
-      maxAge: SESSION_HOURS * 3600 * 1000,
+      maxAge: SESSION_IDLE_MINUTES * 60 * 1000,
     });
     return result;
   }
@@ -44,7 +44,8 @@ export class AuthController {
   @Roles(...ALL_ROLES)
   @Post('logout')
   @HttpCode(204)
-  logout(@Res({ passthrough: true }) res: Response) {
+  async logout(@CurrentUser() user: RequestUser, @Res({ passthrough: true }) res: Response) {
+    await this.auth.logout(user.id);
     res.clearCookie(SESSION_COOKIE, { path: '/', httpOnly: true, sameSite: 'strict' });
   }
 }

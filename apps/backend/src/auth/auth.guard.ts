@@ -8,13 +8,24 @@ import {
 } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
 import { JwtService } from '@nestjs/jwt';
-import type { Request } from 'express';
+import type { Request, Response } from 'express';
 import { APP_CONFIG } from '../config/config.module';
 import type { AppConfig } from '../config/env';
 import { IS_PUBLIC, ROLES_KEY } from './decorators';
 import type { Role } from './roles';
-import { SESSION_COOKIE, type JwtClaims, type RequestUser } from './request-user';
+import {
+  SESSION_COOKIE,
+  SESSION_HOURS,
+  SESSION_IDLE_MINUTES,
+  SESSION_REFRESH_SECONDS,
+  type JwtClaims,
+  type RequestUser,
+} from './request-user';
+import { signSession } from './session-tokens';
 import { SignedInUsers } from './signed-in-users';
+
+/** The renewed token of a session in use, for clients that send it as a bearer token. */
+export const SESSION_TOKEN_HEADER = 'X-Session-Token';
 
 const MUTATING = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
 
@@ -49,6 +60,11 @@ export class AuthGuard implements CanActivate {
     }
     const user = await this.users.byId(claims.sub);
     if (!user || !user.active) throw new UnauthorizedException('This account cannot sign in');
+    // Signed out, password changed, role changed or deactivated since: this session is over.
+    if (claims.sv !== user.sessionVersion || typeof claims.auth !== 'number') {
+      throw new UnauthorizedException('Your session has ended; sign in again');
+    }
+    await this.renew(ctx.switchToHttp().getResponse<Response>(), claims, user, !bearer, req);
     if (!bearer && MUTATING.has(req.method) && !this.sameOrigin(req)) {
       throw new ForbiddenException('Request refused: it did not come from Gaugeproof itself');
     }
@@ -58,6 +74,34 @@ export class AuthGuard implements CanActivate {
       throw new ForbiddenException('Your role cannot do this');
     }
     return true;
+  }
+
+  /**
+   * A session in use stays open: once its token is SESSION_REFRESH_SECONDS old it gets a new
+   * one (the cookie, and the X-Session-Token header for bearer clients), still ending
+   * SESSION_HOURS after sign-in. One left alone ends SESSION_IDLE_MINUTES after its last use.
+   */
+  private async renew(
+    res: Response,
+    claims: JwtClaims,
+    user: { id: number; role: JwtClaims['role']; sessionVersion: number },
+    cookie: boolean,
+    req: Request,
+  ) {
+    const now = Math.floor(Date.now() / 1000);
+    if (now - (claims.iat ?? 0) < SESSION_REFRESH_SECONDS) return;
+    const token = await signSession(this.jwt, user, claims.auth);
+    res.setHeader(SESSION_TOKEN_HEADER, token);
+    if (cookie) {
+      const left = Math.min(SESSION_IDLE_MINUTES * 60, claims.auth + SESSION_HOURS * 3600 - now);
+      res.cookie(SESSION_COOKIE, token, {
+        httpOnly: true,
+        sameSite: 'strict',
+        secure: req.secure,
+        path: '/',
+        maxAge: Math.max(0, left) * 1000,
+      });
+    }
   }
 
   private sameOrigin(req: Request): boolean {

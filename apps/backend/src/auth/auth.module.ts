@@ -7,6 +7,7 @@ import { APP_CONFIG } from '../config/config.module';
 import type { AppConfig } from '../config/env';
 import { AuthController } from './auth.controller';
 import { AuthGuard } from './auth.guard';
+import { LOGIN_TRIES_PER_ADDRESS } from './login-throttler.guard';
 import { AuthService } from './auth.service';
 import { SignedInUsers } from './signed-in-users';
 
@@ -21,8 +22,18 @@ import { SignedInUsers } from './signed-in-users';
         secret: createSecretKey(Buffer.from(config.jwtSecret, 'utf8')),
       }),
     }),
-    // Only the sign-in route uses it (LoginThrottlerGuard); in memory, per server.
-    ThrottlerModule.forRoot([{ name: 'default', ttl: 60_000, limit: 5 }]),
+    // Only the sign-in route uses it (LoginThrottlerGuard); in memory, per server. `default`
+    // counts one address's tries at one account; `address` all its tries, whatever the
+    // account, so guesses spread over many accounts are slowed too (limits: our choice).
+    ThrottlerModule.forRoot([
+      { name: 'default', ttl: 60_000, limit: 5 },
+      {
+        name: 'address',
+        ttl: 60_000,
+        limit: LOGIN_TRIES_PER_ADDRESS,
+        getTracker: (req: Record<string, unknown>) => String(req.ip),
+      },
+    ]),
   ],
   controllers: [AuthController],
   providers: [AuthService, SignedInUsers, { provide: APP_GUARD, useClass: AuthGuard }],

@@ -1,9 +1,10 @@
 import { Injectable, UnauthorizedException } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
-import { EntityManager } from '@mikro-orm/core';
+import { EntityManager, raw } from '@mikro-orm/core';
 import bcrypt from 'bcryptjs';
 import { User } from '../users/entities/user.entity';
-import { SESSION_HOURS, type JwtClaims, type RequestUser } from './request-user';
+import type { RequestUser } from './request-user';
+import { signSession } from './session-tokens';
 
 /** A real hash, so an unknown e-mail costs the same time as a wrong password. */
 const DUMMY_HASH = bcrypt.hashSync('not-a-real-password', 10);
@@ -24,8 +25,7 @@ export class AuthService {
     );
     const ok = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH);
     if (!user || !ok || !user.active) throw new UnauthorizedException(WRONG);
-    const claims: JwtClaims = { sub: user.id, role: user.role };
-    const accessToken = await this.jwt.signAsync(claims, { expiresIn: `${SESSION_HOURS}h` });
+    const accessToken = await signSession(this.jwt, user);
     const publicUser: RequestUser = {
       id: user.id,
       email: user.email,
@@ -33,5 +33,14 @@ export class AuthService {
       role: user.role,
     };
     return { accessToken, user: publicUser };
+  }
+
+  /** Ends every session of the account, on every server (the guard compares versions). */
+  async logout(userId: number) {
+    await this.em.nativeUpdate(
+      User,
+      { id: userId },
+      { sessionVersion: raw('session_version + 1') },
+    );
   }
 }

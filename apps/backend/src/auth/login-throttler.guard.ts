@@ -1,7 +1,17 @@
 import { Injectable } from '@nestjs/common';
 import { ThrottlerException, ThrottlerGuard } from '@nestjs/throttler';
 
-/** Sign-in attempts are counted per client address and e-mail together. */
+/**
+ * Sign-in tries one address may make in a minute over all accounts (our choice: a shop's
+ * shared terminal signing in a shift's staff stays well below it).
+ */
+export const LOGIN_TRIES_PER_ADDRESS = 30;
+
+/**
+ * Sign-in attempts are counted per client address and e-mail together (the `default`
+ * throttler), and per address alone (`address`, auth.module.ts). The address is the
+ * connection's unless TRUST_PROXY names the proxy in front.
+ */
 @Injectable()
 export class LoginThrottlerGuard extends ThrottlerGuard {
   protected override async getTracker(req: Record<string, unknown>): Promise<string> {

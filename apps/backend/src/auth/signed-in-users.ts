@@ -1,43 +1,43 @@
 import { Injectable } from '@nestjs/common';
-import { CacheProvider, WriteInvalidatedCache } from '../common/write-invalidated-cache';
+import { EntityManager } from '@mikro-orm/core';
 import { User } from '../users/entities/user.entity';
 import { plainSql } from '../common/plain-sql';
 
-export type SignedInUser = Pick<User, 'id' | 'email' | 'name' | 'role' | 'active'>;
+export type SignedInUser = Pick<
+  User,
+  'id' | 'email' | 'name' | 'role' | 'active' | 'sessionVersion'
+>;
 
 /**
- * A deactivation or role change made on another server sharing the database is seen
- * within this (our choice); on this server it is seen at once.
- */
-const MAX_AGE_MS = 5_000;
-/** Accounts remembered; the oldest is dropped beyond it (our choice: far above any shop's staff). */
-const MAX_ENTRIES = 1_000;
-
-/**
- * The account behind a session, as the sign-in check needs it on every request. Kept until
- * the next write to any user (a deactivation or role change through the users screen
- * clears it), so a request does not read the users table each time (about 3 % of a
- * lot-list request).
+ * The account behind a session, as the sign-in check needs it on every request: read from
+ * the database each time, not kept. A kept copy let a deactivated or demoted admin act
+ * for up to 5 s on another server sharing the database (long enough to create a new
+ * admin), and kept ended sessions alive. One primary-key read per request; a cache here
+ * must be exact across servers (checked against a change counter in the database), never
+ * one that expires by time.
  */
 @Injectable()
-export class SignedInUsers extends CacheProvider {
-  private readonly cache = new WriteInvalidatedCache<SignedInUser | null>(
-    [User],
-    MAX_AGE_MS,
-    MAX_ENTRIES,
-  );
-
-  protected readonly caches = [this.cache];
+export class SignedInUsers {
+  constructor(private readonly em: EntityManager) {}
 
   /** The account with this id, or null when there is none. */
-  byId(id: number): Promise<SignedInUser | null> {
-    return this.cache.get(String(id), async () => {
-      const [user] = await plainSql<SignedInUser[]>(
-        this.em,
-        'select id, email, name, role, active from users where id = ?',
-        [id],
-      );
-      return user ?? null;
-    });
+  async byId(id: number): Promise<SignedInUser | null> {
+    const [row] = await plainSql<
+      { id: number; email: string; name: string; role: User['role']; active: unknown; sv: number }[]
+    >(
+      this.em,
+      'select id, email, name, role, active, session_version as sv from users where id = ?',
+      [id],
+    );
+    if (!row) return null;
+    return {
+      id: row.id,
+      email: row.email,
+      name: row.name,
+      role: row.role,
+      // 0/1 on SQLite, a boolean on PostgreSQL.
+      active: row.active === true || row.active === 1,
+      sessionVersion: Number(row.sv),
+    };
   }
 }

@@ -30,6 +30,12 @@ export interface AppConfig {
   frontendDist: string;
   /** Where photos go: the local UPLOAD_DIR, or an S3 bucket shared by several servers. */
   storage: StorageConfig;
+  /**
+   * Express's `trust proxy` from TRUST_PROXY: false unless set, so a client cannot pick its
+   * own address (sign-in throttle, logs) with X-Forwarded-For. Set it to the proxies in
+   * front of the server: `loopback`, addresses or subnets (comma-separated), or a hop count.
+   */
+  trustProxy: boolean | number | string;
 }
 
 export type StorageConfig =
@@ -94,7 +100,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   if (smtpUrl && !/^smtps?:\/\//.test(smtpUrl)) {
     problems.push('SMTP_URL must start with smtp:// or smtps:// (leave it empty to log mail)');
   }
-  const seedRaw = (env.SEED_DEMO ?? 'true').toLowerCase();
+  // Demo data only when asked for (npm start asks); a production database starts empty.
+  const seedRaw = (env.SEED_DEMO || 'false').toLowerCase();
   if (!['true', 'false', 'catalog'].includes(seedRaw)) {
     problems.push(`SEED_DEMO must be "true", "catalog" or "false" (got "${env.SEED_DEMO}")`);
   }
@@ -133,6 +140,17 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   if (!isCurrencyCode(currency)) {
     problems.push(`CURRENCY must be an ISO 4217 code such as EUR or USD (got "${env.CURRENCY}")`);
   }
+  const trustRaw = env.TRUST_PROXY?.trim() ?? '';
+  let trustProxy: boolean | number | string = false;
+  if (trustRaw === '' || trustRaw === 'false') trustProxy = false;
+  else if (trustRaw === 'true') trustProxy = true;
+  else if (/^\d+$/.test(trustRaw)) trustProxy = Number(trustRaw);
+  else if (/^[\w.:/, -]+$/.test(trustRaw)) trustProxy = trustRaw;
+  else {
+    problems.push(
+      'TRUST_PROXY must be true, a hop count, or proxy addresses/subnets such as "loopback" or "10.0.0.0/8"',
+    );
+  }
   if (problems.length > 0) throw new ConfigError(problems);
   const storage: StorageConfig = bucket
     ? {
@@ -167,5 +185,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     logLevel,
     frontendDist: fromRepo('apps/frontend/dist'),
     storage,
+    trustProxy,
   };
 }

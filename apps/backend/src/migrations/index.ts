@@ -11,6 +11,8 @@ import { Migration20261202004800 } from './sqlite/Migration20261202004800';
 import { Migration20261203101930 } from './sqlite/Migration20261203101930';
 import { Migration20261203105427 } from './sqlite/Migration20261203105427';
 import { Migration20261203113000 } from './sqlite/Migration20261203113000';
+import { Migration20261203114510 } from './postgresql/Migration20261203114510';
+import { Migration20261203114500 } from './sqlite/Migration20261203114500';
 
 /**
  * Migrations per driver, in order, each driver in its own folder; listed in code so the
@@ -24,6 +26,7 @@ export const SQLITE_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203101930', class: Migration20261203101930 },
   { name: 'Migration20261203105427', class: Migration20261203105427 },
   { name: 'Migration20261203113000', class: Migration20261203113000 },
+  { name: 'Migration20261203114500', class: Migration20261203114500 },
 ];
 
 export const POSTGRES_MIGRATIONS: MigrationObject[] = [
@@ -33,4 +36,5 @@ export const POSTGRES_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203101920', class: Migration20261203101920 },
   { name: 'Migration20261203105417', class: Migration20261203105417 },
   { name: 'Migration20261203113010', class: Migration20261203113010 },
+  { name: 'Migration20261203114510', class: Migration20261203114510 },
 ];

@@ -66,6 +66,10 @@ export class UsersService {
     if (dto.role !== undefined) user.role = dto.role;
     if (dto.active !== undefined) user.active = dto.active;
     if (dto.password !== undefined) user.passwordHash = await bcrypt.hash(dto.password, 10);
+    // A new password, another role or a deactivation ends the account's sessions everywhere.
+    if (dto.password !== undefined || user.role !== before.role || user.active !== before.active) {
+      user.sessionVersion += 1;
+    }
     this.audit.record(this.em, actor, {
       action: dto.password !== undefined ? 'user.update+password' : 'user.update',
       entityType: 'user',

@@ -22,6 +22,14 @@ export class User {
   @Property({ type: 'boolean' })
   active: Opt<boolean> = true;
 
+  /**
+   * Sessions carry the version they were signed in under; sign-out, a password change, a
+   * deactivation and a role change raise it, and every request compares (auth.guard.ts), so
+   * older sessions end at once on every server.
+   */
+  @Property({ type: 'integer', default: 1 })
+  sessionVersion: Opt<number> = 1;
+
   @Property({ type: 'Date' })
   createdAt: Opt<Date> = new Date();
 
