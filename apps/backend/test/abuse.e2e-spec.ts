@@ -19,7 +19,9 @@ let fields: Map<string, string[]>;
 beforeAll(async () => {
   t = await startTestApp();
   token = await t.token(DEMO.admin);
-  routes = listRoutes(t.app);
+  // Signing out ends the admin session every later request runs on (odd-input.e2e-spec.ts
+  // sends odd bodies to sign-out on a session of its own).
+  routes = listRoutes(t.app).filter((r) => r.path !== '/api/auth/logout');
   fields = await requestFields(t);
 }, 120_000);
 afterAll(async () => t.close());

@@ -22,6 +22,13 @@ export class User {
   @Property({ type: 'boolean' })
   active: Opt<boolean> = true;
 
+  @Property({ type: 'Date' })
+  createdAt: Opt<Date> = new Date();
+
+  @Property({ type: 'Date', onUpdate: () => new Date() })
+  updatedAt: Opt<Date> = new Date();
+
+  // Last, as the migration adds it (SQLite compares column order).
   /**
    * Sessions carry the version they were signed in under; sign-out, a password change, a
    * deactivation and a role change raise it, and every request compares (auth.guard.ts), so
@@ -29,10 +36,4 @@ export class User {
    */
   @Property({ type: 'integer', default: 1 })
   sessionVersion: Opt<number> = 1;
-
-  @Property({ type: 'Date' })
-  createdAt: Opt<Date> = new Date();
-
-  @Property({ type: 'Date', onUpdate: () => new Date() })
-  updatedAt: Opt<Date> = new Date();
 }
