@@ -8,6 +8,7 @@ import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
 import { AppModule } from './app.module';
 import { AllExceptionsFilter } from './common/all-exceptions.filter';
+import { TextSafetyPipe } from './common/text-safety.pipe';
 import { BodyDepthPipe } from './common/body-depth.pipe';
 import { BootQuietLogger } from './common/boot-quiet.logger';
 import type { AppConfig } from './config/env';
@@ -39,6 +40,7 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
   app.use(cookieParser());
   app.setGlobalPrefix('api');
   app.useGlobalPipes(
+    new TextSafetyPipe(),
     new BodyDepthPipe(),
     new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }),
   );

@@ -64,12 +64,15 @@ export function resolveRange(
   today: Date = new Date(),
 ): ScorecardRange {
   const fallback = defaultRange(today);
-  const fromDate = from ?? (to ? addDays(to, -364) : fallback.from);
   const toDate = to ?? fallback.to;
   const errors: string[] = [];
-  if (!isCalendarDate(fromDate)) errors.push('from must be a real calendar date (YYYY-MM-DD)');
+  if (from !== undefined && !isCalendarDate(from)) {
+    errors.push('from must be a real calendar date (YYYY-MM-DD)');
+  }
   if (!isCalendarDate(toDate)) errors.push('to must be a real calendar date (YYYY-MM-DD)');
   if (errors.length) throw new BadRequestException(errors);
+  // Only now: counting back from a `to` like 0000-00-00 threw a RangeError (a 500).
+  const fromDate = from ?? (to ? addDays(to, -364) : fallback.from);
   if (fromDate > toDate) throw new BadRequestException(['from must be on or before to']);
   const start = utcMidnight(fromDate);
   const end = utcMidnight(addDays(toDate, 1));
