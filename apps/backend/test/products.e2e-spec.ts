@@ -170,7 +170,7 @@ describe('PATCH /api/products/:id', () => {
     expect(
       (await call(t, DEMO.clerk, 'patch', `/api/products/${made.id}`, { active: false })).status,
     ).toBe(403);
-    const res = await call(t, DEMO.buyer, 'patch', `/api/products/${made.id}`, {
+    const res = await call(t, DEMO.qa, 'patch', `/api/products/${made.id}`, {
       description: 'Kit with the heavier ground',
       aql: '0.65',
       inspectionLevel: 'II',
@@ -207,6 +207,78 @@ describe('PATCH /api/products/:id', () => {
     });
     expect(event.before).toMatchObject({ aql: '1.0' });
     expect(event.after).toMatchObject({ aql: '0.65' });
+    const [criteria] = await em.find(AuditEvent, {
+      entityType: 'product',
+      entityId: made.id,
+      action: 'product.criteria',
+    });
+    expect(criteria.before).toMatchObject({
+      aql: '1.0',
+      inspectionLevel: 'S-3',
+      minAreaRatio: 0.98,
+    });
+    expect(criteria.after).toMatchObject({
+      aql: '0.65',
+      inspectionLevel: 'II',
+      minAreaRatio: 0.95,
+    });
+    expect((criteria.after as { conductors: { gauge: string }[] }).conductors[1].gauge).toBe(
+      '1/0 AWG',
+    );
+  });
+
+  it('lets only a QA lead or admin change acceptance criteria; purchasing edits the rest', async () => {
+    const made = await makeProduct(t, kit('KIT-CRIT'));
+    const em = () => t.app.get(MikroORM).em.fork();
+    const loosen = [
+      { minAreaRatio: 0.5 },
+      { aql: '6.5' },
+      { inspectionLevel: 'S-1' },
+      {
+        conductors: [
+          { purpose: 'power', gauge: '8 AWG', claimedMaterial: 'copper' },
+          { purpose: 'ground', gauge: '8 AWG', claimedMaterial: 'copper' },
+          { purpose: 'remote', gauge: '18 ga', claimedMaterial: 'copper', claimedStrands: 19 },
+        ],
+      },
+    ];
+    for (const change of loosen) {
+      const res = await call(t, DEMO.buyer, 'patch', `/api/products/${made.id}`, {
+        description: 'Changed by purchasing',
+        ...change,
+      });
+      expect(res.status, JSON.stringify(change)).toBe(403);
+      expect(res.body.message).toContain('Only a QA lead or an admin');
+    }
+    const kept = await call(t, DEMO.qa, 'get', `/api/products/${made.id}`);
+    expect(kept.body).toMatchObject({
+      description: 'Amplifier wiring kit KIT-CRIT',
+      aql: '1.0',
+      inspectionLevel: 'S-3',
+      minAreaRatio: 0.98,
+    });
+    expect(kept.body.conductors[0].gauge).toBe('4 AWG');
+    // Purchasing may edit the description, even sending the unchanged criteria along.
+    const ok = await call(t, DEMO.buyer, 'patch', `/api/products/${made.id}`, {
+      description: 'Renamed by purchasing',
+      aql: '1.0',
+      minAreaRatio: 0.98,
+    });
+    expect(ok.status).toBe(200);
+    expect(ok.body.description).toBe('Renamed by purchasing');
+    expect(await em().count(AuditEvent, { entityId: made.id, action: 'product.criteria' })).toBe(0);
+    // Nor may purchasing create a product with criteria other than the defaults.
+    const created = await call(t, DEMO.buyer, 'post', '/api/products', {
+      ...kit('KIT-LOOSE'),
+      minAreaRatio: 0.6,
+    });
+    expect(created.status).toBe(403);
+    for (const who of [DEMO.qa, DEMO.admin]) {
+      const res = await call(t, who, 'patch', `/api/products/${made.id}`, { aql: '0.65' });
+      expect(res.status).toBe(200);
+      await call(t, who, 'patch', `/api/products/${made.id}`, { aql: '1.0' });
+    }
+    expect(await em().count(AuditEvent, { entityId: made.id, action: 'product.criteria' })).toBe(4);
   });
 
   it('validates like create, refuses fixed fields and deactivates', async () => {

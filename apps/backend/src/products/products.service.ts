@@ -1,4 +1,10 @@
-import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
+import {
+  BadRequestException,
+  ConflictException,
+  ForbiddenException,
+  Injectable,
+} from '@nestjs/common';
+import type { Role } from '../auth/roles';
 import { EntityManager } from '@mikro-orm/core';
 import type { SqlEntityManager } from '@mikro-orm/knex';
 import { initialInspectionState } from '@gaugeproof/standards';
@@ -23,6 +29,32 @@ const SORT_COLUMNS: Record<(typeof SORTS)[number], string> = {
   supplier: 's.name',
   createdAt: 'p.createdAt',
 };
+
+/**
+ * Who may set what a lot is judged against: purchasing may add products (with the default
+ * criteria) and edit their description, unit length and active flag, but loosening the
+ * criteria would let a supplier's short copper pass (issue 17 item 6).
+ */
+const CRITERIA_ROLES: readonly Role[] = ['qa_lead', 'admin'];
+/** Defaults of a new product: S-3 and AQL 1.0 (our choice), 0.98 area ratio (ASTM B496). */
+const DEFAULT_CRITERIA = { inspectionLevel: 'S-3', aql: '1.0', minAreaRatio: 0.98 } as const;
+
+/** The parts of a product view a lot is judged against. */
+function acceptanceCriteria(v: ProductView) {
+  return {
+    inspectionLevel: v.inspectionLevel,
+    aql: v.aql,
+    minAreaRatio: v.minAreaRatio,
+    conductors: v.conductors.map((c) => ({
+      position: c.position,
+      purpose: c.purpose,
+      gauge: c.gauge,
+      nominalAreaMm2: c.nominalAreaMm2,
+      claimedMaterial: c.claimedMaterial,
+      claimedStrands: c.claimedStrands,
+    })),
+  };
+}
 
 @Injectable()
 export class ProductsService {
@@ -82,6 +114,20 @@ export class ProductsService {
     if (await this.em.count(Product, { supplier, sku })) {
       throw new ConflictException(`${supplier.name} already has a product with SKU ${sku}`);
     }
+    if (!CRITERIA_ROLES.includes(actor.role)) {
+      const off = (
+        [
+          ['inspectionLevel', dto.inspectionLevel, DEFAULT_CRITERIA.inspectionLevel],
+          ['aql', dto.aql, DEFAULT_CRITERIA.aql],
+          ['minAreaRatio', dto.minAreaRatio, DEFAULT_CRITERIA.minAreaRatio],
+        ] as const
+      ).filter(([, given, usual]) => given !== undefined && given !== usual);
+      if (off.length) {
+        throw new ForbiddenException(
+          `Only a QA lead or an admin can set acceptance criteria other than the defaults (${off.map(([k]) => k).join(', ')}); nothing was saved.`,
+        );
+      }
+    }
     return this.em.transactional(async (em) => {
       const product = em.create(Product, {
         supplier,
@@ -89,9 +135,9 @@ export class ProductsService {
         kind: dto.kind,
         description: dto.description.trim(),
         lengthPerUnitM: dto.lengthPerUnitM ?? null,
-        inspectionLevel: dto.inspectionLevel ?? 'S-3',
-        aql: dto.aql ?? '1.0',
-        minAreaRatio: dto.minAreaRatio ?? 0.98,
+        inspectionLevel: dto.inspectionLevel ?? DEFAULT_CRITERIA.inspectionLevel,
+        aql: dto.aql ?? DEFAULT_CRITERIA.aql,
+        minAreaRatio: dto.minAreaRatio ?? DEFAULT_CRITERIA.minAreaRatio,
       });
       replaceConductors(em, product, conductors);
       // Every supplier-product stream starts on normal inspection (ISO 2859-1).
@@ -129,8 +175,26 @@ export class ProductsService {
       if (dto.minAreaRatio !== undefined) product.minAreaRatio = dto.minAreaRatio;
       if (dto.active !== undefined) product.active = dto.active;
       if (conductors) replaceConductors(em, product, conductors);
+      const criteriaBefore = acceptanceCriteria(before);
+      const criteriaAfter = acceptanceCriteria(productView(product, state));
+      const criteriaChanged = JSON.stringify(criteriaBefore) !== JSON.stringify(criteriaAfter);
+      if (criteriaChanged && !CRITERIA_ROLES.includes(actor.role)) {
+        // Nothing is flushed: the transaction ends with the refusal.
+        throw new ForbiddenException(
+          'Only a QA lead or an admin can change acceptance criteria (inspection level, AQL, minimum area ratio, conductor specs); nothing was saved.',
+        );
+      }
       await em.flush();
       const after = productView(product, state);
+      if (criteriaChanged) {
+        this.audit.record(em, actor, {
+          action: 'product.criteria',
+          entityType: 'product',
+          entityId: product.id,
+          before: criteriaBefore,
+          after: criteriaAfter,
+        });
+      }
       this.audit.record(em, actor, {
         action: 'product.update',
         entityType: 'product',
