@@ -8,7 +8,7 @@ import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
 import { AppModule } from './app.module';
 import { AllExceptionsFilter } from './common/all-exceptions.filter';
-import { TextSafetyPipe } from './common/text-safety.pipe';
+import { InputSafetyPipe } from './common/input-safety.pipe';
 import { BodyDepthPipe } from './common/body-depth.pipe';
 import { BootQuietLogger } from './common/boot-quiet.logger';
 import type { AppConfig } from './config/env';
@@ -40,7 +40,7 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
   app.use(cookieParser());
   app.setGlobalPrefix('api');
   app.useGlobalPipes(
-    new TextSafetyPipe(),
+    new InputSafetyPipe(),
     new BodyDepthPipe(),
     new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }),
   );
@@ -57,6 +57,17 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
 
   const orm = app.get(MikroORM);
   await orm.getMigrator().up();
+  if (config.storage.kind === 'local') {
+    const { sweepUploads } = await import('./storage/upload-sweep.js');
+    const swept = await sweepUploads(orm.em.fork(), config.uploadDir);
+    if (swept.partial + swept.orphans > 0) {
+      app
+        .get(Logger)
+        .log(
+          `Swept the upload folder: ${swept.partial} partial and ${swept.orphans} orphan files left by an earlier stop`,
+        );
+    }
+  }
   if (config.seedDemo) {
     // Loaded only when demo data is wanted: it draws its photos with jimp.
     const { seedDemo } = await import('./seed/seed-demo.js');

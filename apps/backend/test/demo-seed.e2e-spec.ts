@@ -40,7 +40,7 @@ describe('demo data only when asked', () => {
     } finally {
       await s.kill('SIGTERM');
     }
-  });
+  }, 90_000);
 
   it('warns at every start while demo accounts are open, and not once they are closed', async () => {
     const seeded = await server('demo.sqlite', { SEED_DEMO: 'catalog' });
@@ -97,5 +97,5 @@ describe('demo data only when asked', () => {
     } finally {
       await after.kill('SIGTERM');
     }
-  });
+  }, 180_000);
 });

@@ -190,6 +190,13 @@ describe('odd input on every route', () => {
       expect(b.status, JSON.stringify(c)).toBe(400);
       expect(JSON.stringify(b.body.message)).toContain('name must not contain control characters');
     }
+    // A number past the sizes any field takes (exponent notation) is refused by name too.
+    const tiny = await t.http
+      .post('/api/returns/1/ship')
+      .set(auth)
+      .send({ carrier: 'Northline Freight', shippedOn: '2026-12-01', quantity: 5e-324 });
+    expect(tiny.status).toBe(400);
+    expect(JSON.stringify(tiny.body.message)).toContain('quantity must be 0 or a number');
     // Tabs and line breaks are text, not control: a note may have them.
     const ok = await t.http
       .post('/api/suppliers')
