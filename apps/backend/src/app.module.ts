@@ -16,6 +16,7 @@ import type { IncomingMessage } from 'node:http';
 import { AuditModule } from './audit/audit.module';
 import { AuthModule } from './auth/auth.module';
 import { ConfigModule } from './config/config.module';
+import { ServerLockHolder } from './ops/server-lock.holder';
 import { CorrectiveActionsModule } from './corrective-actions/corrective-actions.module';
 import { ExportsModule } from './exports/exports.module';
 import { DecisionsModule } from './decisions/decisions.module';
@@ -105,6 +106,7 @@ export class AppModule implements NestModule {
         ...DOMAIN_MODULES,
         ...staticSite,
       ],
+      providers: [ServerLockHolder],
     };
   }
 }

@@ -1,8 +1,10 @@
-import { existsSync, mkdirSync, readdirSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readdirSync, utimesSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import Database from 'better-sqlite3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { backupDatabase, copyFolder, restoreDatabase } from '../src/ops/sqlite-backup';
+import { DatabaseInUseError, serverHoldsDatabase } from '../src/ops/server-lock';
+import { SWEEP_GRACE_MS } from '../src/storage/upload-sweep';
 import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
 
 function query<T>(file: string, sql: string): T[] {
@@ -75,5 +77,74 @@ describe('backup and restore', () => {
       /No database/,
     );
     expect(existsSync(target)).toBe(false);
+  });
+
+  it('refuses to restore over a database a server holds, saying how to stop it, and changes nothing', async () => {
+    const admin = await t.token(DEMO.admin);
+    const target = join(t.dir, 'backups', 'before-restore.sqlite');
+    await backupDatabase(t.config.dbPath, target);
+    // Acknowledged after the backup: a restore now would lose it.
+    const later = await t.http.post('/api/users').set('Authorization', `Bearer ${admin}`).send({
+      email: 'after-backup@demo.example',
+      name: 'After',
+      role: 'clerk',
+      password: 'long-enough-pw',
+    });
+    expect(later.status).toBe(201);
+    expect(serverHoldsDatabase(t.config.dbPath)).toBe(true);
+    expect(() => restoreDatabase(target, t.config.dbPath)).toThrow(DatabaseInUseError);
+    expect(() => restoreDatabase(target, t.config.dbPath)).toThrow(
+      /Stop every server using this database/,
+    );
+    const users = await t.http.get('/api/users').set('Authorization', `Bearer ${admin}`);
+    expect(users.body.map((u: { email: string }) => u.email)).toContain(
+      'after-backup@demo.example',
+    );
+  });
+
+  it('restores once the server has stopped', async () => {
+    const other = await startTestApp();
+    const target = join(other.dir, 'copy.sqlite');
+    await backupDatabase(other.config.dbPath, target);
+    const dbPath = other.config.dbPath;
+    await other.app.close();
+    expect(serverHoldsDatabase(dbPath)).toBe(false);
+    restoreDatabase(target, dbPath);
+    expect(query<{ n: number }>(dbPath, 'select count(*) as n from users')[0].n).toBe(4);
+    await other.close().catch(() => undefined);
+  });
+});
+
+describe('upload sweep at start', () => {
+  it('removes partial and orphan files older than the grace time, keeps the rest', async () => {
+    const first = await startTestApp();
+    const { dbPath, uploadDir } = first.config;
+    // A photo with its row: kept.
+    const photos = join(uploadDir, 'photos');
+    mkdirSync(photos, { recursive: true });
+    await first.app.close();
+    const old = new Date(Date.now() - SWEEP_GRACE_MS - 60_000);
+    const files = {
+      partial: join(photos, '.0b7e-cut-off.tmp'),
+      orphan: join(photos, 'c0ffee00-0000-4000-8000-000000000001.jpg'),
+      fresh: join(photos, 'c0ffee00-0000-4000-8000-000000000002.jpg'),
+      other: join(uploadDir, 'notes.txt'),
+    };
+    for (const f of Object.values(files)) writeFileSync(f, 'x');
+    for (const f of [files.partial, files.orphan, files.other]) utimesSync(f, old, old);
+    const again = await startTestApp({
+      DB_PATH: dbPath,
+      UPLOAD_DIR: uploadDir,
+      ...(first.config.dbUrl ? { DB_URL: first.config.dbUrl } : {}),
+    });
+    try {
+      expect(existsSync(files.partial)).toBe(false);
+      expect(existsSync(files.orphan)).toBe(false);
+      expect(existsSync(files.fresh)).toBe(true);
+      expect(existsSync(files.other)).toBe(true);
+    } finally {
+      await again.close();
+      await first.close().catch(() => undefined);
+    }
   });
 });

@@ -13,6 +13,18 @@ interface SqliteConnection {
   prepare(sql: string): unknown;
 }
 
+/**
+ * knex begins a transaction with a deferred `BEGIN;`, which takes the write lock only at
+ * its first write. With two servers on one file, a transaction that had read and then
+ * wrote found the other's commit in between and failed at once with SQLITE_BUSY (WAL
+ * snapshot), which busy_timeout cannot wait out: the servers answered 500. Begun IMMEDIATE,
+ * a transaction waits for the write lock up front (busy_timeout, a bounded retry inside
+ * SQLite) and the servers take turns (SQLite documentation, "BEGIN TRANSACTION").
+ */
+const BEGIN_WRITE = 'BEGIN IMMEDIATE;';
+/** How long a connection waits for another's write lock before SQLITE_BUSY (our choice). */
+export const BUSY_TIMEOUT_MS = 5_000;
+
 /** Prepared statements kept per connection (common practice, no source). */
 const STATEMENT_CACHE_SIZE = 500;
 
@@ -26,7 +38,9 @@ const STATEMENT_CACHE_SIZE = 500;
 function keepPreparedStatements(conn: SqliteConnection): void {
   const prepare = conn.prepare.bind(conn);
   const kept = new Map<string, unknown>();
-  conn.prepare = (sql: string) => {
+  conn.prepare = (text: string) => {
+    // Write transactions take the write lock when they begin (see BEGIN_WRITE).
+    const sql = text === 'BEGIN;' ? BEGIN_WRITE : text;
     let statement = kept.get(sql);
     if (statement) kept.delete(sql);
     else statement = prepare(sql);
@@ -80,7 +94,7 @@ export function sqliteOptions(dbPath: string): Options {
       max: 1,
       afterCreate: (conn: SqliteConnection, done: (err: Error | null, conn: unknown) => void) => {
         try {
-          conn.pragma('busy_timeout = 5000');
+          conn.pragma(`busy_timeout = ${BUSY_TIMEOUT_MS}`);
           conn.exec(
             `PRAGMA journal_mode = WAL; PRAGMA foreign_keys = ON; PRAGMA synchronous = FULL; ${STATISTICS}`,
           );

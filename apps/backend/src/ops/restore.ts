@@ -6,7 +6,7 @@ import { copyFolder, restoreDatabase } from './sqlite-backup';
 
 /**
  * npm run restore -- --from FILE
- * Stop the server first. Puts the backup FILE in place of DB_PATH and FILE.uploads in
+ * Refuses while any server runs on the database (it says how to stop them). Puts the backup FILE in place of DB_PATH and FILE.uploads in
  * place of UPLOAD_DIR.
  */
 function main() {
@@ -17,8 +17,13 @@ function main() {
   }
   const config = loadConfig();
   const from = resolve(process.env.INIT_CWD ?? process.cwd(), args.from);
-  restoreDatabase(from, config.dbPath);
-  if (existsSync(`${from}.uploads`)) copyFolder(`${from}.uploads`, config.uploadDir);
+  if (config.dbUrl) {
+    console.error('DB_URL is set: restore PostgreSQL with pg_restore; this tool restores SQLite.');
+    process.exit(2);
+  }
+  restoreDatabase(from, config.dbPath, () => {
+    if (existsSync(`${from}.uploads`)) copyFolder(`${from}.uploads`, config.uploadDir);
+  });
   console.log(`restore: ${from} -> ${config.dbPath}`);
   console.log(`restore: ${from}.uploads -> ${config.uploadDir}`);
 }
