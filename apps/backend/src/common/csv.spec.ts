@@ -45,6 +45,12 @@ describe('csv', () => {
 });
 
 describe('csvLines', () => {
+  it('quotes a field holding a semicolon, so a semicolon-locale spreadsheet keeps it whole', () => {
+    expect(csvLines([['Cable;=1+1', 'a,b', 'plain']])).toBe('"Cable;=1+1","a,b",plain\r\n');
+    const [row] = Papa.parse<string[]>(csvLines([['x;=HYPERLINK("y")']]), { delimiter: ';' }).data;
+    expect(row).toEqual(['x;=HYPERLINK("y")']);
+  });
+
   it('writes what papaparse reads back, for any cells (RFC 4180 quoting)', () => {
     const cell = fc.oneof(
       fc.string({ unit: fc.constantFrom('a', ' ', ',', '"', '\r', '\n', 'é', '=', '-', 'x') }),

@@ -18,9 +18,11 @@ export function neutralise(value: CsvCell): string | number | boolean {
 
 /**
  * A field needs quotes when it holds a delimiter, quote or line break (RFC 4180 §2.6), or
- * starts or ends with white space (which spreadsheet programs would otherwise trim).
+ * starts or ends with white space (which spreadsheet programs would otherwise trim). A
+ * semicolon too: spreadsheets set to a semicolon locale split on it, and the part after
+ * it (`x;=1+1`) became a cell of its own that ran as a formula.
  */
-const NEEDS_QUOTES = /[",\r\n]|^\s|\s$/;
+const NEEDS_QUOTES = /[",;\r\n]|^\s|\s$/;
 
 /** One field as RFC 4180 writes it: quoted when needed, inner quotes doubled (§2.7). */
 function field(value: CsvCell): string {
