@@ -1,4 +1,4 @@
-import { ValidationPipe, type INestApplication } from '@nestjs/common';
+import type { INestApplication } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { MikroORM } from '@mikro-orm/core';
@@ -13,6 +13,7 @@ import { BodyDepthPipe } from './common/body-depth.pipe';
 import { BootQuietLogger } from './common/boot-quiet.logger';
 import type { AppConfig } from './config/env';
 import { StorageService } from './storage/storage.service';
+import { FieldValidationPipe } from './common/field-validation.pipe';
 
 /**
  * Builds the whole application: used by main.ts, by the API tests and the benchmark,
@@ -42,7 +43,7 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
   app.useGlobalPipes(
     new InputSafetyPipe(),
     new BodyDepthPipe(),
-    new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }),
+    new FieldValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }),
   );
   app.useGlobalFilters(new AllExceptionsFilter());
   app.enableShutdownHooks();

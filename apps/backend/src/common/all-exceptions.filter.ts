@@ -13,6 +13,7 @@ import {
   ForeignKeyConstraintViolationException,
 } from '@mikro-orm/core';
 import type { Request, Response } from 'express';
+import { DomainError, type FieldError } from './domain-error';
 
 export interface ErrorBody {
   statusCode: number;
@@ -37,7 +38,9 @@ const STATUS_NAMES: Record<number, string> = {
 };
 
 /**
- * Every error leaves the server with the same body and never a stack trace or SQL.
+ * Every error leaves the server with the same body and never a stack trace or SQL, its
+ * problems listed as `errors: [{field, message}]` (a DomainError's fields, the validation
+ * pipe's properties; null where none).
  * Extra fields a service attaches to an HttpException body (e.g. `current` on a 409,
  * `errors` on an import) are passed through.
  */
@@ -55,7 +58,11 @@ export class AllExceptionsFilter implements ExceptionFilter {
     let message: string | string[] = `Something went wrong on the server (reference ${requestId})`;
     let extra: Record<string, unknown> = {};
 
-    if (exception instanceof HttpException) {
+    if (exception instanceof DomainError) {
+      status = exception.status;
+      message = exception.bodyMessage;
+      extra = { errors: exception.errors };
+    } else if (exception instanceof HttpException) {
       status = exception.getStatus();
       const body = exception.getResponse();
       if (typeof body === 'string') message = body;
@@ -89,6 +96,8 @@ export class AllExceptionsFilter implements ExceptionFilter {
       this.logger.error({ requestId, err: exception }, `Unhandled error on ${req.method} ${path}`);
     }
     const body: ErrorBody = {
+      // Every error lists its problems as data; a field-less one has field null.
+      errors: [message].flat().map((m): FieldError => ({ field: null, message: m })),
       ...extra,
       statusCode: status,
       error: STATUS_NAMES[status] ?? 'Error',

@@ -1,4 +1,4 @@
-import { UnprocessableEntityException } from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
 import type { Instrument, InstrumentKind } from '../instruments/entities/instrument.entity';
 import type { InstrumentSnapshot, ReadingMethod } from './entities/reading.entity';
 
@@ -39,8 +39,9 @@ const KIND_WORDS: Record<InstrumentKind, string> = {
 function inUnit(i: InstrumentLike, wanted: 'g' | 'mm' | 'ohm' | 'degC'): number {
   if (i.resolutionUnit === wanted) return i.resolution;
   if (wanted === 'ohm' && i.resolutionUnit === 'mohm') return i.resolution / 1000;
-  throw new UnprocessableEntityException(
+  throw DomainError.refused(
     `The ${KIND_WORDS[i.kind]} '${i.name}' (serial ${i.serial}) has its resolution in ${i.resolutionUnit}; expected ${wanted}. Correct it in the instrument register.`,
+    'instrumentIds',
   );
 }
 
@@ -78,7 +79,7 @@ export function resolutionsFor(
   }
   if (problems.length) {
     const text = problems.join('; ');
-    throw new UnprocessableEntityException(`${text[0].toUpperCase()}${text.slice(1)}.`);
+    throw DomainError.refused(`${text[0].toUpperCase()}${text.slice(1)}.`, 'instrumentIds');
   }
   const get = (k: InstrumentKind) => byKind.get(k);
   const r: MethodResolutions = {};

@@ -1,4 +1,4 @@
-import { UnprocessableEntityException } from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
 import type { EntityManager } from '@mikro-orm/core';
 import type { SqlEntityManager } from '@mikro-orm/knex';
 import type { AuditEntry } from '../audit/audit.service';
@@ -10,7 +10,7 @@ const OPEN: readonly LotStatus[] = ['on_hold', 'inspecting', 'awaiting_decision'
 
 export function assertLotOpen(lot: Pick<Lot, 'status' | 'poNumber'>): void {
   if (!OPEN.includes(lot.status)) {
-    throw new UnprocessableEntityException(
+    throw DomainError.refused(
       `Lot ${lot.poNumber} is already ${lot.status.replace(/_/g, ' ')}: no more samples or readings can be added to a decided lot.`,
     );
   }

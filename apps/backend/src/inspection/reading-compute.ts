@@ -1,4 +1,4 @@
-import { BadRequestException } from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
 import {
   areaFromDiameter,
   areaFromMass,
@@ -163,7 +163,9 @@ export function computeReading(r: ReadingToCompute): ComputedReading {
       },
     };
   } catch (e) {
-    if (e instanceof StandardsInputError) throw new BadRequestException([e.message]);
+    if (e instanceof StandardsInputError) {
+      throw DomainError.invalid([{ field: e.field, message: e.message }]);
+    }
     throw e;
   }
 }

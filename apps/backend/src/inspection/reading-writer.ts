@@ -1,4 +1,5 @@
-import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
 import type { EntityManager } from '@mikro-orm/core';
 import type { MaterialId } from '@gaugeproof/standards';
 import { AuditService, type AuditEntry } from '../audit/audit.service';
@@ -176,9 +177,9 @@ export class ReadingWriter {
       `${READING_SELECT.replace('from readings', VOID_FACTS)} where id = ?`,
       [id],
     );
-    if (!row) throw new NotFoundException('No such record');
+    if (!row) throw DomainError.notFound('No such record');
     if (row.voided) {
-      throw new ConflictException(
+      throw DomainError.conflict(
         `This reading was already voided on ${isoDate(instantOf(row.voidedAt))}: ${row.voidReason}`,
       );
     }
@@ -238,7 +239,7 @@ export class ReadingWriter {
     entries.forEach((entry, index) => {
       try {
         const sample = samples.get(entry.sampleId);
-        if (!sample) throw new NotFoundException(`Sample ${entry.sampleId} not found`);
+        if (!sample) throw DomainError.notFound(`Sample ${entry.sampleId} not found`);
         assertLotOpen(sample);
         const instruments = usableInstruments(entry.instrumentIds, register, at);
         const siblings = live.get(sample.id) ?? [];

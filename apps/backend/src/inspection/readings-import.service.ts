@@ -10,6 +10,7 @@ import { validateSync } from 'class-validator';
 import { createHash } from 'node:crypto';
 import Papa from 'papaparse';
 import type { RequestUser } from '../auth/request-user';
+import { DomainError } from '../common/domain-error';
 import { announceSqlWrite } from '../common/sql-writes';
 import { Instrument } from '../instruments/entities/instrument.entity';
 import { Lot } from '../lots/entities/lot.entity';
@@ -48,7 +49,9 @@ const REQUIRED = ['unit', 'conductor', 'method', 'instruments'] as const;
 const DECIMAL = /^[-+]?(\d+(\.\d*)?|\.\d+)$/;
 const KEY = /^[\x21-\x7e]{1,200}$/;
 
+/** The sentence of a refusal from a rule (a DomainError) or from the upload's own checks. */
 const messageOf = (e: unknown): string => {
+  if (e instanceof DomainError) return e.message;
   if (e instanceof HttpException) {
     const body = e.getResponse();
     const m = typeof body === 'string' ? body : (body as { message?: unknown }).message;
@@ -56,6 +59,9 @@ const messageOf = (e: unknown): string => {
   }
   throw e;
 };
+
+/** The CSV column of a request field a rule names (the form's instrumentIds, seq …). */
+const COLUMN_OF_FIELD: Record<string, string> = { instrumentIds: 'instruments', seq: 'unit' };
 
 /**
  * Readings from a bench logger's CSV, all or nothing: every row is checked, then all are
@@ -331,7 +337,8 @@ function conductorFor(lot: Lot, text: string): ConductorSpec | string {
 }
 
 function columnOf(e: unknown): string | null {
-  return e instanceof UnprocessableEntityException ? 'instruments' : null;
+  const field = e instanceof DomainError ? e.errors[0]?.field : null;
+  return field ? (COLUMN_OF_FIELD[field] ?? field) : null;
 }
 
 /** The first import's answer to a retry; 422 when the key came with another file. */

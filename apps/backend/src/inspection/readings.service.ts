@@ -1,4 +1,5 @@
-import { BadRequestException, Injectable } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
 import type { RequestUser } from '../auth/request-user';
 import { CreateReadingDto, INPUT_FIELDS, METHOD_FIELDS } from './dto/create-reading.dto';
 import { VoidReadingDto } from './dto/void-reading.dto';
@@ -10,8 +11,8 @@ export function methodInputs(dto: CreateReadingDto): ReadingInputs {
   const allowed = METHOD_FIELDS[dto.method];
   const foreign = INPUT_FIELDS.filter((f) => dto[f] !== undefined && !allowed.includes(f));
   if (foreign.length) {
-    throw new BadRequestException(
-      foreign.map((f) => `${f} is not used by the ${dto.method} method`),
+    throw DomainError.invalid(
+      foreign.map((f) => ({ field: f, message: `${f} is not used by the ${dto.method} method` })),
     );
   }
   const inputs: ReadingInputs = {};

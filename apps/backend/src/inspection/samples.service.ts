@@ -1,4 +1,5 @@
-import { ConflictException, Injectable, UnprocessableEntityException } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
 import { EntityManager } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
@@ -38,13 +39,15 @@ export class SamplesService {
   conductorOf(lot: Lot, conductorId: number): ConductorSpec {
     const conductor = lot.product.conductors.getItems().find((c) => c.id === conductorId);
     if (!conductor) {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `Conductor #${conductorId} is not a conductor of product ${lot.product.sku}.`,
+        'conductorId',
       );
     }
     if (!conductor.active) {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `The ${conductor.purpose} conductor (${conductor.gaugeLabel}) is no longer active on product ${lot.product.sku}.`,
+        'conductorId',
       );
     }
     return conductor;
@@ -118,20 +121,23 @@ export function unitFor(
   if (seq === undefined) {
     const unit = Array.from({ length: planned }, (_, i) => i + 1).find((n) => !taken.has(n));
     if (unit === undefined) {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `All planned units already have a ${conductor.purpose} sample: ${planText(lot)}.`,
+        'seq',
       );
     }
     return unit;
   }
   if (seq > planned) {
-    throw new UnprocessableEntityException(
+    throw DomainError.refused(
       `Unit ${seq} is beyond the plan: ${planText(lot)}, numbered 1 to ${planned}.`,
+      'seq',
     );
   }
   if (taken.has(seq)) {
-    throw new ConflictException(
+    throw DomainError.conflict(
       `Unit ${seq} already has a ${conductor.purpose} sample in this lot; add readings to it instead.`,
+      'seq',
     );
   }
   return seq;

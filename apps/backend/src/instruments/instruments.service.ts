@@ -1,13 +1,9 @@
-import {
-  BadRequestException,
-  ConflictException,
-  Injectable,
-  UnprocessableEntityException,
-} from '@nestjs/common';
+import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
 import { EntityManager, type FilterQuery } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
 import { addDays, isoDate } from '../common/calendar';
+import { DomainError } from '../common/domain-error';
 import { paging, parseSort, type Page } from '../common/paging';
 import { CreateInstrumentDto } from './dto/create-instrument.dto';
 import { ListInstrumentsDto } from './dto/list-instruments.dto';
@@ -63,7 +59,7 @@ export function usableInstruments<T extends InstrumentRecord>(
       );
     }
   }
-  if (problems.length) throw new UnprocessableEntityException(problems.join(' '));
+  if (problems.length) throw DomainError.refused(problems.join(' '), 'instrumentIds');
   return ids.map((id) => byId.get(id) as T);
 }
 

@@ -5,6 +5,8 @@ export interface ApiErrorBody {
   message: string | string[];
   path: string;
   requestId: string;
+  /** Each problem with the request field it is about (null when it names none). */
+  errors?: { field?: string | null; message: string }[];
 }
 
 function isApiErrorBody(value: unknown): value is ApiErrorBody {

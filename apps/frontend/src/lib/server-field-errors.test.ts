@@ -30,4 +30,26 @@ describe('splitServerErrors', () => {
       formErrors: ['A user with this e-mail exists.'],
     });
   });
+
+  it('puts each listed problem on the field it names, whatever its wording', () => {
+    const error = new ApiError(
+      422,
+      {
+        statusCode: 422,
+        error: 'Unprocessable Entity',
+        message: 'The balance is overdue.',
+        path: '/api/samples/1/readings',
+        requestId: 'r',
+        errors: [
+          { field: 'instrumentIds', message: 'The balance is overdue.' },
+          { field: null, message: 'Lot PO-1 is already accepted.' },
+        ],
+      },
+      '',
+    );
+    expect(splitServerErrors(error, ['instrumentIds', 'massG'] as const)).toEqual({
+      fieldErrors: { instrumentIds: 'The balance is overdue.' },
+      formErrors: ['Lot PO-1 is already accepted.'],
+    });
+  });
 });

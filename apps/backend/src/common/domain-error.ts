@@ -1,0 +1,61 @@
+/** One problem, on the request field it is about when there is one. */
+export interface FieldError {
+  field: string | null;
+  message: string;
+}
+
+/**
+ * What a rule refuses, and why: `invalid` (400: the input cannot be read that way),
+ * `not_found` (404), `conflict` (409: the record's state does not allow it now),
+ * `refused` (422: a business rule says no).
+ */
+export type DomainErrorKind = 'invalid' | 'not_found' | 'conflict' | 'refused';
+
+export const DOMAIN_STATUS: Record<DomainErrorKind, number> = {
+  invalid: 400,
+  not_found: 404,
+  conflict: 409,
+  refused: 422,
+};
+
+/**
+ * The one error domain rules raise: data, not an HTTP exception. The exception filter maps
+ * its kind to a status and its problems to `errors: [{field, message}]`; a caller that
+ * needs the field (the CSV import's column) reads `errors`, never the message text.
+ */
+export class DomainError extends Error {
+  /** The HTTP status its kind answers with. */
+  readonly status: number;
+
+  constructor(
+    readonly kind: DomainErrorKind,
+    readonly errors: readonly FieldError[],
+  ) {
+    super(errors.map((e) => e.message).join(' '));
+    this.name = 'DomainError';
+    this.status = DOMAIN_STATUS[kind];
+  }
+
+  /** A business rule's refusal (422), on `field` when it is about one. */
+  static refused(message: string, field: string | null = null): DomainError {
+    return new DomainError('refused', [{ field, message }]);
+  }
+
+  static conflict(message: string, field: string | null = null): DomainError {
+    return new DomainError('conflict', [{ field, message }]);
+  }
+
+  static notFound(message: string): DomainError {
+    return new DomainError('not_found', [{ field: null, message }]);
+  }
+
+  /** Input that cannot be read (400), one problem per field. */
+  static invalid(errors: readonly FieldError[]): DomainError {
+    return new DomainError('invalid', errors);
+  }
+
+  /** The `message` of the error body: a list for unreadable input, else one sentence. */
+  get bodyMessage(): string | string[] {
+    return this.kind === 'invalid' ? this.errors.map((e) => e.message) : this.message;
+  }
+}
