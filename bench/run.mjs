@@ -178,6 +178,7 @@ try {
         sampleId: target.id,
         instruments: m.readings.instruments,
         out: join(scratch, 'backup.sqlite'),
+        limitS: quick ? 60 : 180,
       });
     });
   } finally {

@@ -96,7 +96,14 @@ export function judge(report, m, { growthLabel }) {
   f(`fault readings import of ${fl.import?.rows ?? 2000} rows`, fl.import?.ms, 'ms', 0);
   f('fault health check p95 during the import', fl.import?.healthP95Ms, 'ms');
   f('fault health check slowest answer during the import', fl.import?.healthMaxMs, 'ms', 0);
-  f('fault backup time under one reading a second', fl.backup?.ms, 'ms', 0);
+  f(
+    fl.backup?.finished === false
+      ? 'fault backup under one reading a second: NOT FINISHED, stopped after'
+      : 'fault backup time under one reading a second',
+    fl.backup?.ms,
+    'ms',
+    0,
+  );
   f('fault readings answered during the backup', fl.backup?.readingsDuring, '', 0);
   f('fault inflating png file', fl.png?.fileKb, 'kB');
   f('fault inflating png answer', fl.png?.status, '(HTTP status)', 0);
