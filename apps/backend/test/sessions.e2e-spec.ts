@@ -217,3 +217,26 @@ describe('sign-in throttle and proxies', () => {
     }
   });
 });
+
+describe('password rules', () => {
+  it('refuses ten spaces, a common password, one repeated character and more than 72 bytes', async () => {
+    const admin = await a.token(DEMO.admin);
+    const tryPassword = (password: string) =>
+      a.http
+        .post('/api/users')
+        .set(bearer(admin))
+        .send({ email: `pw${++n}@shop.example`, name: 'Password Check', role: 'clerk', password });
+    for (const [password, says] of [
+      [' '.repeat(10), 'not counting spaces at either end'],
+      ['  short1  ', 'not counting spaces at either end'],
+      ['Password123', 'too common'],
+      ['aaaaaaaaaaaa', 'too common or too simple'],
+      ['ü'.repeat(40), 'at most 72 bytes'],
+    ] as const) {
+      const res = await tryPassword(password);
+      expect(res.status, password).toBe(400);
+      expect(JSON.stringify(res.body.message)).toContain(says);
+    }
+    expect((await tryPassword('copper-spool-reel-42')).status).toBe(201);
+  });
+});

@@ -1,3 +1,4 @@
+import { IsAcceptablePassword } from '../password-rules';
 import { ApiProperty } from '@nestjs/swagger';
 import { IsEmail, IsIn, IsString, MaxLength, MinLength } from 'class-validator';
 import { ROLES, type Role } from '../../auth/roles';
@@ -19,8 +20,6 @@ export class CreateUserDto {
   readonly role: Role;
 
   @ApiProperty({ minLength: 10 })
-  @IsString()
-  @MinLength(10, { message: 'password must be at least 10 characters' })
-  @MaxLength(200)
+  @IsAcceptablePassword()
   readonly password: string;
 }

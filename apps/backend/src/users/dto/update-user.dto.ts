@@ -1,3 +1,4 @@
+import { IsAcceptablePassword } from '../password-rules';
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsBoolean, IsIn, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
 import { ROLES, type Role } from '../../auth/roles';
@@ -22,8 +23,6 @@ export class UpdateUserDto {
 
   @ApiPropertyOptional({ minLength: 10, description: 'Sets a new password (reset).' })
   @IsOptional()
-  @IsString()
-  @MinLength(10, { message: 'password must be at least 10 characters' })
-  @MaxLength(200)
+  @IsAcceptablePassword()
   readonly password?: string;
 }
