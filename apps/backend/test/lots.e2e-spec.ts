@@ -337,6 +337,17 @@ describe('GET /api/lots/export.csv', () => {
     expect((await call(t, DEMO.clerk, 'get', '/api/lots/export.csv?status=gone')).status).toBe(400);
   });
 
+  it('refuses a bad sort with 400 before streaming, and audits no export', async () => {
+    const em = t.app.get(MikroORM).em.fork();
+    const before = await em.count(AuditEvent, { action: 'lot.export' });
+    for (const sort of ['bogus', 'poNumber:sideways']) {
+      const res = await call(t, DEMO.clerk, 'get', `/api/lots/export.csv?sort=${sort}`);
+      expect(res.status, sort).toBe(400);
+      expect(res.headers['content-type']).toMatch(/json/);
+    }
+    expect(await em.count(AuditEvent, { action: 'lot.export' })).toBe(before);
+  });
+
   it('guards every cell that starts with = + - @ tab or CR', () => {
     expect(['=1+1', '+1', '-2', '@SUM(A1)', '\tx', '\rx'].map(guardCell)).toEqual([
       "'=1+1",

@@ -60,6 +60,9 @@ export function parseSort<F extends string>(
   if (!(allowed as readonly string[]).includes(field)) {
     throw new BadRequestException([`sort field must be one of ${allowed.join(', ')}`]);
   }
+  if (dir !== undefined && dir !== 'asc' && dir !== 'desc') {
+    throw new BadRequestException(['sort direction must be asc or desc']);
+  }
   return [field as F, dir];
 }
 

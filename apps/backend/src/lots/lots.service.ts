@@ -152,6 +152,9 @@ export class LotsService {
    * a row between two pages.
    */
   async exportRows(q: LotFiltersDto, actor: RequestUser): Promise<AsyncGenerator<CsvRow[]>> {
+    // Checked before anything: a bad sort found while streaming cut the file after a 200
+    // (and the export was audited as done).
+    parseSort(q.sort, SORTS, ['receivedAt', 'desc']);
     // Its own EntityManager: the pages are read after the handler has returned, while the
     // response streams, outside the request's context.
     const em = this.em.fork();
