@@ -1,3 +1,4 @@
+import { SupplierPortalModule } from './supplier-portal/supplier-portal.module';
 import {
   DynamicModule,
   Module,
@@ -58,6 +59,7 @@ const DOMAIN_MODULES = [
   ReturnsModule,
   ExportsModule,
   CorrectiveActionsModule,
+  SupplierPortalModule,
 ];
 
 function requestId(req: IncomingMessage): string {

@@ -141,14 +141,30 @@ describe('PATCH /api/corrective-actions/:id', () => {
     });
     expect(responded.status).toBe(200);
     expect(responded.body).toMatchObject({ status: 'responded', respondedAt: expect.any(String) });
-    expect((await patch(car.id, { status: 'reopened' }, await t.token(DEMO.qa))).body.status).toBe(
-      'reopened',
+    expect((await patch(car.id, { status: 'reopened' }, await t.token(DEMO.qa))).status).toBe(422);
+    const reopened = await patch(
+      car.id,
+      { status: 'reopened', comment: 'Show the die check sheet of the last month' },
+      await t.token(DEMO.qa),
     );
+    expect(reopened.body).toMatchObject({
+      status: 'reopened',
+      reopenComment: 'Show the die check sheet of the last month',
+    });
     expect((await patch(car.id, { status: 'closed' })).status).toBe(422);
     expect((await patch(car.id, { status: 'responded' })).body.status).toBe('responded');
-    expect((await patch(car.id, { status: 'verified' }, await t.token(DEMO.qa))).body.status).toBe(
-      'verified',
+    const verified = await patch(
+      car.id,
+      { status: 'verified', verificationNote: 'Die check sheets seen for four weeks' },
+      await t.token(DEMO.qa),
     );
+    expect(verified.body).toMatchObject({
+      status: 'verified',
+      verification: {
+        note: 'Die check sheets seen for four weeks',
+        by: { name: expect.any(String) },
+      },
+    });
     const closed = await patch(car.id, { status: 'closed' });
     expect(closed.body).toMatchObject({ status: 'closed', closedAt: expect.any(String) });
     expect((await patch(car.id, { problem: 'A later change of mind' })).status).toBe(422);

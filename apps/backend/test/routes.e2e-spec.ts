@@ -25,10 +25,17 @@ describe('route declarations', () => {
     );
   });
 
-  it('keeps public routes to sign-in and health', () => {
+  it("keeps public routes to sign-in, health and the supplier's token-checked page", () => {
     const open = listRoutes(t.app)
       .filter((r) => r.isPublic)
       .map((r) => `${r.method} ${r.path}`);
-    expect(open.sort()).toEqual(['GET /api/health', 'POST /api/auth/login']);
+    expect(open.sort()).toEqual([
+      'GET /api/health',
+      'GET /api/supplier-portal/:token',
+      'GET /api/supplier-portal/:token/evidence.pdf',
+      'POST /api/auth/login',
+      'POST /api/supplier-portal/:token/attachments',
+      'POST /api/supplier-portal/:token/response',
+    ]);
   });
 });

@@ -84,14 +84,14 @@ test('purchasing raises a return for a rejected lot, downloads its CSV and e-mai
   assert.ok(rows.every((r) => new RegExp(`^\\d+,${lot.id},${lot.poNumber},`).test(r)));
   assert.equal(rows.filter((r) => r.includes('nonconforming')).length, 2);
 
-  // The e-mail: the e2e server has no SMTP_URL, so the message is stored as logged.
+  // The e-mail goes through the runner's MailDev.
   await page.getByRole('button', { name: 'E-mail supplier' }).click();
   const mail = page.getByRole('dialog');
   assert.match(await mail.getByLabel('To').inputValue(), /@/);
   await mail.getByLabel('Message (optional)').fill('Please send an RMA and collect the spools.');
   await mail.getByRole('button', { name: 'Send' }).click();
   const row = page.getByRole('list', { name: 'Outbound messages' }).getByRole('listitem').first();
-  await row.getByText('Logged, not sent').waitFor();
+  await row.getByText('Sent', { exact: true }).waitFor();
   await row.getByText(/readings\.csv, RTV-\d{4}-\d{4}-evidence\.pdf/).waitFor();
   // E-mailing the draft marked it e-mailed (before its documents were built).
   await page
@@ -127,7 +127,7 @@ test('purchasing raises a return for a rejected lot, downloads its CSV and e-mai
     .first()
     .waitFor();
   await screenshot(page, 'messages');
-  // Dismiss the toasts this test queued (raised, logged, shipped) so none waits for the next.
+  // Dismiss the toasts this test queued (raised, sent, shipped) so none waits for the next.
   const toast = page.locator('.MuiSnackbar-root').getByRole('button', { name: 'Close' });
   while ((await toast.count()) > 0) await toast.first().click();
 

@@ -40,6 +40,20 @@ async function waitForHealth(baseUrl, server, timeoutMs = 60_000) {
   throw new Error(`GET /api/health did not answer 200 within ${timeoutMs / 1000} s`);
 }
 
+async function waitForMailDev(mailUrl, child, timeoutMs = 20_000) {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) throw new Error(`MailDev exited with code ${child.exitCode}`);
+    try {
+      if ((await fetch(`${mailUrl}/api/email`)).ok) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 150));
+  }
+  throw new Error('MailDev did not start');
+}
+
 function stop(child) {
   if (child.exitCode !== null) return Promise.resolve();
   return new Promise((done) => {
@@ -65,6 +79,28 @@ async function main() {
   await mkdir(join(scratch, 'uploads'), { recursive: true });
   await mkdir(screenshotDir, { recursive: true });
 
+  // A real MailDev takes the server's mail; tests read it at MAILDEV_URL (/api/email).
+  const smtpPort = await freePort();
+  const mailWebPort = await freePort();
+  const maildev = spawn(
+    process.execPath,
+    [
+      join(repoRoot, 'node_modules/maildev/dist/bin/maildev.js'),
+      '--smtp',
+      String(smtpPort),
+      '--web',
+      String(mailWebPort),
+      '--ip',
+      '127.0.0.1',
+      '--web-ip',
+      '127.0.0.1',
+      '--silent',
+    ],
+    { stdio: 'ignore' },
+  );
+  const mailUrl = `http://127.0.0.1:${mailWebPort}`;
+  await waitForMailDev(mailUrl, maildev);
+
   const port = await freePort();
   const baseUrl = `http://localhost:${port}`;
   const serverLog = join(scratch, 'server.log');
@@ -79,7 +115,7 @@ async function main() {
       UPLOAD_DIR: join(scratch, 'uploads'),
       SEED_DEMO: 'true',
       JWT_SECRET: 'some-test-secret-for-e2e-only',
-      SMTP_URL: '',
+      SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
@@ -103,6 +139,7 @@ async function main() {
         env: {
           ...process.env,
           BASE_URL: baseUrl,
+          MAILDEV_URL: mailUrl,
           SCREENSHOT_DIR: screenshotDir,
           E2E_SCRATCH: scratch,
         },
@@ -116,6 +153,7 @@ async function main() {
     return 1;
   } finally {
     await stop(server);
+    await stop(maildev);
     log.end();
   }
 }

@@ -28,6 +28,17 @@ export function correctiveActionView(c: CorrectiveAction, today: string) {
     rootCause: c.rootCause,
     correctiveAction: c.correctiveAction,
     respondedAt: c.respondedAt,
+    respondedBy: c.respondedBy,
+    promisedOn: c.promisedOn,
+    reopenComment: c.reopenComment,
+    verification: c.verifiedAt
+      ? {
+          by: c.verifiedBy ? { id: c.verifiedBy.id, name: c.verifiedBy.name } : null,
+          at: c.verifiedAt,
+          note: c.verificationNote,
+          lot: c.verifiedLot ? { id: c.verifiedLot.id, poNumber: c.verifiedLot.poNumber } : null,
+        }
+      : null,
     closedAt: c.closedAt,
     createdBy: { id: c.createdBy.id, name: c.createdBy.name },
     createdAt: c.createdAt,

@@ -1,4 +1,18 @@
-import { Body, Controller, Get, Param, Patch, Post, Query, StreamableFile } from '@nestjs/common';
+import {
+  Body,
+  Controller,
+  Get,
+  HttpCode,
+  Param,
+  Patch,
+  Post,
+  Query,
+  Res,
+  StreamableFile,
+} from '@nestjs/common';
+import type { Response } from 'express';
+import { SendCorrectiveActionDto } from '../supplier-portal/dto/portal.dto';
+import { SupplierPortalService } from '../supplier-portal/supplier-portal.service';
 import { ApiProduces, ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
@@ -14,7 +28,10 @@ import { IdPipe } from '../common/id.pipe';
 @Controller('corrective-actions')
 @Roles('purchasing', 'qa_lead', 'admin')
 export class CorrectiveActionsController {
-  constructor(private readonly cars: CorrectiveActionsService) {}
+  constructor(
+    private readonly cars: CorrectiveActionsService,
+    private readonly portal: SupplierPortalService,
+  ) {}
 
   @Post()
   create(@Body() dto: CreateCorrectiveActionDto, @CurrentUser() actor: RequestUser) {
@@ -43,12 +60,65 @@ export class CorrectiveActionsController {
     return this.cars.get(id);
   }
 
+  /**
+   * A reopen e-mails the comment to the supplier with a new link; when that cannot be sent
+   * (no address) the reopen stands and `mail` says why.
+   */
   @Patch(':id')
-  update(
+  async update(
     @Param('id', IdPipe) id: number,
     @Body() dto: UpdateCorrectiveActionDto,
     @CurrentUser() actor: RequestUser,
   ) {
-    return this.cars.update(id, dto, actor);
+    const before = await this.cars.get(id);
+    const car = await this.cars.update(id, dto, actor);
+    if (car.status !== 'reopened' || before.status === 'reopened') return car;
+    try {
+      const sent = await this.portal.send(
+        id,
+        { message: dto.comment },
+        actor,
+        'We reopened our corrective action request and need more from you',
+      );
+      return { ...car, mail: { status: sent.message.status, to: sent.message.to } };
+    } catch (e) {
+      return { ...car, mail: { status: 'not sent', error: (e as Error).message } };
+    }
+  }
+
+  /** E-mails the supplier a signed link (30 days) to a page where it answers. */
+  @Post(':id/send')
+  send(
+    @Param('id', IdPipe) id: number,
+    @Body() dto: SendCorrectiveActionDto,
+    @CurrentUser() actor: RequestUser,
+  ) {
+    return this.portal.send(id, dto, actor);
+  }
+
+  /** Withdraws every link sent for the request. */
+  @Post(':id/revoke-links')
+  @HttpCode(200)
+  revoke(@Param('id', IdPipe) id: number, @CurrentUser() actor: RequestUser) {
+    return this.portal.revoke(id, actor);
+  }
+
+  @Get(':id/attachments')
+  attachments(@Param('id', IdPipe) id: number) {
+    return this.portal.attachments(id);
+  }
+
+  @Get(':id/attachments/:fileId')
+  async attachment(
+    @Param('id', IdPipe) id: number,
+    @Param('fileId', IdPipe) fileId: number,
+    @Res({ passthrough: true }) res: Response,
+  ) {
+    const { stream, att } = await this.portal.openAttachment(id, fileId);
+    res.setHeader('X-Content-Type-Options', 'nosniff');
+    return new StreamableFile(stream, {
+      type: att.contentType,
+      disposition: `attachment; filename="${att.filename.replace(/[^\x20-\x7e]/g, '_')}"`,
+    });
   }
 }

@@ -21,7 +21,7 @@ import { ListCorrectiveActionsDto } from './dto/list-corrective-actions.dto';
 import { UpdateCorrectiveActionDto } from './dto/update-corrective-action.dto';
 import { CorrectiveAction, type CorrectiveActionStatus } from './entities/corrective-action.entity';
 
-const POPULATE = ['supplier', 'lots', 'createdBy'] as const;
+const POPULATE = ['supplier', 'lots', 'createdBy', 'verifiedBy', 'verifiedLot'] as const;
 const RESPONSE_FIELDS = ['containment', 'rootCause', 'correctiveAction'] as const;
 const today = () => isoDate(new Date());
 
@@ -209,11 +209,46 @@ export class CorrectiveActionsService {
           }
           car.respondedAt = new Date();
         }
+        if (to === 'reopened' && car.status !== 'reopened') {
+          if (!dto.comment?.trim()) {
+            throw new UnprocessableEntityException(
+              `Say what more the supplier must do (comment) before reopening ${car.number}; it is e-mailed to them`,
+            );
+          }
+          car.reopenComment = dto.comment.trim();
+        }
+        if (to === 'verified' && car.status !== 'verified') {
+          if (!dto.verificationNote?.trim() && !dto.verifiedLotId) {
+            throw new UnprocessableEntityException(
+              `Give the evidence that the fix works before verifying ${car.number}: a note (verificationNote) or a later lot that passed (verifiedLotId)`,
+            );
+          }
+          if (dto.verifiedLotId) {
+            const lot = await tx.findOne(Lot, dto.verifiedLotId);
+            const passed = lot?.status === 'accepted';
+            if (
+              !lot ||
+              lot.supplier.id !== car.supplier.id ||
+              !passed ||
+              lot.receivedAt <= car.createdAt
+            ) {
+              throw new UnprocessableEntityException(
+                `Lot ${dto.verifiedLotId} is no evidence: it must be a lot of ${car.supplier.name} received after ${car.number} was raised and accepted`,
+              );
+            }
+            car.verifiedLot = lot;
+          }
+          car.verificationNote = dto.verificationNote?.trim() || null;
+          car.verifiedBy = tx.getReference(User, actor.id);
+          car.verifiedAt = new Date();
+        }
+        if (to === 'responded' && car.status !== 'responded') car.respondedBy = actor.email;
         if (to === 'closed') car.closedAt = new Date();
         car.status = to;
         car.updatedAt = new Date();
         await tx.flush();
         this.record(tx, actor, car, 'corrective_action.update', before);
+        await tx.populate(car, POPULATE);
         return correctiveActionView(car, today());
       });
     } catch (e) {

@@ -15,6 +15,8 @@ import { Product } from '../products/entities/product.entity';
 import { OpenReturnLot } from '../returns/entities/open-return-lot.entity';
 import { VendorReturn } from '../returns/entities/vendor-return.entity';
 import { Supplier } from '../suppliers/entities/supplier.entity';
+import { ScarAttachment } from '../supplier-portal/entities/scar-attachment.entity';
+import { SupplierLink } from '../supplier-portal/entities/supplier-link.entity';
 import { User } from '../users/entities/user.entity';
 
 /** Every entity, in one list, so the migrator and every test see the same schema. */
@@ -35,6 +37,8 @@ export const ENTITIES = [
   VendorReturn,
   OpenReturnLot,
   CorrectiveAction,
+  SupplierLink,
+  ScarAttachment,
   AuditEvent,
   OutboundMessage,
 ];

@@ -13,5 +13,6 @@ import { ReturnsService } from './returns.service';
   imports: [ExportsModule, InspectionModule, MailModule],
   controllers: [ReturnsController],
   providers: [ReturnsService, ReturnEvidence, ReturnDocuments, ReturnMailService],
+  exports: [ReturnDocuments],
 })
 export class ReturnsModule {}

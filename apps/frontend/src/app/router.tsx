@@ -27,6 +27,10 @@ const ProductsRoute = lazyRoute(() => import('@/app/routes/products'), 'Products
 const ReferenceRoute = lazyRoute(() => import('@/app/routes/reference'), 'ReferenceRoute');
 const SuppliersRoute = lazyRoute(() => import('@/app/routes/suppliers'), 'SuppliersRoute');
 const ReturnsRoute = lazyRoute(() => import('@/app/routes/returns'), 'ReturnsRoute');
+const SupplierPortalRoute = lazyRoute(
+  () => import('@/app/routes/supplier-portal'),
+  'SupplierPortalRoute',
+);
 const MessagesRoute = lazyRoute(() => import('@/app/routes/messages'), 'MessagesRoute');
 const ReturnDetailRoute = lazyRoute(
   () => import('@/app/routes/return-detail'),
@@ -197,6 +201,15 @@ export const routes: RouteObject[] = [
     errorElement: <RouteError />,
     children: [
       { path: paths.signIn.path, element: <SignInRoute /> },
+      // The supplier's page needs no account: its link carries a signed token.
+      {
+        path: paths.supplierPortal.path,
+        element: (
+          <WithRouteFallback>
+            <SupplierPortalRoute />
+          </WithRouteFallback>
+        ),
+      },
       {
         element: <RequireAuth />,
         children: [{ path: paths.root.path, element: <AppShell />, children: shellRoutes }],

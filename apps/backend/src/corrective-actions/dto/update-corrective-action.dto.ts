@@ -37,6 +37,26 @@ export class UpdateCorrectiveActionDto {
   @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'dueOn must be a date YYYY-MM-DD' })
   readonly dueOn?: string;
 
+  @ApiPropertyOptional({ description: 'Reopen: what more the supplier must do (e-mailed to it)' })
+  @IsOptional()
+  @IsString()
+  @MinLength(10, { message: 'comment must be at least 10 characters' })
+  @MaxLength(4000, { message: 'comment must be at most 4000 characters' })
+  readonly comment?: string;
+
+  @ApiPropertyOptional({ description: 'Verify: the evidence the fix works' })
+  @IsOptional()
+  @IsString()
+  @MinLength(10, { message: 'verificationNote must be at least 10 characters' })
+  @MaxLength(4000, { message: 'verificationNote must be at most 4000 characters' })
+  readonly verificationNote?: string;
+
+  @ApiPropertyOptional({ description: 'Verify: a later lot of the supplier that passed' })
+  @IsOptional()
+  @IsInt({ message: 'verifiedLotId must be a whole number' })
+  @Min(1, { message: 'verifiedLotId must be a whole number' })
+  readonly verifiedLotId?: number;
+
   @ApiPropertyOptional({ description: "The supplier's containment of suspect stock" })
   @IsOptional()
   @IsString()

@@ -57,6 +57,31 @@ export class CorrectiveAction {
   @Property({ type: 'Date', nullable: true })
   respondedAt: Date | null = null;
 
+  /** When the supplier promises the corrective action is in place (YYYY-MM-DD). */
+  @Property({ type: 'string', length: 10, nullable: true })
+  promisedOn: string | null = null;
+
+  /** `supplier link` when answered through the supplier's page, else the staff e-mail. */
+  @Property({ type: 'string', length: 254, nullable: true })
+  respondedBy: string | null = null;
+
+  /** What purchasing asked for when it reopened the request (e-mailed to the supplier). */
+  @Property({ type: 'text', nullable: true })
+  reopenComment: string | null = null;
+
+  @ManyToOne(() => User, { nullable: true })
+  verifiedBy: User | null = null;
+
+  @Property({ type: 'Date', nullable: true })
+  verifiedAt: Date | null = null;
+
+  /** The evidence of the fix: a note, and/or a later lot of the supplier that passed. */
+  @Property({ type: 'text', nullable: true })
+  verificationNote: string | null = null;
+
+  @ManyToOne(() => Lot, { nullable: true })
+  verifiedLot: Lot | null = null;
+
   @Property({ type: 'Date', nullable: true })
   closedAt: Date | null = null;
 

@@ -20,6 +20,16 @@ export interface CorrectiveAction {
   rootCause: string | null;
   correctiveAction: string | null;
   respondedAt: string | null;
+  /** `supplier link (…)` when the supplier answered on its page, else who recorded it. */
+  respondedBy: string | null;
+  promisedOn: string | null;
+  reopenComment: string | null;
+  verification: {
+    by: { id: number; name: string } | null;
+    at: string;
+    note: string | null;
+    lot: { id: number; poNumber: string } | null;
+  } | null;
   closedAt: string | null;
   createdBy: { id: number; name: string };
   createdAt: string;

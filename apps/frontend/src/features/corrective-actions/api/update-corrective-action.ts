@@ -22,6 +22,10 @@ export interface CorrectiveActionPatch extends Partial<ResponseInput> {
   /** The version the change was made on; the server answers 409 when it moved on. */
   version: number;
   status?: CorrectiveActionStatus;
+  /** Reopen: what more the supplier must do; e-mailed to it. */
+  comment?: string;
+  /** Verify: the evidence that the fix works. */
+  verificationNote?: string;
 }
 
 export const updateCorrectiveAction = ({

@@ -1,5 +1,25 @@
-import { Alert, Button, Card, CardContent, Grid, Link, Stack, Typography } from '@mui/material';
+import MailOutlined from '@mui/icons-material/MailOutlined';
+import {
+  Alert,
+  Button,
+  Card,
+  CardContent,
+  Grid,
+  Link,
+  List,
+  ListItem,
+  ListItemText,
+  Stack,
+  Typography,
+} from '@mui/material';
+import { useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
+import {
+  useRevokeLinks,
+  useScarFiles,
+  useSendToSupplier,
+} from '@/features/corrective-actions/api/supplier-link';
+import { CarStepDialog } from '@/features/corrective-actions/components/car-step-dialog';
 import { paths } from '@/config/paths';
 import { useUpdateCorrectiveAction } from '@/features/corrective-actions/api/update-corrective-action';
 import { CarResponseForm } from '@/features/corrective-actions/components/car-response-form';
@@ -35,6 +55,10 @@ export function CorrectiveActionDetail({
   canRespond: boolean;
 }) {
   const move = useUpdateCorrectiveAction({ inlineErrors: true });
+  const send = useSendToSupplier(car.id);
+  const revoke = useRevokeLinks(car.id);
+  const [dialog, setDialog] = useState<'reopened' | 'verified' | null>(null);
+  const sendable = car.status !== 'verified' && car.status !== 'closed';
   return (
     <Stack spacing={3}>
       <Stack direction="row" spacing={2} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
@@ -97,10 +121,69 @@ export function CorrectiveActionDetail({
               <Answer label="Containment" text={car.containment} />
               <Answer label="Root cause" text={car.rootCause} />
               <Answer label="Corrective action" text={car.correctiveAction} />
+              <Answer label="In place by (promised)" text={car.promisedOn} />
+              {car.respondedAt && (
+                <Answer
+                  label="Answered"
+                  text={`${dateFormat.format(new Date(car.respondedAt))}${car.respondedBy ? ` · ${car.respondedBy}` : ''}`}
+                />
+              )}
+              {car.reopenComment && <Answer label="Last asked for more" text={car.reopenComment} />}
+              {car.verification && (
+                <Answer
+                  label="Verified"
+                  text={`${dateFormat.format(new Date(car.verification.at))} by ${car.verification.by?.name ?? '—'}: ${car.verification.note ?? ''}${car.verification.lot ? ` (lot ${car.verification.lot.id}, PO ${car.verification.lot.poNumber})` : ''}`}
+                />
+              )}
             </Stack>
           )}
         </CardContent>
       </Card>
+      <ScarFiles id={car.id} />
+      {sendable && (
+        <Stack
+          direction="row"
+          spacing={1}
+          sx={{ flexWrap: 'wrap' }}
+          aria-label="The supplier's page"
+        >
+          <Button
+            variant="outlined"
+            startIcon={<MailOutlined />}
+            loading={send.isPending}
+            onClick={() =>
+              send.mutate(undefined, {
+                onSuccess: ({ message }) =>
+                  message.status === 'sent' || message.status === 'queued'
+                    ? toasts.success(`A link to answer went to ${message.to}.`)
+                    : toasts.show(
+                        `The link to ${message.to} is stored but not sent: ${message.error ?? message.status}`,
+                        'warning',
+                      ),
+              })
+            }
+          >
+            E-mail the supplier a link to answer
+          </Button>
+          <Button
+            color="inherit"
+            loading={revoke.isPending}
+            onClick={() =>
+              revoke.mutate(undefined, {
+                onSuccess: ({ revoked }) =>
+                  toasts.success(
+                    revoked ? `${revoked} link(s) withdrawn.` : 'There was no open link.',
+                  ),
+              })
+            }
+          >
+            Withdraw the links
+          </Button>
+        </Stack>
+      )}
+      {(send.isError || revoke.isError) && (
+        <Alert severity="error">{errorMessage(send.error ?? revoke.error)}</Alert>
+      )}
       {statusCommands(car.status).length > 0 && (
         <Stack direction="row" spacing={1} aria-label="Next steps">
           {statusCommands(car.status).map((next) => (
@@ -109,13 +192,17 @@ export function CorrectiveActionDetail({
               variant={next === 'reopened' ? 'outlined' : 'contained'}
               loading={move.isPending && move.variables.patch.status === next}
               onClick={() =>
-                move.mutate(
-                  { id: car.id, patch: { version: car.version, status: next } },
-                  {
-                    onSuccess: (c) =>
-                      toasts.success(`${c.number} is ${carStatusLabels[c.status].toLowerCase()}.`),
-                  },
-                )
+                next === 'reopened' || next === 'verified'
+                  ? setDialog(next)
+                  : move.mutate(
+                      { id: car.id, patch: { version: car.version, status: next } },
+                      {
+                        onSuccess: (c) =>
+                          toasts.success(
+                            `${c.number} is ${carStatusLabels[c.status].toLowerCase()}.`,
+                          ),
+                      },
+                    )
               }
             >
               {commandLabels[next]}
@@ -124,6 +211,36 @@ export function CorrectiveActionDetail({
         </Stack>
       )}
       {move.isError && <Alert severity="error">{errorMessage(move.error)}</Alert>}
+      {dialog && <CarStepDialog car={car} step={dialog} onClose={() => setDialog(null)} />}
     </Stack>
+  );
+}
+
+/** The files the supplier sent with its answer. */
+function ScarFiles({ id }: { id: number }) {
+  const files = useScarFiles(id);
+  if (!files.data?.length) return null;
+  return (
+    <Card>
+      <CardContent>
+        <Typography variant="h4" component="h2" gutterBottom>
+          Files from the supplier
+        </Typography>
+        <List dense disablePadding aria-label="Files from the supplier">
+          {files.data.map((f) => (
+            <ListItem key={f.id} disableGutters>
+              <ListItemText
+                primary={
+                  <Link href={`/api/corrective-actions/${id}/attachments/${f.id}`}>
+                    {f.filename}
+                  </Link>
+                }
+                secondary={`${(f.sizeBytes / 1024).toFixed(0)} KB · ${f.addedBy} · ${dateFormat.format(new Date(f.createdAt))}`}
+              />
+            </ListItem>
+          ))}
+        </List>
+      </CardContent>
+    </Card>
   );
 }

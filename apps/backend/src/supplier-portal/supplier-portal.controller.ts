@@ -1,0 +1,77 @@
+import {
+  Body,
+  Controller,
+  Get,
+  HttpCode,
+  Param,
+  Post,
+  Res,
+  StreamableFile,
+  UploadedFile,
+  UseInterceptors,
+} from '@nestjs/common';
+import { ApiBody, ApiConsumes, ApiProduces, ApiTags } from '@nestjs/swagger';
+import type { Response } from 'express';
+import { Public } from '../auth/decorators';
+import { singleFileInterceptor } from '../storage/single-file.interceptor';
+import { SupplierResponseDto } from './dto/portal.dto';
+import { MAX_ATTACHMENT_BYTES, SupplierPortalService } from './supplier-portal.service';
+
+const AttachmentUpload = singleFileInterceptor(
+  MAX_ATTACHMENT_BYTES,
+  'The file is larger than 10 MB: send a smaller PDF or photo.',
+);
+
+/**
+ * The supplier's page: public because the supplier has no account; every route checks the
+ * token (signature, then the stored hash, expiry and revocation) and shows one request.
+ */
+@ApiTags('supplier-portal')
+@Controller('supplier-portal/:token')
+export class SupplierPortalController {
+  constructor(private readonly portal: SupplierPortalService) {}
+
+  @Get()
+  @Public()
+  view(@Param('token') token: string, @Res({ passthrough: true }) res: Response) {
+    res.setHeader('Cache-Control', 'no-store');
+    res.setHeader('Referrer-Policy', 'no-referrer');
+    return this.portal.view(token);
+  }
+
+  @Post('response')
+  @Public()
+  @HttpCode(200)
+  respond(@Param('token') token: string, @Body() dto: SupplierResponseDto) {
+    return this.portal.respond(token, dto);
+  }
+
+  @Post('attachments')
+  @Public()
+  @UseInterceptors(AttachmentUpload)
+  @ApiConsumes('multipart/form-data')
+  @ApiBody({
+    schema: {
+      type: 'object',
+      required: ['file'],
+      properties: {
+        file: { type: 'string', format: 'binary', description: 'PDF, JPEG, PNG or WebP, ≤ 10 MB' },
+      },
+    },
+  })
+  attach(@Param('token') token: string, @UploadedFile() file: Express.Multer.File | undefined) {
+    return this.portal.attach(token, file);
+  }
+
+  @Get('evidence.pdf')
+  @Public()
+  @ApiProduces('application/pdf')
+  async evidence(@Param('token') token: string, @Res({ passthrough: true }) res: Response) {
+    const { pdf, number } = await this.portal.evidencePdf(token);
+    res.setHeader('Cache-Control', 'no-store');
+    return new StreamableFile(pdf, {
+      type: 'application/pdf',
+      disposition: `inline; filename="${number}-evidence.pdf"`,
+    });
+  }
+}

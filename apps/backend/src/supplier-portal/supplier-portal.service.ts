@@ -1,0 +1,411 @@
+import { createHash, createHmac, randomBytes, randomUUID, timingSafeEqual } from 'node:crypto';
+import {
+  GoneException,
+  Inject,
+  Injectable,
+  NotFoundException,
+  UnprocessableEntityException,
+  UnsupportedMediaTypeException,
+} from '@nestjs/common';
+import { EntityManager, OptimisticLockError } from '@mikro-orm/core';
+import { AuditService } from '../audit/audit.service';
+import type { RequestUser } from '../auth/request-user';
+import { isCalendarDate, isoDate } from '../common/calendar';
+import { APP_CONFIG } from '../config/config.module';
+import type { AppConfig } from '../config/env';
+import { CorrectiveAction } from '../corrective-actions/entities/corrective-action.entity';
+import { MailService } from '../mail/mail.service';
+import type { MessageView } from '../mail/message-view';
+import { sniffImageType } from '../photos/image-header';
+import { VendorReturn } from '../returns/entities/vendor-return.entity';
+import { ReturnDocuments } from '../returns/return-documents';
+import { StorageService } from '../storage/storage.service';
+import { User } from '../users/entities/user.entity';
+import { SendCorrectiveActionDto, SupplierResponseDto } from './dto/portal.dto';
+import { ScarAttachment } from './entities/scar-attachment.entity';
+import { SupplierLink } from './entities/supplier-link.entity';
+
+/** How long a supplier's link works unless revoked (issue 14: 30 days). */
+export const LINK_DAYS = 30;
+/** 10 MB: a scanned 8D report or a few phone photos (common practice, no source). */
+export const MAX_ATTACHMENT_BYTES = 10 * 1024 * 1024;
+/** At most this many files on one request. */
+const MAX_ATTACHMENTS = 20;
+const DAY_MS = 86_400_000;
+const NOT_VALID =
+  'This link is not valid. Check that the whole address from the e-mail was copied, or ask your customer for a new link.';
+
+const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
+
+/** PDF by its "%PDF-" header (ISO 32000-1, 7.5.2), images by their own magic bytes. */
+function sniffAttachment(b: Buffer): string | null {
+  if (b.length >= 5 && b.toString('latin1', 0, 5) === '%PDF-') return 'application/pdf';
+  return sniffImageType(b);
+}
+
+/** A file name safe to show and to put in a header: letters, digits, dot, dash, space. */
+function cleanName(name: string | undefined, type: string): string {
+  const base = (name ?? '')
+    .normalize('NFKC')
+    .replace(/[^\p{L}\p{N}. _-]+/gu, '_')
+    .slice(-120)
+    .trim();
+  const ext = type === 'application/pdf' ? 'pdf' : type.split('/')[1];
+  return base || `attachment.${ext}`;
+}
+
+/**
+ * The supplier's side of a corrective-action request: a signed link e-mailed to the
+ * supplier (`<random>.<HMAC>`, only its SHA-256 stored; 30 days; revocable), the public
+ * page's data, the answer and the attachments. The page shows that one request and
+ * nothing else: no internal ids, notes, other lots or other suppliers.
+ */
+@Injectable()
+export class SupplierPortalService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly audit: AuditService,
+    private readonly mail: MailService,
+    private readonly storage: StorageService,
+    private readonly documents: ReturnDocuments,
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
+  ) {}
+
+  private sign(random: string): string {
+    return createHmac('sha256', this.config.jwtSecret)
+      .update(`supplier-link:${random}`)
+      .digest('base64url');
+  }
+
+  /** E-mails the supplier a new link to answer the request (also after a reopen). */
+  async send(
+    id: number,
+    dto: SendCorrectiveActionDto,
+    actor: RequestUser,
+    opening = 'We ask you for a corrective action',
+  ): Promise<{ message: MessageView; link: { id: number; expiresAt: Date } }> {
+    const em = this.em.fork();
+    const car = await em.findOne(CorrectiveAction, id, { populate: ['supplier', 'lots'] });
+    if (!car) throw new NotFoundException(`There is no corrective action ${id}`);
+    if (car.status === 'verified' || car.status === 'closed') {
+      throw new UnprocessableEntityException(
+        `${car.number} is ${car.status}: there is nothing left for the supplier to answer`,
+      );
+    }
+    const to = dto.to ?? car.supplier.contactEmail;
+    if (!to) {
+      throw new UnprocessableEntityException(
+        `${car.supplier.name} has no contact e-mail: add one to the supplier or give an address`,
+      );
+    }
+    const random = randomBytes(24).toString('base64url');
+    const token = `${random}.${this.sign(random)}`;
+    const link = em.create(SupplierLink, {
+      tokenHash: sha256(token),
+      correctiveAction: car,
+      sentTo: to,
+      expiresAt: new Date(Date.now() + LINK_DAYS * DAY_MS),
+      createdBy: em.getReference(User, actor.id),
+    });
+    await em.flush();
+    const url = `${this.config.publicUrl}/supplier/${token}`;
+    const lots = car.lots
+      .getItems()
+      .map((l) => `PO ${l.poNumber}${l.supplierLotCode ? ` (your lot ${l.supplierLotCode})` : ''}`)
+      .join(', ');
+    const body = [
+      dto.message?.trim(),
+      `${opening}: ${car.number}.`,
+      `What we found: ${car.problem}`,
+      lots ? `Deliveries concerned: ${lots}.` : null,
+      `Please answer by ${car.dueOn} with your containment, root cause, corrective action and the date it will be in place, on this page (no account needed; the link works until ${isoDate(link.expiresAt)}):`,
+      url,
+    ]
+      .filter(Boolean)
+      .join('\n\n');
+    const message = await this.mail.send(
+      {
+        to,
+        subject: `${car.number}: corrective action requested`,
+        body,
+        attachments: [],
+        relatedType: 'corrective_action',
+        relatedId: car.id,
+      },
+      actor,
+    );
+    this.audit.record(em, actor, {
+      action: 'corrective_action.send',
+      entityType: 'corrective_action',
+      entityId: car.id,
+      after: {
+        number: car.number,
+        to,
+        linkId: link.id,
+        expiresAt: link.expiresAt,
+        messageId: message.id,
+      },
+    });
+    await em.flush();
+    return { message, link: { id: link.id, expiresAt: link.expiresAt } };
+  }
+
+  /** Withdraws every link of the request: they answer 410 from now on. */
+  async revoke(id: number, actor: RequestUser): Promise<{ revoked: number }> {
+    const em = this.em.fork();
+    const car = await em.findOne(CorrectiveAction, id);
+    if (!car) throw new NotFoundException(`There is no corrective action ${id}`);
+    const revoked = await em.nativeUpdate(
+      SupplierLink,
+      { correctiveAction: id, revokedAt: null },
+      { revokedAt: new Date() },
+    );
+    this.audit.record(em, actor, {
+      action: 'corrective_action.revoke_links',
+      entityType: 'corrective_action',
+      entityId: id,
+      after: { number: car.number, revoked },
+    });
+    await em.flush();
+    return { revoked };
+  }
+
+  /** The link behind a token: 404 for anything not ours, 410 once expired or revoked. */
+  private async resolve(em: EntityManager, token: string): Promise<SupplierLink> {
+    const [random, signature, extra] = token.split('.');
+    const expected = random ? Buffer.from(this.sign(random)) : null;
+    const given = Buffer.from(signature ?? '');
+    if (
+      extra !== undefined ||
+      !expected ||
+      expected.length !== given.length ||
+      !timingSafeEqual(expected, given)
+    ) {
+      throw new NotFoundException(NOT_VALID);
+    }
+    const link = await em.findOne(
+      SupplierLink,
+      { tokenHash: sha256(token) },
+      { populate: ['correctiveAction', 'correctiveAction.supplier', 'correctiveAction.lots'] },
+    );
+    if (!link) throw new NotFoundException(NOT_VALID);
+    if (link.revokedAt) {
+      throw new GoneException(
+        'This link was withdrawn by your customer. Use the newest link you received, or ask for a new one.',
+      );
+    }
+    if (link.expiresAt.getTime() < Date.now()) {
+      throw new GoneException(
+        `This link expired on ${isoDate(link.expiresAt)}. Ask your customer for a new one.`,
+      );
+    }
+    return link;
+  }
+
+  /** What the supplier's page shows: this one request, nothing else. */
+  async view(token: string) {
+    const em = this.em.fork();
+    const link = await this.resolve(em, token);
+    link.lastOpenedAt = new Date();
+    await em.flush();
+    return this.viewOf(em, link);
+  }
+
+  private async viewOf(em: EntityManager, link: SupplierLink) {
+    const car = link.correctiveAction;
+    const attachments = await em.find(
+      ScarAttachment,
+      { correctiveAction: car.id },
+      { orderBy: { id: 'asc' } },
+    );
+    const evidence = await this.evidenceReturn(em, car);
+    return {
+      number: car.number,
+      status: car.status,
+      supplier: { name: car.supplier.name },
+      problem: car.problem,
+      dueOn: car.dueOn,
+      lots: car.lots
+        .getItems()
+        .sort((a, b) => a.id - b.id)
+        .map((l) => ({
+          poNumber: l.poNumber,
+          packingSlip: l.packingSlip,
+          supplierLotCode: l.supplierLotCode,
+          receivedOn: isoDate(l.receivedAt),
+          quantity: l.quantity,
+          unit: l.unit,
+        })),
+      reopenComment: car.status === 'reopened' ? car.reopenComment : null,
+      answer: {
+        containment: car.containment,
+        rootCause: car.rootCause,
+        correctiveAction: car.correctiveAction,
+        promisedOn: car.promisedOn,
+        respondedAt: car.respondedAt,
+      },
+      canAnswer: car.status === 'open' || car.status === 'reopened',
+      attachments: attachments.map((a) => ({
+        filename: a.filename,
+        contentType: a.contentType,
+        sizeBytes: a.sizeBytes,
+        addedAt: a.createdAt,
+      })),
+      evidencePack: evidence ? { number: evidence.number } : null,
+      linkExpiresAt: link.expiresAt,
+    };
+  }
+
+  /** The latest return (not cancelled) of the request's lots, whose evidence pack the page offers. */
+  private async evidenceReturn(em: EntityManager, car: CorrectiveAction) {
+    const lotIds = car.lots.getItems().map((l) => l.id);
+    if (!lotIds.length) return null;
+    return em.findOne(
+      VendorReturn,
+      {
+        supplier: car.supplier.id,
+        lots: { id: { $in: lotIds } },
+        status: { $nin: ['cancelled', 'draft'] },
+      },
+      { orderBy: { id: 'desc' } },
+    );
+  }
+
+  async evidencePdf(token: string): Promise<{ pdf: Buffer; number: string }> {
+    const em = this.em.fork();
+    const link = await this.resolve(em, token);
+    const ret = await this.evidenceReturn(em, link.correctiveAction);
+    if (!ret) throw new NotFoundException('There is no evidence pack for this request yet');
+    await em.populate(ret, ['supplier', 'lots', 'createdBy']);
+    return { pdf: await this.documents.pdf(ret), number: ret.number };
+  }
+
+  async respond(token: string, dto: SupplierResponseDto) {
+    if (!isCalendarDate(dto.promisedOn)) {
+      throw new UnprocessableEntityException({
+        message: 'promisedOn must be a real date YYYY-MM-DD',
+        errors: [{ field: 'promisedOn', message: 'must be a real date YYYY-MM-DD' }],
+      });
+    }
+    try {
+      return await this.em.fork().transactional(async (tx) => {
+        const link = await this.resolve(tx, token);
+        const car = link.correctiveAction;
+        if (car.status !== 'open' && car.status !== 'reopened') {
+          throw new UnprocessableEntityException(
+            `${car.number} is already answered (${car.status}); your customer will reopen it if they need more`,
+          );
+        }
+        const before = { status: car.status, version: car.version };
+        car.containment = dto.containment.trim();
+        car.rootCause = dto.rootCause.trim();
+        car.correctiveAction = dto.correctiveAction.trim();
+        car.promisedOn = dto.promisedOn;
+        car.status = 'responded';
+        car.respondedAt = new Date();
+        car.respondedBy = `supplier link (${link.sentTo})`;
+        car.updatedAt = new Date();
+        await tx.flush();
+        const lotIds = car.lots.getItems().map((l) => l.id);
+        for (const lotId of lotIds.length ? lotIds : [null]) {
+          this.audit.record(tx, null, {
+            action: 'corrective_action.respond',
+            entityType: 'corrective_action',
+            entityId: car.id,
+            lotId,
+            before,
+            after: {
+              number: car.number,
+              status: car.status,
+              via: 'supplier link',
+              sentTo: link.sentTo,
+              linkId: link.id,
+              promisedOn: car.promisedOn,
+            },
+          });
+        }
+        await tx.flush();
+        return this.viewOf(tx, link);
+      });
+    } catch (e) {
+      if (e instanceof OptimisticLockError) {
+        throw new UnprocessableEntityException(
+          'Your customer changed this request while you answered; reload the page and answer again',
+        );
+      }
+      throw e;
+    }
+  }
+
+  async attach(token: string, file: Express.Multer.File | undefined) {
+    if (!file) throw new UnprocessableEntityException('Choose a file to send (PDF or image)');
+    const type = sniffAttachment(file.buffer);
+    if (!type) {
+      throw new UnsupportedMediaTypeException(
+        'Send a PDF or an image (JPEG, PNG or WebP); this file is neither, whatever its name says',
+      );
+    }
+    const em = this.em.fork();
+    const link = await this.resolve(em, token);
+    const car = link.correctiveAction;
+    if (car.status === 'verified' || car.status === 'closed') {
+      throw new UnprocessableEntityException(
+        `${car.number} is ${car.status}; it takes no more files`,
+      );
+    }
+    if ((await em.count(ScarAttachment, { correctiveAction: car.id })) >= MAX_ATTACHMENTS) {
+      throw new UnprocessableEntityException(
+        `${car.number} holds ${MAX_ATTACHMENTS} files already; put the rest into one PDF`,
+      );
+    }
+    const key = `scar/${car.id}/${randomUUID()}`;
+    await this.storage.put(key, file.buffer);
+    const att = em.create(ScarAttachment, {
+      correctiveAction: car,
+      filename: cleanName(file.originalname, type),
+      contentType: type,
+      sizeBytes: file.size,
+      storageKey: key,
+      addedBy: 'supplier',
+    });
+    this.audit.record(em, null, {
+      action: 'corrective_action.attach',
+      entityType: 'corrective_action',
+      entityId: car.id,
+      after: {
+        number: car.number,
+        filename: att.filename,
+        via: 'supplier link',
+        sentTo: link.sentTo,
+      },
+    });
+    await em.flush();
+    return {
+      filename: att.filename,
+      contentType: type,
+      sizeBytes: att.sizeBytes,
+      addedAt: att.createdAt,
+    };
+  }
+
+  /** Staff: the files of a request, and one file's bytes. */
+  async attachments(carId: number) {
+    const rows = await this.em
+      .fork()
+      .find(ScarAttachment, { correctiveAction: carId }, { orderBy: { id: 'asc' } });
+    return rows.map((a) => ({
+      id: a.id,
+      filename: a.filename,
+      contentType: a.contentType,
+      sizeBytes: a.sizeBytes,
+      addedBy: a.addedBy,
+      createdAt: a.createdAt,
+    }));
+  }
+
+  async openAttachment(carId: number, id: number) {
+    const att = await this.em.fork().findOne(ScarAttachment, { id, correctiveAction: carId });
+    if (!att) throw new NotFoundException(`There is no file ${id} on this request`);
+    return { stream: await this.storage.get(att.storageKey), att };
+  }
+}

@@ -1,0 +1,15 @@
+import { useParams } from 'react-router-dom';
+import {
+  SupplierPortalFrame,
+  SupplierPortalPage,
+} from '@/features/supplier-portal/components/supplier-portal-page';
+
+/** /supplier/:token, public: the supplier answers a corrective-action request. */
+export function SupplierPortalRoute() {
+  const token = useParams().token ?? '';
+  return (
+    <SupplierPortalFrame>
+      <SupplierPortalPage token={token} />
+    </SupplierPortalFrame>
+  );
+}

@@ -1,0 +1,101 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { ApiError, api, isApiError } from '@/lib/api-client';
+
+/** What GET /api/supplier-portal/:token shows: one request, nothing internal. */
+export interface PortalRequest {
+  number: string;
+  status: 'open' | 'responded' | 'verified' | 'reopened' | 'closed';
+  supplier: { name: string };
+  problem: string;
+  dueOn: string;
+  lots: {
+    poNumber: string;
+    packingSlip: string | null;
+    supplierLotCode: string | null;
+    receivedOn: string;
+    quantity: number;
+    unit: string;
+  }[];
+  reopenComment: string | null;
+  answer: {
+    containment: string | null;
+    rootCause: string | null;
+    correctiveAction: string | null;
+    promisedOn: string | null;
+    respondedAt: string | null;
+  };
+  canAnswer: boolean;
+  attachments: { filename: string; contentType: string; sizeBytes: number; addedAt: string }[];
+  evidencePack: { number: string } | null;
+  linkExpiresAt: string;
+}
+
+const path = (token: string, rest = '') => `/supplier-portal/${encodeURIComponent(token)}${rest}`;
+const key = (token: string) => ['supplier-portal', token] as const;
+
+export const usePortalRequest = (token: string) =>
+  useQuery({
+    queryKey: key(token),
+    queryFn: ({ signal }) => api.get<PortalRequest>(path(token), signal),
+    retry: (count, error) => !(isApiError(error) && error.status < 500) && count < 2,
+    meta: { inlineErrors: true },
+  });
+
+const answer = (what: string) =>
+  z
+    .string()
+    .trim()
+    .min(10, `Describe the ${what} in at least 10 characters.`)
+    .max(4000, 'At most 4000 characters.');
+
+/** The same rules as the server (SupplierResponseDto). */
+export const answerSchema = z.object({
+  containment: answer('containment'),
+  rootCause: answer('root cause'),
+  correctiveAction: answer('corrective action'),
+  promisedOn: z
+    .string()
+    .regex(/^\d{4}-\d{2}-\d{2}$/, 'Pick the date the fix will be in place.')
+    .refine((d) => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)), 'Pick a real date.'),
+});
+export type AnswerInput = z.infer<typeof answerSchema>;
+
+export function useSendAnswer(token: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (input: AnswerInput) => api.post<PortalRequest>(path(token, '/response'), input),
+    meta: { inlineErrors: true },
+    onSuccess: (data) => client.setQueryData(key(token), data),
+  });
+}
+
+/** 10 MB, as the server (supplier-portal.service.ts MAX_ATTACHMENT_BYTES). */
+export const MAX_FILE_BYTES = 10 * 1024 * 1024;
+
+export function useUploadFile(token: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: async (file: File) => {
+      const form = new FormData();
+      form.append('file', file);
+      const res = await fetch(`/api${path(token, '/attachments')}`, {
+        method: 'POST',
+        body: form,
+      });
+      const body = (await res.json().catch(() => null)) as Record<string, unknown> | null;
+      if (!res.ok) {
+        throw new ApiError(
+          res.status,
+          body && typeof body.statusCode === 'number'
+            ? (body as unknown as ConstructorParameters<typeof ApiError>[1])
+            : null,
+          res.statusText,
+        );
+      }
+      return body;
+    },
+    meta: { inlineErrors: true },
+    onSettled: () => client.invalidateQueries({ queryKey: key(token) }),
+  });
+}
