@@ -177,6 +177,17 @@ test('purchasing raises a corrective action request for the supplier and records
   await page.mouse.move(640, 10);
   await page.locator('.MuiSnackbar-root').waitFor({ state: 'detached', timeout: 15_000 });
   await page.getByRole('button', { name: 'Verify the response' }).click();
+  // Verifying needs evidence; who and when are recorded.
+  const verify = page.getByRole('dialog');
+  await verify.getByRole('button', { name: 'Verify' }).click();
+  await verify.getByText('Write at least 10 characters.').waitFor();
+  await verify
+    .getByLabel('Evidence that the fix works')
+    .fill('The next two deliveries measured full 4 AWG copper.');
+  await verify.getByRole('button', { name: 'Verify' }).click();
+  await page
+    .getByText(/by Priya Marchetti: The next two deliveries measured full 4 AWG copper\./)
+    .waitFor();
   await page.getByRole('button', { name: 'Close' }).filter({ hasText: 'Close' }).waitFor();
   await page.getByRole('link', { name: 'All corrective actions' }).click();
   await page
