@@ -90,7 +90,8 @@ describe('void', () => {
     const lotId = await createLot(t, spool);
     const bad = await reading(lotId, spool.conductorIds[0], 1, 76.1);
     expect((await detail(lotId)).evaluation.nonconforming).toBe(1);
-    expect((await voidIt(bad.id, DEMO.clerk)).status).toBe(403);
+    // The clerk who took it could void it too (issue 15, bench-writes.e2e-spec.ts); the
+    // QA lead voids it here.
     expect((await voidIt(bad.id, DEMO.buyer)).status).toBe(403);
     const short = await voidIt(bad.id, DEMO.qa, '  typo    ');
     expect(short.status).toBe(400);

@@ -2,6 +2,7 @@ import { AuditEvent } from '../audit/entities/audit-event.entity';
 import { CorrectiveAction } from '../corrective-actions/entities/corrective-action.entity';
 import { Decision } from '../decisions/entities/decision.entity';
 import { Nonconformance } from '../decisions/entities/nonconformance.entity';
+import { ClientKey } from '../inspection/entities/client-key.entity';
 import { Reading } from '../inspection/entities/reading.entity';
 import { ReadingImport } from '../inspection/entities/reading-import.entity';
 import { Sample } from '../inspection/entities/sample.entity';
@@ -41,4 +42,5 @@ export const ENTITIES = [
   ScarAttachment,
   AuditEvent,
   OutboundMessage,
+  ClientKey,
 ];

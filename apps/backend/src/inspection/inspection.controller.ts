@@ -39,7 +39,8 @@ export class InspectionController {
 
   @Post('readings/:id/void')
   @HttpCode(200)
-  @Roles('qa_lead', 'admin')
+  // A clerk only their own reading, before the lot is decided (ReadingsService.void).
+  @Roles('clerk', 'qa_lead', 'admin')
   voidReading(
     @Param('id', IdPipe) id: number,
     @Body() dto: VoidReadingDto,

@@ -16,6 +16,7 @@ import { assertLotOpen, evidenceOf, nextStatus, statusChange } from './lot-statu
 import { computeReading, type ComputedReading, type ReadingInputs } from './reading-compute';
 import { auditShape, outcomeOf } from './reading-rules';
 import { readingFactsView } from './views';
+import { keepClientKey } from './client-id';
 import { GroupCommit } from '../common/group-commit';
 import { plainSql } from '../common/plain-sql';
 
@@ -26,6 +27,8 @@ export interface NewReading {
   /** The method's inputs only (see `methodInputs`). */
   inputs: ReadingInputs;
   instrumentIds: readonly number[];
+  /** The client's UUID for this reading (bench mode), kept in client_keys (client-id.ts). */
+  clientId?: string | null;
 }
 
 export interface WriteOptions {
@@ -298,6 +301,8 @@ export class ReadingWriter {
         'all',
       );
       r.id = id;
+      const clientId = r.entry === undefined ? null : entries[r.entry]?.clientId;
+      if (clientId) await keepClientKey(em, clientId, 'reading', id, at);
       events.push({
         action: 'reading.create',
         entityType: 'reading',

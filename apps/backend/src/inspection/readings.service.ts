@@ -1,4 +1,13 @@
-import { Injectable } from '@nestjs/common';
+import {
+  ConflictException,
+  ForbiddenException,
+  Injectable,
+  UnprocessableEntityException,
+} from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/core';
+import { earlierRecord } from './client-id';
+import { Reading } from './entities/reading.entity';
+import { readingView } from './views';
 import { DomainError } from '../common/domain-error';
 import type { RequestUser } from '../auth/request-user';
 import { CreateReadingDto, INPUT_FIELDS, METHOD_FIELDS } from './dto/create-reading.dto';
@@ -24,9 +33,15 @@ export function methodInputs(dto: CreateReadingDto): ReadingInputs {
 }
 
 /** The clerk's form and QA's void, through the one reading write path (ReadingWriter). */
+/** Lot statuses before a decision: a clerk may still correct their own readings. */
+const OPEN_STATUSES: readonly string[] = ['on_hold', 'inspecting', 'awaiting_decision'];
+
 @Injectable()
 export class ReadingsService {
-  constructor(private readonly writer: ReadingWriter) {}
+  constructor(
+    private readonly writer: ReadingWriter,
+    private readonly em: EntityManager,
+  ) {}
 
   async create(sampleId: number, dto: CreateReadingDto, actor: RequestUser) {
     const entry = {
@@ -34,16 +49,62 @@ export class ReadingsService {
       method: dto.method,
       inputs: methodInputs(dto),
       instrumentIds: dto.instrumentIds,
+      clientId: dto.clientId ?? null,
     };
+    if (dto.clientId) {
+      const earlier = await this.byClientId(dto.clientId, sampleId);
+      if (earlier) return earlier;
+    }
     try {
       const [view] = await this.writer.write([entry], actor);
       return view;
     } catch (e) {
-      throw e instanceof ReadingsRefused ? e.refusals[0].error : e;
+      const error = e instanceof ReadingsRefused ? e.refusals[0].error : e;
+      // The same client id raced in on another connection (its row refused ours, or its
+      // sample took the unit first): answer with its reading.
+      const earlier = dto.clientId ? await this.byClientId(dto.clientId, sampleId) : null;
+      if (earlier) return earlier;
+      throw error;
     }
   }
 
-  void(id: number, dto: VoidReadingDto, actor: RequestUser) {
+  /** The reading a client id already made, on this sample; 409 when it made one elsewhere. */
+  private async byClientId(clientId: string, sampleId: number) {
+    const em = this.em.fork();
+    const id = await earlierRecord(em, clientId, 'reading');
+    if (id === null) return null;
+    const reading = await em.findOneOrFail(
+      Reading,
+      { id },
+      { populate: ['sample', 'takenBy', 'voidedBy'] },
+    );
+    if (reading.sample.id !== sampleId) {
+      throw new ConflictException(
+        `clientId ${clientId} was already used for a reading of sample ${reading.sample.id}; make a new id for a new reading.`,
+      );
+    }
+    return readingView(reading);
+  }
+
+  async void(id: number, dto: VoidReadingDto, actor: RequestUser) {
+    if (actor.role === 'clerk') {
+      // A clerk corrects their own slip while the lot is undecided; the QA lead and the
+      // admin may void any reading.
+      const reading = await this.em
+        .fork()
+        .findOne(Reading, { id }, { populate: ['sample.lot', 'takenBy'] });
+      if (reading && reading.takenBy?.id !== actor.id) {
+        throw new ForbiddenException(
+          'A receiving clerk may void only readings they took; ask a QA lead to void this one.',
+        );
+      }
+      const lot = reading?.sample.lot;
+      if (lot && !OPEN_STATUSES.includes(lot.status)) {
+        throw new UnprocessableEntityException(
+          `Lot ${lot.poNumber} is already ${lot.status.replace(/_/g, ' ')}: after the decision only a QA lead can void its readings.`,
+        );
+      }
+    }
     return this.writer.void(id, dto.reason, actor);
   }
 }

@@ -1,4 +1,4 @@
-import { Injectable } from '@nestjs/common';
+import { ConflictException, Injectable } from '@nestjs/common';
 import { DomainError } from '../common/domain-error';
 import { EntityManager } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
@@ -8,6 +8,7 @@ import type { ConductorSpec } from '../products/entities/conductor-spec.entity';
 import { User } from '../users/entities/user.entity';
 import { CreateSampleDto } from './dto/create-sample.dto';
 import { Sample } from './entities/sample.entity';
+import { earlierRecord, keepClientKey } from './client-id';
 import { assertLotOpen } from './lot-status';
 import { sampleView } from './views';
 
@@ -24,11 +25,53 @@ export class SamplesService {
   ) {}
 
   async create(lotId: number, dto: CreateSampleDto, actor: RequestUser) {
+    if (dto.clientId) {
+      const earlier = await this.byClientId(dto.clientId, lotId);
+      if (earlier) return earlier;
+    }
+    try {
+      return await this.createNew(lotId, dto, actor);
+    } catch (error) {
+      // The same client id raced in on another connection (its row refused ours, or its
+      // sample took the unit first): answer with its sample.
+      const earlier = dto.clientId ? await this.byClientId(dto.clientId, lotId) : null;
+      if (earlier) return earlier;
+      throw error;
+    }
+  }
+
+  /** The sample a client id already made, in this lot; 409 when it made one elsewhere. */
+  private async byClientId(clientId: string, lotId: number) {
+    const em = this.em.fork();
+    const id = await earlierRecord(em, clientId, 'sample');
+    if (id === null) return null;
+    const sample = await em.findOneOrFail(
+      Sample,
+      { id },
+      { populate: ['lot', 'createdBy', 'readings.takenBy', 'readings.voidedBy'] },
+    );
+    if (sample.lot.id !== lotId) {
+      throw new ConflictException(
+        `clientId ${clientId} was already used for a sample of lot ${sample.lot.id}; make a new id for a new sample.`,
+      );
+    }
+    return sampleView(sample);
+  }
+
+  private async createNew(lotId: number, dto: CreateSampleDto, actor: RequestUser) {
     return this.em.transactional(async (tx) => {
       const lot = await tx.findOneOrFail(Lot, { id: lotId }, { populate: ['product.conductors'] });
       assertLotOpen(lot);
       const conductor = this.conductorOf(lot, dto.conductorId);
-      const sample = await this.createIn(tx, lot, conductor, dto.seq, dto.unitRef ?? null, actor);
+      const sample = await this.createIn(
+        tx,
+        lot,
+        conductor,
+        dto.seq,
+        dto.unitRef ?? null,
+        actor,
+        dto.clientId ?? null,
+      );
       lot.updatedAt = new Date();
       await tx.flush();
       return sampleView(sample);
@@ -64,12 +107,14 @@ export class SamplesService {
     seq: number | undefined,
     unitRef: string | null,
     actor: RequestUser,
+    clientId: string | null = null,
   ): Promise<Sample> {
     const taken = new Set(
       (await em.find(Sample, { lot, conductor }, { fields: ['seq'] })).map((s) => s.seq),
     );
     const unit = unitFor(lot, conductor, seq, taken);
     const [sample] = await this.add(em, lot, [{ conductor, seq: unit, unitRef }], actor);
+    if (clientId) await keepClientKey(em, clientId, 'sample', sample.id);
     return sample;
   }
 

@@ -6,6 +6,7 @@ import { Migration20261203101920 } from './postgresql/Migration20261203101920';
 import { Migration20261203105417 } from './postgresql/Migration20261203105417';
 import { Migration20261203113010 } from './postgresql/Migration20261203113010';
 import { Migration20261203114950 } from './postgresql/Migration20261203114950';
+import { Migration20261203120010 } from './postgresql/Migration20261203120010';
 import { Migration20261201224334 } from './sqlite/Migration20261201224334';
 import { Migration20261202001630 } from './sqlite/Migration20261202001630';
 import { Migration20261202004800 } from './sqlite/Migration20261202004800';
@@ -15,6 +16,7 @@ import { Migration20261203113000 } from './sqlite/Migration20261203113000';
 import { Migration20261203114510 } from './postgresql/Migration20261203114510';
 import { Migration20261203114500 } from './sqlite/Migration20261203114500';
 import { Migration20261203115000 } from './sqlite/Migration20261203115000';
+import { Migration20261203120000 } from './sqlite/Migration20261203120000';
 
 /**
  * Migrations per driver, in order, each driver in its own folder; listed in code so the
@@ -30,6 +32,7 @@ export const SQLITE_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203113000', class: Migration20261203113000 },
   { name: 'Migration20261203114500', class: Migration20261203114500 },
   { name: 'Migration20261203115000', class: Migration20261203115000 },
+  { name: 'Migration20261203120000', class: Migration20261203120000 },
 ];
 
 export const POSTGRES_MIGRATIONS: MigrationObject[] = [
@@ -41,4 +44,5 @@ export const POSTGRES_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203113010', class: Migration20261203113010 },
   { name: 'Migration20261203114510', class: Migration20261203114510 },
   { name: 'Migration20261203114950', class: Migration20261203114950 },
+  { name: 'Migration20261203120010', class: Migration20261203120010 },
 ];

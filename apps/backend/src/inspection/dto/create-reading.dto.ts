@@ -8,6 +8,7 @@ import {
   IsNumber,
   IsOptional,
   IsPositive,
+  IsUUID,
   Max,
   Min,
   ValidateIf,
@@ -113,4 +114,12 @@ export class CreateReadingDto {
   @ArrayMaxSize(6, { message: 'instrumentIds must name at most 6 instruments' })
   @IsInt({ each: true, message: 'instrumentIds must hold whole-number instrument ids' })
   readonly instrumentIds: number[];
+
+  @ApiPropertyOptional({
+    description: 'A UUID the client made; a repeat is answered with the reading it made first',
+    example: '9b2f6a52-0c3e-4e1f-9a57-2f1d3c4b5a69',
+  })
+  @IsOptional()
+  @IsUUID('all', { message: 'clientId must be a UUID' })
+  readonly clientId?: string;
 }

@@ -1,0 +1,44 @@
+import { ConflictException } from '@nestjs/common';
+import type { EntityManager } from '@mikro-orm/core';
+import { plainSql } from '../common/plain-sql';
+import type { ClientKeyKind } from './entities/client-key.entity';
+
+/**
+ * The id of the record `clientId` made earlier, or null; 409 when it made another kind of
+ * record. A request that fails (a racing twin's row refused ours by the primary key, or its
+ * sample took the unit first) asks again here and answers with the twin's record.
+ */
+export async function earlierRecord(
+  em: EntityManager,
+  clientId: string,
+  kind: ClientKeyKind,
+): Promise<number | null> {
+  const [row] = await plainSql<{ kind: string; recordId: number }[]>(
+    em,
+    'select kind, record_id as "recordId" from client_keys where client_id = ?',
+    [clientId],
+  );
+  if (!row) return null;
+  if (row.kind !== kind) {
+    throw new ConflictException(
+      `clientId ${clientId} was already used for a ${row.kind}; make a new id for a new ${kind}.`,
+    );
+  }
+  return Number(row.recordId);
+}
+
+/** Keeps the client's id with the record it made, in the caller's transaction. */
+export async function keepClientKey(
+  em: EntityManager,
+  clientId: string,
+  kind: ClientKeyKind,
+  recordId: number,
+  at: Date = new Date(),
+): Promise<void> {
+  await plainSql(
+    em,
+    'insert into client_keys (client_id, kind, record_id, created_at) values (?, ?, ?, ?)',
+    [clientId, kind, recordId, at],
+    'run',
+  );
+}
