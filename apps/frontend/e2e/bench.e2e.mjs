@@ -37,6 +37,7 @@ let browser;
 let page;
 let lot;
 let serialLot;
+let offlineLot;
 let admin;
 before(async () => {
   // S-3 at AQL 15 on 50 spools is code letter B: 3 units, accept 1, reject 2
@@ -66,6 +67,12 @@ before(async () => {
   serialLot = await admin('POST', '/lots', {
     productId: product.id,
     poNumber: `PO-SERIAL-${STAMP}`,
+    quantity: 50,
+    unit: 'spools',
+  });
+  offlineLot = await admin('POST', '/lots', {
+    productId: product.id,
+    poNumber: `PO-OFFLINE-${STAMP}`,
     quantity: 50,
     unit: 'spools',
   });
@@ -204,4 +211,97 @@ test('a balance on a (fake) serial port fills the mass once it settles', async (
     reading.instruments.some((i) => i.kind === 'balance'),
     'the balance is kept',
   );
+});
+
+test('readings taken offline are kept, survive a reload, and arrive exactly once', async () => {
+  await page.setViewportSize({ width: 390, height: 844 });
+  const bench = url(`/lots/${offlineLot.id}/bench`);
+  await page.goto(bench);
+  await page.getByRole('heading', { name: 'Unit 1' }).waitFor();
+  // Bench mode installs the service worker; once it controls the page, a reload fills its
+  // cache of the session, the lot and the instruments.
+  await page.waitForFunction(() => navigator.serviceWorker?.controller != null, null, {
+    timeout: 60_000,
+  });
+  await page.reload();
+  await page.getByRole('heading', { name: 'Unit 1' }).waitFor();
+
+  await browser.context.setOffline(true);
+  const mass = page.getByRole('textbox', { name: 'Mass of the strands' });
+  for (const [unit, massG] of [
+    [1, '195'],
+    [2, '194.6'],
+  ]) {
+    await page.getByRole('heading', { name: `Unit ${unit}` }).waitFor();
+    await mass.tap();
+    await page.keyboard.type(massG);
+    await page.keyboard.press('Enter');
+    await page.getByRole('status', { name: `Unit ${unit}: waiting to send` }).waitFor();
+    if (unit === 1) await page.getByRole('button', { name: /^Next: Unit 2/ }).tap();
+  }
+  await page.getByText('2 readings waiting to send').waitFor();
+  await screenshot(page, 'bench-phone-offline');
+
+  // The page reloads without the network, and the readings are still there.
+  await page.reload();
+  await page.getByText('2 readings waiting to send').waitFor();
+  await page.getByRole('heading', { name: 'Unit 3' }).waitFor();
+  let stored = await admin('GET', `/lots/${offlineLot.id}`);
+  assert.equal(stored.samples.length, 0, 'nothing reached the server while offline');
+
+  await browser.context.setOffline(false);
+  await page.getByText(/readings? waiting to send/).waitFor({ state: 'detached', timeout: 30_000 });
+  await page.getByText('2 of 3 pieces recorded').waitFor();
+  stored = await admin('GET', `/lots/${offlineLot.id}`);
+  assert.deepEqual(
+    stored.samples.map((s) => [s.seq, s.readings.length, s.readings[0].inputs.massG]).sort(),
+    [
+      [1, 1, 195],
+      [2, 1, 194.6],
+    ],
+  );
+  // Sent again (a lost answer, a second tab): still once.
+  await page.evaluate(() => globalThis.dispatchEvent(new Event('online')));
+  await page.waitForTimeout(1000);
+  stored = await admin('GET', `/lots/${offlineLot.id}`);
+  assert.equal(stored.samples.flatMap((s) => s.readings).length, 2);
+});
+
+test('a clerk voids their own slip on the Lot page, not another’s reading, and the Void fits 1366 px', async () => {
+  // The admin takes unit 2 of the serial lot; the clerk took unit 1 above.
+  const instruments = await admin('GET', '/instruments?pageSize=100');
+  const balance = instruments.items.find(
+    (i) => i.kind === 'balance' && i.active && i.calibrationStatus !== 'overdue',
+  );
+  const sample = await admin('POST', `/lots/${serialLot.id}/samples`, {
+    conductorId: (await admin('GET', `/lots/${serialLot.id}`)).product.conductors[0].id,
+    seq: 2,
+  });
+  await admin('POST', `/samples/${sample.id}/readings`, {
+    method: 'mass',
+    massG: 195,
+    lengthMm: 1000,
+    instrumentIds: [balance.id],
+  });
+
+  await page.setViewportSize({ width: 1366, height: 768 });
+  await page.goto(url(`/lots/${serialLot.id}`));
+  const voids = page.getByRole('button', { name: 'Void', exact: true });
+  await page.getByRole('cell', { name: /^Unit 2 .*Conforms/ }).click();
+  await page.getByRole('heading', { name: 'Unit 2', exact: true }).waitFor();
+  assert.equal(await voids.count(), 0, 'no Void on a reading someone else took');
+  await page.getByRole('cell', { name: /^Unit 1 .*Conforms/ }).click();
+  await page.getByRole('heading', { name: 'Unit 1', exact: true }).waitFor();
+  await voids.first().waitFor();
+  const box = await voids.first().boundingBox();
+  assert.ok(box.x + box.width <= 1366, `the Void button ends at ${box.x + box.width} px`);
+  await screenshot(page, 'lot-clerk-void-1366');
+  await voids.first().click();
+  await page.getByLabel('Reason').fill('mass typed from the wrong piece');
+  await page.getByRole('button', { name: 'Void reading' }).click();
+  await page.getByText('Void: mass typed from the wrong piece').waitFor();
+  const stored = await admin('GET', `/lots/${serialLot.id}`);
+  const one = stored.samples.find((s) => s.seq === 1).readings[0];
+  assert.equal(one.voided, true);
+  assert.equal(stored.samples.find((s) => s.seq === 2).readings[0].voided, false);
 });

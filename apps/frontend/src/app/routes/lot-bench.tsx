@@ -1,4 +1,5 @@
 import { Alert, Box, Button, CircularProgress, Stack, Typography } from '@mui/material';
+import { useEffect } from 'react';
 import { Link as RouterLink, useParams } from 'react-router-dom';
 import { SectionBoundary } from '@/components/section-boundary';
 import { paths } from '@/config/paths';
@@ -15,8 +16,21 @@ import type { Role } from '@/lib/roles';
 const RECORDERS: readonly Role[] = ['clerk', 'qa_lead', 'admin'];
 const OPEN_STATUSES = ['on_hold', 'inspecting', 'awaiting_decision'];
 
+/**
+ * Bench mode keeps the app shell in a service worker so the page reloads on a patchy
+ * network; registered here, not on the first screen (its code loads only now).
+ */
+function useAppShellCache() {
+  useEffect(() => {
+    if (!('serviceWorker' in navigator) || import.meta.env.DEV || import.meta.env.MODE === 'test')
+      return;
+    void import('virtual:pwa-register').then(({ registerSW }) => registerSW({ immediate: true }));
+  }, []);
+}
+
 /** Bench mode of a lot: phone and tablet first, one piece at a time (issue 15). */
 export function LotBenchRoute() {
+  useAppShellCache();
   const { id } = useParams();
   const lotId = Number(id);
   const user = useSessionUser();

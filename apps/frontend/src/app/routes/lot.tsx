@@ -119,7 +119,11 @@ export function LotRoute() {
               <InspectionPanel
                 lot={data}
                 canRecord={canRecord}
-                canVoid={VOIDERS.includes(user.role)}
+                canVoid={(r) =>
+                  VOIDERS.includes(user.role) ||
+                  // A clerk corrects their own slip until the lot is decided.
+                  (user.role === 'clerk' && open && r.takenBy.id === user.id)
+                }
               />
             </SectionBoundary>
             {canRecord && (

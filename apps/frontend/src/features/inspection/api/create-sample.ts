@@ -8,6 +8,8 @@ export interface CreateSampleRequest {
   unitRef?: string;
   /** Unit number 1..n of the plan; the server takes the next free unit when omitted. */
   seq?: number;
+  /** A UUID made on the device: a repeat is answered with the sample it made the first time. */
+  clientId?: string;
 }
 
 export const createSample = (lotId: number, request: CreateSampleRequest) =>

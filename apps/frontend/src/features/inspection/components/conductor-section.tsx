@@ -16,7 +16,7 @@ import { ConductorCaution } from '@/features/inspection/components/conductor-cau
 import { SamplePanel } from '@/features/inspection/components/sample-panel';
 import { UnitGrid } from '@/features/inspection/components/unit-grid';
 import { conductorLabel, materialLabels, needsCaution } from '@/features/inspection/lib/labels';
-import type { Conductor, Instrument, Sample } from '@/features/inspection/types';
+import type { Conductor, Instrument, Sample, Reading } from '@/features/inspection/types';
 import { useUnits } from '@/lib/units';
 
 interface ConductorSectionProps {
@@ -27,7 +27,8 @@ interface ConductorSectionProps {
   minAreaRatio: number;
   instruments: readonly Instrument[];
   canRecord: boolean;
-  canVoid: boolean;
+  /** Whether the signed-in user may void this reading (a clerk: their own, until the decision). */
+  canVoid: (reading: Reading) => boolean;
   /** The overview grid asked to show this sample (ignored when it is another conductor's). */
   jump?: { sampleId: number; at: number } | null;
 }

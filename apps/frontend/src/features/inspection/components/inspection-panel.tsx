@@ -3,13 +3,14 @@ import { useState } from 'react';
 import { useInstruments } from '@/features/inspection/api/get-instruments';
 import { LotOverviewGrid } from '@/features/inspection/components/lot-overview-grid';
 import { ConductorSection } from '@/features/inspection/components/conductor-section';
-import type { LotDetail } from '@/features/inspection/types';
+import type { LotDetail, Reading } from '@/features/inspection/types';
 import { errorMessage } from '@/lib/query-client';
 
 interface InspectionPanelProps {
   lot: LotDetail;
   canRecord: boolean;
-  canVoid: boolean;
+  /** Whether the signed-in user may void this reading (a clerk: their own, until the decision). */
+  canVoid: (reading: Reading) => boolean;
 }
 
 /** Per conductor of the product: the units of the plan, their samples and readings. */

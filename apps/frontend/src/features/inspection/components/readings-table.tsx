@@ -37,7 +37,8 @@ function inputText(units: Units, name: string, value: number): string {
 
 interface ReadingsTableProps {
   readings: readonly Reading[];
-  canVoid: boolean;
+  /** Whether the signed-in user may void this reading (a clerk: their own, until the decision). */
+  canVoid: (reading: Reading) => boolean;
   onVoid: (reading: Reading) => void;
 }
 
@@ -58,8 +59,7 @@ export function ReadingsTable({ readings, canVoid, onVoid }: ReadingsTableProps)
             'Measures as',
             'Material',
             'Verdict',
-            'Instruments',
-            'Taken',
+            'Taken, with',
             '',
           ].map((h) => (
             <TableCell key={h}>{h}</TableCell>
@@ -96,15 +96,15 @@ export function ReadingsTable({ readings, canVoid, onVoid }: ReadingsTableProps)
                 <VerdictChip verdict={r.verdict} />
               </TableCell>
               <TableCell>
-                {r.instruments.map((i) => `${i.name} (${i.serial})`).join(', ') || '—'}
-              </TableCell>
-              <TableCell sx={{ whiteSpace: 'nowrap' }}>
-                {r.takenBy.name}
+                <span style={{ whiteSpace: 'nowrap' }}>{r.takenBy.name}</span>
                 <br />
-                {dateTime.format(new Date(r.takenAt))}
+                <span style={{ whiteSpace: 'nowrap' }}>{dateTime.format(new Date(r.takenAt))}</span>
+                <Typography variant="caption" component="div" color="text.secondary">
+                  {r.instruments.map((i) => `${i.name} (${i.serial})`).join(', ') || '—'}
+                </Typography>
               </TableCell>
               <TableCell sx={{ textDecoration: 'none' }}>
-                {canVoid && !r.voided && (
+                {canVoid(r) && !r.voided && (
                   <Button size="small" color="error" onClick={() => onVoid(r)}>
                     Void
                   </Button>
@@ -113,7 +113,7 @@ export function ReadingsTable({ readings, canVoid, onVoid }: ReadingsTableProps)
             </TableRow>,
             r.voided ? (
               <TableRow key={`${r.id}-void`}>
-                <TableCell colSpan={10}>
+                <TableCell colSpan={9}>
                   <Typography variant="body2" color="error">
                     Void: {r.voidReason} — {r.voidedBy?.name ?? 'someone'}
                     {r.voidedAt ? `, ${dateTime.format(new Date(r.voidedAt))}` : ''}

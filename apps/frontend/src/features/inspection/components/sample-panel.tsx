@@ -6,7 +6,7 @@ import { ReadingsTable } from '@/features/inspection/components/readings-table';
 import { VerdictChip } from '@/features/inspection/components/verdict-chip';
 import { VoidReadingDialog } from '@/features/inspection/components/void-reading-dialog';
 import { currentReading } from '@/features/inspection/lib/labels';
-import type { Conductor, Instrument, Sample } from '@/features/inspection/types';
+import type { Conductor, Instrument, Reading, Sample } from '@/features/inspection/types';
 
 interface SamplePanelProps {
   sample: Sample;
@@ -14,7 +14,8 @@ interface SamplePanelProps {
   minAreaRatio: number;
   instruments: readonly Instrument[];
   canRecord: boolean;
-  canVoid: boolean;
+  /** Whether the signed-in user may void this reading (a clerk: their own, until the decision). */
+  canVoid: (reading: Reading) => boolean;
 }
 
 /** One sample: its readings, the drawing of its current result, and the form for the next reading. */

@@ -104,7 +104,9 @@ export function slotResolutions(
 export interface ReadingRequest {
   method: ReadingMethod;
   instrumentIds: number[];
-  [input: string]: number | number[] | string;
+  /** A UUID made on the device: a repeat is answered with the reading it recorded first. */
+  clientId?: string | undefined;
+  [input: string]: number | number[] | string | undefined;
 }
 
 export function toReadingRequest(

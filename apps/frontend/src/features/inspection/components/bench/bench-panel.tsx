@@ -12,7 +12,9 @@ import {
 import { useQueryClient } from '@tanstack/react-query';
 import { lazy, Suspense, useMemo, useState, type ReactNode } from 'react';
 import { recordBenchReading } from '@/features/inspection/api/record-bench-reading';
+import { useBenchQueue } from '@/features/inspection/api/use-bench-queue';
 import { BenchVerdict } from '@/features/inspection/components/bench/bench-verdict';
+import { WaitingReadings } from '@/features/inspection/components/bench/waiting-readings';
 import { ReadingForm } from '@/features/inspection/components/reading-form';
 import {
   benchTargets,
@@ -68,7 +70,15 @@ export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
   const targets = useMemo(() => benchTargets(lot), [lot]);
   const oneConductor = lot.product.conductors.length === 1;
   const [recorded, setRecorded] = useState<ReadonlyMap<string, number>>(new Map());
-  const recordedKeys = useMemo(() => new Set(recorded.keys()), [recorded]);
+  const queue = useBenchQueue(lot.id);
+  const recordedKeys = useMemo(
+    () =>
+      new Set([
+        ...recorded.keys(),
+        ...queue.entries.map((e) => targetKey({ seq: e.seq, conductor: { id: e.conductorId } })),
+      ]),
+    [recorded, queue.entries],
+  );
   const [chosenKey, setChosenKey] = useState<string | undefined>(undefined);
   const [last, setLast] = useState<{ key: string; reading: Reading | null } | null>(null);
   const [memory, setMemory] = useState<BenchMemory>(() => readBenchMemory());
@@ -98,16 +108,19 @@ export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
   });
 
   const record = async (request: ReadingRequest): Promise<Reading | null> => {
+    const known = current.sample?.id ?? recorded.get(key);
     const reading = await recordBenchReading(
       {
         lotId: lot.id,
         conductorId: current.conductor.id,
         seq: current.seq,
-        sampleId: current.sample?.id ?? recorded.get(key),
+        sampleId: known || undefined,
+        label,
       },
       request,
     );
-    void queryClient.invalidateQueries({ queryKey: ['lots'] });
+    if (reading) void queryClient.invalidateQueries({ queryKey: ['lots'] });
+    else void queue.refresh();
     return reading;
   };
 
@@ -194,6 +207,13 @@ export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
             : 'measure its diameter'}
         </Typography>
       </Box>
+
+      <WaitingReadings
+        entries={queue.entries}
+        sending={queue.sending}
+        onSend={() => void queue.send()}
+        onDiscard={(id) => void queue.discard(id)}
+      />
 
       {remembered.refused.map((reason) => (
         <Alert key={reason} severity="warning">
