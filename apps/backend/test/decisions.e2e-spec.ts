@@ -75,13 +75,25 @@ describe('POST /api/lots/:id/decisions', () => {
     expect(following.body.decision.recommendation).toBe('reject');
   });
 
-  it('treats every outcome on an incomplete evaluation as against the recommendation', async () => {
+  it('refuses acceptance before every planned unit is tested; a concession needs its reason', async () => {
     const product = await stream();
     const { lot } = await fx.lot(product.id, { untested: 1 });
-    const res = await decide(lot.id, { outcome: 'accept', reason: 'ok', version: lot.version });
-    expect(res.status).toBe(400);
-    const withReason = await decide(lot.id, {
+    // Acceptance needs every planned unit (ISO 2859-1; issue 13: only rejection is curtailed).
+    const res = await decide(lot.id, {
       outcome: 'accept',
+      reason: LONG_REASON,
+      version: lot.version,
+    });
+    expect(res.status).toBe(422);
+    expect(res.body.message).toMatch(/Acceptance needs every planned unit/);
+    const short = await decide(lot.id, {
+      outcome: 'accept_on_concession',
+      reason: 'ok',
+      version: lot.version,
+    });
+    expect(short.status).toBe(400);
+    const withReason = await decide(lot.id, {
+      outcome: 'accept_on_concession',
       reason: LONG_REASON,
       version: lot.version,
     });

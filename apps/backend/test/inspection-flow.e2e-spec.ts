@@ -152,6 +152,7 @@ describe('evaluation', () => {
     const e = (await detail(lotId)).evaluation;
     expect(e).toMatchObject({ samplesTested: 2, nonconforming: 2, recommendation: 'reject' });
     expect(e.message).toMatch(/rejects at 2/);
-    expect((await lotRow(t, lotId)).status).toBe('inspecting');
+    // Curtailed rejection (issue 13): the lot awaits its decision at once, unit 2 unread.
+    expect((await lotRow(t, lotId)).status).toBe('awaiting_decision');
   });
 });

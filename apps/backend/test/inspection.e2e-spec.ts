@@ -169,14 +169,25 @@ describe('readings', () => {
     // 21.15 mm² × 3.63 × 1.02 = 78.3 g per metre, R = 0.026772 × 1.02 / 21.15 = 1.291 mΩ per metre.
     const m = await mass(s.id, 78.3);
     expect(m.body).toMatchObject({ verdict: 'conforms', identifiedMaterial: 'unknown' });
-    const r = await as(t, DEMO.clerk, 'post', `/api/samples/${s.id}/readings`, {
+    const body = {
       method: 'resistance',
       resistanceOhm: 0.001291,
       lengthMm: 1000,
       temperatureC: 20,
       instrumentIds: [bench.meter.id, bench.thermometer.id],
+    };
+    // 163 % of an 8 AWG's area is questioned (issue 13: above 1.6 × nominal) …
+    const questioned = await as(t, DEMO.clerk, 'post', `/api/samples/${s.id}/readings`, body);
+    expect(questioned.status).toBe(422);
+    expect(questioned.body.questions[0].field).toBe('resistanceOhm');
+    // … and recorded once the clerk confirms it, with the flag beside it.
+    const r = await as(t, DEMO.clerk, 'post', `/api/samples/${s.id}/readings`, {
+      ...body,
+      confirmUnusual: true,
     });
     expect(r.status, JSON.stringify(r.body)).toBe(201);
+    expect(r.body.confirmedUnusual).toBe(true);
+    expect(r.body.unusual[0].field).toBe('resistanceOhm');
     expect(r.body.areaRatio).toBeGreaterThan(1); // copper-equivalent area above 8 AWG …
     expect(r.body).toMatchObject({
       identifiedMaterial: 'cca',

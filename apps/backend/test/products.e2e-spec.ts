@@ -371,7 +371,7 @@ describe('GET /api/products/:id/sampling-plan', () => {
         },
       });
       expect(res.body.message).toBe(
-        `Normal inspection: cut 80 of the ${quantity} units (code letter J, level II, AQL 1.0); accept with up to 2 nonconforming, reject at 3.`,
+        `Normal inspection: cut 80 of the ${quantity} units (code letter J, level II, AQL 1.0); accept with up to 2 nonconforming, reject at 3. ANSI/ASQ Z1.4 / MIL-STD-105E single sampling; switching per ISO 2859-1.`,
       );
     }
   });

@@ -91,14 +91,18 @@ describe('demo scenario seeded on an empty database', () => {
       const computed = computeReading({
         method: r.method,
         inputs: r.inputs as ReadingInputs,
+        fourWire: r.fourWire,
         resolutions: resolutionsFor(r.method, r.instruments as unknown as Instrument[]),
         gaugeLabel: r.sample.conductor.gaugeLabel,
-        claimedMaterial: 'copper',
+        claimedMaterial: r.sample.conductor.claimedMaterial,
         minAreaRatio: r.sample.lot.product.minAreaRatio,
+        conductorClass: r.sample.conductor.conductorClass,
+        claimedStrands: r.sample.conductor.claimedStrands,
         siblings: siblings.map((s) => ({
           method: s.method,
           inputs: s.inputs as ReadingInputs,
           areaMm2: s.areaMm2,
+          fourWire: s.fourWire,
         })),
       });
       expect(r.areaMm2, `reading ${r.id}`).toBeCloseTo(computed.areaMm2, 9);
@@ -108,7 +112,7 @@ describe('demo scenario seeded on an empty database', () => {
     }
     // By hand for one mass reading: A = m / (ρ · L · (1 + k)), copper 8.89 g/cm³, k = 0.02.
     const mass = readings.find((r) => r.method === 'mass' && !r.voided) as Reading;
-    const { massG, lengthMm } = mass.inputs;
+    const { massG, lengthMm } = mass.inputs as { massG: number; lengthMm: number };
     expect(mass.areaMm2).toBeCloseTo(massG / (0.00889 * lengthMm * 1.02), 9);
     expect(mass.areaMm2).toBeCloseTo(areaFromMass({ massG, lengthMm }).areaMm2, 12);
   });
@@ -122,12 +126,14 @@ describe('demo scenario seeded on an empty database', () => {
     expect(cca.length).toBeGreaterThanOrEqual(6);
     const r = cca.find((x) => x.method === 'resistance') as Reading;
     const mass = await em.findOneOrFail(Reading, { sample: r.sample, method: 'mass' });
-    const ohmOverMassLength = (r.inputs.resistanceOhm * mass.inputs.lengthMm) / r.inputs.lengthMm;
+    const ri = r.inputs as Record<string, number>;
+    const mi = mass.inputs as Record<string, number>;
+    const ohmOverMassLength = (ri.resistanceOhm * mi.lengthMm) / ri.lengthMm;
     const id = identifyMaterial({
-      massG: mass.inputs.massG,
-      lengthMm: mass.inputs.lengthMm,
+      massG: mi.massG,
+      lengthMm: mi.lengthMm,
       resistanceOhm: ohmOverMassLength,
-      temperatureC: r.inputs.temperatureC,
+      temperatureC: ri.temperatureC,
     });
     expect(id.material).toBe('cca');
     const byR = areaFromResistance({ ...r.inputs, material: 'copper' } as never);

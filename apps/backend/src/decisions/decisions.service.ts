@@ -83,6 +83,13 @@ export class DecisionsService {
       );
     }
     const evaluation = await this.evaluations.evaluate(lot, tx);
+    if (dto.outcome === 'accept' && evaluation.samplesTested < evaluation.samplesPlanned) {
+      // Curtailed rejection decides a lot early; acceptance still needs every planned unit
+      // (ISO 2859-1; issue 13).
+      throw new UnprocessableEntityException(
+        `Acceptance needs every planned unit: ${evaluation.samplesTested} of ${evaluation.samplesPlanned} tested. The lot awaits a decision because its nonconforming units reached the reject number; reject it, or finish the planned units first.`,
+      );
+    }
     const reason = dto.reason.trim();
     checkReason(dto.outcome, evaluation, reason);
 

@@ -1,4 +1,6 @@
 import { DomainError } from '../common/domain-error';
+import { UnprocessableEntityException } from '@nestjs/common';
+import type { InstrumentAccuracy } from '@gaugeproof/standards';
 import type { Instrument, InstrumentKind } from '../instruments/entities/instrument.entity';
 import type { InstrumentSnapshot, ReadingMethod } from './entities/reading.entity';
 
@@ -9,6 +11,12 @@ export interface MethodResolutions {
   diameterResolutionMm?: number;
   resistanceResolutionOhm?: number;
   temperatureResolutionC?: number;
+  /** Each instrument's stated accuracy and certificate U, in the method's units (GUM 4.3). */
+  balance?: InstrumentAccuracy;
+  rule?: InstrumentAccuracy;
+  micrometer?: InstrumentAccuracy;
+  meter?: InstrumentAccuracy;
+  thermometer?: InstrumentAccuracy;
 }
 
 /**
@@ -53,7 +61,20 @@ function inUnit(i: InstrumentLike, wanted: 'g' | 'mm' | 'ohm' | 'degC'): number 
 export type InstrumentLike = Pick<
   Instrument,
   'kind' | 'name' | 'serial' | 'resolution' | 'resolutionUnit'
->;
+> &
+  Partial<
+    Pick<Instrument, 'accuracyPercentOfReading' | 'accuracyAbsolute' | 'calibrationUncertainty'>
+  >;
+
+/** The register's accuracy fields in the method's unit (mΩ amounts ÷ 1000 for Ω). */
+function accuracyOf(i: InstrumentLike, wanted: 'g' | 'mm' | 'ohm' | 'degC'): InstrumentAccuracy {
+  const scale = wanted === 'ohm' && i.resolutionUnit === 'mohm' ? 1 / 1000 : 1;
+  const a: InstrumentAccuracy = {};
+  if (i.accuracyPercentOfReading != null) a.accuracyPercentOfReading = i.accuracyPercentOfReading;
+  if (i.accuracyAbsolute != null) a.accuracyAbsolute = i.accuracyAbsolute * scale;
+  if (i.calibrationUncertainty != null) a.calibrationUncertainty = i.calibrationUncertainty * scale;
+  return a;
+}
 
 export function resolutionsFor(
   method: ReadingMethod,
@@ -84,15 +105,30 @@ export function resolutionsFor(
   const get = (k: InstrumentKind) => byKind.get(k);
   const r: MethodResolutions = {};
   const balance = get('balance');
-  if (balance) r.massResolutionG = inUnit(balance, 'g');
+  if (balance) {
+    r.massResolutionG = inUnit(balance, 'g');
+    r.balance = accuracyOf(balance, 'g');
+  }
   const rule = get('length_rule');
-  if (rule) r.lengthResolutionMm = inUnit(rule, 'mm');
+  if (rule) {
+    r.lengthResolutionMm = inUnit(rule, 'mm');
+    r.rule = accuracyOf(rule, 'mm');
+  }
   const gauge = get('micrometer') ?? get('caliper');
-  if (gauge) r.diameterResolutionMm = inUnit(gauge, 'mm');
+  if (gauge) {
+    r.diameterResolutionMm = inUnit(gauge, 'mm');
+    r.micrometer = accuracyOf(gauge, 'mm');
+  }
   const meter = get('milliohm_meter');
-  if (meter) r.resistanceResolutionOhm = inUnit(meter, 'ohm');
+  if (meter) {
+    r.resistanceResolutionOhm = inUnit(meter, 'ohm');
+    r.meter = accuracyOf(meter, 'ohm');
+  }
   const thermometer = get('thermometer');
-  if (thermometer) r.temperatureResolutionC = inUnit(thermometer, 'degC');
+  if (thermometer) {
+    r.temperatureResolutionC = inUnit(thermometer, 'degC');
+    r.thermometer = accuracyOf(thermometer, 'degC');
+  }
   return r;
 }
 
@@ -100,7 +136,10 @@ export function snapshot(
   i: Pick<
     Instrument,
     'id' | 'kind' | 'name' | 'serial' | 'resolution' | 'resolutionUnit' | 'calibrationDueOn'
-  >,
+  > &
+    Partial<
+      Pick<Instrument, 'accuracyPercentOfReading' | 'accuracyAbsolute' | 'calibrationUncertainty'>
+    >,
 ): InstrumentSnapshot {
   return {
     id: i.id,
@@ -110,5 +149,8 @@ export function snapshot(
     resolution: i.resolution,
     resolutionUnit: i.resolutionUnit,
     calibrationDueOn: i.calibrationDueOn,
+    accuracyPercentOfReading: i.accuracyPercentOfReading ?? null,
+    accuracyAbsolute: i.accuracyAbsolute ?? null,
+    calibrationUncertainty: i.calibrationUncertainty ?? null,
   };
 }

@@ -21,11 +21,15 @@ export interface LotRef {
   id: number;
   productId: number;
   sampleSize: number;
+  /** The plan's reject number Re: reaching it decides the lot at once (curtailed rejection). */
+  reject: number;
 }
 
 export interface Evidence {
   hasReading: boolean;
   allPlannedUnitsRead: boolean;
+  /** The nonconforming units already reach the reject number (issue 13: curtailed rejection). */
+  rejectReached: boolean;
 }
 
 /**
@@ -54,8 +58,20 @@ export async function evidenceOf(em: EntityManager, lot: LotRef): Promise<Eviden
     'select count(*) as n from conductor_specs c where c.product_id = ? and c.active = ?',
     [lot.productId, true],
   );
+  // A unit is nonconforming when any live reading of any of its samples is (lot-evaluation.ts).
+  const [bad] = await plainSql<{ n: number | string }[]>(
+    sql,
+    `select count(distinct s.seq) as n from samples s
+       where s.lot_id = ? and s.seq >= 1 and s.seq <= ? and exists (select 1 from readings r
+         where r.sample_id = s.id and r.voided = ? and r.verdict = ?)`,
+    [lot.id, lot.sampleSize, false, 'nonconforming'],
+  );
   const needed = Number(conductors.n) * Math.max(0, lot.sampleSize);
-  return { hasReading: Number(read.n) > 0, allPlannedUnitsRead: Number(units.n) >= needed };
+  return {
+    hasReading: Number(read.n) > 0,
+    allPlannedUnitsRead: Number(units.n) >= needed,
+    rejectReached: Number(bad.n) >= lot.reject,
+  };
 }
 
 /**
@@ -71,7 +87,9 @@ export async function nextStatus(
   if (!OPEN.includes(before)) return before;
   const e = await evidence();
   let next: LotStatus = before;
-  if (e.allPlannedUnitsRead) next = 'awaiting_decision';
+  // Curtailed rejection (issue 13): Re reached decides the lot, more units cannot undo it;
+  // acceptance still needs every planned unit.
+  if (e.allPlannedUnitsRead || e.rejectReached) next = 'awaiting_decision';
   else if (e.hasReading || before !== 'on_hold') next = 'inspecting';
   if (before === 'awaiting_decision' && next !== before && (await hasDecision())) return before;
   return next;

@@ -1,10 +1,10 @@
-import type { InstrumentSnapshot, Reading } from './entities/reading.entity';
+import type { InstrumentSnapshot, Reading, ReadingInputValue } from './entities/reading.entity';
 
 /** What the audit trail keeps of a reading: an entity or a row the SQL writer holds. */
 export interface AuditedReading {
   sampleId: number;
   method: Reading['method'];
-  inputs: Record<string, number>;
+  inputs: Record<string, ReadingInputValue>;
   instruments: readonly InstrumentSnapshot[];
   areaMm2: number;
   measuresAs: string;

@@ -13,7 +13,12 @@ import type { LotStatus } from '../lots/entities/lot.entity';
 import type { InstrumentSnapshot, ReadingMethod, Verdict } from './entities/reading.entity';
 import { resolutionsFor, snapshot } from './instrument-resolutions';
 import { assertLotOpen, evidenceOf, nextStatus, statusChange } from './lot-status';
-import { computeReading, type ComputedReading, type ReadingInputs } from './reading-compute';
+import {
+  computeReading,
+  fourWireOf,
+  type ComputedReading,
+  type ReadingInputs,
+} from './reading-compute';
 import { auditShape, outcomeOf } from './reading-rules';
 import { readingFactsView } from './views';
 import { keepClientKey } from './client-id';
@@ -29,6 +34,10 @@ export interface NewReading {
   instrumentIds: readonly number[];
   /** The client's UUID for this reading (bench mode), kept in client_keys (client-id.ts). */
   clientId?: string | null;
+  /** Resistance: four-wire (default true); null for the other methods. */
+  fourWire?: boolean | null;
+  /** The clerk confirms a reading the plausibility checks question (issue 13). */
+  confirmUnusual?: boolean;
 }
 
 export interface WriteOptions {
@@ -58,10 +67,12 @@ interface SampleRow {
   status: LotStatus;
   poNumber: string;
   productId: number;
-  samplingPlan: string | { sampleSize: number };
+  samplingPlan: string | { sampleSize: number; reject: number };
   minAreaRatio: number;
   gaugeLabel: string;
   claimedMaterial: string;
+  conductorClass: number | null;
+  claimedStrands: number | null;
 }
 
 /** A live reading of a sample as the writer holds it (stored, or about to be). */
@@ -72,6 +83,8 @@ interface LiveReading extends ComputedReading {
   method: ReadingMethod;
   inputs: ReadingInputs;
   instruments: InstrumentSnapshot[];
+  fourWire: boolean | null;
+  confirmedUnusual: boolean;
   /** Index of the entry in this call; undefined for a reading stored before it. */
   entry?: number;
 }
@@ -114,14 +127,15 @@ const computedOf = (r: ComputedReading): ComputedReading => ({
 const SAMPLE_SELECT = `select s.id, s.lot_id as "lotId", l.status, l.po_number as "poNumber",
        l.product_id as "productId", l.sampling_plan as "samplingPlan",
        p.min_area_ratio as "minAreaRatio", c.gauge_label as "gaugeLabel",
-       c.claimed_material as "claimedMaterial"
+       c.claimed_material as "claimedMaterial", c.conductor_class as "conductorClass",
+       c.claimed_strands as "claimedStrands"
   from samples s join lots l on l.id = s.lot_id join products p on p.id = l.product_id
   join conductor_specs c on c.id = s.conductor_id`;
 const READING_SELECT = `select id, sample_id as "sampleId", method, inputs, instruments,
        area_mm2 as "areaMm2", u_mm2 as "uMm2", expanded_umm2 as "expandedUMm2",
        area_ratio as "areaRatio", measures_as as "measuresAs",
        identified_material as "identifiedMaterial", material_mismatch as "materialMismatch",
-       verdict, result
+       verdict, result, four_wire as "fourWire", confirmed_unusual as "confirmedUnusual"
   from readings`;
 /** Values bound in one `in (…)` list at the most: well under SQLite's and PostgreSQL's limits. */
 const CHUNK = 500;
@@ -246,12 +260,15 @@ export class ReadingWriter {
         assertLotOpen(sample);
         const instruments = usableInstruments(entry.instrumentIds, register, at);
         const siblings = live.get(sample.id) ?? [];
+        const fourWire = fourWireOf({ method: entry.method, fourWire: entry.fourWire });
         const computed = computeReading({
           ...context(sample),
           method: entry.method,
           inputs: entry.inputs,
+          fourWire,
           resolutions: resolutionsFor(entry.method, instruments),
           siblings,
+          entry: { confirmUnusual: entry.confirmUnusual === true },
         });
         const reading: LiveReading = {
           ...computed,
@@ -260,6 +277,8 @@ export class ReadingWriter {
           method: entry.method,
           inputs: entry.inputs,
           instruments: instruments.map(snapshot),
+          fourWire,
+          confirmedUnusual: computed.result.unusual !== null,
           entry: index,
         };
         live.set(sample.id, [reading, ...siblings]);
@@ -286,7 +305,8 @@ export class ReadingWriter {
       const [{ id }] = await plainSql<{ id: number }[]>(
         em,
         `insert into readings (sample_id, method, inputs, instruments, ${COMPUTED_COLUMNS.join(', ')},
-           taken_by_id, taken_at, voided) values (?, ?, ?, ?, ${COMPUTED_COLUMNS.map(() => '?').join(', ')}, ?, ?, ?)
+           taken_by_id, taken_at, voided, four_wire, confirmed_unusual)
+         values (?, ?, ?, ?, ${COMPUTED_COLUMNS.map(() => '?').join(', ')}, ?, ?, ?, ?, ?)
          returning id`,
         [
           r.sampleId,
@@ -297,6 +317,8 @@ export class ReadingWriter {
           actor.id,
           at,
           false,
+          r.fourWire,
+          r.confirmedUnusual,
         ],
         'all',
       );
@@ -403,7 +425,10 @@ export class ReadingWriter {
       const found = await plainSql<(InstrumentRecord & { active: number | boolean })[]>(
         em,
         `select id, kind, name, serial, resolution, resolution_unit as "resolutionUnit",
-                calibration_due_on as "calibrationDueOn", active
+                calibration_due_on as "calibrationDueOn", active,
+                accuracy_percent_of_reading as "accuracyPercentOfReading",
+                accuracy_absolute as "accuracyAbsolute",
+                calibration_uncertainty as "calibrationUncertainty"
            from instruments where id in (${marks(chunk)})`,
         chunk,
       );
@@ -415,10 +440,12 @@ export class ReadingWriter {
   /** The lot's next status, and a touch that bumps its version (a decision on the old evidence meets 409). */
   private async lotStatus(em: EntityManager, sample: SampleRow, events: AuditEntry[], at: Date) {
     const before = sample.status;
+    const plan = jsonOf<{ sampleSize: number; reject: number }>(sample.samplingPlan);
     const lot = {
       id: sample.lotId,
       productId: sample.productId,
-      sampleSize: jsonOf<{ sampleSize: number }>(sample.samplingPlan).sampleSize,
+      sampleSize: plan.sampleSize,
+      reject: plan.reject,
     };
     const after = await nextStatus(
       before,
@@ -447,8 +474,10 @@ const NOT_VOIDED = { voided: false, voidReason: null } as const;
 /** A reading as stored (JSON as text on SQLite, parsed on PostgreSQL; booleans 0/1 or true/false). */
 interface LiveRow extends Omit<
   LiveReading,
-  'inputs' | 'instruments' | 'materialMismatch' | 'result'
+  'inputs' | 'instruments' | 'materialMismatch' | 'result' | 'fourWire' | 'confirmedUnusual'
 > {
+  fourWire: number | boolean | null;
+  confirmedUnusual: number | boolean;
   inputs: string | ReadingInputs;
   instruments: string | InstrumentSnapshot[];
   materialMismatch: number | boolean;
@@ -476,6 +505,8 @@ function liveOf(row: LiveRow): LiveReading {
     method: row.method,
     inputs: jsonOf<ReadingInputs>(row.inputs),
     instruments: jsonOf<InstrumentSnapshot[]>(row.instruments),
+    fourWire: row.fourWire === null || row.fourWire === undefined ? null : Boolean(row.fourWire),
+    confirmedUnusual: Boolean(row.confirmedUnusual),
     ...computedOf({
       ...row,
       materialMismatch: Boolean(row.materialMismatch),
@@ -488,6 +519,8 @@ const context = (s: SampleRow) => ({
   gaugeLabel: s.gaugeLabel,
   claimedMaterial: s.claimedMaterial as MaterialId,
   minAreaRatio: s.minAreaRatio,
+  conductorClass: s.conductorClass,
+  claimedStrands: s.claimedStrands,
 });
 
 /** `r` computed again with the sample's other live readings (`all`, newest first). */
@@ -496,6 +529,7 @@ function recomputed(sample: SampleRow, r: LiveReading, all: readonly LiveReading
     ...context(sample),
     method: r.method,
     inputs: r.inputs,
+    fourWire: r.fourWire,
     resolutions: resolutionsFor(r.method, r.instruments.map(asInstrument)),
     siblings: all.filter((o) => o !== r),
   });

@@ -165,6 +165,8 @@ export class ReadingsImportService {
           method: c.method,
           inputs: c.inputs,
           instrumentIds: c.serials.map((s) => idOf.get(s) as number),
+          fourWire: c.fourWire,
+          confirmUnusual: c.confirmUnusual,
         },
       });
     }
@@ -239,7 +241,12 @@ interface CheckedRow {
   inputs: NewReading['inputs'];
   serials: string[];
   unitRef: string;
+  fourWire?: boolean;
+  confirmUnusual?: boolean;
 }
+
+/** Resistance columns, each naming its unit: Ω or mΩ (issue 13); resistanceOhm is Ω too. */
+const RESISTANCE_COLUMNS = ['resistance_ohm', 'resistance_mohm', 'resistanceOhm'] as const;
 
 /** Parses the file; 422 listing the problems of its form (columns, no rows, too many rows). */
 function parse(buffer: Buffer): Row[] {
@@ -284,14 +291,52 @@ function checkRow(lot: Lot, row: Row, rowNo: number, errors: RowError[]): RowChe
   if (typeof conductor === 'string') fail('conductor', conductor);
 
   const body: Record<string, unknown> = { method: cell('method'), instrumentIds: [0] };
+  const numberIn = (column: string): number | undefined => {
+    const text = cell(column).replace(',', '.');
+    if (DECIMAL.test(text)) return Number(text);
+    fail(column, `${column} must be a number (got "${cell(column)}")`);
+    return undefined;
+  };
   for (const f of INPUT_FIELDS) {
-    if (cell(f) === '') continue;
-    const text = cell(f).replace(',', '.');
-    if (DECIMAL.test(text)) body[f] = Number(text);
-    else fail(f, `${f} must be a number (got "${cell(f)}")`);
+    if (cell(f) === '' || f === 'strandDiametersMm') continue;
+    const n = numberIn(f);
+    if (n !== undefined) body[f] = n;
   }
+  if (cell('strandDiametersMm') !== '') {
+    // Several strands in one cell, separated by ; (a comma may be a decimal comma).
+    const parts = cell('strandDiametersMm')
+      .split(';')
+      .map((p) => p.trim().replace(',', '.'));
+    if (parts.every((p) => DECIMAL.test(p))) body.strandDiametersMm = parts.map(Number);
+    else fail('strandDiametersMm', `strandDiametersMm must be numbers of mm separated by ;`);
+  }
+  // The resistance names its unit in the header (issue 13): Ω or mΩ, never guessed.
+  const given = RESISTANCE_COLUMNS.filter((c) => cell(c) !== '');
+  const unitClash = given.length > 1;
+  if (unitClash) {
+    fail(
+      given[1],
+      `give the resistance in one column only (${given.join(' and ')} are both filled)`,
+    );
+  } else if (given.length === 1 && given[0] !== 'resistanceOhm') {
+    const n = numberIn(given[0]);
+    if (n !== undefined) body.resistanceOhm = given[0] === 'resistance_mohm' ? n / 1000 : n;
+  }
+  const flag = (column: string): boolean | undefined => {
+    const v = cell(column).toLowerCase();
+    if (v === '') return undefined;
+    if (['true', 'yes', '1'].includes(v)) return true;
+    if (['false', 'no', '0'].includes(v)) return false;
+    fail(column, `${column} must be yes or no (got "${cell(column)}")`);
+    return undefined;
+  };
+  const fourWire = flag('fourWire');
+  if (fourWire !== undefined) body.fourWire = fourWire;
+  const confirmUnusual = flag('confirmUnusual');
   const dto = plainToInstance(CreateReadingDto, body);
   for (const v of validateSync(dto)) {
+    // A clash of resistance columns is said once, not again as a missing resistanceOhm.
+    if (unitClash && v.property === 'resistanceOhm') continue;
     for (const m of Object.values(v.constraints ?? {})) fail(v.property, m);
   }
   const serials = cell('instruments')
@@ -313,6 +358,8 @@ function checkRow(lot: Lot, row: Row, rowNo: number, errors: RowError[]): RowChe
       inputs,
       serials,
       unitRef: cell('unitRef'),
+      fourWire: dto.fourWire,
+      confirmUnusual,
     };
   } catch (e) {
     fail(null, messageOf(e));

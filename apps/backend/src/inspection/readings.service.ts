@@ -18,18 +18,29 @@ import { ReadingsRefused, ReadingWriter } from './reading-writer';
 /** The inputs of the reading's method; 400 naming any field another method uses. */
 export function methodInputs(dto: CreateReadingDto): ReadingInputs {
   const allowed = METHOD_FIELDS[dto.method];
-  const foreign = INPUT_FIELDS.filter((f) => dto[f] !== undefined && !allowed.includes(f));
+  const foreign: string[] = INPUT_FIELDS.filter(
+    (f) => dto[f] !== undefined && !allowed.includes(f),
+  );
+  if (dto.fourWire !== undefined && dto.method !== 'resistance') foreign.push('fourWire');
   if (foreign.length) {
     throw DomainError.invalid(
       foreign.map((f) => ({ field: f, message: `${f} is not used by the ${dto.method} method` })),
     );
   }
-  const inputs: ReadingInputs = {};
+  if (dto.strandDiametersMm !== undefined && dto.strandDiameterMm !== undefined) {
+    throw DomainError.invalid([
+      {
+        field: 'strandDiametersMm',
+        message: 'strandDiameterMm and strandDiametersMm cannot both be given: send the list only',
+      },
+    ]);
+  }
+  const inputs: Record<string, number | number[]> = {};
   for (const f of allowed) {
     const v = dto[f as (typeof INPUT_FIELDS)[number]];
-    if (v !== undefined) inputs[f as keyof ReadingInputs] = v;
+    if (v !== undefined) inputs[f] = Array.isArray(v) ? [...v] : v;
   }
-  return inputs;
+  return inputs as ReadingInputs;
 }
 
 /** The clerk's form and QA's void, through the one reading write path (ReadingWriter). */
@@ -50,6 +61,8 @@ export class ReadingsService {
       inputs: methodInputs(dto),
       instrumentIds: dto.instrumentIds,
       clientId: dto.clientId ?? null,
+      fourWire: dto.fourWire,
+      confirmUnusual: dto.confirmUnusual,
     };
     if (dto.clientId) {
       const earlier = await this.byClientId(dto.clientId, sampleId);

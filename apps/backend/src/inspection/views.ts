@@ -24,6 +24,8 @@ export interface ReadingFacts extends Pick<
   | 'voided'
   | 'voidReason'
   | 'voidedAt'
+  | 'fourWire'
+  | 'confirmedUnusual'
 > {
   sampleId: number;
   takenBy: { id: number; name: string } | null;
@@ -45,8 +47,18 @@ export function readingFactsView(r: ReadingFacts) {
   const result = r.result as {
     reasons?: string[];
     lengthForConclusiveMm?: number | null;
+    lengthAdvice?: string | null;
     budget?: unknown[];
+    coverageFactor?: number;
+    effectiveDegreesOfFreedom?: number | null;
+    note?: string;
     identification?: unknown;
+    criterion?: 'area' | 'resistance';
+    resistanceOhmPerKm?: number | null;
+    UResistanceOhmPerKm?: number | null;
+    limit?: unknown;
+    consequence?: unknown;
+    unusual?: unknown[] | null;
   };
   return {
     id: r.id,
@@ -64,8 +76,20 @@ export function readingFactsView(r: ReadingFacts) {
     verdict: r.verdict,
     reasons: result.reasons ?? [],
     lengthForConclusiveMm: result.lengthForConclusiveMm ?? null,
+    lengthAdvice: result.lengthAdvice ?? null,
     budget: result.budget ?? [],
+    coverageFactor: result.coverageFactor ?? 2,
+    effectiveDegreesOfFreedom: result.effectiveDegreesOfFreedom ?? null,
+    budgetNote: result.note ?? null,
     identification: result.identification ?? null,
+    criterion: result.criterion ?? 'area',
+    resistanceOhmPerKm: result.resistanceOhmPerKm ?? null,
+    UResistanceOhmPerKm: result.UResistanceOhmPerKm ?? null,
+    limit: result.limit ?? null,
+    consequence: result.consequence ?? null,
+    fourWire: r.fourWire ?? null,
+    confirmedUnusual: Boolean(r.confirmedUnusual),
+    unusual: r.confirmedUnusual ? (result.unusual ?? null) : null,
     takenBy: person(r.takenBy),
     takenAt: r.takenAt,
     voided: r.voided,
@@ -87,8 +111,45 @@ export function sampleView(s: Sample) {
     unitRef: s.unitRef,
     conductorId: s.conductor.id,
     verdict: sampleVerdict(readings),
+    disagreement: disagreementOf(readings),
     createdBy: person(s.createdBy),
     createdAt: s.createdAt,
     readings: readings.map(readingView),
   };
+}
+
+/** Two live readings of one sample that disagree by more than their combined U. */
+export interface Disagreement {
+  readingIds: [number, number];
+  message: string;
+}
+
+/**
+ * Flags two live readings of one sample whose areas differ by more than their combined
+ * expanded uncertainty √(U₁² + U₂²) (issue 13; the E_n test of ISO/IEC 17043 and ISO 13528,
+ * |E_n| > 1). Two-wire readings are left out: they decide nothing. The first such pair, or null.
+ */
+export function disagreementOf(
+  readings: readonly Pick<
+    Reading,
+    'id' | 'voided' | 'method' | 'areaMm2' | 'expandedUMm2' | 'fourWire'
+  >[],
+): Disagreement | null {
+  const live = readings.filter((r) => !r.voided && r.fourWire !== false);
+  for (let i = 0; i < live.length; i++) {
+    for (let j = i + 1; j < live.length; j++) {
+      const a = live[i];
+      const b = live[j];
+      const combined = Math.sqrt(a.expandedUMm2 ** 2 + b.expandedUMm2 ** 2);
+      const gap = Math.abs(a.areaMm2 - b.areaMm2);
+      if (gap > combined) {
+        const times = combined > 0 ? `${(gap / combined).toFixed(1)} times` : 'more than';
+        return {
+          readingIds: [a.id, b.id],
+          message: `The ${a.method} and ${b.method} readings disagree: ${a.areaMm2.toPrecision(4)} and ${b.areaMm2.toPrecision(4)} mm² differ by ${times} their combined uncertainty. Check both for a slip, or a metal other than the one claimed.`,
+        };
+      }
+    }
+  }
+  return null;
 }

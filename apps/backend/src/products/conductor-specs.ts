@@ -1,12 +1,19 @@
 import { BadRequestException } from '@nestjs/common';
 import type { EntityManager } from '@mikro-orm/core';
-import { parseGauge, StandardsInputError, type Gauge } from '@gaugeproof/standards';
+import {
+  DEFAULT_CONDUCTOR_CLASS,
+  parseGauge,
+  StandardsInputError,
+  type Gauge,
+} from '@gaugeproof/standards';
 import type { ConductorDto } from './dto/conductor.dto';
 import { ConductorSpec } from './entities/conductor-spec.entity';
 import type { Product } from './entities/product.entity';
 
 interface ParsedConductor extends ConductorDto {
   gaugeOf: Gauge;
+  /** IEC 60228 class for a metric size (default 5), null for AWG. */
+  classOf: number | null;
 }
 
 /**
@@ -17,7 +24,16 @@ export function parseConductors(list: readonly ConductorDto[]): ParsedConductor[
   const problems: string[] = [];
   const parsed = list.map((c, i) => {
     try {
-      return { ...c, gaugeOf: parseGauge(c.gauge) };
+      const gaugeOf = parseGauge(c.gauge);
+      const given = c.conductorClass ?? null;
+      if (gaugeOf.system !== 'metric' && given !== null) {
+        problems.push(
+          `conductors[${i}].conductorClass: conductorClass is for metric (IEC 60228) sizes only; ${gaugeOf.label} is judged by its area (ASTM B258).`,
+        );
+      }
+      // IEC 60228 class 5, the flexible class of vehicle power cable, by default (issue 13).
+      const classOf = gaugeOf.system === 'metric' ? (given ?? DEFAULT_CONDUCTOR_CLASS) : null;
+      return { ...c, gaugeOf, classOf };
     } catch (e) {
       if (!(e instanceof StandardsInputError)) throw e;
       problems.push(`conductors[${i}].gauge: ${e.message}`);
@@ -34,7 +50,8 @@ const sameSpec = (spec: ConductorSpec, c: ParsedConductor, position: number) =>
   spec.purpose === c.purpose &&
   spec.gaugeLabel === c.gaugeOf.label &&
   spec.claimedMaterial === c.claimedMaterial &&
-  spec.claimedStrands === (c.claimedStrands ?? null);
+  spec.claimedStrands === (c.claimedStrands ?? null) &&
+  spec.conductorClass === c.classOf;
 
 /**
  * Makes `list` the product's active conductors. An unchanged spec at the same position is
@@ -63,6 +80,7 @@ export function replaceConductors(
       nominalAreaMm2: c.gaugeOf.nominalAreaMm2,
       claimedMaterial: c.claimedMaterial,
       claimedStrands: c.claimedStrands ?? null,
+      conductorClass: c.classOf,
       active: true,
     });
     product.conductors.add(spec);

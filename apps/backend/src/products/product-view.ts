@@ -14,6 +14,7 @@ export function conductorView(c: ConductorSpec) {
     nominalAreaMm2: c.nominalAreaMm2,
     claimedMaterial: c.claimedMaterial,
     claimedStrands: c.claimedStrands,
+    conductorClass: c.conductorClass ?? null,
     active: c.active,
   };
 }

@@ -1,4 +1,9 @@
-import { samplingPlan, type Aql, type InspectionLevel } from '@gaugeproof/standards';
+import {
+  SAMPLING_PLAN_NAME,
+  samplingPlan,
+  type Aql,
+  type InspectionLevel,
+} from '@gaugeproof/standards';
 import type { StoredSamplingPlan } from '../lots/entities/lot.entity';
 import type { InspectionState } from './entities/inspection-state.entity';
 import type { Product } from './entities/product.entity';
@@ -69,6 +74,6 @@ export function planForLot(
     : `cut ${plan.sampleSize} of the ${quantity} units`;
   const message =
     `${SEVERITY_WORDS[plan.severity]}: ${cut} (code letter ${plan.codeLetter}, level ${plan.level}, AQL ${plan.aql}); ` +
-    `${acceptWords(plan.accept)}, reject at ${plan.reject}.`;
+    `${acceptWords(plan.accept)}, reject at ${plan.reject}. ${SAMPLING_PLAN_NAME}.`;
   return { samplingPlan: stored, severity, discontinued: false, message };
 }

@@ -112,6 +112,10 @@ const INSTRUMENTS: {
   serial: string;
   resolution: number;
   resolutionUnit: string;
+  /** Invented demo specifications and certificate uncertainties (k = 2), in resolutionUnit. */
+  accuracyPercentOfReading?: number;
+  accuracyAbsolute?: number;
+  calibrationUncertainty?: number;
   cal: Calibration;
 }[] = [
   {
@@ -121,6 +125,8 @@ const INSTRUMENTS: {
     serial: 'GP-B-01',
     resolution: 0.01,
     resolutionUnit: 'g',
+    accuracyAbsolute: 0.02,
+    calibrationUncertainty: 0.01,
     cal: { sinceDays: -200, dueInDays: 165 },
   },
   // Due within 14 days: shows on Today as due soon.
@@ -131,6 +137,8 @@ const INSTRUMENTS: {
     serial: 'GP-R-01',
     resolution: 1,
     resolutionUnit: 'mm',
+    accuracyAbsolute: 0.5,
+    calibrationUncertainty: 0.2,
     cal: { sinceDays: -356, dueInDays: 9 },
   },
   {
@@ -140,6 +148,8 @@ const INSTRUMENTS: {
     serial: 'GP-M-01',
     resolution: 0.001,
     resolutionUnit: 'mm',
+    accuracyAbsolute: 0.001,
+    calibrationUncertainty: 0.0005,
     cal: { sinceDays: -60, dueInDays: 305 },
   },
   // Overdue: readings with it are refused.
@@ -150,6 +160,7 @@ const INSTRUMENTS: {
     serial: 'GP-C-01',
     resolution: 0.01,
     resolutionUnit: 'mm',
+    accuracyAbsolute: 0.02,
     cal: { sinceDays: -371, dueInDays: -6 },
   },
   {
@@ -159,6 +170,9 @@ const INSTRUMENTS: {
     serial: 'GP-O-01',
     resolution: 0.001,
     resolutionUnit: 'mohm',
+    accuracyPercentOfReading: 0.2,
+    accuracyAbsolute: 0.002,
+    calibrationUncertainty: 0.001,
     cal: { sinceDays: -90, dueInDays: 275 },
   },
   {
@@ -168,6 +182,8 @@ const INSTRUMENTS: {
     serial: 'GP-T-01',
     resolution: 0.1,
     resolutionUnit: 'degC',
+    accuracyAbsolute: 0.5,
+    calibrationUncertainty: 0.2,
     cal: { sinceDays: -30, dueInDays: 335 },
   },
 ];

@@ -13,6 +13,10 @@ const OLDER_CYCLE: {
   serial: string;
   resolution: number;
   resolutionUnit: string;
+  /** Invented demo specifications and certificate uncertainties (k = 2), in resolutionUnit. */
+  accuracyPercentOfReading?: number;
+  accuracyAbsolute?: number;
+  calibrationUncertainty?: number;
   sinceDays: number;
   dueInDays: number;
 }[] = [
@@ -22,6 +26,8 @@ const OLDER_CYCLE: {
     serial: 'GP-B-02',
     resolution: 0.01,
     resolutionUnit: 'g',
+    accuracyAbsolute: 0.03,
+    calibrationUncertainty: 0.01,
     sinceDays: -300,
     dueInDays: 65,
   },
@@ -31,6 +37,9 @@ const OLDER_CYCLE: {
     serial: 'GP-O-02',
     resolution: 0.001,
     resolutionUnit: 'mohm',
+    accuracyPercentOfReading: 0.25,
+    accuracyAbsolute: 0.002,
+    calibrationUncertainty: 0.001,
     sinceDays: -280,
     dueInDays: 85,
   },
@@ -40,6 +49,8 @@ const OLDER_CYCLE: {
     serial: 'GP-T-02',
     resolution: 0.1,
     resolutionUnit: 'degC',
+    accuracyAbsolute: 0.5,
+    calibrationUncertainty: 0.2,
     sinceDays: -290,
     dueInDays: 75,
   },

@@ -48,6 +48,10 @@ export function resistanceInputs(piece: TruePiece, rnd: SeedRandom): ReadingInpu
 }
 
 export function strandInputs(piece: TruePiece, rnd: SeedRandom): ReadingInputs {
-  const d = Math.sqrt((4 * piece.areaMm2) / (Math.PI * piece.strands)) * (1 + rnd.jitter(0.001));
-  return { count: piece.strands, strandDiameterMm: toResolution(d, RESOLUTION.strandMm) };
+  // Three strands measured, as recommended (common practice, REFERENCE §3).
+  const d = Math.sqrt((4 * piece.areaMm2) / (Math.PI * piece.strands));
+  const strandDiametersMm = [0, 1, 2].map(() =>
+    toResolution(d * (1 + rnd.jitter(0.001)), RESOLUTION.strandMm),
+  );
+  return { count: piece.strands, strandDiametersMm };
 }

@@ -26,6 +26,9 @@ export interface ConductorInput {
   gauge: string;
   claimedMaterial?: ClaimedMaterial;
   active?: boolean;
+  claimedStrands?: number | null;
+  /** IEC 60228 class of a metric size; 5 by default for metric (issue 13), null for AWG. */
+  conductorClass?: number;
 }
 
 export interface Catalog {
@@ -66,6 +69,8 @@ export async function createProduct(
       nominalAreaMm2: gauge.nominalAreaMm2,
       claimedMaterial: c.claimedMaterial ?? 'copper',
       active: c.active ?? true,
+      claimedStrands: c.claimedStrands ?? null,
+      conductorClass: gauge.system === 'metric' ? (c.conductorClass ?? 5) : null,
     });
   });
   await m.flush();
@@ -110,6 +115,9 @@ export async function createInstrument(
   resolution: number,
   resolutionUnit: string,
   calibrationDueOn = '2099-12-31',
+  accuracy: Partial<
+    Pick<Instrument, 'accuracyPercentOfReading' | 'accuracyAbsolute' | 'calibrationUncertainty'>
+  > = {},
 ): Promise<{ id: number; serial: string }> {
   const m = em(t);
   const n = next();
@@ -121,6 +129,7 @@ export async function createInstrument(
     resolutionUnit,
     calibratedOn: '2020-01-01',
     calibrationDueOn,
+    ...accuracy,
   });
   await m.flush();
   return { id: i.id, serial: i.serial };

@@ -3,6 +3,7 @@ import {
   ArrayMaxSize,
   ArrayMinSize,
   IsArray,
+  IsBoolean,
   IsIn,
   IsInt,
   IsNumber,
@@ -24,7 +25,7 @@ const uses =
 /** Which input fields each method reads; anything else in the body is refused. */
 export const METHOD_FIELDS: Record<ReadingMethod, readonly string[]> = {
   mass: ['massG', 'lengthMm', 'strandingIncrement'],
-  strands: ['count', 'strandDiameterMm'],
+  strands: ['count', 'strandDiametersMm', 'strandDiameterMm'],
   resistance: ['resistanceOhm', 'lengthMm', 'temperatureC', 'strandingIncrement'],
   diameter: ['diameterMm'],
 };
@@ -33,6 +34,7 @@ export const INPUT_FIELDS = [
   'lengthMm',
   'count',
   'strandDiameterMm',
+  'strandDiametersMm',
   'resistanceOhm',
   'temperatureC',
   'diameterMm',
@@ -68,14 +70,35 @@ export class CreateReadingDto {
   @Max(100_000, { message: 'count must be at most 100000 strands' })
   readonly count?: number;
 
-  @ApiPropertyOptional({ description: 'strands: diameter of one strand, mm', example: 0.254 })
-  @ValidateIf(uses('strands'))
+  @ApiPropertyOptional({
+    description: 'strands: diameter of one strand, mm (older form; prefer strandDiametersMm)',
+    example: 0.254,
+  })
+  @ValidateIf((o: CreateReadingDto) => o.method === 'strands' && o.strandDiametersMm === undefined)
   @IsNumber(NUMBER, { message: 'strandDiameterMm must be a number of millimetres' })
   @IsPositive({ message: 'strandDiameterMm must be greater than 0 mm' })
   @Max(20, { message: 'strandDiameterMm must be at most 20 mm' })
   readonly strandDiameterMm?: number;
 
-  @ApiPropertyOptional({ description: 'resistance: four-wire DC resistance, ohm', example: 0.0008 })
+  @ApiPropertyOptional({
+    type: [Number],
+    description:
+      'strands: diameters of 1 to 10 strands, mm, each a different strand (three or more recommended)',
+    example: [0.253, 0.254, 0.255],
+  })
+  @ValidateIf((o: CreateReadingDto) => o.strandDiametersMm !== undefined)
+  @IsArray({ message: 'strandDiametersMm must be a list of strand diameters in mm' })
+  @ArrayMinSize(1, { message: 'strandDiametersMm must hold 1 to 10 strand diameters' })
+  @ArrayMaxSize(10, { message: 'strandDiametersMm must hold 1 to 10 strand diameters' })
+  @IsNumber(NUMBER, { each: true, message: 'strandDiametersMm must hold numbers of millimetres' })
+  @IsPositive({ each: true, message: 'each of strandDiametersMm must be greater than 0 mm' })
+  @Max(20, { each: true, message: 'each of strandDiametersMm must be at most 20 mm' })
+  readonly strandDiametersMm?: number[];
+
+  @ApiPropertyOptional({
+    description: 'resistance: DC resistance in ohm (Ω, not mΩ: 0.78 mΩ is 0.00078)',
+    example: 0.0008,
+  })
   @ValidateIf(uses('resistance'))
   @IsNumber(NUMBER, { message: 'resistanceOhm must be a number of ohms' })
   @IsPositive({ message: 'resistanceOhm must be greater than 0 ohm' })
@@ -107,6 +130,24 @@ export class CreateReadingDto {
   @Min(0, { message: 'strandingIncrement must be at least 0 (0 for a solid conductor)' })
   @Max(0.5, { message: 'strandingIncrement must be at most 0.5 (it is a fraction: 0.02 = 2 %)' })
   readonly strandingIncrement?: number;
+
+  @ApiPropertyOptional({
+    description:
+      'resistance: true (default) for a four-wire (Kelvin) reading; a two-wire one is stored but decides nothing',
+    example: true,
+  })
+  @IsOptional()
+  @IsBoolean({ message: 'fourWire must be true or false' })
+  readonly fourWire?: boolean;
+
+  @ApiPropertyOptional({
+    description:
+      'true records a reading the plausibility checks question (e.g. ten times the nominal mass)',
+    example: false,
+  })
+  @IsOptional()
+  @IsBoolean({ message: 'confirmUnusual must be true or false' })
+  readonly confirmUnusual?: boolean;
 
   @ApiProperty({ type: [Number], description: 'Registered instruments used', example: [1, 3] })
   @IsArray({ message: 'instrumentIds must be a list of instrument ids' })

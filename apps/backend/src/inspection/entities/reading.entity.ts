@@ -16,7 +16,14 @@ export interface InstrumentSnapshot {
   resolution: number;
   resolutionUnit: string;
   calibrationDueOn: string;
+  /** The register's stated accuracy and certificate U (k = 2) when the reading was taken. */
+  accuracyPercentOfReading?: number | null;
+  accuracyAbsolute?: number | null;
+  calibrationUncertainty?: number | null;
 }
+
+/** A raw input: one number, or several (strand diameters, 1 to 10). */
+export type ReadingInputValue = number | number[];
 
 /**
  * One measurement on a sample. Never deleted: a wrong one is voided with a reason.
@@ -44,7 +51,7 @@ export class Reading {
 
   /** The raw inputs as entered (massG, lengthMm, …). */
   @Property({ type: 'json' })
-  inputs!: Record<string, number>;
+  inputs!: Record<string, ReadingInputValue>;
 
   @Property({ type: 'json' })
   instruments: Opt<InstrumentSnapshot[]> = [];
@@ -98,4 +105,12 @@ export class Reading {
 
   @Property({ type: 'Date', nullable: true })
   voidedAt: Date | null = null;
+
+  /** Resistance readings: four-wire (Kelvin) or not; null for the other methods. */
+  @Property({ type: 'boolean', nullable: true })
+  fourWire: boolean | null = null;
+
+  /** The clerk confirmed a reading the plausibility checks questioned (issue 13). */
+  @Property({ type: 'boolean' })
+  confirmedUnusual: Opt<boolean> = false;
 }

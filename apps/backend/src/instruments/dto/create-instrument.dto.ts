@@ -1,6 +1,10 @@
-import { ApiProperty } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   IsIn,
+  IsOptional,
+  Max,
+  Min,
+  ValidateIf,
   IsNumber,
   IsPositive,
   IsString,
@@ -12,6 +16,7 @@ import { INSTRUMENT_KINDS, type InstrumentKind } from '../entities/instrument.en
 import { RESOLUTION_UNITS, type ResolutionUnit } from '../instrument-rules';
 
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
+const NUMBER = { allowNaN: false, allowInfinity: false } as const;
 
 export class CreateInstrumentDto {
   @ApiProperty({ enum: INSTRUMENT_KINDS })
@@ -48,4 +53,40 @@ export class CreateInstrumentDto {
   @ApiProperty({ example: '2027-05-01', description: 'YYYY-MM-DD, after calibratedOn' })
   @Matches(DATE, { message: 'calibrationDueOn must be a date written YYYY-MM-DD' })
   readonly calibrationDueOn: string;
+
+  @ApiPropertyOptional({
+    nullable: true,
+    example: 0.2,
+    description: "Stated accuracy, ± % of reading (maker's specification)",
+  })
+  @IsOptional()
+  @ValidateIf((_o, v) => v !== null)
+  @IsNumber(NUMBER, { message: 'accuracyPercentOfReading must be a number of percent' })
+  @Min(0, { message: 'accuracyPercentOfReading must be 0 or more' })
+  @Max(10, {
+    message: 'accuracyPercentOfReading must be at most 10 (it is a percentage: 0.2 = 0.2 %)',
+  })
+  readonly accuracyPercentOfReading?: number | null;
+
+  @ApiPropertyOptional({
+    nullable: true,
+    example: 0.02,
+    description: 'Stated accuracy, ± a fixed amount in resolutionUnit',
+  })
+  @IsOptional()
+  @ValidateIf((_o, v) => v !== null)
+  @IsNumber(NUMBER, { message: 'accuracyAbsolute must be a number in the instrument unit' })
+  @Min(0, { message: 'accuracyAbsolute must be 0 or more' })
+  readonly accuracyAbsolute?: number | null;
+
+  @ApiPropertyOptional({
+    nullable: true,
+    example: 0.05,
+    description: "Calibration certificate's expanded uncertainty (k = 2), in resolutionUnit",
+  })
+  @IsOptional()
+  @ValidateIf((_o, v) => v !== null)
+  @IsNumber(NUMBER, { message: 'calibrationUncertainty must be a number in the instrument unit' })
+  @Min(0, { message: 'calibrationUncertainty must be 0 or more' })
+  readonly calibrationUncertainty?: number | null;
 }

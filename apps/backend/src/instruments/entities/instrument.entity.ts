@@ -49,4 +49,16 @@ export class Instrument {
 
   @Property({ type: 'Date', onUpdate: () => new Date() })
   updatedAt: Opt<Date> = new Date();
+
+  /** Stated accuracy as ± % of the reading (maker's specification); null when not stated. */
+  @Property({ type: 'double', nullable: true })
+  accuracyPercentOfReading: number | null = null;
+
+  /** Stated accuracy as a fixed ± amount, in `resolutionUnit`; null when not stated. */
+  @Property({ type: 'double', nullable: true })
+  accuracyAbsolute: number | null = null;
+
+  /** Expanded uncertainty (k = 2) from the calibration certificate, in `resolutionUnit`. */
+  @Property({ type: 'double', nullable: true })
+  calibrationUncertainty: number | null = null;
 }

@@ -41,4 +41,14 @@ export class ConductorDto {
   @Min(1, { message: 'claimedStrands must be a whole number from 1 to 100000' })
   @Max(100_000, { message: 'claimedStrands must be a whole number from 1 to 100000' })
   readonly claimedStrands?: number | null;
+
+  @ApiPropertyOptional({
+    nullable: true,
+    enum: [1, 2, 5, 6],
+    description: 'IEC 60228 class of a metric conductor (default 5); not for AWG sizes',
+  })
+  @IsOptional()
+  @ValidateIf((_o, v) => v !== null)
+  @IsIn([1, 2, 5, 6], { message: 'conductorClass must be 1, 2, 5 or 6 (IEC 60228 classes)' })
+  readonly conductorClass?: number | null;
 }

@@ -1,6 +1,18 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { AQLS, INSPECTION_LEVELS, type Aql, type InspectionLevel } from '@gaugeproof/standards';
+import {
+  AQLS,
+  INSPECTION_LEVELS,
+  MAX_AQL_NONCONFORMING_UNITS,
+  type Aql,
+  type InspectionLevel,
+} from '@gaugeproof/standards';
 import { IsIn, IsNumber, IsOptional, Max, Min, ValidateIf } from 'class-validator';
+
+/**
+ * AQLs a plan that counts nonconforming units may use: 10 and below (ANSI/ASQ Z1.4;
+ * ISO 2859-1: larger AQLs are for nonconformities per 100 units).
+ */
+const UNIT_AQLS = AQLS.filter((a) => Number(a) <= MAX_AQL_NONCONFORMING_UNITS);
 
 /** The inspection policy and unit length of a product, each with its default. */
 export class ProductPolicyDto {
@@ -22,9 +34,12 @@ export class ProductPolicyDto {
   })
   readonly inspectionLevel?: InspectionLevel;
 
-  @ApiPropertyOptional({ enum: AQLS, default: '1.0' })
+  @ApiPropertyOptional({ enum: UNIT_AQLS, default: '1.0' })
   @IsOptional()
-  @IsIn(AQLS, { message: `aql must be one of ${AQLS.join(', ')}` })
+  @IsIn(AQLS, { message: `aql must be one of ${UNIT_AQLS.join(', ')}` })
+  @IsIn(UNIT_AQLS, {
+    message: `aql must be 10 or below: our plans count nonconforming units, and ANSI/ASQ Z1.4 and ISO 2859-1 give AQLs above 10 for nonconformities per 100 units only`,
+  })
   readonly aql?: Aql;
 
   /** 0.98 by default (ASTM B496 area tolerance); below 0.5 is no longer a size check. */

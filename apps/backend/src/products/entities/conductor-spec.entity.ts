@@ -46,4 +46,8 @@ export class ConductorSpec {
   /** Kept so that a changed product never rewrites the history of old lots. */
   @Property({ type: 'boolean' })
   active: Opt<boolean> = true;
+
+  /** IEC 60228 class (1, 2, 5, 6) of a metric conductor; null for AWG. */
+  @Property({ type: 'integer', nullable: true })
+  conductorClass: number | null = null;
 }
