@@ -26,9 +26,9 @@ export async function apiAs(email) {
 
 /**
  * An invented supplier, a 4 AWG copper spool of it and a lot of 50 spools awaiting its
- * decision with two of its three units far under their copper (a reject is due). S-3 at
- * AQL 15 on 50 spools is code letter B: 3 units, accept 1, reject 2 (ISO 2859-1 Tables I
- * and II-A). 195 g over 1000 mm of copper is about 21.5 mm² (a good 4 AWG, nominal
+ * decision with two of its first three units far under their copper (a reject is due at
+ * once: curtailed rejection). S-3 at AQL 10 on 50 spools is code letter B, arrowed to
+ * 5 units, accept 1, reject 2 (MIL-STD-105E / ANSI/ASQ Z1.4 Tables I and II-A). 195 g over 1000 mm of copper is about 21.5 mm² (a good 4 AWG, nominal
  * 21.15 mm²); 76.1 g is about 8.4 mm², which measures as 8 AWG (A = m / (ρ L (1 + k)),
  * ρ 8.89 g/cm³).
  */
@@ -44,7 +44,7 @@ export async function lotAwaitingReject(call, { supplier, code, sku, purpose, po
     kind: 'spool',
     description: `4 AWG ${purpose} cable, 30 m spool`,
     inspectionLevel: 'S-3',
-    aql: '15',
+    aql: '10',
     conductors: [{ purpose, gauge: '4 AWG', claimedMaterial: 'copper' }],
   });
   const instruments = await call('GET', '/instruments?pageSize=100');
@@ -58,7 +58,7 @@ export async function lotAwaitingReject(call, { supplier, code, sku, purpose, po
     quantity: 50,
     unit: 'spools',
   });
-  assert.equal(lot.samplingPlan.sampleSize, 3);
+  assert.equal(lot.samplingPlan.sampleSize, 5);
   for (const [seq, massG] of [
     [1, 76.1],
     [2, 76.1],

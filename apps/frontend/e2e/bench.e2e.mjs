@@ -40,8 +40,8 @@ let serialLot;
 let offlineLot;
 let admin;
 before(async () => {
-  // S-3 at AQL 15 on 50 spools is code letter B: 3 units, accept 1, reject 2
-  // (ISO 2859-1 Tables I and II-A).
+  // S-3 at AQL 4.0 on 50 spools is code letter B: 3 units, accept 0, reject 1
+  // (MIL-STD-105E / ANSI/ASQ Z1.4 Tables I and II-A).
   admin = await apiAs('admin@demo.example');
   const supplier = await admin('POST', '/suppliers', {
     name: `Bench Test Wire ${STAMP}`,
@@ -54,7 +54,7 @@ before(async () => {
     kind: 'spool',
     description: '4 AWG power cable, 30 m spool',
     inspectionLevel: 'S-3',
-    aql: '15',
+    aql: '4.0',
     conductors: [{ purpose: 'power', gauge: '4 AWG', claimedMaterial: 'copper' }],
   });
   lot = await admin('POST', '/lots', {

@@ -22,6 +22,8 @@ export interface Conductor {
   nominalAreaMm2: number;
   claimedMaterial: ClaimedMaterial;
   claimedStrands: number | null;
+  /** IEC 60228 class of a metric conductor (1, 2, 5, 6); null for AWG. */
+  conductorClass?: number | null;
 }
 
 export interface Instrument {
@@ -36,6 +38,9 @@ export interface Instrument {
   active: boolean;
   calibrationStatus: 'ok' | 'due_soon' | 'overdue';
   daysToDue: number;
+  accuracyPercentOfReading?: number | null;
+  accuracyAbsolute?: number | null;
+  calibrationUncertainty?: number | null;
 }
 
 export type InstrumentSnapshot = Pick<
@@ -47,7 +52,7 @@ export interface Reading {
   id: number;
   sampleId: number;
   method: ReadingMethod;
-  inputs: Record<string, number>;
+  inputs: Record<string, number | number[]>;
   instruments: InstrumentSnapshot[];
   areaMm2: number;
   uMm2: number;
@@ -59,12 +64,40 @@ export interface Reading {
   verdict: ReadingVerdict;
   reasons: string[];
   lengthForConclusiveMm: number | null;
+  /** Specimen-length advice (mass and resistance only), or null. */
+  lengthAdvice?: string | null;
+  /** The GUM budget of the reading (issue 13). */
+  budget?: BudgetLine[];
+  coverageFactor?: number;
+  effectiveDegreesOfFreedom?: number | null;
+  budgetNote?: string | null;
+  /** 'resistance' for metric copper (IEC 60228), 'area' otherwise. */
+  criterion?: 'area' | 'resistance';
+  resistanceOhmPerKm?: number | null;
+  UResistanceOhmPerKm?: number | null;
+  limit?: { maxOhmPerKm: number; source: string } | null;
+  consequence?: { treatAs: string | null; text: string; cautions: string[] } | null;
+  fourWire?: boolean | null;
+  confirmedUnusual?: boolean;
+  unusual?: { field: string; message: string }[] | null;
   takenBy: PersonRef;
   takenAt: string;
   voided: boolean;
   voidReason: string | null;
   voidedBy: PersonRef | null;
   voidedAt: string | null;
+}
+
+/** One line of a reading's uncertainty budget (GUM 5.1.6). */
+export interface BudgetLine {
+  name: string;
+  value: number;
+  unit: string;
+  standardUncertainty: number;
+  sensitivity: number;
+  relativeContribution: number;
+  note: string;
+  degreesOfFreedom?: number;
 }
 
 export interface Sample {
@@ -76,6 +109,8 @@ export interface Sample {
   createdBy: PersonRef;
   createdAt: string;
   readings: Reading[];
+  /** Two live readings that disagree by more than their combined U (issue 13). */
+  disagreement?: { readingIds: [number, number]; message: string } | null;
 }
 
 export interface Evaluation {

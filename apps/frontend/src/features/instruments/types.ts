@@ -25,6 +25,10 @@ export interface Instrument {
   active: boolean;
   calibrationStatus: CalibrationStatus;
   daysToDue: number;
+  /** Stated accuracy ± % of reading, ± an amount in resolutionUnit, certificate U (k = 2). */
+  accuracyPercentOfReading: number | null;
+  accuracyAbsolute: number | null;
+  calibrationUncertainty: number | null;
 }
 
 export const kindLabels: Record<InstrumentKind, string> = {

@@ -1,5 +1,14 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Alert, Button, InputAdornment, Stack, TextField, Typography } from '@mui/material';
+import {
+  Alert,
+  Button,
+  Checkbox,
+  FormControlLabel,
+  InputAdornment,
+  Stack,
+  TextField,
+  Typography,
+} from '@mui/material';
 import { useMemo, useState, type ReactNode } from 'react';
 import { Controller, useForm, useWatch, type Resolver } from 'react-hook-form';
 import { useCreateReading } from '@/features/inspection/api/create-reading';
@@ -20,6 +29,7 @@ import {
 import type { InputField, MethodDefinition } from '@/features/inspection/lib/reading-methods';
 import { previewReading } from '@/features/inspection/lib/reading-preview';
 import type { Conductor, Instrument, Reading, ReadingMethod } from '@/features/inspection/types';
+import { isApiError } from '@/lib/api-client';
 import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 
@@ -114,27 +124,52 @@ export function MethodReadingForm({
     [definition, setValue],
   );
   const [submitError, setSubmitError] = useState<unknown>(null);
+  // Resistance: four-wire (Kelvin) unless the clerk says otherwise (REFERENCE §4).
+  const [fourWire, setFourWire] = useState(true);
+  // A reading the server questioned (a likely typing slip): its messages, until confirmed.
+  const [questioned, setQuestioned] = useState<string[] | null>(null);
   const formErrors =
-    submitError !== null ? splitServerErrors(submitError, fieldNames).formErrors : [];
+    submitError !== null && questioned === null
+      ? splitServerErrors(submitError, fieldNames).formErrors
+      : [];
 
-  const onSubmit = form.handleSubmit(async (values) => {
+  const submit = async (values: ReadingFormValues, confirmUnusual: boolean) => {
     setSubmitError(null);
     try {
       const request = toReadingRequest(definition, values);
+      if (definition.method === 'resistance') request.fourWire = fourWire;
+      if (confirmUnusual) request.confirmUnusual = true;
       const reading = record ? await record(request) : await create.mutateAsync(request);
-      if (!record && reading) toasts.success(`Recorded: measures as ${reading.measuresAs}.`);
+      if (!record && reading) {
+        // A green toast never follows a failing reading (issue 13).
+        const text = `Recorded: measures as ${reading.measuresAs}, ${reading.verdict}.`;
+        if (reading.verdict === 'conforms') toasts.success(text);
+        else if (reading.verdict === 'nonconforming') toasts.error(text);
+        else toasts.show(text, 'warning');
+      }
+      setQuestioned(null);
       // The instruments stay chosen for the next reading: the clerk is at the same bench.
       form.reset({ ...emptyReadingForm(definition), instruments: values.instruments });
       onRecorded?.(reading, values, definition.method);
     } catch (error) {
       setSubmitError(error);
+      const questions =
+        isApiError(error) && error.status === 422
+          ? ((error.body as { questions?: { message: string }[] } | null)?.questions ?? [])
+          : [];
+      if (questions.length) {
+        setQuestioned(questions.map((q) => q.message));
+        return;
+      }
       const { fieldErrors } = splitServerErrors<FieldName>(error, fieldNames);
       for (const name of fieldNames) {
         const message = fieldErrors[name];
         if (message) form.setError(`values.${name}`, { type: 'server', message });
       }
     }
-  });
+  };
+  const onSubmit = form.handleSubmit((values) => submit(values, false));
+  const onConfirm = form.handleSubmit((values) => submit(values, true));
 
   return (
     <form noValidate onSubmit={onSubmit} aria-label={`${definition.label} reading`}>
@@ -143,6 +178,20 @@ export function MethodReadingForm({
           {definition.hint} Enter values as the instrument reads them.
         </Typography>
         {formErrors.length > 0 && <Alert severity="error">{formErrors.join(' ')}</Alert>}
+        {questioned && (
+          <Alert
+            severity="warning"
+            aria-label="Unusual reading"
+            action={
+              <Button color="inherit" size="small" onClick={() => void onConfirm()}>
+                Record it anyway
+              </Button>
+            }
+          >
+            Nothing was saved. {questioned.join(' ')} Correct the value, or record it as typed if it
+            is right.
+          </Alert>
+        )}
         <Stack direction={{ xs: 'column', md: 'row' }} spacing={2}>
           {definition.fields.map((field) => (
             <Stack key={field.name} spacing={0.5} sx={{ flex: 1 }}>
@@ -188,6 +237,14 @@ export function MethodReadingForm({
             />
           ))}
         </Stack>
+        {definition.method === 'resistance' && (
+          <FormControlLabel
+            control={
+              <Checkbox checked={fourWire} onChange={(e) => setFourWire(e.target.checked)} />
+            }
+            label="Four-wire (Kelvin) connection — a two-wire reading is kept but decides nothing"
+          />
+        )}
         <ReadingPreviewPanel preview={preview} />
         {preview?.ok && (
           <ConductorCaution

@@ -14,7 +14,12 @@ type ReadingFormProps = Omit<MethodReadingFormProps, 'definition'> & {
 
 /** One form per method; a second method on the same sample helps identify the metal. */
 export function ReadingForm({ defaultMethod = 'mass', ...props }: ReadingFormProps) {
-  const [method, setMethod] = useState<ReadingMethod>(defaultMethod);
+  // A stranded conductor's overall diameter is not its metal: no diameter tab (issue 13).
+  const stranded = (props.conductor.claimedStrands ?? 1) > 1;
+  const methods = METHOD_ORDER.filter((m) => !(stranded && m === 'diameter'));
+  const [method, setMethod] = useState<ReadingMethod>(
+    methods.includes(defaultMethod) ? defaultMethod : 'mass',
+  );
   return (
     <div>
       <Tabs
@@ -25,7 +30,7 @@ export function ReadingForm({ defaultMethod = 'mass', ...props }: ReadingFormPro
         allowScrollButtonsMobile
         sx={{ mb: 2 }}
       >
-        {METHOD_ORDER.map((m) => (
+        {methods.map((m) => (
           <Tab key={m} value={m} label={METHODS[m].label} />
         ))}
       </Tabs>

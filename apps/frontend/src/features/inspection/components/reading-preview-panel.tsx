@@ -1,6 +1,7 @@
 import { Alert, Box, Typography } from '@mui/material';
 import { VerdictChip } from '@/features/inspection/components/verdict-chip';
 import type { ReadingPreview } from '@/features/inspection/lib/reading-preview';
+import { formatPercent, formatWithUncertainty } from '@gaugeproof/standards';
 import { useUnits } from '@/lib/units';
 
 /** The live result while typing; the server's stored result replaces it once recorded. */
@@ -24,8 +25,8 @@ export function ReadingPreviewPanel({ preview }: { preview: ReadingPreview | nul
         Measures as {assessment.measuresAs.label} <VerdictChip verdict={assessment.verdict} />
       </Typography>
       <Typography>
-        {formatAreaMm2(area.areaMm2)} ± {formatAreaMm2(area.UMm2)} (k = 2):{' '}
-        {(assessment.areaRatio * 100).toFixed(1)} % of the {assessment.gauge.label} nominal{' '}
+        {formatWithUncertainty(area.areaMm2, area.UMm2, 'mm²')} (k = {area.coverageFactor}):{' '}
+        {formatPercent(assessment.areaRatio)} of the {assessment.gauge.label} nominal{' '}
         {formatAreaMm2(assessment.gauge.nominalAreaMm2)}
       </Typography>
       {assessment.reasons.slice(1).map((reason) => (

@@ -1,5 +1,7 @@
 import {
   Button,
+  Chip,
+  Collapse,
   Table,
   TableBody,
   TableCell,
@@ -7,6 +9,9 @@ import {
   TableRow,
   Typography,
 } from '@mui/material';
+import { useState } from 'react';
+import { formatPercent, formatWithUncertainty } from '@gaugeproof/standards';
+import { ReadingBudget } from '@/features/inspection/components/reading-budget';
 import { VerdictChip } from '@/features/inspection/components/verdict-chip';
 import { identifiedLabels, methodLabels } from '@/features/inspection/lib/labels';
 import type { Reading } from '@/features/inspection/types';
@@ -14,7 +19,14 @@ import { useUnits, type Units } from '@/lib/units';
 
 const dateTime = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
-function inputText(units: Units, name: string, value: number): string {
+function inputText(units: Units, name: string, raw: number | number[]): string {
+  // Raw inputs are shown in full, as typed (issue 13).
+  if (Array.isArray(raw)) {
+    return name === 'strandDiametersMm'
+      ? `d ${raw.map((d) => units.formatDiameterMm(d)).join(', ')}`
+      : `${name} ${raw.join(', ')}`;
+  }
+  const value = raw;
   switch (name) {
     case 'massG':
       return `m ${units.formatMassG(value)}`;
@@ -42,8 +54,17 @@ interface ReadingsTableProps {
   onVoid: (reading: Reading) => void;
 }
 
+/** The result at its precision (GUM 7.2.6): U to two significant figures, the value alike. */
+function resultText(r: Reading): string {
+  if (r.criterion === 'resistance' && r.resistanceOhmPerKm && r.UResistanceOhmPerKm) {
+    return `${formatWithUncertainty(r.resistanceOhmPerKm, r.UResistanceOhmPerKm, 'Ω/km')} at 20 °C`;
+  }
+  return formatWithUncertainty(r.areaMm2, r.UMm2, 'mm²');
+}
+
 export function ReadingsTable({ readings, canVoid, onVoid }: ReadingsTableProps) {
   const units = useUnits();
+  const [open, setOpen] = useState<number | null>(null);
   if (readings.length === 0) {
     return <Typography color="text.secondary">No readings on this sample yet.</Typography>;
   }
@@ -54,8 +75,8 @@ export function ReadingsTable({ readings, canVoid, onVoid }: ReadingsTableProps)
           {[
             'Method',
             'Inputs',
-            'Area ± U (k = 2)',
-            'Of nominal',
+            'Result ± U',
+            'Of nominal area',
             'Measures as',
             'Material',
             'Verdict',
@@ -73,7 +94,7 @@ export function ReadingsTable({ readings, canVoid, onVoid }: ReadingsTableProps)
             : undefined;
           return [
             <TableRow
-              key={r.id}
+              key={`${r.id}-row`}
               sx={struck ? { '& td': struck } : undefined}
               data-voided={r.voided || undefined}
             >
@@ -84,10 +105,39 @@ export function ReadingsTable({ readings, canVoid, onVoid }: ReadingsTableProps)
                 ))}
               </TableCell>
               <TableCell sx={{ whiteSpace: 'nowrap' }}>
-                {units.formatAreaMm2(r.areaMm2)} ± {units.formatAreaMm2(r.UMm2)}
+                {resultText(r)}
+                {r.limit ? (
+                  <Typography variant="caption" component="div">
+                    max {r.limit.maxOhmPerKm} Ω/km ({r.limit.source})
+                  </Typography>
+                ) : null}
+                <div>
+                  <Button
+                    size="small"
+                    aria-expanded={open === r.id}
+                    onClick={() => setOpen(open === r.id ? null : r.id)}
+                    sx={{ textDecoration: 'none' }}
+                  >
+                    {open === r.id ? 'Hide budget' : 'Budget'}
+                  </Button>
+                </div>
               </TableCell>
-              <TableCell>{(r.areaRatio * 100).toFixed(1)} %</TableCell>
-              <TableCell sx={{ fontWeight: 700 }}>{r.measuresAs}</TableCell>
+              <TableCell>{formatPercent(r.areaRatio)}</TableCell>
+              <TableCell sx={{ fontWeight: 700 }}>
+                {r.measuresAs}
+                {r.fourWire === false && (
+                  <Chip size="small" label="two-wire: decides nothing" sx={{ ml: 1 }} />
+                )}
+                {r.confirmedUnusual && (
+                  <Chip
+                    size="small"
+                    color="warning"
+                    label="unusual, confirmed"
+                    title={(r.unusual ?? []).map((q) => q.message).join(' ')}
+                    sx={{ ml: 1 }}
+                  />
+                )}
+              </TableCell>
               <TableCell>
                 {r.identifiedMaterial ? identifiedLabels[r.identifiedMaterial] : '—'}
                 {r.materialMismatch ? ' (not as sold)' : ''}
@@ -109,6 +159,13 @@ export function ReadingsTable({ readings, canVoid, onVoid }: ReadingsTableProps)
                     Void
                   </Button>
                 )}
+              </TableCell>
+            </TableRow>,
+            <TableRow key={`${r.id}-budget`}>
+              <TableCell colSpan={10} sx={{ py: 0, borderBottom: open === r.id ? undefined : 0 }}>
+                <Collapse in={open === r.id} unmountOnExit>
+                  <ReadingBudget reading={r} />
+                </Collapse>
               </TableCell>
             </TableRow>,
             r.voided ? (

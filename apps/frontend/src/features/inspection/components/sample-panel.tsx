@@ -38,6 +38,11 @@ export function SamplePanel({
         </Typography>
         <VerdictChip verdict={sample.verdict} />
       </Stack>
+      {sample.disagreement && (
+        <Alert severity="warning" aria-label="Readings disagree">
+          {sample.disagreement.message}
+        </Alert>
+      )}
       <Box sx={{ overflowX: 'auto' }}>
         <ReadingsTable
           readings={sample.readings}
@@ -78,6 +83,18 @@ export function SamplePanel({
                 {reason}
               </Typography>
             ))}
+            {current.consequence && (
+              <Box sx={{ mt: 1 }} aria-label="Installer's consequence">
+                <Typography variant="body2">
+                  <strong>{current.consequence.text}</strong>
+                </Typography>
+                {current.consequence.cautions.map((c) => (
+                  <Typography key={c} variant="caption" component="div">
+                    {c}
+                  </Typography>
+                ))}
+              </Box>
+            )}
           </Alert>
         </Stack>
       )}

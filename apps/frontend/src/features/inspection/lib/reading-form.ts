@@ -22,7 +22,40 @@ export function parseDecimal(text: string | undefined): number | null {
   return Number.isFinite(value) ? value : null;
 }
 
+/** "0.253 0.254; 0,255" → [0.253, 0.254, 0.255]; null when any part is not a number. */
+export function parseDecimalList(text: string | undefined): number[] | null {
+  const parts = (text ?? '')
+    .trim()
+    .split(/[\s;]+/)
+    .filter(Boolean);
+  if (parts.length === 0) return null;
+  const values = parts.map(parseDecimal);
+  return values.every((v) => v !== null) ? (values as number[]) : null;
+}
+
+/** Strand readings a sample may carry: 1 to 10 (issue 13; the server's limit). */
+const MAX_LIST_VALUES = 10;
+
+function listSchema(field: InputField) {
+  return z.string().superRefine((text, ctx) => {
+    const values = parseDecimalList(text);
+    if (text.trim() === '') {
+      ctx.addIssue({ code: 'custom', message: `Enter the ${field.label.toLowerCase()}.` });
+    } else if (values === null) {
+      ctx.addIssue({
+        code: 'custom',
+        message: `Enter numbers in ${field.unit}, separated by spaces.`,
+      });
+    } else if (values.length > MAX_LIST_VALUES) {
+      ctx.addIssue({ code: 'custom', message: `Enter at most ${MAX_LIST_VALUES} values.` });
+    } else if (values.some((v) => v <= 0)) {
+      ctx.addIssue({ code: 'custom', message: 'Each must be greater than 0.' });
+    }
+  });
+}
+
 function fieldSchema(field: InputField) {
+  if (field.list) return listSchema(field);
   return z.string().superRefine((text, ctx) => {
     if (text.trim() === '') {
       ctx.addIssue({ code: 'custom', message: `Enter the ${field.label.toLowerCase()}.` });
@@ -65,13 +98,22 @@ export function emptyReadingForm(definition: MethodDefinition): ReadingFormValue
   };
 }
 
+/** Typed inputs in request units; a list field holds several values. */
+export type TypedInputs = Partial<Record<FieldName, number | number[]>>;
+
 /** The typed inputs in request units (resistance from mΩ to Ω), or null while any is unusable. */
 export function readingInputs(
   definition: MethodDefinition,
   form: ReadingFormValues,
-): Partial<Record<FieldName, number>> | null {
-  const inputs: Partial<Record<FieldName, number>> = {};
+): TypedInputs | null {
+  const inputs: TypedInputs = {};
   for (const field of definition.fields) {
+    if (field.list) {
+      const list = parseDecimalList(form.values[field.name]);
+      if (list === null) return null;
+      inputs[field.name] = list;
+      continue;
+    }
     const value = parseDecimal(form.values[field.name]);
     if (value === null) return null;
     inputs[field.name] = field.name === 'resistanceOhm' ? value / 1000 : value;
@@ -106,7 +148,7 @@ export interface ReadingRequest {
   instrumentIds: number[];
   /** A UUID made on the device: a repeat is answered with the reading it recorded first. */
   clientId?: string | undefined;
-  [input: string]: number | number[] | string | undefined;
+  [input: string]: number | number[] | string | boolean | undefined;
 }
 
 export function toReadingRequest(
@@ -118,5 +160,12 @@ export function toReadingRequest(
   const instrumentIds = definition.instruments
     .map((slot) => Number(form.instruments[slot.slot]))
     .filter((id) => Number.isInteger(id) && id > 0);
-  return { method: definition.method, ...inputs, instrumentIds };
+  const request: ReadingRequest = { method: definition.method, instrumentIds };
+  for (const [name, value] of Object.entries(inputs)) {
+    if (value === undefined) continue;
+    // Strand diameters travel as the list the server takes (strandDiametersMm, 1 to 10).
+    if (name === 'strandDiameterMm') request.strandDiametersMm = [value].flat();
+    else request[name] = value;
+  }
+  return request;
 }

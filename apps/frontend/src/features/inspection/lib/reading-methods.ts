@@ -14,6 +14,8 @@ export interface InputField {
   /** Unit the clerk types in; resistance is typed in mΩ as milliohm meters show it. */
   unit: string;
   integer?: boolean;
+  /** Several values, separated by spaces or ; (strand diameters: 1 to 10). */
+  list?: boolean;
   /** Temperatures may be zero or below; everything else must be positive. */
   allowNonPositive?: boolean;
   helper?: string;
@@ -76,10 +78,17 @@ export const METHODS: Readonly<Record<ReadingMethod, MethodDefinition>> = {
   strands: {
     method: 'strands',
     label: 'Strands',
-    hint: 'Count the strands and measure one strand diameter with a micrometer.',
+    hint: 'Count the strands and measure three or more strands with a micrometer (up to 10).',
     fields: [
       { name: 'count', label: 'Strand count', unit: 'strands', integer: true },
-      { name: 'strandDiameterMm', label: 'Strand diameter', unit: 'mm' },
+      {
+        name: 'strandDiameterMm',
+        label: 'Strand diameters',
+        unit: 'mm',
+        list: true,
+        helper:
+          'One per strand, separated by spaces: 0.253 0.254 0.255. Three or more recommended.',
+      },
     ],
     instruments: [gauge],
   },
@@ -88,7 +97,12 @@ export const METHODS: Readonly<Record<ReadingMethod, MethodDefinition>> = {
     label: 'Resistance',
     hint: 'Four-wire DC resistance between the voltage contacts, with the conductor temperature.',
     fields: [
-      { name: 'resistanceOhm', label: 'Resistance', unit: 'mΩ' },
+      {
+        name: 'resistanceOhm',
+        label: 'Resistance in mΩ',
+        unit: 'mΩ',
+        helper: 'In milliohms, as the meter shows it (0.805 mΩ, not 0.000805).',
+      },
       { name: 'lengthMm', label: 'Length between contacts', unit: 'mm' },
       { name: 'temperatureC', label: 'Conductor temperature', unit: '°C', allowNonPositive: true },
     ],
@@ -111,7 +125,7 @@ export const METHODS: Readonly<Record<ReadingMethod, MethodDefinition>> = {
   diameter: {
     method: 'diameter',
     label: 'Diameter',
-    hint: 'Diameter of a solid conductor, measured with a micrometer.',
+    hint: 'Diameter of a solid conductor, measured with a micrometer. Not for stranded conductors: weigh them or measure their strands.',
     fields: [{ name: 'diameterMm', label: 'Conductor diameter', unit: 'mm' }],
     instruments: [gauge],
   },

@@ -9,13 +9,13 @@ import {
   type SampleAssessment,
 } from '@gaugeproof/standards';
 import type { MethodDefinition, ResolutionSlot } from '@/features/inspection/lib/reading-methods';
-import type { FieldName } from '@/features/inspection/lib/reading-form';
+import type { TypedInputs } from '@/features/inspection/lib/reading-form';
 import type { ClaimedMaterial } from '@/features/inspection/types';
 
 export interface PreviewInput {
   definition: MethodDefinition;
   /** In request units (readingInputs). */
-  inputs: Partial<Record<FieldName, number>>;
+  inputs: TypedInputs;
   resolutions: Partial<Record<ResolutionSlot, number>>;
   gauge: string;
   claimedMaterial: ClaimedMaterial;
@@ -26,8 +26,19 @@ export type ReadingPreview =
   | { ok: true; area: AreaResult; assessment: SampleAssessment }
   | { ok: false; field: string; message: string };
 
+/** One typed number, or NaN (the library's "not typed" message) when absent or a list. */
+const one = (x: number | number[] | undefined): number => (typeof x === 'number' ? x : NaN);
+
 function area(input: PreviewInput): AreaResult {
-  const v = input.inputs;
+  const i = input.inputs;
+  const v = {
+    massG: one(i.massG),
+    lengthMm: one(i.lengthMm),
+    count: one(i.count),
+    resistanceOhm: one(i.resistanceOhm),
+    temperatureC: typeof i.temperatureC === 'number' ? i.temperatureC : undefined,
+    diameterMm: one(i.diameterMm),
+  };
   const r = input.resolutions;
   // The library throws on a missing value, so `?? NaN` turns "not typed" into its message.
   switch (input.definition.method) {
@@ -42,7 +53,7 @@ function area(input: PreviewInput): AreaResult {
     case 'strands':
       return areaFromStrands({
         count: v.count ?? NaN,
-        strandDiameterMm: v.strandDiameterMm ?? NaN,
+        strandDiameterMm: i.strandDiameterMm ?? NaN,
         diameterResolutionMm: r.diameterResolutionMm,
       });
     case 'resistance':
@@ -76,7 +87,8 @@ export function previewReading(input: PreviewInput): ReadingPreview {
       areaMm2: result.areaMm2,
       UMm2: result.UMm2,
       minAreaRatio: input.minAreaRatio,
-      sampleLengthMm: input.inputs.lengthMm,
+      method: input.definition.method,
+      sampleLengthMm: typeof input.inputs.lengthMm === 'number' ? input.inputs.lengthMm : undefined,
     });
     return { ok: true, area: result, assessment };
   } catch (error) {

@@ -12,6 +12,17 @@ import {
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
 const realDate = (v: string) => DATE.test(v) && !Number.isNaN(Date.parse(`${v}T00:00:00Z`));
 
+/** An optional amount typed as text: empty, or a number from 0 (to `max`). */
+const optionalAmount = (message: string, max = Infinity) =>
+  z.string().refine((v) => {
+    if (v.trim() === '') return true;
+    const n = Number(v.replace(',', '.'));
+    return Number.isFinite(n) && n >= 0 && n <= max;
+  }, message);
+
+const amountOrNull = (v: string): number | null =>
+  v.trim() === '' ? null : Number(v.replace(',', '.'));
+
 export const instrumentSchema = z
   .object({
     kind: z.enum(INSTRUMENT_KINDS, 'Choose the kind of instrument.'),
@@ -22,6 +33,9 @@ export const instrumentSchema = z
       return v.trim() !== '' && Number.isFinite(n) && n > 0;
     }, 'The smallest step it shows, a number greater than 0.'),
     resolutionUnit: z.enum(RESOLUTION_UNITS, 'Choose the unit.'),
+    accuracyPercentOfReading: optionalAmount('A percentage of 0 or more, e.g. 0.2.', 10),
+    accuracyAbsolute: optionalAmount('An amount of 0 or more, in the unit above.'),
+    calibrationUncertainty: optionalAmount('The certificate’s U (k = 2), 0 or more.'),
     calibratedOn: z.string().refine(realDate, 'Enter the calibration date.'),
     calibrationDueOn: z.string().refine(realDate, 'Enter the date the next calibration is due.'),
   })
@@ -45,13 +59,24 @@ export const instrumentSchema = z
   });
 export type InstrumentInput = z.infer<typeof instrumentSchema>;
 
-export type InstrumentBody = Omit<InstrumentInput, 'resolution'> & { resolution: number };
+export type InstrumentBody = Omit<
+  InstrumentInput,
+  'resolution' | 'accuracyPercentOfReading' | 'accuracyAbsolute' | 'calibrationUncertainty'
+> & {
+  resolution: number;
+  accuracyPercentOfReading: number | null;
+  accuracyAbsolute: number | null;
+  calibrationUncertainty: number | null;
+};
 
 export const toInstrumentBody = (input: InstrumentInput): InstrumentBody => ({
   ...input,
   name: input.name.trim(),
   serial: input.serial.trim(),
   resolution: Number(input.resolution),
+  accuracyPercentOfReading: amountOrNull(input.accuracyPercentOfReading),
+  accuracyAbsolute: amountOrNull(input.accuracyAbsolute),
+  calibrationUncertainty: amountOrNull(input.calibrationUncertainty),
 });
 
 export const createInstrument = (body: InstrumentBody) =>

@@ -34,6 +34,9 @@ const FIELDS = [
   'serial',
   'resolution',
   'resolutionUnit',
+  'accuracyPercentOfReading',
+  'accuracyAbsolute',
+  'calibrationUncertainty',
   'calibratedOn',
   'calibrationDueOn',
 ] as const;
@@ -43,6 +46,9 @@ const EMPTY: InstrumentInput = {
   serial: '',
   resolution: '',
   resolutionUnit: 'g',
+  accuracyPercentOfReading: '',
+  accuracyAbsolute: '',
+  calibrationUncertainty: '',
   calibratedOn: '',
   calibrationDueOn: '',
 };
@@ -52,6 +58,9 @@ const toInput = (i: Instrument): InstrumentInput => ({
   serial: i.serial,
   resolution: String(i.resolution),
   resolutionUnit: i.resolutionUnit,
+  accuracyPercentOfReading: i.accuracyPercentOfReading?.toString() ?? '',
+  accuracyAbsolute: i.accuracyAbsolute?.toString() ?? '',
+  calibrationUncertainty: i.calibrationUncertainty?.toString() ?? '',
   calibratedOn: i.calibratedOn,
   calibrationDueOn: i.calibrationDueOn,
 });
@@ -118,11 +127,15 @@ export function InstrumentDialog(props: { instrument: Instrument | null; onClose
       )}
     />
   );
-  const text = (name: (typeof FIELDS)[number], label: string, extra: object = {}) => (
+  const text = (
+    name: (typeof FIELDS)[number],
+    label: string,
+    { helper, ...extra }: { helper?: string } & Record<string, unknown> = {},
+  ) => (
     <TextField
       label={label}
       error={!!errors[name]}
-      helperText={errors[name]?.message}
+      helperText={errors[name]?.message ?? helper}
       {...extra}
       {...form.register(name)}
     />
@@ -140,6 +153,20 @@ export function InstrumentDialog(props: { instrument: Instrument | null; onClose
           <Box sx={{ display: 'grid', gridTemplateColumns: '1fr 1fr', columnGap: 1.5 }}>
             {text('resolution', 'Resolution', { inputMode: 'decimal' })}
             {select('resolutionUnit', 'Unit', UNITS_BY_KIND[kind])}
+          </Box>
+          <Box sx={{ display: 'grid', gridTemplateColumns: '1fr 1fr 1fr', columnGap: 1.5 }}>
+            {text('accuracyPercentOfReading', 'Accuracy ± % of reading', {
+              inputMode: 'decimal',
+              helper: 'From the maker’s specification; optional.',
+            })}
+            {text('accuracyAbsolute', 'Accuracy ± amount', {
+              inputMode: 'decimal',
+              helper: 'In the unit above; optional.',
+            })}
+            {text('calibrationUncertainty', 'Certificate U (k = 2)', {
+              inputMode: 'decimal',
+              helper: 'In the unit above; optional.',
+            })}
           </Box>
           <Box sx={{ display: 'grid', gridTemplateColumns: '1fr 1fr', columnGap: 1.5 }}>
             {text('calibratedOn', 'Calibrated on', {

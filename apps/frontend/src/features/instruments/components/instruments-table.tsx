@@ -34,6 +34,22 @@ export function InstrumentsTable({ onEdit, onToggleActive, ...props }: Instrumen
           cell: ({ row }) =>
             `${row.original.resolution} ${unitLabels[row.original.resolutionUnit]}`,
         }),
+        helper.display({
+          id: 'accuracy',
+          header: 'Accuracy · certificate U',
+          cell: ({ row }) => {
+            const i = row.original;
+            const unit = unitLabels[i.resolutionUnit];
+            const parts = [
+              i.accuracyPercentOfReading != null ? `±${i.accuracyPercentOfReading} %` : '',
+              i.accuracyAbsolute != null ? `±${i.accuracyAbsolute} ${unit}` : '',
+            ].filter(Boolean);
+            const stated = parts.length ? parts.join(' + ') : 'not stated';
+            const cal =
+              i.calibrationUncertainty != null ? `U ${i.calibrationUncertainty} ${unit}` : 'no U';
+            return `${stated} · ${cal}`;
+          },
+        }),
         helper.accessor('calibratedOn', {
           header: 'Calibrated',
           cell: (info) => formatCalendarDate(info.getValue()),
