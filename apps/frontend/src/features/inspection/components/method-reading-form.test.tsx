@@ -75,7 +75,9 @@ describe('MethodReadingForm (mass)', { timeout: 30_000 }, () => {
     expect(within(live).getByText(/Measures as 8 AWG/)).toBeInTheDocument();
     expect(within(live).getByText('Nonconforming')).toBeInTheDocument();
     expect(
-      within(live).getByText(/8\.39\d* ± [\d.]+ mm² \(k = 2\): 39\.7 % of the 4 AWG nominal 21\.15 mm²/),
+      within(live).getByText(
+        /8\.39\d* ± [\d.]+ mm² \(k = 2\): 39\.7 % of the 4 AWG nominal 21\.15 mm²/,
+      ),
     ).toBeInTheDocument();
     expect(screen.getByRole('alert', { name: 'Caution for Power 4 AWG' })).toHaveTextContent(
       'a fuse sized for the label may not protect it',
