@@ -1,5 +1,5 @@
 import { DomainError } from '../common/domain-error';
-import { UnprocessableEntityException } from '@nestjs/common';
+
 import type { InstrumentAccuracy } from '@gaugeproof/standards';
 import type { Instrument, InstrumentKind } from '../instruments/entities/instrument.entity';
 import type { InstrumentSnapshot, ReadingMethod } from './entities/reading.entity';

@@ -1,5 +1,5 @@
 import { DomainError } from '../common/domain-error';
-import { BadRequestException, UnprocessableEntityException } from '@nestjs/common';
+import { UnprocessableEntityException } from '@nestjs/common';
 import {
   areaFromDiameter,
   areaFromMass,
