@@ -1,4 +1,4 @@
-import { Alert, Box, Button, CircularProgress, Stack, Typography } from '@mui/material';
+import { Alert, Box, Button, Stack, Typography } from '@mui/material';
 import { useEffect } from 'react';
 import { Link as RouterLink, useParams } from 'react-router-dom';
 import { SectionBoundary } from '@/components/section-boundary';
@@ -10,8 +10,9 @@ import { BenchPanel } from '@/features/inspection/components/bench/bench-panel';
 import { HoldBanner } from '@/features/lots/components/hold-banner';
 import { LotStatusChip } from '@/features/lots/components/lot-status-chip';
 import { isApiError } from '@/lib/api-client';
-import { errorMessage } from '@/lib/query-client';
 import type { Role } from '@/lib/roles';
+import { errorMessage } from '@/lib/query-client';
+import { lotLoadFallback } from './lot-load-fallback';
 
 const RECORDERS: readonly Role[] = ['clerk', 'qa_lead', 'admin'];
 const OPEN_STATUSES = ['on_hold', 'inspecting', 'awaiting_decision'];
@@ -45,28 +46,8 @@ export function LotBenchRoute() {
     return <Alert severity="info">There is no lot {id}.</Alert>;
   }
   // The bench starts from the instruments remembered on this device: wait for the register.
-  if (lot.isPending || instruments.isPending) {
-    return (
-      <Stack direction="row" spacing={2} sx={{ alignItems: 'center' }}>
-        <CircularProgress size={24} aria-label={`Loading lot ${lotId}`} />
-        <Typography>Loading lot {lotId}…</Typography>
-      </Stack>
-    );
-  }
-  if (lot.isError) {
-    return (
-      <Alert
-        severity="error"
-        action={
-          <Button color="inherit" onClick={() => void lot.refetch()}>
-            Try again
-          </Button>
-        }
-      >
-        Lot {lotId} could not be loaded: {errorMessage(lot.error)}
-      </Alert>
-    );
-  }
+  const fallback = lotLoadFallback(lot, lotId, instruments.isPending);
+  if (fallback || !lot.data) return fallback;
   const data = lot.data;
   const canRecord = OPEN_STATUSES.includes(data.status) && RECORDERS.includes(user.role);
   return (

@@ -1,5 +1,5 @@
 import PhoneIphoneOutlined from '@mui/icons-material/PhoneIphoneOutlined';
-import { Alert, Box, Button, CircularProgress, Grid, Stack, Typography } from '@mui/material';
+import { Alert, Box, Button, Grid, Stack } from '@mui/material';
 import { Link as RouterLink, useParams } from 'react-router-dom';
 import { SectionBoundary } from '@/components/section-boundary';
 import { paths } from '@/config/paths';
@@ -15,8 +15,8 @@ import { InspectionPanel } from '@/features/inspection/components/inspection-pan
 import { LotHeader } from '@/features/lots/components/lot-header';
 import { PhotosPanel } from '@/features/photos/components/photos-panel';
 import { isApiError } from '@/lib/api-client';
-import { errorMessage } from '@/lib/query-client';
 import type { Role } from '@/lib/roles';
+import { lotLoadFallback } from './lot-load-fallback';
 
 const RECORDERS: readonly Role[] = ['clerk', 'qa_lead', 'admin'];
 const VOIDERS: readonly Role[] = ['qa_lead', 'admin'];
@@ -48,28 +48,8 @@ export function LotRoute() {
       </Alert>
     );
   }
-  if (lot.isPending) {
-    return (
-      <Stack direction="row" spacing={2} sx={{ alignItems: 'center' }}>
-        <CircularProgress size={24} aria-label={`Loading lot ${lotId}`} />
-        <Typography>Loading lot {lotId}…</Typography>
-      </Stack>
-    );
-  }
-  if (lot.isError) {
-    return (
-      <Alert
-        severity="error"
-        action={
-          <Button color="inherit" onClick={() => void lot.refetch()}>
-            Try again
-          </Button>
-        }
-      >
-        Lot {lotId} could not be loaded: {errorMessage(lot.error)}
-      </Alert>
-    );
-  }
+  const fallback = lotLoadFallback(lot, lotId);
+  if (fallback || !lot.data) return fallback;
   const data = lot.data;
   const open = OPEN_STATUSES.includes(data.status);
   const canRecord = open && RECORDERS.includes(user.role);
