@@ -1,15 +1,8 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import {
-  Alert,
-  Button,
-  Dialog,
-  DialogActions,
-  DialogContent,
-  DialogTitle,
-  MenuItem,
-  TextField,
-} from '@mui/material';
-import { Controller, useForm } from 'react-hook-form';
+import { Button, Dialog, DialogActions, DialogContent, DialogTitle, MenuItem } from '@mui/material';
+import { useForm } from 'react-hook-form';
+import { FormTextField } from '@/components/form/form-text-field';
+import { ServerErrorAlert, submitWithServerErrors } from '@/components/form/server-errors';
 import {
   supplierSchema,
   toSupplierBody,
@@ -18,7 +11,6 @@ import {
 } from '@/features/suppliers/api/create-supplier';
 import { supplierPatch, useUpdateSupplier } from '@/features/suppliers/api/update-supplier';
 import { SUPPLIER_STATUSES, supplierStatusLabels, type Supplier } from '@/features/suppliers/types';
-import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 
 const FIELDS = ['name', 'code', 'contactEmail', 'status', 'notes'] as const;
@@ -54,24 +46,15 @@ export function SupplierDialog({ supplier, onClose }: SupplierDialogProps) {
     mode: 'onChange',
     defaultValues: supplier ? toInput(supplier) : EMPTY,
   });
-  const { errors, isSubmitting } = form.formState;
-  const formErrors = mutation.isError ? splitServerErrors(mutation.error, FIELDS).formErrors : [];
+  const { control } = form;
 
-  const onSubmit = form.handleSubmit(async (input) => {
+  const onSubmit = submitWithServerErrors(form, FIELDS, async (input) => {
     const body = toSupplierBody(input);
-    try {
-      const saved = supplier
-        ? await update.mutateAsync({ id: supplier.id, patch: supplierPatch(supplier, body) })
-        : await create.mutateAsync(body);
-      toasts.success(supplier ? `${saved.name} saved.` : `${saved.name} added.`);
-      onClose();
-    } catch (error) {
-      const { fieldErrors } = splitServerErrors(error, FIELDS);
-      for (const field of FIELDS) {
-        const message = fieldErrors[field];
-        if (message) form.setError(field, { type: 'server', message });
-      }
-    }
+    const saved = supplier
+      ? await update.mutateAsync({ id: supplier.id, patch: supplierPatch(supplier, body) })
+      : await create.mutateAsync(body);
+    toasts.success(supplier ? `${saved.name} saved.` : `${saved.name} added.`);
+    onClose();
   });
 
   const title = supplier ? `Edit ${supplier.name}` : 'New supplier';
@@ -80,60 +63,39 @@ export function SupplierDialog({ supplier, onClose }: SupplierDialogProps) {
       <form noValidate onSubmit={onSubmit} aria-label={title}>
         <DialogTitle>{title}</DialogTitle>
         <DialogContent>
-          {formErrors.length > 0 && <Alert severity="error">{formErrors.join(' ')}</Alert>}
-          <TextField
-            label="Name"
-            error={!!errors.name}
-            helperText={errors.name?.message}
-            {...form.register('name')}
-          />
-          <TextField
+          <ServerErrorAlert error={mutation.error} fields={FIELDS} />
+          <FormTextField control={control} name="name" label="Name" />
+          <FormTextField
+            control={control}
+            name="code"
             label="Code"
-            error={!!errors.code}
-            helperText={errors.code?.message ?? 'Short and unique; shown in lot lists.'}
-            {...form.register('code')}
+            helperText="Short and unique; shown in lot lists."
           />
-          <TextField
+          <FormTextField
+            control={control}
+            name="contactEmail"
             label="Contact e-mail"
             type="email"
-            error={!!errors.contactEmail}
-            helperText={errors.contactEmail?.message ?? 'Where returns and SCARs are sent.'}
-            {...form.register('contactEmail')}
+            helperText="Where returns and SCARs are sent."
           />
-          <Controller
-            control={form.control}
+          <FormTextField
+            control={control}
             name="status"
-            render={({ field, fieldState }) => (
-              <TextField
-                select
-                label="Status"
-                {...field}
-                error={!!fieldState.error}
-                helperText={
-                  fieldState.error?.message ??
-                  'A suspended supplier’s deliveries can still be received, with a warning.'
-                }
-              >
-                {SUPPLIER_STATUSES.map((status) => (
-                  <MenuItem key={status} value={status}>
-                    {supplierStatusLabels[status]}
-                  </MenuItem>
-                ))}
-              </TextField>
-            )}
-          />
-          <TextField
-            label="Notes"
-            multiline
-            minRows={2}
-            error={!!errors.notes}
-            helperText={errors.notes?.message}
-            {...form.register('notes')}
-          />
+            label="Status"
+            select
+            helperText="A suspended supplier’s deliveries can still be received, with a warning."
+          >
+            {SUPPLIER_STATUSES.map((status) => (
+              <MenuItem key={status} value={status}>
+                {supplierStatusLabels[status]}
+              </MenuItem>
+            ))}
+          </FormTextField>
+          <FormTextField control={control} name="notes" label="Notes" multiline minRows={2} />
         </DialogContent>
         <DialogActions>
           <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="contained" loading={isSubmitting}>
+          <Button type="submit" variant="contained" loading={form.formState.isSubmitting}>
             {supplier ? 'Save' : 'Add supplier'}
           </Button>
         </DialogActions>

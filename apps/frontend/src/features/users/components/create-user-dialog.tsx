@@ -1,21 +1,14 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import {
-  Alert,
-  Button,
-  Dialog,
-  DialogActions,
-  DialogContent,
-  DialogTitle,
-  TextField,
-} from '@mui/material';
+import { Button, Dialog, DialogActions, DialogContent, DialogTitle } from '@mui/material';
 import { useForm } from 'react-hook-form';
+import { FormTextField } from '@/components/form/form-text-field';
+import { ServerErrorAlert, submitWithServerErrors } from '@/components/form/server-errors';
 import {
   createUserSchema,
   useCreateUser,
   type CreateUserInput,
 } from '@/features/users/api/create-user';
-import { RoleField } from '@/features/users/components/role-options';
-import { splitServerErrors } from '@/lib/server-field-errors';
+import { roleOptions } from '@/features/users/components/role-options';
 import { toasts } from '@/lib/toast-store';
 
 const FIELDS = ['email', 'name', 'role', 'password'] as const;
@@ -28,8 +21,7 @@ export function CreateUserDialog({ open, onClose }: { open: boolean; onClose: ()
     mode: 'onChange',
     defaultValues: EMPTY,
   });
-  const { errors, isSubmitting } = form.formState;
-  const formErrors = create.isError ? splitServerErrors(create.error, FIELDS).formErrors : [];
+  const { control } = form;
 
   const close = () => {
     form.reset(EMPTY);
@@ -37,18 +29,10 @@ export function CreateUserDialog({ open, onClose }: { open: boolean; onClose: ()
     onClose();
   };
 
-  const onSubmit = form.handleSubmit(async (input) => {
-    try {
-      const user = await create.mutateAsync(input);
-      toasts.success(`${user.name} can now sign in.`);
-      close();
-    } catch (error) {
-      const { fieldErrors } = splitServerErrors(error, FIELDS);
-      for (const field of FIELDS) {
-        const message = fieldErrors[field];
-        if (message) form.setError(field, { type: 'server', message });
-      }
-    }
+  const onSubmit = submitWithServerErrors(form, FIELDS, async (input) => {
+    const user = await create.mutateAsync(input);
+    toasts.success(`${user.name} can now sign in.`);
+    close();
   });
 
   return (
@@ -56,36 +40,24 @@ export function CreateUserDialog({ open, onClose }: { open: boolean; onClose: ()
       <form noValidate onSubmit={onSubmit} aria-label="New user">
         <DialogTitle>New user</DialogTitle>
         <DialogContent>
-          {formErrors.length > 0 && <Alert severity="error">{formErrors.join(' ')}</Alert>}
-          <TextField
-            label="E-mail"
-            type="email"
-            error={!!errors.email}
-            helperText={errors.email?.message}
-            {...form.register('email')}
-          />
-          <TextField
-            label="Name"
-            error={!!errors.name}
-            helperText={errors.name?.message}
-            {...form.register('name')}
-          />
-          <RoleField control={form.control} />
-          <TextField
+          <ServerErrorAlert error={create.error} fields={FIELDS} />
+          <FormTextField control={control} name="email" label="E-mail" type="email" />
+          <FormTextField control={control} name="name" label="Name" />
+          <FormTextField control={control} name="role" label="Role" select>
+            {roleOptions}
+          </FormTextField>
+          <FormTextField
+            control={control}
+            name="password"
             label="Password"
             type="password"
             autoComplete="new-password"
-            error={!!errors.password}
-            helperText={
-              errors.password?.message ??
-              'At least 10 characters. Share it with the person in private.'
-            }
-            {...form.register('password')}
+            helperText="At least 10 characters. Share it with the person in private."
           />
         </DialogContent>
         <DialogActions>
           <Button onClick={close}>Cancel</Button>
-          <Button type="submit" variant="contained" loading={isSubmitting}>
+          <Button type="submit" variant="contained" loading={form.formState.isSubmitting}>
             Create user
           </Button>
         </DialogActions>

@@ -1,23 +1,16 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import {
-  Alert,
-  Button,
-  Dialog,
-  DialogActions,
-  DialogContent,
-  DialogTitle,
-  TextField,
-} from '@mui/material';
+import { Button, Dialog, DialogActions, DialogContent, DialogTitle } from '@mui/material';
 import { useForm } from 'react-hook-form';
+import { FormTextField } from '@/components/form/form-text-field';
+import { ServerErrorAlert, submitWithServerErrors } from '@/components/form/server-errors';
 import {
   editToPatch,
   editUserSchema,
   useUpdateUser,
   type EditUserInput,
 } from '@/features/users/api/update-user';
-import { RoleField } from '@/features/users/components/role-options';
+import { roleOptions } from '@/features/users/components/role-options';
 import type { User } from '@/features/users/types';
-import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 
 const FIELDS = ['name', 'role', 'password'] as const;
@@ -29,23 +22,14 @@ export function EditUserDialog({ user, onClose }: { user: User; onClose: () => v
     mode: 'onChange',
     defaultValues: { name: user.name, role: user.role, password: '' },
   });
-  const { errors, isSubmitting } = form.formState;
-  const formErrors = update.isError ? splitServerErrors(update.error, FIELDS).formErrors : [];
+  const { control } = form;
 
-  const onSubmit = form.handleSubmit(async (input) => {
+  const onSubmit = submitWithServerErrors(form, FIELDS, async (input) => {
     const patch = editToPatch(user, input);
     if (Object.keys(patch).length === 0) return onClose();
-    try {
-      await update.mutateAsync({ id: user.id, patch });
-      toasts.success(`Saved changes to ${user.name}.`);
-      onClose();
-    } catch (error) {
-      const { fieldErrors } = splitServerErrors(error, FIELDS);
-      for (const field of FIELDS) {
-        const message = fieldErrors[field];
-        if (message) form.setError(field, { type: 'server', message });
-      }
-    }
+    await update.mutateAsync({ id: user.id, patch });
+    toasts.success(`Saved changes to ${user.name}.`);
+    onClose();
   });
 
   return (
@@ -53,26 +37,23 @@ export function EditUserDialog({ user, onClose }: { user: User; onClose: () => v
       <form noValidate onSubmit={onSubmit} aria-label="Edit user">
         <DialogTitle>Edit {user.email}</DialogTitle>
         <DialogContent>
-          {formErrors.length > 0 && <Alert severity="error">{formErrors.join(' ')}</Alert>}
-          <TextField
-            label="Name"
-            error={!!errors.name}
-            helperText={errors.name?.message}
-            {...form.register('name')}
-          />
-          <RoleField control={form.control} />
-          <TextField
+          <ServerErrorAlert error={update.error} fields={FIELDS} />
+          <FormTextField control={control} name="name" label="Name" />
+          <FormTextField control={control} name="role" label="Role" select>
+            {roleOptions}
+          </FormTextField>
+          <FormTextField
+            control={control}
+            name="password"
             label="New password"
             type="password"
             autoComplete="new-password"
-            error={!!errors.password}
-            helperText={errors.password?.message ?? 'Leave empty to keep the current password.'}
-            {...form.register('password')}
+            helperText="Leave empty to keep the current password."
           />
         </DialogContent>
         <DialogActions>
           <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="contained" loading={isSubmitting}>
+          <Button type="submit" variant="contained" loading={form.formState.isSubmitting}>
             Save
           </Button>
         </DialogActions>
