@@ -33,6 +33,7 @@ describe('route declarations', () => {
       'GET /api/health',
       'GET /api/supplier-portal/:token',
       'GET /api/supplier-portal/:token/evidence.pdf',
+      'GET /api/supplier-portal/:token/photos/:n',
       'POST /api/auth/login',
       'POST /api/supplier-portal/:token/attachments',
       'POST /api/supplier-portal/:token/response',

@@ -1,7 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Jimp } from 'jimp';
 import { EntityManager } from '@mikro-orm/core';
+import { ReturnLink } from '../src/supplier-portal/entities/return-link.entity';
 import { SupplierLink } from '../src/supplier-portal/entities/supplier-link.entity';
+import {
+  PortalThrottle,
+  PORTAL_BAD_TOKENS_PER_WINDOW,
+} from '../src/supplier-portal/portal-throttle';
 import { Fixtures, rejectedLot } from './helpers/decision-fixtures';
 import { startMailDev, type MailDev } from './helpers/maildev';
 import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
@@ -238,5 +243,135 @@ describe('the supplier portal', () => {
       at: expect.any(String),
       note: 'Checklist received and checked on site.',
     });
+  });
+
+  it('e-mails a return notice with a link to a page of that return only: its lots, its photos, its evidence pack', async () => {
+    const supplier = await fx.supplier('Larkspur Conductors', 'quality@larkspur.example');
+    const product = await fx.product(supplier.id);
+    const { lot } = await rejectedLot(t, fx, product.id);
+    // Another lot of the same supplier, not on the return, with a photo of its own.
+    const { lot: otherLot } = await rejectedLot(t, fx, product.id);
+    const png = await new Jimp({ width: 6, height: 4, color: 0xb87333ff }).getBuffer('image/png');
+    const photoOf = async (lotId: number, caption: string) => {
+      const res = await t.http
+        .post(`/api/lots/${lotId}/photos`)
+        .set(auth(await t.token(DEMO.clerk)))
+        .field('caption', caption)
+        .attach('file', png, { filename: 'cut.png', contentType: 'image/png' });
+      expect(res.status, JSON.stringify(res.body)).toBe(201);
+    };
+    await photoOf(lot.id, 'Internal: clerk thinks the reel was swapped');
+    await photoOf(otherLot.id, 'Photo of the other lot');
+    const ret = await t.http
+      .post('/api/returns')
+      .set(auth(buyer))
+      .send({
+        lotIds: [lot.id],
+        notes: 'Internal: buyer negotiates a discount instead',
+        supplierNote: 'Two of three units measure as 8 AWG, not the 4 AWG ordered.',
+      });
+    expect(ret.status, JSON.stringify(ret.body)).toBe(201);
+    const before = (await mail.emails()).length;
+    const sent = await t.http.post(`/api/returns/${ret.body.id}/email`).set(auth(buyer)).send({});
+    expect(sent.status, JSON.stringify(sent.body)).toBe(201);
+    expect(sent.body).toMatchObject({ status: 'sent', replyTo: 'buyer@demo.example' });
+    let emails = await mail.emails();
+    for (let i = 0; i < 50 && emails.length <= before; i++) {
+      await new Promise((r) => setTimeout(r, 100));
+      emails = await mail.emails();
+    }
+    const email = emails.find((e) => e.subject.startsWith(`Return ${ret.body.number}`))!;
+    expect(email.text).toContain('Why: Two of three units measure as 8 AWG');
+    expect(email.text).not.toContain('Internal');
+    const token = /\/supplier\/([A-Za-z0-9_.-]+)/.exec(email.text ?? '')![1];
+
+    const page = await t.http.get(portal(token));
+    expect(page.status).toBe(200);
+    expect(page.headers['cache-control']).toBe('no-store');
+    expect(page.body).toMatchObject({
+      kind: 'return',
+      number: ret.body.number,
+      status: 'emailed',
+      supplier: { name: 'Larkspur Conductors' },
+      note: 'Two of three units measure as 8 AWG, not the 4 AWG ordered.',
+      lots: [{ poNumber: lot.poNumber }],
+      photos: [{ n: 1, poNumber: lot.poNumber, width: 6, height: 4 }],
+      evidencePack: { number: ret.body.number },
+    });
+    const text = JSON.stringify(page.body);
+    for (const leak of [
+      'Internal',
+      otherLot.poNumber,
+      'buyer@demo.example',
+      'clerk@demo.example',
+      '"id"',
+      'createdBy',
+      'notes',
+      'reason',
+    ])
+      expect(text).not.toContain(leak);
+
+    const photo = await t.http.get(portal(token, '/photos/1'));
+    expect(photo.status).toBe(200);
+    expect(photo.headers['content-type']).toBe('image/png');
+    expect(photo.body.subarray(0, 8).toString('hex')).toBe('89504e470d0a1a0a'); // PNG signature
+    const thumb = await t.http.get(portal(token, '/photos/1?size=thumbnail'));
+    expect(thumb.status).toBe(200);
+    // The other lot's photo is not reachable from this page, by any number.
+    expect((await t.http.get(portal(token, '/photos/2'))).status).toBe(404);
+    const pdf = await t.http.get(portal(token, '/evidence.pdf'));
+    expect(pdf.status).toBe(200);
+    expect(pdf.headers['content-type']).toBe('application/pdf');
+
+    // A notice takes no answer and no files; a SCAR link shows no photos.
+    const answer = await t.http.post(portal(token, '/response')).send(ANSWER);
+    expect(answer.status).toBe(422);
+    expect(answer.body.message).toMatch(/return notice; it takes no answer/);
+    const file = await t.http.post(portal(token, '/attachments')).attach('file', png, 'x.png');
+    expect(file.status).toBe(422);
+    const scar = await scarWithLink('Larkspur Cable Two');
+    expect((await t.http.get(portal(scar.token, '/photos/1'))).status).toBe(404);
+
+    // Expired and revoked like a SCAR's link.
+    const em = t.app.get(EntityManager).fork();
+    await em.nativeUpdate(
+      ReturnLink,
+      { vendorReturn: ret.body.id },
+      { expiresAt: new Date(Date.now() - 1000) },
+    );
+    expect((await t.http.get(portal(token))).status).toBe(410);
+    expect((await t.http.get(portal(token, '/photos/1'))).status).toBe(410);
+    await em.nativeUpdate(
+      ReturnLink,
+      { vendorReturn: ret.body.id },
+      { expiresAt: new Date(Date.now() + 86_400_000) },
+    );
+    expect((await t.http.get(portal(token))).status).toBe(200);
+    const revoked = await t.http.post(`/api/returns/${ret.body.id}/revoke-links`).set(auth(buyer));
+    expect(revoked.body).toEqual({ revoked: 1 });
+    const gone = await t.http.get(portal(token));
+    expect(gone.status).toBe(410);
+    expect(gone.body.message).toMatch(/withdrawn/);
+    const stored = await em.find(ReturnLink, { vendorReturn: ret.body.id });
+    expect(stored.map((l) => l.tokenHash)).not.toContain(token);
+  });
+
+  it('slows token guessing: after a few unknown tokens from one address, that address is refused for ten minutes', async () => {
+    const throttle = t.app.get(PortalThrottle);
+    throttle.reset();
+    const { token } = await scarWithLink('Quarry Lane Wire');
+    for (let i = 0; i < PORTAL_BAD_TOKENS_PER_WINDOW; i++) {
+      const guess = await t.http.get(portal(`guess${i}.AAAA`));
+      expect(guess.status).toBe(404);
+    }
+    const refused = await t.http.get(portal(`guess-more.AAAA`));
+    expect(refused.status).toBe(429);
+    expect(Number(refused.headers['retry-after'])).toBeGreaterThan(500);
+    expect(refused.body.message).toMatch(/Too many links that are not valid/);
+    // The real link from that address waits too; staff routes are not limited by it.
+    expect((await t.http.get(portal(token))).status).toBe(429);
+    expect((await t.http.get('/api/returns').set(auth(buyer))).status).toBe(200);
+    throttle.reset();
+    expect((await t.http.get(portal(token))).status).toBe(200);
   });
 });

@@ -88,8 +88,10 @@ test('purchasing raises a return for a rejected lot, downloads its CSV and e-mai
   await page.getByRole('button', { name: 'E-mail supplier' }).click();
   const mail = page.getByRole('dialog');
   assert.match(await mail.getByLabel('To').inputValue(), /@/);
-  await mail.getByLabel('Message (optional)').fill('Please send an RMA and collect the spools.');
-  await mail.getByRole('button', { name: 'Send' }).click();
+  await mail
+    .getByLabel('A line of your own (optional)')
+    .fill('Please send an RMA and collect the spools.');
+  await mail.getByRole('button', { name: 'Send the notice' }).click();
   const row = page.getByRole('list', { name: 'Outbound messages' }).getByRole('listitem').first();
   await row.getByText('Sent', { exact: true }).waitFor();
   await row.getByText(/readings\.csv, RTV-\d{4}-\d{4}-evidence\.pdf/).waitFor();

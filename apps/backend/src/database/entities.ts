@@ -17,6 +17,7 @@ import { OpenReturnLot } from '../returns/entities/open-return-lot.entity';
 import { VendorReturn } from '../returns/entities/vendor-return.entity';
 import { Supplier } from '../suppliers/entities/supplier.entity';
 import { ScarAttachment } from '../supplier-portal/entities/scar-attachment.entity';
+import { ReturnLink } from '../supplier-portal/entities/return-link.entity';
 import { SupplierLink } from '../supplier-portal/entities/supplier-link.entity';
 import { User } from '../users/entities/user.entity';
 
@@ -39,6 +40,7 @@ export const ENTITIES = [
   OpenReturnLot,
   CorrectiveAction,
   SupplierLink,
+  ReturnLink,
   ScarAttachment,
   AuditEvent,
   OutboundMessage,

@@ -18,7 +18,9 @@ import { Migration20261203114500 } from './sqlite/Migration20261203114500';
 import { Migration20261203115000 } from './sqlite/Migration20261203115000';
 import { Migration20261203120000 } from './sqlite/Migration20261203120000';
 import { Migration20261203120504 } from './postgresql/Migration20261203120504';
+import { Migration20261203133643 } from './postgresql/Migration20261203133643';
 import { Migration20261203120500 } from './sqlite/Migration20261203120500';
+import { Migration20261203133640 } from './sqlite/Migration20261203133640';
 
 /**
  * Migrations per driver, in order, each driver in its own folder; listed in code so the
@@ -36,6 +38,7 @@ export const SQLITE_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203115000', class: Migration20261203115000 },
   { name: 'Migration20261203120000', class: Migration20261203120000 },
   { name: 'Migration20261203120500', class: Migration20261203120500 },
+  { name: 'Migration20261203133640', class: Migration20261203133640 },
 ];
 
 export const POSTGRES_MIGRATIONS: MigrationObject[] = [
@@ -49,4 +52,5 @@ export const POSTGRES_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203114950', class: Migration20261203114950 },
   { name: 'Migration20261203120010', class: Migration20261203120010 },
   { name: 'Migration20261203120504', class: Migration20261203120504 },
+  { name: 'Migration20261203133643', class: Migration20261203133643 },
 ];

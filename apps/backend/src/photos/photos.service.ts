@@ -19,7 +19,8 @@ const EXTENSIONS: Record<ImageType, string> = {
   'image/png': 'png',
   'image/webp': 'webp',
 };
-const typeOfKey = (key: string): ImageType =>
+/** A stored photo's type, by the extension its generated key ends with. */
+export const typeOfKey = (key: string): ImageType =>
   (Object.entries(EXTENSIONS).find(([, ext]) => key.endsWith(`.${ext}`))?.[0] ??
     'image/jpeg') as ImageType;
 

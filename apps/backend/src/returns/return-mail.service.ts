@@ -1,10 +1,22 @@
-import { Injectable, OnModuleInit, UnprocessableEntityException } from '@nestjs/common';
+import {
+  Inject,
+  Injectable,
+  NotFoundException,
+  OnModuleInit,
+  UnprocessableEntityException,
+} from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
+import { isoDate } from '../common/calendar';
+import { APP_CONFIG } from '../config/config.module';
+import type { AppConfig } from '../config/env';
 import { MailService, type MailAttachment } from '../mail/mail.service';
 import type { MessageView } from '../mail/message-view';
+import { ReturnLink } from '../supplier-portal/entities/return-link.entity';
+import { createReturnLink } from '../supplier-portal/return-links';
 import { EmailReturnDto } from './dto/email-return.dto';
+import { VendorReturn as VendorReturnEntity } from './entities/vendor-return.entity';
 import type { VendorReturn } from './entities/vendor-return.entity';
 import { ReturnDocuments } from './return-documents';
 import { ReturnsService, type ReturnRef } from './returns.service';
@@ -25,6 +37,7 @@ export class ReturnMailService implements OnModuleInit {
     private readonly mail: MailService,
     private readonly returns: ReturnsService,
     private readonly documents: ReturnDocuments,
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
   onModuleInit(): void {
@@ -62,16 +75,23 @@ export class ReturnMailService implements OnModuleInit {
     await this.returns.markEmailed(id, actor);
     em.clear();
     const ret = await this.returns.load(em, id);
+    // The supplier's own page for this notice: what was found, the photos, the evidence pack.
+    const { link, url } = createReturnLink(em, this.config, ret, to, actor.id);
+    await em.flush();
     const lots = ret.lots
       .getItems()
-      .map((l) => `lot ${l.id} (PO ${l.poNumber})`)
+      .map((l) => `PO ${l.poNumber}${l.supplierLotCode ? ` (your lot ${l.supplierLotCode})` : ''}`)
       .join(', ');
     const body = [
       dto.message?.trim(),
-      `Return to vendor ${ret.number}${ret.rmaNumber ? `, your RMA ${ret.rmaNumber}` : ''}.`,
-      `We rejected ${lots} at receiving inspection: the attached evidence pack shows the sampling plan, every reading with its uncertainty and the decision; the CSV holds the readings.`,
-      `Chargeback: ${money(ret.chargebackTotal, ret.currency)}.`,
-      'Please confirm the return and send us your corrective action.',
+      `We are returning goods to you: return ${ret.number}${ret.rmaNumber ? `, your RMA ${ret.rmaNumber}` : ''}.`,
+      `Deliveries concerned: ${lots}. They failed our receiving inspection.`,
+      ret.supplierNote?.trim() ? `Why: ${ret.supplierNote.trim()}` : null,
+      `Chargeback for inspection and handling: ${money(ret.chargebackTotal, ret.currency)}.`,
+      `See what we found, with the photos and the evidence pack, on this page (no account needed; the link works until ${isoDate(link.expiresAt)}):`,
+      url,
+      'Attached: the evidence pack (PDF: sampling plan, every reading with its uncertainty, the decision) and the readings (CSV).',
+      'Please confirm the return by replying to this e-mail, and send us your corrective action.',
     ]
       .filter(Boolean)
       .join('\n\n');
@@ -96,6 +116,7 @@ export class ReturnMailService implements OnModuleInit {
           number: ret.number,
           to,
           messageId: message.id,
+          linkId: link.id,
           status: message.status,
           error: message.error,
         },
@@ -103,6 +124,26 @@ export class ReturnMailService implements OnModuleInit {
     }
     await em.flush();
     return message;
+  }
+
+  /** Withdraws every link to the return's notice page: they answer 410 from now on. */
+  async revokeLinks(id: number, actor: RequestUser): Promise<{ revoked: number }> {
+    const em = this.em.fork();
+    const ret = await em.findOne(VendorReturnEntity, id);
+    if (!ret) throw new NotFoundException(`There is no return ${id}`);
+    const revoked = await em.nativeUpdate(
+      ReturnLink,
+      { vendorReturn: id, revokedAt: null },
+      { revokedAt: new Date() },
+    );
+    this.audit.record(em, actor, {
+      action: 'return.revoke_links',
+      entityType: 'vendor_return',
+      entityId: id,
+      after: { number: ret.number, revoked },
+    });
+    await em.flush();
+    return { revoked };
   }
 
   /**

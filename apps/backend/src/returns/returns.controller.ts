@@ -161,4 +161,11 @@ export class ReturnsController {
   ) {
     return this.mail.email(id, dto, actor);
   }
+
+  /** Withdraws the supplier's links to the notice's page (e.g. sent to a wrong address). */
+  @Post(':id/revoke-links')
+  @HttpCode(200)
+  revokeLinks(@Param('id', IdPipe) id: number, @CurrentUser() actor: RequestUser) {
+    return this.mail.revokeLinks(id, actor);
+  }
 }

@@ -5,16 +5,19 @@ import {
   HttpCode,
   Param,
   Post,
+  Query,
   Res,
   StreamableFile,
   UploadedFile,
   UseInterceptors,
 } from '@nestjs/common';
-import { ApiBody, ApiConsumes, ApiProduces, ApiTags } from '@nestjs/swagger';
+import { ApiBody, ApiConsumes, ApiProduces, ApiQuery, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { Public } from '../auth/decorators';
 import { singleFileInterceptor } from '../storage/single-file.interceptor';
+import { IdPipe } from '../common/id.pipe';
 import { SupplierResponseDto } from './dto/portal.dto';
+import { PortalThrottle } from './portal-throttle';
 import { MAX_ATTACHMENT_BYTES, SupplierPortalService } from './supplier-portal.service';
 
 const AttachmentUpload = singleFileInterceptor(
@@ -28,6 +31,7 @@ const AttachmentUpload = singleFileInterceptor(
  */
 @ApiTags('supplier-portal')
 @Controller('supplier-portal/:token')
+@UseInterceptors(PortalThrottle)
 export class SupplierPortalController {
   constructor(private readonly portal: SupplierPortalService) {}
 
@@ -72,6 +76,26 @@ export class SupplierPortalController {
     return new StreamableFile(pdf, {
       type: 'application/pdf',
       disposition: `inline; filename="${number}-evidence.pdf"`,
+    });
+  }
+
+  /** A photo of a return notice's lots, by its place on the page (1, 2, …). */
+  @Get('photos/:n')
+  @Public()
+  @ApiQuery({ name: 'size', required: false, enum: ['original', 'thumbnail'] })
+  @ApiProduces('image/jpeg', 'image/png', 'image/webp')
+  async photo(
+    @Param('token') token: string,
+    @Param('n', IdPipe) n: number,
+    @Query('size') size: string | undefined,
+    @Res({ passthrough: true }) res: Response,
+  ) {
+    const file = await this.portal.photo(token, n, size === 'thumbnail' ? 'thumbnail' : 'original');
+    res.setHeader('Cache-Control', 'no-store');
+    res.setHeader('X-Content-Type-Options', 'nosniff');
+    return new StreamableFile(file.stream, {
+      type: file.type,
+      disposition: `inline; filename="${file.name}"`,
     });
   }
 }

@@ -1,4 +1,4 @@
-import { createHash, createHmac, randomBytes, randomUUID, timingSafeEqual } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import {
   GoneException,
   Inject,
@@ -16,26 +16,29 @@ import type { AppConfig } from '../config/env';
 import { CorrectiveAction } from '../corrective-actions/entities/corrective-action.entity';
 import { MailService } from '../mail/mail.service';
 import type { MessageView } from '../mail/message-view';
+import { Photo } from '../photos/entities/photo.entity';
 import { sniffImageType } from '../photos/image-header';
+import { typeOfKey } from '../photos/photos.service';
 import { VendorReturn } from '../returns/entities/vendor-return.entity';
 import { ReturnDocuments } from '../returns/return-documents';
 import { StorageService } from '../storage/storage.service';
 import { User } from '../users/entities/user.entity';
 import { SendCorrectiveActionDto, SupplierResponseDto } from './dto/portal.dto';
+import { ReturnLink } from './entities/return-link.entity';
 import { ScarAttachment } from './entities/scar-attachment.entity';
 import { SupplierLink } from './entities/supplier-link.entity';
+import { DAY_MS, LINK_DAYS, newPortalToken, sha256, signedByUs } from './portal-token';
 
-/** How long a supplier's link works unless revoked (issue 14: 30 days). */
-export const LINK_DAYS = 30;
+export { LINK_DAYS } from './portal-token';
+
+type Resolved = { kind: 'scar'; link: SupplierLink } | { kind: 'return'; link: ReturnLink };
+
 /** 10 MB: a scanned 8D report or a few phone photos (common practice, no source). */
 export const MAX_ATTACHMENT_BYTES = 10 * 1024 * 1024;
 /** At most this many files on one request. */
 const MAX_ATTACHMENTS = 20;
-const DAY_MS = 86_400_000;
 const NOT_VALID =
   'This link is not valid. Check that the whole address from the e-mail was copied, or ask your customer for a new link.';
-
-const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
 
 /** PDF by its "%PDF-" header (ISO 32000-1, 7.5.2), images by their own magic bytes. */
 function sniffAttachment(b: Buffer): string | null {
@@ -71,12 +74,6 @@ export class SupplierPortalService {
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
-  private sign(random: string): string {
-    return createHmac('sha256', this.config.jwtSecret)
-      .update(`supplier-link:${random}`)
-      .digest('base64url');
-  }
-
   /** E-mails the supplier a new link to answer the request (also after a reopen). */
   async send(
     id: number,
@@ -98,8 +95,7 @@ export class SupplierPortalService {
         `${car.supplier.name} has no contact e-mail: add one to the supplier or give an address`,
       );
     }
-    const random = randomBytes(24).toString('base64url');
-    const token = `${random}.${this.sign(random)}`;
+    const token = newPortalToken(this.config.jwtSecret);
     const link = em.create(SupplierLink, {
       tokenHash: sha256(token),
       correctiveAction: car,
@@ -170,25 +166,29 @@ export class SupplierPortalService {
     return { revoked };
   }
 
-  /** The link behind a token: 404 for anything not ours, 410 once expired or revoked. */
-  private async resolve(em: EntityManager, token: string): Promise<SupplierLink> {
-    const [random, signature, extra] = token.split('.');
-    const expected = random ? Buffer.from(this.sign(random)) : null;
-    const given = Buffer.from(signature ?? '');
-    if (
-      extra !== undefined ||
-      !expected ||
-      expected.length !== given.length ||
-      !timingSafeEqual(expected, given)
-    ) {
-      throw new NotFoundException(NOT_VALID);
-    }
-    const link = await em.findOne(
+  /**
+   * The link behind a token, of either kind: 404 for anything not ours, 410 once expired
+   * or revoked. The signature is checked first, so a guessed token costs no look-up.
+   */
+  private async resolveAny(em: EntityManager, token: string): Promise<Resolved> {
+    if (!signedByUs(this.config.jwtSecret, token)) throw new NotFoundException(NOT_VALID);
+    const hash = sha256(token);
+    const scar = await em.findOne(
       SupplierLink,
-      { tokenHash: sha256(token) },
+      { tokenHash: hash },
       { populate: ['correctiveAction', 'correctiveAction.supplier', 'correctiveAction.lots'] },
     );
-    if (!link) throw new NotFoundException(NOT_VALID);
+    const found: Resolved | null = scar
+      ? { kind: 'scar', link: scar }
+      : await em
+          .findOne(
+            ReturnLink,
+            { tokenHash: hash },
+            { populate: ['vendorReturn', 'vendorReturn.supplier', 'vendorReturn.lots'] },
+          )
+          .then((link) => (link ? { kind: 'return' as const, link } : null));
+    if (!found) throw new NotFoundException(NOT_VALID);
+    const { link } = found;
     if (link.revokedAt) {
       throw new GoneException(
         'This link was withdrawn by your customer. Use the newest link you received, or ask for a new one.',
@@ -199,16 +199,85 @@ export class SupplierPortalService {
         `This link expired on ${isoDate(link.expiresAt)}. Ask your customer for a new one.`,
       );
     }
-    return link;
+    return found;
+  }
+
+  /** A corrective-action request's link; a return notice's link takes no answer. */
+  private async resolve(em: EntityManager, token: string): Promise<SupplierLink> {
+    const found = await this.resolveAny(em, token);
+    if (found.kind !== 'scar') {
+      throw new UnprocessableEntityException(
+        'This page shows a return notice; it takes no answer or files. Reply to the e-mail it came with.',
+      );
+    }
+    return found.link;
   }
 
   /** What the supplier's page shows: this one request, nothing else. */
   async view(token: string) {
     const em = this.em.fork();
-    const link = await this.resolve(em, token);
-    link.lastOpenedAt = new Date();
+    const found = await this.resolveAny(em, token);
+    found.link.lastOpenedAt = new Date();
     await em.flush();
-    return this.viewOf(em, link);
+    return found.kind === 'scar' ? this.viewOf(em, found.link) : this.returnViewOf(em, found.link);
+  }
+
+  /** The photos a return notice shows: those of its own lots, oldest first. */
+  private returnPhotos(em: EntityManager, ret: VendorReturn) {
+    const lotIds = ret.lots.getItems().map((l) => l.id);
+    return em.find(
+      Photo,
+      { lot: { $in: lotIds } },
+      { orderBy: { lot: 'asc', id: 'asc' }, populate: ['lot'] },
+    );
+  }
+
+  /** What a return notice's page shows, field by field: that return, nothing else. */
+  private async returnViewOf(em: EntityManager, link: ReturnLink) {
+    const ret = link.vendorReturn;
+    const photos = await this.returnPhotos(em, ret);
+    return {
+      kind: 'return' as const,
+      number: ret.number,
+      status: ret.status,
+      supplier: { name: ret.supplier.name },
+      note: ret.supplierNote,
+      rmaNumber: ret.rmaNumber,
+      chargeback: { amount: ret.chargebackTotal, currency: ret.currency },
+      emailedOn: ret.emailedAt ? isoDate(ret.emailedAt) : null,
+      lots: ret.lots
+        .getItems()
+        .sort((a, b) => a.id - b.id)
+        .map((l) => ({
+          poNumber: l.poNumber,
+          packingSlip: l.packingSlip,
+          supplierLotCode: l.supplierLotCode,
+          receivedOn: isoDate(l.receivedAt),
+          quantity: l.quantity,
+          unit: l.unit,
+        })),
+      photos: photos.map((p, i) => ({
+        n: i + 1,
+        poNumber: p.lot.poNumber,
+        width: p.width,
+        height: p.height,
+        takenOn: isoDate(p.createdAt),
+      })),
+      evidencePack: { number: ret.number },
+      linkExpiresAt: link.expiresAt,
+    };
+  }
+
+  /** Photo n (1-based, as the page lists them) of a return notice's lots. */
+  async photo(token: string, n: number, which: 'original' | 'thumbnail') {
+    const em = this.em.fork();
+    const found = await this.resolveAny(em, token);
+    if (found.kind !== 'return') throw new NotFoundException('This page has no photos');
+    const photo = (await this.returnPhotos(em, found.link.vendorReturn))[n - 1];
+    if (!photo) throw new NotFoundException(`There is no photo ${n} on this page`);
+    const key = which === 'original' ? photo.storageKey : photo.thumbnailKey;
+    const type = typeOfKey(key);
+    return { stream: await this.storage.get(key), type, name: `photo-${n}.${type.split('/')[1]}` };
   }
 
   private async viewOf(em: EntityManager, link: SupplierLink) {
@@ -220,6 +289,7 @@ export class SupplierPortalService {
     );
     const evidence = await this.evidenceReturn(em, car);
     return {
+      kind: 'corrective_action' as const,
       number: car.number,
       status: car.status,
       supplier: { name: car.supplier.name },
@@ -273,8 +343,11 @@ export class SupplierPortalService {
 
   async evidencePdf(token: string): Promise<{ pdf: Buffer; number: string }> {
     const em = this.em.fork();
-    const link = await this.resolve(em, token);
-    const ret = await this.evidenceReturn(em, link.correctiveAction);
+    const found = await this.resolveAny(em, token);
+    const ret =
+      found.kind === 'return'
+        ? found.link.vendorReturn
+        : await this.evidenceReturn(em, found.link.correctiveAction);
     if (!ret) throw new NotFoundException('There is no evidence pack for this request yet');
     await em.populate(ret, ['supplier', 'lots', 'createdBy']);
     return { pdf: await this.documents.pdf(ret), number: ret.number };

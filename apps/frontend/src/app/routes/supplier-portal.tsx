@@ -4,7 +4,7 @@ import {
   SupplierPortalPage,
 } from '@/features/supplier-portal/components/supplier-portal-page';
 
-/** /supplier/:token, public: the supplier answers a corrective-action request. */
+/** /supplier/:token, public: the supplier answers a corrective-action request or reads a return notice. */
 export function SupplierPortalRoute() {
   const token = useParams().token ?? '';
   return (

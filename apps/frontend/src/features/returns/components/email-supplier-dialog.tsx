@@ -8,6 +8,7 @@ import {
   DialogContentText,
   DialogTitle,
   TextField,
+  Typography,
 } from '@mui/material';
 import { useForm } from 'react-hook-form';
 import {
@@ -15,13 +16,18 @@ import {
   useEmailReturn,
   type EmailReturnInput,
 } from '@/features/returns/api/email-return';
+import { formatMoney } from '@/features/returns/lib/chargeback';
 import type { VendorReturn } from '@/features/returns/types';
 import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 
 const FIELDS = ['to', 'message'] as const;
 
-/** Sends the supplier the notice with the readings CSV and the evidence pack attached. */
+/**
+ * Sends the supplier the return notice: an e-mail with a link to the supplier's own page of
+ * what was found (lots, photos, evidence pack), the evidence pack and the readings attached.
+ * Worded for the buyer: what the supplier gets, and where their answer comes back.
+ */
 export function EmailSupplierDialog({ ret, onClose }: { ret: VendorReturn; onClose: () => void }) {
   const send = useEmailReturn();
   const form = useForm<EmailReturnInput>({
@@ -35,7 +41,8 @@ export function EmailSupplierDialog({ ret, onClose }: { ret: VendorReturn; onClo
   const onSubmit = form.handleSubmit(async (input) => {
     try {
       const message = await send.mutateAsync({ id: ret.id, input });
-      if (message.status === 'sent') toasts.success(`The notice went to ${message.to}.`);
+      if (message.status === 'sent')
+        toasts.success(`The return notice went to ${message.to}. Their reply comes to you.`);
       else if (message.status === 'logged')
         toasts.show(
           `No mail server is set: the message to ${message.to} is stored, not sent.`,
@@ -43,7 +50,7 @@ export function EmailSupplierDialog({ ret, onClose }: { ret: VendorReturn; onClo
         );
       else
         toasts.error(
-          `The message to ${message.to} failed: ${message.error ?? message.status}. Retry it from the list.`,
+          `The e-mail to ${message.to} did not go yet: ${message.error ?? message.status}. It is tried again by itself; see Messages.`,
         );
       onClose();
     } catch (error) {
@@ -57,11 +64,31 @@ export function EmailSupplierDialog({ ret, onClose }: { ret: VendorReturn; onClo
   return (
     <Dialog open onClose={onClose} fullWidth maxWidth="sm">
       <form noValidate onSubmit={onSubmit} aria-label="E-mail supplier">
-        <DialogTitle>E-mail {ret.supplier.name}</DialogTitle>
+        <DialogTitle>Send the return notice to {ret.supplier.name}</DialogTitle>
         <DialogContent>
-          <DialogContentText sx={{ mb: 1 }}>
-            The notice for {ret.number} goes with the readings CSV and the evidence pack (PDF)
-            attached. Every message is kept with its status.
+          <DialogContentText component="div" sx={{ mb: 1 }}>
+            <Typography sx={{ mb: 1 }}>
+              {ret.supplier.name} gets one e-mail telling them the goods on {ret.number} failed our
+              inspection and are coming back. It holds:
+            </Typography>
+            <ul style={{ margin: 0, paddingLeft: '1.25rem' }}>
+              <li>
+                {ret.supplierNote?.trim()
+                  ? `your note to the supplier: “${ret.supplierNote.trim()}”`
+                  : 'no note to the supplier yet (add one under “RMA, notes and costs” so they read why)'}
+              </li>
+              <li>the chargeback, {formatMoney(ret.chargebackTotal, ret.currency)}</li>
+              <li>
+                a link to a page of their own showing what we found (the lots, their photos and the
+                evidence pack), no account needed, working for 30 days
+              </li>
+              <li>the evidence pack (PDF) and the readings (CSV), attached</li>
+            </ul>
+            <Typography sx={{ mt: 1 }}>
+              Your internal notes and the QA lead's reason are not sent. Their reply comes to your
+              own e-mail address. The e-mail is kept under Messages, and tried again by itself if it
+              does not go through.
+            </Typography>
           </DialogContentText>
           {formErrors.length > 0 && <Alert severity="error">{formErrors.join(' ')}</Alert>}
           <TextField
@@ -72,24 +99,26 @@ export function EmailSupplierDialog({ ret, onClose }: { ret: VendorReturn; onClo
             helperText={
               errors.to?.message ??
               (ret.supplier.contactEmail
-                ? "The supplier's contact"
+                ? "The supplier's quality contact; change it for this notice only"
                 : 'The supplier has no contact e-mail: type one.')
             }
             {...form.register('to')}
           />
           <TextField
-            label="Message (optional)"
+            label="A line of your own (optional)"
             multiline
             minRows={3}
             error={!!errors.message}
-            helperText={errors.message?.message ?? 'Shown above the standard text.'}
+            helperText={
+              errors.message?.message ?? 'Goes at the top of the e-mail, before the text above.'
+            }
             {...form.register('message')}
           />
         </DialogContent>
         <DialogActions>
           <Button onClick={onClose}>Cancel</Button>
           <Button type="submit" variant="contained" loading={isSubmitting}>
-            Send
+            Send the notice
           </Button>
         </DialogActions>
       </form>

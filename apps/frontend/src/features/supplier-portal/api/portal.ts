@@ -2,21 +2,40 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { ApiError, api, isApiError } from '@/lib/api-client';
 
-/** What GET /api/supplier-portal/:token shows: one request, nothing internal. */
+interface PortalLot {
+  poNumber: string;
+  packingSlip: string | null;
+  supplierLotCode: string | null;
+  receivedOn: string;
+  quantity: number;
+  unit: string;
+}
+
+/** What GET /api/supplier-portal/:token shows for a return notice: that return only. */
+export interface PortalReturn {
+  kind: 'return';
+  number: string;
+  status: string;
+  supplier: { name: string };
+  note: string | null;
+  rmaNumber: string | null;
+  chargeback: { amount: number; currency: string };
+  emailedOn: string | null;
+  lots: PortalLot[];
+  photos: { n: number; poNumber: string; width: number; height: number; takenOn: string }[];
+  evidencePack: { number: string };
+  linkExpiresAt: string;
+}
+
+/** What GET /api/supplier-portal/:token shows for a SCAR: one request, nothing internal. */
 export interface PortalRequest {
+  kind: 'corrective_action';
   number: string;
   status: 'open' | 'responded' | 'verified' | 'reopened' | 'closed';
   supplier: { name: string };
   problem: string;
   dueOn: string;
-  lots: {
-    poNumber: string;
-    packingSlip: string | null;
-    supplierLotCode: string | null;
-    receivedOn: string;
-    quantity: number;
-    unit: string;
-  }[];
+  lots: PortalLot[];
   reopenComment: string | null;
   answer: {
     containment: string | null;
@@ -34,10 +53,17 @@ export interface PortalRequest {
 const path = (token: string, rest = '') => `/supplier-portal/${encodeURIComponent(token)}${rest}`;
 const key = (token: string) => ['supplier-portal', token] as const;
 
+export type PortalPage = PortalRequest | PortalReturn;
+
+/** Address of a return notice's photo n (1-based) on the public API. */
+export const portalPhotoUrl = (token: string, n: number, size?: 'thumbnail') =>
+  `/api${path(token, `/photos/${n}`)}${size ? `?size=${size}` : ''}`;
+export const portalEvidenceUrl = (token: string) => `/api${path(token, '/evidence.pdf')}`;
+
 export const usePortalRequest = (token: string) =>
   useQuery({
     queryKey: key(token),
-    queryFn: ({ signal }) => api.get<PortalRequest>(path(token), signal),
+    queryFn: ({ signal }) => api.get<PortalPage>(path(token), signal),
     retry: (count, error) => !(isApiError(error) && error.status < 500) && count < 2,
     meta: { inlineErrors: true },
   });

@@ -20,11 +20,14 @@ import { useForm } from 'react-hook-form';
 import {
   answerSchema,
   MAX_FILE_BYTES,
+  portalEvidenceUrl,
+  portalPhotoUrl,
   usePortalRequest,
   useSendAnswer,
   useUploadFile,
   type AnswerInput,
   type PortalRequest,
+  type PortalReturn,
 } from '@/features/supplier-portal/api/portal';
 import { isApiError } from '@/lib/api-client';
 import { errorMessage } from '@/lib/query-client';
@@ -167,6 +170,111 @@ function Files({ token, req }: { token: string; req: PortalRequest }) {
   );
 }
 
+function Deliveries({ lots }: { lots: PortalRequest['lots'] }) {
+  return lots.map((l) => (
+    <Fact key={`${l.poNumber}-${l.receivedOn}`} label="Delivery">
+      PO {l.poNumber}
+      {l.supplierLotCode ? ` · your lot ${l.supplierLotCode}` : ''}
+      {l.packingSlip ? ` · packing slip ${l.packingSlip}` : ''} · received {l.receivedOn} ·{' '}
+      {l.quantity} {l.unit}
+    </Fact>
+  ));
+}
+
+const money = (amount: number, currency: string) =>
+  `${currency} ${amount.toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 })}`;
+
+/** A return notice's page: what was found, the photos of those lots, the evidence pack. */
+function ReturnNotice({ token, r }: { token: string; r: PortalReturn }) {
+  return (
+    <Stack spacing={3}>
+      <div>
+        <Typography variant="h1" sx={{ fontSize: { xs: '1.75rem', sm: '2.25rem' } }}>
+          Return notice {r.number}
+        </Typography>
+        <Typography color="text.secondary">
+          For {r.supplier.name}
+          {r.emailedOn ? ` · sent ${r.emailedOn}` : ''}
+          {r.rmaNumber ? ` · your RMA ${r.rmaNumber}` : ''} · this link works until{' '}
+          {r.linkExpiresAt.slice(0, 10)}
+        </Typography>
+      </div>
+      <Card>
+        <CardContent>
+          <Stack spacing={2}>
+            <Typography variant="h2" sx={{ fontSize: '1.25rem' }}>
+              What was found
+            </Typography>
+            <Typography>
+              These deliveries failed our receiving inspection and are coming back to you.
+            </Typography>
+            {r.note && <Fact label="Why">{r.note}</Fact>}
+            <Deliveries lots={r.lots} />
+            <Fact label="Chargeback for inspection and handling">
+              {money(r.chargeback.amount, r.chargeback.currency)}
+            </Fact>
+            <Link href={portalEvidenceUrl(token)} target="_blank" rel="noopener">
+              Evidence pack {r.evidencePack.number} (PDF: sampling plan, every reading with its
+              uncertainty, the decision)
+            </Link>
+          </Stack>
+        </CardContent>
+      </Card>
+      <Card>
+        <CardContent>
+          <Typography variant="h2" sx={{ fontSize: '1.25rem', mb: 2 }}>
+            Photos ({r.photos.length})
+          </Typography>
+          {r.photos.length === 0 ? (
+            <Typography color="text.secondary">
+              No photos were taken of these deliveries.
+            </Typography>
+          ) : (
+            <Box
+              component="ul"
+              aria-label="Photos"
+              sx={{
+                listStyle: 'none',
+                p: 0,
+                m: 0,
+                display: 'grid',
+                gap: 2,
+                gridTemplateColumns: 'repeat(auto-fill, minmax(150px, 1fr))',
+              }}
+            >
+              {r.photos.map((p) => (
+                <li key={p.n}>
+                  <Link href={portalPhotoUrl(token, p.n)} target="_blank" rel="noopener">
+                    <Box
+                      component="img"
+                      src={portalPhotoUrl(token, p.n, 'thumbnail')}
+                      alt={`Photo ${p.n}, PO ${p.poNumber}`}
+                      loading="lazy"
+                      sx={{
+                        width: '100%',
+                        aspectRatio: '4 / 3',
+                        objectFit: 'cover',
+                        borderRadius: 1,
+                      }}
+                    />
+                  </Link>
+                  <Typography variant="caption" color="text.secondary">
+                    Photo {p.n} · PO {p.poNumber} · {p.takenOn}
+                  </Typography>
+                </li>
+              ))}
+            </Box>
+          )}
+        </CardContent>
+      </Card>
+      <Alert severity="info">
+        To confirm the return or ask a question, reply to the e-mail this link came with: it goes to
+        the buyer who sent it.
+      </Alert>
+    </Stack>
+  );
+}
+
 /**
  * The supplier's page, reached from the e-mailed link without an account: what was found,
  * the answer form, the files. It shows this one request and nothing else.
@@ -185,6 +293,7 @@ export function SupplierPortalPage({ token }: { token: string }) {
       </Alert>
     );
   }
+  if (req.data.kind === 'return') return <ReturnNotice token={token} r={req.data} />;
   const r = req.data;
   return (
     <Stack spacing={3}>
@@ -216,20 +325,9 @@ export function SupplierPortalPage({ token }: { token: string }) {
               What was found
             </Typography>
             <Fact label="Problem">{r.problem}</Fact>
-            {r.lots.map((l) => (
-              <Fact key={`${l.poNumber}-${l.receivedOn}`} label="Delivery">
-                PO {l.poNumber}
-                {l.supplierLotCode ? ` · your lot ${l.supplierLotCode}` : ''}
-                {l.packingSlip ? ` · packing slip ${l.packingSlip}` : ''} · received {l.receivedOn}{' '}
-                · {l.quantity} {l.unit}
-              </Fact>
-            ))}
+            <Deliveries lots={r.lots} />
             {r.evidencePack && (
-              <Link
-                href={`/api/supplier-portal/${encodeURIComponent(token)}/evidence.pdf`}
-                target="_blank"
-                rel="noopener"
-              >
+              <Link href={portalEvidenceUrl(token)} target="_blank" rel="noopener">
                 Evidence pack {r.evidencePack.number} (PDF: sampling plan, every reading, photos)
               </Link>
             )}
