@@ -65,7 +65,7 @@ describe('e-mail through a real MailDev', () => {
     expect(email.subject).toBe(`Return ${ret.number}: rejected cable from Pinecrest Cable Supply`);
     expect(email.to[0].address).toBe('rma@pinecrest.example');
     expect(email.text).toMatch(/^Please collect the spools by Friday\./);
-    expect(email.text).toContain('Chargeback: USD 20.00'); // CURRENCY unset: USD
+    expect(email.text).toContain('Chargeback for inspection and handling: USD 20.00'); // CURRENCY unset: USD
     const names = (email.attachments ?? []).map((a) => a.generatedFileName ?? a.fileName ?? '');
     expect(names).toHaveLength(2);
     const csv = (
