@@ -240,6 +240,7 @@ describe('methods that cannot mislead', () => {
     const stranded = await post(await sampleOf(lotId, p.conductorIds[0]), body);
     expect(stranded.status).toBe(422);
     expect(stranded.body.message).toMatch(/^diameterMm: the conductor is stranded .*mass.*strands/);
+    expect(stranded.body.errors).toEqual([{ field: 'diameterMm', message: stranded.body.message }]);
     const solid = await post(await sampleOf(lotId, p.conductorIds[1]), {
       ...body,
       diameterMm: 5.19, // 4 AWG 0.2043 in (ASTM B258)
@@ -271,6 +272,16 @@ describe('methods that cannot mislead', () => {
     expect(slip.body.message).toMatch(
       /^massG is about ten times the nominal mass: a decimal point\?/,
     );
+    // The one error shape, each problem on its field, and the questions list for the form.
+    expect(slip.body.errors).toEqual([
+      {
+        field: 'massG',
+        message: expect.stringMatching(/^massG is about ten times.*confirmUnusual/),
+      },
+    ]);
+    expect(slip.body.questions).toEqual([
+      { field: 'massG', message: expect.stringMatching(/^massG is about ten times/) },
+    ]);
     expect((await detail(lotId)).samples[0].readings).toEqual([]);
     const confirmed = await post(s, { ...mass(1950), confirmUnusual: true });
     expect(confirmed.status).toBe(201);
@@ -397,5 +408,32 @@ describe('CSV import names the resistance unit', () => {
     });
     expect(both.body.errors).toHaveLength(1);
     expect(both.body.errors[0].message).toMatch(/one column only/);
+  });
+
+  it('puts a questioned reading on its row and the column it was read from; nothing saved', async () => {
+    const p = await createProduct(t, [{ purpose: 'power', gauge: '4 AWG' }]);
+    const lotId = await createLot(t, p);
+    const ins = `${bench.meter.serial};${bench.thermometer.serial}`;
+    const header = 'unit,conductor,method,massG,lengthMm,temperatureC,resistance_mohm,instruments';
+    const csv = [
+      header,
+      `1,power,mass,195,1000,,,${bench.balance.serial};${bench.rule.serial}`,
+      // 0.0805 mΩ over 1 m: ten times 4 AWG's area (a decimal slip), questioned
+      `2,power,resistance,,1000,20,0.0805,${ins}`,
+      // 1950 g over 1 m: ten times 4 AWG's copper mass (195 g, REFERENCE §2)
+      `3,power,mass,1950,1000,,,${bench.balance.serial};${bench.rule.serial}`,
+    ].join('\n');
+    const res = await send(lotId, csv);
+    expect(res.status, JSON.stringify(res.body)).toBe(422);
+    expect(res.body.errors).toEqual([
+      {
+        row: 3,
+        column: 'resistance_mohm',
+        message: expect.stringMatching(/^resistanceOhm .*ten times/),
+      },
+      { row: 4, column: 'massG', message: expect.stringMatching(/^massG is about ten times/) },
+    ]);
+    const detail = await call(t, DEMO.qa, 'get', `/api/lots/${lotId}`);
+    expect(detail.body.samples).toEqual([]);
   });
 });

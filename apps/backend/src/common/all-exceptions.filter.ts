@@ -61,7 +61,7 @@ export class AllExceptionsFilter implements ExceptionFilter {
     if (exception instanceof DomainError) {
       status = exception.status;
       message = exception.bodyMessage;
-      extra = { errors: exception.errors };
+      extra = { ...exception.details, errors: exception.errors };
     } else if (exception instanceof HttpException) {
       status = exception.getStatus();
       const body = exception.getResponse();

@@ -30,6 +30,8 @@ export class DomainError extends Error {
   constructor(
     readonly kind: DomainErrorKind,
     readonly errors: readonly FieldError[],
+    /** More data for the error body beside `errors` (the plausibility `questions`). */
+    readonly details: Readonly<Record<string, unknown>> = {},
   ) {
     super(errors.map((e) => e.message).join(' '));
     this.name = 'DomainError';
@@ -39,6 +41,14 @@ export class DomainError extends Error {
   /** A business rule's refusal (422), on `field` when it is about one. */
   static refused(message: string, field: string | null = null): DomainError {
     return new DomainError('refused', [{ field, message }]);
+  }
+
+  /** A refusal with several problems, each on its field, and data beside them. */
+  static refusedAll(
+    errors: readonly FieldError[],
+    details: Readonly<Record<string, unknown>> = {},
+  ): DomainError {
+    return new DomainError('refused', errors, details);
   }
 
   static conflict(message: string, field: string | null = null): DomainError {

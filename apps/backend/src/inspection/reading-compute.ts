@@ -1,5 +1,4 @@
 import { DomainError } from '../common/domain-error';
-import { UnprocessableEntityException } from '@nestjs/common';
 import {
   areaFromDiameter,
   areaFromMass,
@@ -174,8 +173,9 @@ export function identify(all: readonly SiblingReading[]): MaterialIdentification
 /** 422 for the overall diameter of a stranded conductor (issue 13: it is a screen only). */
 function refuseStrandedDiameter(r: ReadingToCompute): void {
   if (r.method === 'diameter' && (r.claimedStrands ?? 1) > 1) {
-    throw new UnprocessableEntityException(
+    throw DomainError.refused(
       `diameterMm: the conductor is stranded (${r.claimedStrands} strands claimed), and the overall diameter of a bundle is not its metal (it measures well over the solid size). Weigh a specimen (mass) or count and measure the strands (strands) instead.`,
+      'diameterMm',
     );
   }
 }
@@ -200,10 +200,19 @@ export function computeReading(r: ReadingToCompute): ComputedReading {
       fields: { strandDiameters: 'strandDiametersMm' },
     });
     if (r.entry && questions.length && !r.entry.confirmUnusual) {
-      throw new UnprocessableEntityException({
-        message: `${questions.map((q) => q.message).join(' ')} Nothing was saved: correct the reading, or send it again with confirmUnusual: true if it is right.`,
-        questions,
-      });
+      // Each question on its field (errors), the last one saying how to go on; the
+      // `questions` list stays beside it for the form's "Record it anyway".
+      const last = questions.length - 1;
+      throw DomainError.refusedAll(
+        questions.map((q, i) => ({
+          field: q.field,
+          message:
+            i === last
+              ? `${q.message} Nothing was saved: correct the reading, or send it again with confirmUnusual: true if it is right.`
+              : q.message,
+        })),
+        { questions },
+      );
     }
     const scalable = r.method === 'mass' || r.method === 'resistance';
     const lengthMm = r.inputs.lengthMm;

@@ -154,12 +154,13 @@ export class ReadingsImportService {
       (c): c is CheckedRow => c.ok && c.serials.every((s) => idOf.has(s)),
     );
     const sampleIds = await this.samplesFor(em, lot, valid, errors, actor);
-    const entries: { rowNo: number; entry: NewReading }[] = [];
+    const entries: { rowNo: number; entry: NewReading; columns: Record<string, string> }[] = [];
     for (const c of valid) {
       const sampleId = sampleIds.get(c);
       if (sampleId === undefined) continue;
       entries.push({
         rowNo: c.rowNo,
+        columns: c.columns,
         entry: {
           sampleId,
           method: c.method,
@@ -180,11 +181,16 @@ export class ReadingsImportService {
     } catch (e) {
       if (!(e instanceof ReadingsRefused)) throw e;
       for (const { index, error } of e.refusals) {
-        errors.push({
-          row: entries[index].rowNo,
-          column: columnOf(error),
-          message: messageOf(error),
-        });
+        const { rowNo, columns } = entries[index];
+        // One problem per field the rule names (a questioned reading may name several), each
+        // on the column of this row it came from.
+        if (error instanceof DomainError) {
+          for (const f of error.errors) {
+            errors.push({ row: rowNo, column: columnOf(f.field, columns), message: f.message });
+          }
+        } else {
+          errors.push({ row: rowNo, column: null, message: messageOf(error) });
+        }
       }
     }
     if (errors.length) throw refusal(errors);
@@ -243,6 +249,8 @@ interface CheckedRow {
   unitRef: string;
   fourWire?: boolean;
   confirmUnusual?: boolean;
+  /** The column of this row a request field was read from, where it is not the field's name. */
+  columns: Record<string, string>;
 }
 
 /** Resistance columns, each naming its unit: Ω or mΩ (issue 13); resistanceOhm is Ω too. */
@@ -360,6 +368,8 @@ function checkRow(lot: Lot, row: Row, rowNo: number, errors: RowError[]): RowChe
       unitRef: cell('unitRef'),
       fourWire: dto.fourWire,
       confirmUnusual,
+      // The resistance came from the column that named its unit.
+      columns: given.length === 1 ? { resistanceOhm: given[0] } : {},
     };
   } catch (e) {
     fail(null, messageOf(e));
@@ -383,9 +393,9 @@ function conductorFor(lot: Lot, text: string): ConductorSpec | string {
   return `conductor "${text}" is not on product ${lot.product.sku}: use a purpose or number (${known})`;
 }
 
-function columnOf(e: unknown): string | null {
-  const field = e instanceof DomainError ? e.errors[0]?.field : null;
-  return field ? (COLUMN_OF_FIELD[field] ?? field) : null;
+/** The column of `field` in a row: the one it was read from, or its usual column. */
+function columnOf(field: string | null, columns: Record<string, string>): string | null {
+  return field ? (columns[field] ?? COLUMN_OF_FIELD[field] ?? field) : null;
 }
 
 /** The first import's answer to a retry; 422 when the key came with another file. */
