@@ -11,7 +11,7 @@ const RANK_VALUES = RANKS.map(([s, l, r]) => `('${s}', '${l.replace(/'/g, "''")}
   ', ',
 );
 
-/** The scorecard list of a range [start, end) in epoch ms: the same six aggregates. */
+/** The scorecard list of a range [start, end) in epoch ms: the same seven aggregates. */
 export function scorecardsRaw(db, { start, end, today }) {
   const month = `strftime('%Y-%m', l.received_at / 1000, 'unixepoch')`;
   const suppliers = db.prepare('select id, name, code, status from suppliers order by name').all();
@@ -30,20 +30,36 @@ export function scorecardsRaw(db, { start, end, today }) {
     .prepare(
       `with ranks(system, label, rank) as (values ${RANK_VALUES}),
        pairs as (
-         select l.supplier_id, ${month} as month, cs.gauge_system, cs.gauge_label, r.measures_as,
-                count(*) as n, sum(r.area_ratio) as sum_ratio, min(r.area_ratio) as min_ratio
+         select l.supplier_id, ${month} as month, r.method, cs.gauge_system, cs.gauge_label,
+                r.measures_as, count(*) as n, sum(r.area_ratio) as sum_ratio, min(r.area_ratio) as min_ratio
            from readings r
            join samples s on s.id = r.sample_id
            join lots l on l.id = s.lot_id
            join conductor_specs cs on cs.id = s.conductor_id
           where r.voided = 0 and l.received_at >= ? and l.received_at < ?
-          group by 1, 2, 3, 4, 5)
-       select p.supplier_id, p.month, sum(p.n) as readings, sum(p.sum_ratio) as sum_ratio,
+          group by 1, 2, 3, 4, 5, 6)
+       select p.supplier_id, p.month, p.method, sum(p.n) as readings, sum(p.sum_ratio) as sum_ratio,
               min(p.min_ratio) as min_ratio, max(lr.rank - mr.rank) as worst_short
          from pairs p
          left join ranks lr on lr.system = p.gauge_system and lr.label = p.gauge_label
          left join ranks mr on mr.system = p.gauge_system and mr.label = p.measures_as
-        group by p.supplier_id, p.month`,
+        group by p.supplier_id, p.month, p.method`,
+    )
+    .all(start, end);
+  // Units (a sample's seq in its lot): nonconforming when any of its conductors is.
+  const units = db
+    .prepare(
+      `select u.supplier_id, count(*) as tested, sum(u.nc) as nonconforming
+         from (select l.supplier_id, s.lot_id, s.seq, max(ps.nc) as nc
+                 from (select r.sample_id, max(r.verdict = 'nonconforming') as nc
+                         from readings r join samples s0 on s0.id = r.sample_id
+                         join lots l0 on l0.id = s0.lot_id
+                        where r.voided = 0 and l0.received_at >= ? and l0.received_at < ?
+                        group by r.sample_id) ps
+                 join samples s on s.id = ps.sample_id
+                 join lots l on l.id = s.lot_id
+                group by l.supplier_id, s.lot_id, s.seq) u
+        group by u.supplier_id`,
     )
     .all(start, end);
   const samples = db
@@ -75,7 +91,7 @@ export function scorecardsRaw(db, { start, end, today }) {
         where created_at >= ? and created_at < ? group by supplier_id`,
     )
     .all(start, end);
-  return { suppliers, lots, readings, samples, cars, chargebacks };
+  return { suppliers, lots, readings, units, samples, cars, chargebacks };
 }
 
 /**

@@ -29,10 +29,18 @@ export interface ScorecardRow {
   acceptanceRate: number | null;
   samplesTested: number;
   nonconformingSamples: number;
+  /** Units (kits, spools) with a live reading; a unit is nonconforming when any conductor is. */
+  unitsTested: number;
+  nonconformingUnits: number;
+  /** Nonconforming units ÷ units tested (a kit with one short conductor is one unit). */
+  unitNonconformingRate: number | null;
+  /** Nonconforming units per million units tested. */
   dppm: number | null;
   readings: number;
   meanAreaRatio: number | null;
   lowestAreaRatio: number | null;
+  /** Area ratios per method: methods are not pooled (a mass and a resistance reading differ). */
+  areaRatioByMethod: MethodAreaRatio[];
   materialMismatches: number;
   worstSizesShort: number | null;
   openCorrectiveActions: number;
@@ -40,6 +48,13 @@ export interface ScorecardRow {
   meanResponseDays: number | null;
   chargebacks: number;
   trend: TrendPoint[];
+}
+
+export interface MethodAreaRatio {
+  method: 'mass' | 'strands' | 'resistance' | 'diameter';
+  readings: number;
+  meanAreaRatio: number;
+  lowestAreaRatio: number | null;
 }
 
 export interface ScorecardList {

@@ -5,6 +5,7 @@ import { AuditEvent } from '../src/audit/entities/audit-event.entity';
 import { READING_COLUMNS } from '../src/exports/readings-csv';
 import { EXPORT_PAGE_SIZE } from '../src/exports/readings-export.query';
 import { Reading } from '../src/inspection/entities/reading.entity';
+import { roundWithUncertainty } from '@gaugeproof/standards';
 import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
 import { seedExportLot, type ExportLot } from './helpers/export-fixtures';
 
@@ -87,25 +88,48 @@ describe('GET /api/suppliers/:id/readings/export.csv', () => {
     const row = Object.fromEntries(header.map((h, i) => [h, first[i]]));
     const m = t.app.get(MikroORM).em.fork();
     const reading = await m.findOneOrFail(Reading, { id: big.readingIds[0] });
-    expect(row).toMatchObject({
-      readingId: String(reading.id),
-      lotId: String(big.lotId),
-      poNumber: 'PO-EXPA-2026-03-10',
-      sku: 'EXPA-4',
-      receivedAt: '2026-03-10T08:00:00.000Z',
-      unit: 'Spool 1',
-      conductor: 'power',
-      label: '4 AWG',
-      method: 'mass',
-      inputs: 'massG=193.2; lengthMm=1000; strandingIncrement=0.02',
-      areaMm2: String(reading.areaMm2),
-      UMm2: String(reading.expandedUMm2),
-      areaRatio: String(reading.areaRatio),
-      measuresAs: '4 AWG',
-      verdict: 'conforms',
-      voided: 'false',
-      voidReason: '',
+    // Headers in words with units, one column per input, figures at their precision.
+    expect(row).toEqual({
+      Reading: String(reading.id),
+      Lot: String(big.lotId),
+      'Supplier lot code': 'EXPA-L20260310',
+      PO: 'PO-EXPA-2026-03-10',
+      'Packing slip': 'PS-2026-03-10',
+      RTV: '',
+      RMA: '',
+      NCR: '',
+      Supplier: 'Fennick Export EXPA',
+      SKU: 'EXPA-4',
+      'Received (UTC)': '2026-03-10 08:00',
+      Unit: 'Spool 1',
+      Conductor: 'power',
+      Label: '4 AWG',
+      Method: 'Mass and length',
+      'Mass (g)': '193.2',
+      'Length (mm)': '1000',
+      'Strands counted': '',
+      'Strand diameters (mm)': '',
+      'Resistance (mΩ)': '',
+      'Temperature (°C)': '',
+      'Overall diameter (mm)': '',
+      'Stranding increment (%)': '2',
+      Instruments: 'Bench balance (BAL-EXPA)',
+      // 193.2 g ÷ (8.89 g/cm³ copper, IEC 60028 × 1000 mm × 1.02 lay, REFERENCE §3) = 21.31 mm²
+      'Area (mm²)': roundWithUncertainty(reading.areaMm2, reading.expandedUMm2).value,
+      'U, k=2 (mm²)': roundWithUncertainty(reading.areaMm2, reading.expandedUMm2).U,
+      'Coverage factor k': '2',
+      'Of nominal (%)': (reading.areaRatio * 100).toFixed(1),
+      'Measures as': '4 AWG',
+      'Material found': 'not identified',
+      Verdict: 'conforms',
+      'Confirmed unusual': 'no',
+      'Taken (UTC)': expect.stringMatching(/^\d{4}-\d\d-\d\d \d\d:\d\d$/),
+      Voided: 'no',
+      'Void reason': '',
     });
+    expect(row['Area (mm²)']).toMatch(/^21\.3\d*$/);
+    expect(row['U, k=2 (mm²)'].replace(/^0\.0*/, '').replace('.', '')).toHaveLength(2);
+    expect(row['Of nominal (%)']).toMatch(/^\d+\.\d$/);
     expect(parse(res.text)).toHaveLength(1 + EXPORT_PAGE_SIZE + 250);
   });
 
@@ -115,10 +139,10 @@ describe('GET /api/suppliers/:id/readings/export.csv', () => {
     const col = (name: string) => header.indexOf(name);
     expect(rows).toHaveLength(3);
     for (const r of rows)
-      expect(r[col('unit')]).toBe(`'=HYPERLINK("http://attacker.example","open")`);
-    const voided = rows.filter((r) => r[col('voided')] === 'true');
+      expect(r[col('Unit')]).toBe(`'=HYPERLINK("http://attacker.example","open")`);
+    const voided = rows.filter((r) => r[col('Voided')] === 'yes');
     expect(voided).toHaveLength(1);
-    expect(voided[0][col('voidReason')]).toBe(
+    expect(voided[0][col('Void reason')]).toBe(
       "'-2+3 typed into the mass field instead of the length",
     );
     expect(res.text).not.toMatch(/(^|,|\n)=HYPERLINK/);

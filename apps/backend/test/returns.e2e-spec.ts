@@ -307,17 +307,20 @@ describe('GET and PATCH /api/returns', () => {
     expect(csv.headers['content-type']).toMatch(/^text\/csv/);
     const rows = parseCsv(csv.text);
     expect(rows[0]).toEqual([
-      'number',
-      'status',
-      'supplierCode',
-      'supplierName',
-      'lotIds',
-      'poNumbers',
-      'rmaNumber',
-      'chargebackTotal',
-      'createdBy',
-      'createdAt',
+      'RTV',
+      'Status',
+      'Supplier code',
+      'Supplier',
+      'Lots',
+      'POs',
+      'RMA',
+      'Chargeback',
+      'Currency',
+      'Raised by',
+      'Raised (UTC)',
     ]);
+    expect(rows[1][7]).toMatch(/^\d+\.\d\d$/);
+    expect(rows[1][8]).toMatch(/^[A-Z]{3}$/);
     expect(rows.slice(1).map((r) => r[3])).toEqual([
       'Ironside Cable Depot',
       'Ironside Cable Depot',
@@ -326,64 +329,82 @@ describe('GET and PATCH /api/returns', () => {
 });
 
 describe('GET /api/returns/:id/export.csv', () => {
-  it('writes one row per reading and neutralises formula cells', async () => {
-    const { lots } = await supplierWithRejects('=HYPERLINK("x")');
-    const ret = (await createReturn([lots[0].id])).body;
+  it('writes one row per reading for the supplier, and neutralises formula cells', async () => {
+    const { lots, ncrs } = await supplierWithRejects('=HYPERLINK("x")');
+    const ret = (await createReturn([lots[0].id], { rmaNumber: 'RMA-7781' })).body;
     const res = await t.http.get(`/api/returns/${ret.id}/export.csv`).set(auth(buyer));
     expect(res.status).toBe(200);
     expect(res.headers['content-disposition']).toBe(
       `attachment; filename="${ret.number}-readings.csv"`,
     );
+    expect(res.text.startsWith('\ufeff')).toBe(true); // so spreadsheets read "mm²" right
     const rows = parseCsv(res.text);
-    // The readings export's own columns (exports/readings-csv.ts).
+    // The readings export's own columns (exports/readings-csv.ts): in words, with units.
     expect(rows[0]).toEqual([
-      'readingId',
-      'lotId',
-      'poNumber',
-      'supplier',
-      'sku',
-      'receivedAt',
-      'unit',
-      'conductor',
-      'label',
-      'method',
-      'inputs',
-      'areaMm2',
-      'UMm2',
-      'areaRatio',
-      'measuresAs',
-      'identifiedMaterial',
-      'verdict',
-      'takenAt',
-      'voided',
-      'voidReason',
+      'Reading',
+      'Lot',
+      'Supplier lot code',
+      'PO',
+      'Packing slip',
+      'RTV',
+      'RMA',
+      'NCR',
+      'Supplier',
+      'SKU',
+      'Received (UTC)',
+      'Unit',
+      'Conductor',
+      'Label',
+      'Method',
+      'Mass (g)',
+      'Length (mm)',
+      'Strands counted',
+      'Strand diameters (mm)',
+      'Resistance (mΩ)',
+      'Temperature (°C)',
+      'Overall diameter (mm)',
+      'Stranding increment (%)',
+      'Instruments',
+      'Area (mm²)',
+      'U, k=2 (mm²)',
+      'Coverage factor k',
+      'Of nominal (%)',
+      'Measures as',
+      'Material found',
+      'Verdict',
+      'Confirmed unusual',
+      'Taken (UTC)',
+      'Voided',
+      'Void reason',
     ]);
     const plan = lots[0].samplingPlan;
     expect(rows).toHaveLength(1 + plan.sampleSize * 2); // every unit, power and ground
-    const first = rows[1];
-    expect(first.slice(1, 5)).toEqual([
-      String(lots[0].id),
-      lots[0].poNumber,
-      `'=HYPERLINK("x")`,
-      expect.any(String),
-    ]);
-    expect(first.slice(6, 11)).toEqual([
-      'K-1',
-      'power',
-      '4 AWG',
-      'mass',
-      expect.stringMatching(/^massG=[\d.]+; lengthMm=500$/),
-    ]);
-    expect(first.slice(11, 19)).toEqual([
-      '8.4',
-      '0.24',
-      '0.397',
-      '8 AWG',
-      'copper',
-      'nonconforming',
-      expect.any(String),
-      'false',
-    ]);
+    const row = Object.fromEntries(rows[0].map((h, i) => [h, rows[1][i]]));
+    expect(row).toMatchObject({
+      Lot: String(lots[0].id),
+      PO: lots[0].poNumber,
+      RTV: ret.number,
+      RMA: 'RMA-7781',
+      NCR: ncrs[0],
+      Supplier: `'=HYPERLINK("x")`,
+      Unit: 'K-1',
+      Conductor: 'power',
+      Label: '4 AWG',
+      Method: 'Mass and length',
+      'Length (mm)': '500',
+      // 8.4 mm² of copper (the fixture's reading) where 4 AWG is 21.15 (ASTM B258): 39.7 %
+      // of nominal; U to two significant figures and the area to the same place (GUM 7.2.6)
+      'Area (mm²)': '8.40',
+      'U, k=2 (mm²)': '0.24',
+      'Of nominal (%)': '39.7',
+      'Measures as': '8 AWG',
+      'Material found': 'copper',
+      Verdict: 'nonconforming',
+      Voided: 'no',
+    });
+    expect(row['Mass (g)']).toMatch(/^\d+(\.\d+)?$/);
+    // No float tails anywhere: no number with more than six decimals.
+    expect(res.text).not.toMatch(/\d\.\d{7,}/);
     expect(res.text).toContain(`"'=HYPERLINK(""x"")"`);
     expect(res.text).not.toMatch(/,=HYPERLINK|,"=HYPERLINK/);
     // The lot's timeline shows the evidence went out.

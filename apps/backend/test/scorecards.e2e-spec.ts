@@ -15,9 +15,9 @@ import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
  *  L1 2025-01-01T00:00Z accepted   S1 [1.00 conf 4 AWG]  S2 [0.99 conf 4 AWG]
  *  L2 2025-01-15 rejected          S3 [0.40 nc 8 AWG mismatch, 0.42 nc 8 AWG mismatch]
  *                                  S4 [0.60 nc 6 AWG, 0.10 14 AWG VOIDED]
- *  L3 2025-02-10 concession (P2)   S5 power [0.97 nc 4 AWG]  S6 remote [1.02 conf 18 AWG]
+ *  L3 2025-02-10 concession (P2)   unit 1: S5 power [0.97 nc 4 AWG]  S6 remote [1.02 conf 18 AWG]
  *  L7 2025-03-05 awaiting_decision S10 [0.90 inconclusive 4 AWG]  S11 (no readings)
- *  L4 2025-03-31T23:59:59.999Z returned  S7 [0.62 nc 6 AWG]
+ *  L4 2025-03-31T23:59:59.999Z returned  S7 [0.62 nc 6 AWG, by resistance]
  *  outside: L6 2024-12-31T23:59:59.999Z accepted [0.20]; L5 2025-04-01T00:00Z rejected [0.05 16 AWG]
  * Supplier B (SC-B), 25 mm² spool: L8 2025-02-20 accepted [1.01 25 mm²], L9 2025-03-10 rejected [0.66 nc 16 mm²]
  * Supplier C (SC-C): nothing.
@@ -52,15 +52,24 @@ async function seed(f: ScorecardFixtures) {
     [0, '0.40 nc 8 AWG mismatch', '0.42 nc 8 AWG mismatch'],
     [0, '0.60 nc 6 AWG', '0.10 nc 14 AWG void'],
   ]);
-  lots.L3 = await f.lot(p2, '2025-02-10T08:00:00.000Z', 'accepted_on_concession', [
-    [0, '0.97 nc 4 AWG'],
-    [1, '1.02 ok 18 AWG'],
-  ]);
+  // One kit: its power and remote conductors are one unit.
+  lots.L3 = await f.lot(
+    p2,
+    '2025-02-10T08:00:00.000Z',
+    'accepted_on_concession',
+    [
+      [0, '0.97 nc 4 AWG'],
+      [1, '1.02 ok 18 AWG'],
+    ],
+    [1, 1],
+  );
   lots.L7 = await f.lot(p1, '2025-03-05T08:00:00.000Z', 'awaiting_decision', [
     [0, '0.90 inc 4 AWG'],
     [0],
   ]);
-  lots.L4 = await f.lot(p1, '2025-03-31T23:59:59.999Z', 'returned', [[0, '0.62 nc 6 AWG']]);
+  lots.L4 = await f.lot(p1, '2025-03-31T23:59:59.999Z', 'returned', [
+    [0, '0.62 nc 6 AWG resistance'],
+  ]);
   lots.L6 = await f.lot(p1, '2024-12-31T23:59:59.999Z', 'accepted', [[0, '0.20 nc 12 AWG']]);
   lots.L5 = await f.lot(p1, '2025-04-01T00:00:00.000Z', 'rejected', [[0, '0.05 nc 16 AWG']]);
   lots.L8 = await f.lot(p3, '2025-02-20T08:00:00.000Z', 'accepted', [[0, '1.01 ok 25 mm²']]);
@@ -110,7 +119,10 @@ describe('GET /api/scorecards', () => {
       lotsPending: 1, // L7 awaiting decision
       samplesTested: 8, // S1 S2 S3 S4 S5 S6 S7 S10 (S11 has no reading)
       nonconformingSamples: 4, // S3 S4 S5 S7
-      dppm: 500_000, // 4 / 8 × 10⁶
+      // Units: L1 ×2, L2 ×2, L3's kit once (S5 + S6), L7 unit 1 (unit 2 has no reading), L4
+      unitsTested: 7,
+      nonconformingUnits: 4, // L2 ×2, L3's kit (its power conductor), L4
+      dppm: 571_429, // 4 / 7 × 10⁶, rounded
       readings: 9, // 10 readings in range, one voided
       lowestAreaRatio: 0.4, // R3; the voided 0.10 and out-of-range 0.05/0.20 do not count
       materialMismatches: 1, // S3, two flagged readings, counted once per sample
@@ -122,6 +134,15 @@ describe('GET /api/scorecards', () => {
     expect(a.acceptanceRate).toBeCloseTo(0.25, 12); // 1 accepted ÷ 4 decided
     // (1.00 + 0.99 + 0.40 + 0.42 + 0.60 + 0.97 + 1.02 + 0.62 + 0.90) / 9 = 6.92 / 9
     expect(a.meanAreaRatio).toBeCloseTo(6.92 / 9, 12);
+    expect(a.unitNonconformingRate).toBeCloseTo(4 / 7, 12);
+    // Per method: eight mass readings (6.30 / 8), one resistance reading (0.62)
+    expect(a.areaRatioByMethod.map((m) => [m.method, m.readings])).toEqual([
+      ['mass', 8],
+      ['resistance', 1],
+    ]);
+    expect(a.areaRatioByMethod[0].meanAreaRatio).toBeCloseTo(6.3 / 8, 12);
+    expect(a.areaRatioByMethod[0].lowestAreaRatio).toBeCloseTo(0.4, 12);
+    expect(a.areaRatioByMethod[1].meanAreaRatio).toBeCloseTo(0.62, 12);
     // CA2 3.5 d, CA3 1 d, CA4 2 d (CA5 raised before the range): 6.5 / 3
     expect(a.meanResponseDays).toBeCloseTo(6.5 / 3, 9);
     expect(a.trend.map((p) => [p.month, p.lots, p.acceptanceRate])).toEqual([
@@ -149,6 +170,9 @@ describe('GET /api/scorecards', () => {
       lotsReceived: 0,
       acceptanceRate: null,
       samplesTested: 0,
+      unitsTested: 0,
+      unitNonconformingRate: null,
+      areaRatioByMethod: [],
       dppm: null,
       meanAreaRatio: null,
       lowestAreaRatio: null,
@@ -270,21 +294,41 @@ describe('CSV export', () => {
     const res = await getAs(DEMO.buyer, `/api/scorecards/export.csv?${RANGE}`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^text\/csv/);
-    const lines = res.text.split('\r\n');
-    expect(lines[0].split(',').slice(0, 7)).toEqual([
-      'from',
-      'to',
-      'supplierId',
-      'name',
-      'code',
-      'status',
-      'lotsReceived',
+    expect(res.text.startsWith('\ufeff')).toBe(true); // the byte-order mark, like every CSV
+    const lines = res.text.slice(1).split('\r\n');
+    const header = lines[0].split(',');
+    expect(header.slice(0, 8)).toEqual([
+      'From',
+      'To',
+      'Supplier id',
+      'Supplier',
+      'Code',
+      'Status',
+      'Lots received',
+      'Lots accepted',
     ]);
-    const a = lines.find((l) => l.includes(',SC-A,'))!;
-    expect(a).toContain(
-      `2025-01-01,2025-03-31,${ids.a},Scorecard Test Alpha Cable,SC-A,approved,5,1,1,2,1,0.25,8,4,500000,9,`,
-    );
-    expect(res.text).toContain(`"'=Scorecard Test Gamma Idle"`); // formula guard
+    expect(header).toContain('Lot acceptance (%)');
+    expect(header).toContain('Mean area by resistance (% of nominal)');
+    const a = lines.find((l) => l.includes(',SC-A,'))!.split(',');
+    const cell = (name: string) => a[header.indexOf(name)];
+    expect(a.slice(0, 6)).toEqual([
+      '2025-01-01',
+      '2025-03-31',
+      String(ids.a),
+      'Scorecard Test Alpha Cable',
+      'SC-A',
+      'approved',
+    ]);
+    expect(cell('Lot acceptance (%)')).toBe('25.0'); // 1 of 4 decided, one decimal
+    expect(cell('Units tested')).toBe('7');
+    expect(cell('Nonconforming units')).toBe('4');
+    expect(cell('Nonconforming units (%)')).toBe('57.1'); // 4 / 7
+    expect(cell('Mean area of all methods (% of nominal)')).toBe('76.9'); // 6.92 / 9
+    expect(cell('Mean area by mass (% of nominal)')).toBe('78.8'); // 6.30 / 8
+    expect(cell('Mean area by resistance (% of nominal)')).toBe('62.0');
+    expect(cell('Mean SCAR response (days)')).toBe('2.2'); // 6.5 / 3
+    expect(cell('Chargebacks')).toBe('200.00');
+    expect(res.text).toContain(`,'=Scorecard Test Gamma Idle,`); // formula guard
     const em = t.app.get(MikroORM).em.fork();
     expect(await em.count(AuditEvent, { action: 'scorecard.export' })).toBeGreaterThan(0);
   });
@@ -292,12 +336,15 @@ describe('CSV export', () => {
   it('exports one supplier in long form', async () => {
     const res = await getAs(DEMO.buyer, `/api/suppliers/${ids.a}/scorecard/export.csv?${RANGE}`);
     expect(res.status).toBe(200);
-    const lines = res.text.split('\r\n');
-    expect(lines[0]).toBe('section,item,field,value');
-    expect(lines).toContain('summary,SC-A,lotsReceived,5');
-    expect(lines).toContain('trend,2025-01,lots,2');
-    expect(lines).toContain(`worstLot,${ids.lots.L2},measuresAs,8 AWG`);
-    expect(lines).toContain('product,SCA-4P,severity,tightened');
+    expect(res.text.startsWith('\ufeff')).toBe(true);
+    const lines = res.text.slice(1).split('\r\n');
+    expect(lines[0]).toBe('Section,Item,Field,Value');
+    expect(lines).toContain('Summary,SC-A,Lots received,5');
+    expect(lines).toContain('Summary,SC-A,Nonconforming units (%),57.1');
+    expect(lines).toContain('Trend,2025-01,Lots received,2');
+    expect(lines).toContain('Trend,2025-01,Mean area (% of nominal),68.2'); // 3.41 / 5
+    expect(lines).toContain(`Worst lot,${ids.lots.L2},Measures as,8 AWG`);
+    expect(lines).toContain('Product,SCA-4P,Inspection severity,tightened');
   });
 });
 

@@ -79,9 +79,11 @@ test('purchasing raises a return for a rejected lot, downloads its CSV and e-mai
   ]);
   const csv = await readFile(await download.path(), 'utf8');
   const [header, ...rows] = csv.trim().split(/\r?\n/);
-  assert.match(header, /^readingId,lotId,poNumber,supplier,sku,receivedAt,unit/);
+  // Headers in words with units, for the supplier (issue 14).
+  assert.match(header, /^\ufeff?Reading,Lot,Supplier lot code,PO,Packing slip,RTV,RMA,NCR,/);
+  assert.match(header, /,"U, k=2 \(mm²\)",/);
   assert.equal(rows.length, 3, 'three readings');
-  assert.ok(rows.every((r) => new RegExp(`^\\d+,${lot.id},${lot.poNumber},`).test(r)));
+  assert.ok(rows.every((r) => new RegExp(`^\\d+,${lot.id},[^,]*,${lot.poNumber},`).test(r)));
   assert.equal(rows.filter((r) => r.includes('nonconforming')).length, 2);
 
   // The e-mail goes through the runner's MailDev.

@@ -10,6 +10,13 @@ export interface ExportedReading {
   id: number;
   lotId: number;
   poNumber: string;
+  supplierLotCode: string | null;
+  packingSlip: string | null;
+  /** The lot's return to vendor: the exported return, or its newest one not cancelled. */
+  rtvNumber: string | null;
+  rmaNumber: string | null;
+  /** The lot's newest nonconformance report. */
+  ncrNumber: string | null;
   supplier: string;
   sku: string;
   receivedAt: Date;
@@ -18,8 +25,13 @@ export interface ExportedReading {
   purpose: string;
   gaugeLabel: string;
   method: string;
-  inputs: Record<string, number>;
+  inputs: Record<string, number | number[]>;
+  /** "name (serial)" of each instrument used, as snapshotted with the reading. */
+  instruments: string;
+  fourWire: boolean | null;
+  confirmedUnusual: boolean;
   areaMm2: number;
+  uMm2: number;
   expandedUMm2: number;
   areaRatio: number;
   measuresAs: string;
@@ -38,6 +50,15 @@ export interface ExportRange {
 }
 
 type Row = Record<string, unknown>;
+
+/** A boolean column as either driver gives it (0/1 on SQLite, true/false on PostgreSQL). */
+const flag = (v: unknown): boolean => v === true || Number(v) === 1;
+
+/** "Bench balance (BAL-7); Steel rule (RUL-2)" from a reading's instrument snapshots. */
+export function instrumentsText(value: unknown): string {
+  const list = jsonOf<{ name?: string; serial?: string }[] | null>(value) ?? [];
+  return list.map((i) => `${i.name ?? ''} (${i.serial ?? ''})`).join('; ');
+}
 
 /** Whose readings: one supplier's lots received in a range, or the lots on one return. */
 export type ExportScope = { supplierId: number; range: ExportRange } | { returnId: number };
@@ -65,6 +86,36 @@ export class ReadingsExportQuery {
 
   private date(d: Date): Knex.Value {
     return this.em.getPlatform().processDateProperty(d) as Knex.Value;
+  }
+
+  /**
+   * The return and NCR numbers of a page's lots, one query each: the exported return (or
+   * each lot's newest return not cancelled) and each lot's newest nonconformance report.
+   */
+  private async lotPapers(scope: ExportScope, lotIds: number[]) {
+    const k = this.knex;
+    const q = k('vendor_return_lots as vrl')
+      .join('vendor_returns as vr', 'vr.id', 'vrl.vendor_return_id')
+      .whereIn('vrl.lot_id', lotIds)
+      .select('vrl.lot_id', 'vr.number', 'vr.rma_number')
+      .orderBy('vr.id');
+    if ('returnId' in scope) q.andWhere('vr.id', scope.returnId);
+    else q.andWhereNot('vr.status', 'cancelled');
+    const returns = new Map<number, { number: string; rma: string | null }>();
+    for (const r of (await q) as Row[]) {
+      returns.set(Number(r.lot_id), {
+        number: String(r.number),
+        rma: (r.rma_number as string | null) ?? null,
+      });
+    }
+    const ncrs = new Map<number, string>();
+    for (const n of (await k('nonconformances')
+      .whereIn('lot_id', lotIds)
+      .select('lot_id', 'number')
+      .orderBy('id')) as Row[]) {
+      ncrs.set(Number(n.lot_id), String(n.number));
+    }
+    return { returns, ncrs };
   }
 
   async page(scope: ExportScope, after: ExportCursor): Promise<ExportedReading[]> {
@@ -109,7 +160,11 @@ export class ReadingsExportQuery {
         'cs.gauge_label',
         'r.method',
         'r.inputs',
+        'r.instruments',
+        'r.four_wire',
+        'r.confirmed_unusual',
         'r.area_mm2',
+        'r.u_mm2',
         'r.expanded_umm2',
         'r.area_ratio',
         'r.measures_as',
@@ -128,18 +183,26 @@ export class ReadingsExportQuery {
       .select(
         'l.id',
         'l.po_number',
+        'l.supplier_lot_code',
+        'l.packing_slip',
         'su.name as supplier_name',
         'p.sku',
         'l.received_at',
       )) as Row[]) {
       lots.set(Number(l.id), l);
     }
+    const { returns, ncrs } = await this.lotPapers(scope, lotIds);
     return rows.map((r) => {
       const lot = lots.get(Number(r.lot_id))!;
       return {
         id: Number(r.id),
         lotId: Number(r.lot_id),
         poNumber: String(lot.po_number),
+        supplierLotCode: (lot.supplier_lot_code as string | null) ?? null,
+        packingSlip: (lot.packing_slip as string | null) ?? null,
+        rtvNumber: returns.get(Number(r.lot_id))?.number ?? null,
+        rmaNumber: returns.get(Number(r.lot_id))?.rma ?? null,
+        ncrNumber: ncrs.get(Number(r.lot_id)) ?? null,
         supplier: String(lot.supplier_name),
         sku: String(lot.sku),
         receivedAt: instantOf(lot.received_at),
@@ -148,15 +211,19 @@ export class ReadingsExportQuery {
         purpose: String(r.purpose),
         gaugeLabel: String(r.gauge_label),
         method: String(r.method),
-        inputs: jsonOf<Record<string, number>>(r.inputs),
+        inputs: jsonOf<Record<string, number | number[]>>(r.inputs),
+        instruments: instrumentsText(r.instruments),
+        fourWire: r.four_wire === null || r.four_wire === undefined ? null : flag(r.four_wire),
+        confirmedUnusual: flag(r.confirmed_unusual),
         areaMm2: Number(r.area_mm2),
+        uMm2: Number(r.u_mm2),
         expandedUMm2: Number(r.expanded_umm2),
         areaRatio: Number(r.area_ratio),
         measuresAs: String(r.measures_as),
         identifiedMaterial: (r.identified_material as string | null) ?? null,
         verdict: String(r.verdict),
         takenAt: instantOf(r.taken_at),
-        voided: r.voided === true || Number(r.voided) === 1,
+        voided: flag(r.voided),
         voidReason: (r.void_reason as string | null) ?? null,
       };
     });

@@ -1,17 +1,20 @@
 import type { CsvRow } from '../common/csv';
+import { utcMinute } from '../common/reading-words';
 import type { ReturnView } from './return-view';
 
+/** Headers in words, like the readings export; the chargeback with its ISO 4217 currency. */
 export const RETURN_LIST_HEADER = [
-  'number',
-  'status',
-  'supplierCode',
-  'supplierName',
-  'lotIds',
-  'poNumbers',
-  'rmaNumber',
-  'chargebackTotal',
-  'createdBy',
-  'createdAt',
+  'RTV',
+  'Status',
+  'Supplier code',
+  'Supplier',
+  'Lots',
+  'POs',
+  'RMA',
+  'Chargeback',
+  'Currency',
+  'Raised by',
+  'Raised (UTC)',
 ] as const;
 
 /** The returns list as CSV rows, block by block. */
@@ -27,9 +30,10 @@ export async function* returnListRows(
       r.lots.map((l) => l.id).join(' '),
       r.lots.map((l) => l.poNumber).join(' '),
       r.rmaNumber,
-      r.chargebackTotal,
+      r.chargebackTotal.toFixed(2),
+      r.currency,
       r.createdBy.name,
-      r.createdAt.toISOString(),
+      utcMinute(r.createdAt),
     ]);
   }
 }

@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { acceptanceRate, compareWorstFirst, dppm, trendOf } from './scorecard-assemble';
+import {
+  acceptanceRate,
+  areaRatioByMethod,
+  compareWorstFirst,
+  dppm,
+  trendOf,
+} from './scorecard-assemble';
 import { monthBuckets } from './scorecard-range';
 import type { ScorecardRow } from '@gaugeproof/api-types';
 
@@ -9,7 +15,7 @@ describe('scorecard arithmetic', () => {
     expect(acceptanceRate(0, 0)).toBeNull();
   });
 
-  it('counts nonconforming samples per million', () => {
+  it('counts nonconforming units per million', () => {
     expect(dppm(1, 3)).toBe(333_333); // 1/3 × 10⁶, rounded
     expect(dppm(0, 0)).toBeNull();
   });
@@ -23,10 +29,20 @@ describe('scorecard arithmetic', () => {
         {
           supplierId: 1,
           monthIdx: 1,
-          readings: 4,
-          sumRatio: 3.8,
+          method: 'mass',
+          readings: 3,
+          sumRatio: 2.85,
           minRatio: 0.8,
           worstSizesShort: 1,
+        },
+        {
+          supplierId: 1,
+          monthIdx: 1,
+          method: 'resistance',
+          readings: 1,
+          sumRatio: 0.95,
+          minRatio: 0.95,
+          worstSizesShort: 0,
         },
       ],
     );
@@ -36,6 +52,30 @@ describe('scorecard arithmetic', () => {
       ['2025-03', 0, null],
     ]);
     expect(trend[1].meanAreaRatio).toBeCloseTo(0.95, 12);
+  });
+
+  it('keeps area ratios apart by method, pooling months', () => {
+    const row = (monthIdx: number, method: string, readings: number, sumRatio: number) => ({
+      supplierId: 1,
+      monthIdx,
+      method,
+      readings,
+      sumRatio,
+      minRatio: sumRatio / readings - 0.01,
+      worstSizesShort: 0,
+    });
+    const byMethod = areaRatioByMethod([
+      row(0, 'resistance', 2, 1.9),
+      row(0, 'mass', 2, 0.8),
+      row(1, 'mass', 2, 1.2),
+    ]);
+    expect(byMethod.map((m) => [m.method, m.readings])).toEqual([
+      ['mass', 4],
+      ['resistance', 2],
+    ]);
+    expect(byMethod[0].meanAreaRatio).toBeCloseTo(0.5, 12); // (0.8 + 1.2) / 4
+    expect(byMethod[0].lowestAreaRatio).toBeCloseTo(0.39, 12);
+    expect(byMethod[1].meanAreaRatio).toBeCloseTo(0.95, 12);
   });
 
   it('ranks worst first and unrated suppliers last', () => {

@@ -1,10 +1,11 @@
 import type { MonthBucket } from './scorecard-range';
-import type { ScorecardRow, TrendPoint } from '@gaugeproof/api-types';
+import type { MethodAreaRatio, ScorecardRow, TrendPoint } from '@gaugeproof/api-types';
 import type {
   CorrectiveActionRow,
   LotMonthRow,
   ReadingMonthRow,
   SamplePurposeRow,
+  UnitRow,
 } from './supplier-metrics.query';
 
 export interface SupplierIdentity {
@@ -19,6 +20,7 @@ export interface SupplierAggregates {
   lots: LotMonthRow[];
   readings: ReadingMonthRow[];
   samples: SamplePurposeRow[];
+  units: UnitRow | undefined;
   correctiveActions: CorrectiveActionRow | undefined;
   chargebacks: number;
 }
@@ -37,8 +39,8 @@ export function acceptanceRate(accepted: number, decided: number): number | null
 }
 
 /**
- * Nonconforming samples per million samples tested (DPPM-style: defective parts per
- * million; common practice, no source). Null when nothing was tested.
+ * Nonconforming units per million units tested (DPPM-style: defective parts per million;
+ * common practice, no source). Null when nothing was tested.
  */
 export function dppm(nonconforming: number, tested: number): number | null {
   return tested > 0 ? Math.round((nonconforming / tested) * 1_000_000) : null;
@@ -66,7 +68,8 @@ export function trendOf(
 ): TrendPoint[] {
   return months.map((m, i) => {
     const l = lots.find((row) => row.monthIdx === i);
-    const r = readings.find((row) => row.monthIdx === i);
+    const month = readings.filter((row) => row.monthIdx === i);
+    const n = sum(month, (row) => row.readings);
     const accepted = l?.accepted ?? 0;
     const decided = l ? l.accepted + l.concession + l.rejected : 0;
     return {
@@ -75,8 +78,27 @@ export function trendOf(
       lotsAccepted: accepted,
       lotsDecided: decided,
       acceptanceRate: acceptanceRate(accepted, decided),
-      meanAreaRatio: r && r.readings > 0 ? r.sumRatio / r.readings : null,
+      meanAreaRatio: n > 0 ? sum(month, (row) => row.sumRatio) / n : null,
     };
+  });
+}
+
+const METHODS = ['mass', 'strands', 'resistance', 'diameter'] as const;
+
+/** Mean and lowest area ratio per method, methods with readings only, in the form's order. */
+export function areaRatioByMethod(readings: readonly ReadingMonthRow[]): MethodAreaRatio[] {
+  return METHODS.flatMap((method) => {
+    const rows = readings.filter((r) => r.method === method);
+    const n = sum(rows, (r) => r.readings);
+    if (n === 0) return [];
+    return [
+      {
+        method,
+        readings: n,
+        meanAreaRatio: sum(rows, (r) => r.sumRatio) / n,
+        lowestAreaRatio: minOf(rows.map((r) => r.minRatio)),
+      },
+    ];
   });
 }
 
@@ -94,6 +116,8 @@ export function assembleRow(
   const samplesTested = sum(agg.samples, (r) => r.tested);
   const nonconformingSamples = sum(agg.samples, (r) => r.nonconforming);
   const readings = sum(agg.readings, (r) => r.readings);
+  const unitsTested = agg.units?.tested ?? 0;
+  const nonconformingUnits = agg.units?.nonconforming ?? 0;
   const worst = maxOf(agg.readings.map((r) => r.worstSizesShort));
   const meanMs = agg.correctiveActions?.meanResponseMs ?? null;
   return {
@@ -109,10 +133,14 @@ export function assembleRow(
     acceptanceRate: acceptanceRate(lotsAccepted, decided),
     samplesTested,
     nonconformingSamples,
-    dppm: dppm(nonconformingSamples, samplesTested),
+    unitsTested,
+    nonconformingUnits,
+    unitNonconformingRate: unitsTested > 0 ? nonconformingUnits / unitsTested : null,
+    dppm: dppm(nonconformingUnits, unitsTested),
     readings,
     meanAreaRatio: readings > 0 ? sum(agg.readings, (r) => r.sumRatio) / readings : null,
     lowestAreaRatio: minOf(agg.readings.map((r) => r.minRatio)),
+    areaRatioByMethod: areaRatioByMethod(agg.readings),
     materialMismatches: sum(agg.samples, (r) => r.mismatches),
     // A lot measuring larger than its label is not short: 0, not a negative count.
     worstSizesShort: worst === null ? null : Math.max(0, worst),

@@ -1,72 +1,121 @@
-import Papa from 'papaparse';
-import type { ScorecardRow, SupplierScorecard } from '@gaugeproof/api-types';
-
-type Cell = string | number | boolean | null;
+import type { MethodAreaRatio, ScorecardRow, SupplierScorecard } from '@gaugeproof/api-types';
+import { csvLines, type CsvCell } from '../common/csv';
+import { percentText } from '../exports/readings-csv';
 
 /**
- * CSV with the formula-injection guard: a text cell starting with = + - @ tab or CR gets
- * a leading apostrophe so a spreadsheet shows it as text (OWASP "CSV injection"; papaparse
- * escapeFormulae uses exactly that set). Numbers are left as numbers.
+ * The scorecard exports through the one CSV writer (common/csv.ts: formula-injection guard,
+ * `;` and `,` quoted, RFC 4180) with a UTF-8 byte-order mark, headers in words with their
+ * units, ratios as percentages with one decimal (issue 13 point 9), like the readings export.
  */
-export function toCsv(header: readonly string[], rows: readonly Cell[][]): string {
-  return Papa.unparse(
-    { fields: [...header], data: rows.map((r) => r.map((c) => (c === null ? '' : c))) },
-    { escapeFormulae: true, newline: '\r\n' },
-  );
-}
+const withBom = (rows: readonly (readonly CsvCell[])[]): string => `\ufeff${csvLines(rows)}`;
 
-/** Columns of the ranking export: the row's own field names, so each traces to the API. */
-export const LIST_COLUMNS = [
-  'supplierId',
-  'name',
-  'code',
-  'status',
-  'lotsReceived',
-  'lotsAccepted',
-  'lotsAcceptedOnConcession',
-  'lotsRejected',
-  'lotsPending',
-  'acceptanceRate',
-  'samplesTested',
-  'nonconformingSamples',
-  'dppm',
-  'readings',
-  'meanAreaRatio',
-  'lowestAreaRatio',
-  'materialMismatches',
-  'worstSizesShort',
-  'openCorrectiveActions',
-  'overdueCorrectiveActions',
-  'meanResponseDays',
-  'chargebacks',
-] as const satisfies readonly (keyof ScorecardRow)[];
+const pct = (ratio: number | null | undefined): string =>
+  ratio === null || ratio === undefined ? '' : percentText(ratio);
+const days = (d: number | null): string => (d === null ? '' : d.toFixed(1));
+const money = (amount: number): string => amount.toFixed(2);
+
+const METHODS: MethodAreaRatio['method'][] = ['mass', 'strands', 'resistance', 'diameter'];
+const method = (r: ScorecardRow, m: string) => r.areaRatioByMethod.find((x) => x.method === m);
+
+/** The ranking's columns: header in words with its unit, and the cell of a row. */
+export const LIST_COLUMNS: readonly [string, (r: ScorecardRow) => CsvCell][] = [
+  ['Supplier id', (r) => r.supplierId],
+  ['Supplier', (r) => r.name],
+  ['Code', (r) => r.code],
+  ['Status', (r) => r.status],
+  ['Lots received', (r) => r.lotsReceived],
+  ['Lots accepted', (r) => r.lotsAccepted],
+  ['Lots accepted on concession', (r) => r.lotsAcceptedOnConcession],
+  ['Lots rejected', (r) => r.lotsRejected],
+  ['Lots undecided', (r) => r.lotsPending],
+  ['Lot acceptance (%)', (r) => pct(r.acceptanceRate)],
+  ['Units tested', (r) => r.unitsTested],
+  ['Nonconforming units', (r) => r.nonconformingUnits],
+  ['Nonconforming units (%)', (r) => pct(r.unitNonconformingRate)],
+  ['Nonconforming units per million', (r) => r.dppm],
+  ['Conductors tested', (r) => r.samplesTested],
+  ['Nonconforming conductors', (r) => r.nonconformingSamples],
+  ['Readings', (r) => r.readings],
+  ['Mean area of all methods (% of nominal)', (r) => pct(r.meanAreaRatio)],
+  ['Lowest area (% of nominal)', (r) => pct(r.lowestAreaRatio)],
+  ...METHODS.flatMap((m): [string, (r: ScorecardRow) => CsvCell][] => [
+    [`Readings by ${m}`, (r) => method(r, m)?.readings ?? 0],
+    [`Mean area by ${m} (% of nominal)`, (r) => pct(method(r, m)?.meanAreaRatio)],
+    [`Lowest area by ${m} (% of nominal)`, (r) => pct(method(r, m)?.lowestAreaRatio)],
+  ]),
+  ['Material mismatches', (r) => r.materialMismatches],
+  ['Worst shortfall (sizes)', (r) => r.worstSizesShort],
+  ['Open SCARs', (r) => r.openCorrectiveActions],
+  ['Overdue SCARs', (r) => r.overdueCorrectiveActions],
+  ['Mean SCAR response (days)', (r) => days(r.meanResponseDays)],
+  ['Chargebacks', (r) => money(r.chargebacks)],
+];
 
 export function listCsv(from: string, to: string, rows: readonly ScorecardRow[]): string {
-  return toCsv(
-    ['from', 'to', ...LIST_COLUMNS],
-    rows.map((r) => [from, to, ...LIST_COLUMNS.map((c) => r[c] as Cell)]),
-  );
+  return withBom([
+    ['From', 'To', ...LIST_COLUMNS.map(([h]) => h)],
+    ...rows.map((r) => [from, to, ...LIST_COLUMNS.map(([, cell]) => cell(r))]),
+  ]);
 }
+
+/** Words for the long form's fields; a field not named here keeps its name. */
+const FIELD_WORDS: Record<string, [string, (v: unknown) => CsvCell]> = {
+  lots: ['Lots received', (v) => v as number],
+  lotsAccepted: ['Lots accepted', (v) => v as number],
+  lotsDecided: ['Lots decided', (v) => v as number],
+  acceptanceRate: ['Lot acceptance (%)', (v) => pct(v as number | null)],
+  meanAreaRatio: ['Mean area (% of nominal)', (v) => pct(v as number | null)],
+  lowestAreaRatio: ['Lowest area (% of nominal)', (v) => pct(v as number | null)],
+  samplesTested: ['Conductors tested', (v) => v as number],
+  nonconformingSamples: ['Nonconforming conductors', (v) => v as number],
+  count: ['Readings', (v) => v as number],
+  description: ['Description', (v) => v as string],
+  active: ['Active', (v) => (v ? 'yes' : 'no')],
+  minAreaRatio: ['Minimum area (% of nominal)', (v) => pct(v as number)],
+  severity: ['Inspection severity', (v) => v as string],
+  reason: ['Why', (v) => v as string | null],
+  poNumber: ['PO', (v) => v as string],
+  receivedAt: ['Received', (v) => v as string],
+  status: ['Status', (v) => v as string],
+  sku: ['SKU', (v) => v as string],
+  label: ['Label', (v) => v as string | null],
+  measuresAs: ['Measures as', (v) => v as string | null],
+  sizesShort: ['Sizes short', (v) => v as number | null],
+  productId: ['Product id', (v) => v as number],
+  readings: ['Readings', (v) => v as number],
+};
 
 /**
  * One supplier's scorecard in long form (section, item, field, value), so the summary,
  * the monthly trend, the histogram, purposes, products and worst lots share one table.
  */
 export function supplierCsv(card: SupplierScorecard): string {
-  const rows: Cell[][] = [];
+  const rows: CsvCell[][] = [['Section', 'Item', 'Field', 'Value']];
   const add = (section: string, item: string, record: object, skip?: string) => {
     for (const [field, value] of Object.entries(record)) {
-      if (field !== skip) rows.push([section, item, field, (value ?? null) as Cell]);
+      if (field === skip) continue;
+      const words = FIELD_WORDS[field];
+      rows.push([
+        section,
+        item,
+        words ? words[0] : field,
+        words ? words[1](value) : (value as CsvCell),
+      ]);
     }
   };
-  add('range', '', { from: card.from, to: card.to });
-  add('summary', card.code, Object.fromEntries(LIST_COLUMNS.map((c) => [c, card[c]])));
-  for (const t of card.trend) add('trend', t.month, t, 'month');
+  rows.push(['Range', '', 'From', card.from], ['Range', '', 'To', card.to]);
+  for (const [header, cell] of LIST_COLUMNS) rows.push(['Summary', card.code, header, cell(card)]);
+  for (const t of card.trend) add('Trend', t.month, t, 'month');
   for (const b of card.histogram) {
-    add('histogram', `${b.from ?? ''}..${b.to ?? ''}`, { count: b.count });
+    rows.push([
+      'Histogram',
+      `${pct(b.from) || '…'}–${pct(b.to) || '…'} % of nominal`,
+      'Readings',
+      b.count,
+    ]);
   }
-  for (const p of card.byPurpose) add('purpose', p.purpose, p, 'purpose');
-  for (const p of card.products) add('product', p.sku, p, 'sku');
-  for (const w of card.worstLots) add('worstLot', String(w.lotId), w, 'lotId');
-  return toCsv(['section', 'item', 'field', 'value'], rows);
+  for (const p of card.byPurpose) add('Conductor', p.purpose, p, 'purpose');
+  for (const p of card.products) add('Product', p.sku, p, 'sku');
+  for (const w of card.worstLots) add('Worst lot', String(w.lotId), w, 'lotId');
+  return withBom(rows);
 }

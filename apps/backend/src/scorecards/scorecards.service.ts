@@ -26,10 +26,11 @@ export class ScorecardsService {
 
   private async rows(range: ScorecardRange, suppliers: SupplierIdentity[], supplierId?: number) {
     const today = isoDate(new Date());
-    const [lots, readings, samples, cars, chargebacks] = await Promise.all([
+    const [lots, readings, samples, units, cars, chargebacks] = await Promise.all([
       this.metrics.lotsByMonth(range, supplierId),
       this.metrics.readingsByMonth(range, supplierId),
       this.metrics.samplesByPurpose(range, supplierId),
+      this.metrics.units(range, supplierId),
       this.metrics.correctiveActions(range, today, supplierId),
       this.metrics.chargebacks(range, supplierId),
     ]);
@@ -38,6 +39,7 @@ export class ScorecardsService {
         lots: lots.filter((r) => r.supplierId === s.id),
         readings: readings.filter((r) => r.supplierId === s.id),
         samples: samples.filter((r) => r.supplierId === s.id),
+        units: units.find((r) => r.supplierId === s.id),
         correctiveActions: cars.find((r) => r.supplierId === s.id),
         chargebacks: chargebacks.get(s.id) ?? 0,
       }),

@@ -16,6 +16,8 @@ export interface LotMonthRow {
 export interface ReadingMonthRow {
   supplierId: number;
   monthIdx: number;
+  /** mass, strands, resistance or diameter: area ratios are compared per method (issue 13). */
+  method: string;
   readings: number;
   sumRatio: number;
   minRatio: number | null;
@@ -28,6 +30,18 @@ export interface SamplePurposeRow {
   tested: number;
   nonconforming: number;
   mismatches: number;
+}
+
+/**
+ * Units (one kit, one spool: a sample's `seq` in its lot) by supplier. A unit is tested when
+ * any of its conductors has a live reading, nonconforming when any of its conductors is: a
+ * kit with one short conductor is one nonconforming unit (issue 13 point 9; ISO 2859-1 3.1.7
+ * counts nonconforming units, not nonconformities, for these plans).
+ */
+export interface UnitRow {
+  supplierId: number;
+  tested: number;
+  nonconforming: number;
 }
 
 export interface CorrectiveActionRow {
@@ -111,7 +125,7 @@ export class SupplierMetricsQuery {
         .join('samples as s', 's.id', 'r.sample_id')
         .join('lots as l', 'l.id', 's.lot_id')
         .join('conductor_specs as cs', 'cs.id', 's.conductor_id')
-        .select('l.supplier_id', 'r.area_ratio')
+        .select('l.supplier_id', 'r.area_ratio', 'r.method')
         .select(k.raw(`${month.sql} as month_idx`, month.bindings as Knex.Value[]))
         .select(k.raw(`${short.sql} as sizes_short`, short.bindings as Knex.Value[]))
         .where('r.voided', false),
@@ -121,15 +135,16 @@ export class SupplierMetricsQuery {
     if (supplierId !== undefined) inner.andWhere('l.supplier_id', supplierId);
     const rows: Record<string, unknown>[] = await k
       .from(inner.as('t'))
-      .select('t.supplier_id', 't.month_idx')
+      .select('t.supplier_id', 't.month_idx', 't.method')
       .select(k.raw('count(*) as readings'))
       .select(k.raw('sum(t.area_ratio) as sum_ratio'))
       .select(k.raw('min(t.area_ratio) as min_ratio'))
       .select(k.raw('max(t.sizes_short) as worst_short'))
-      .groupBy('t.supplier_id', 't.month_idx');
+      .groupBy('t.supplier_id', 't.month_idx', 't.method');
     return rows.map((r) => ({
       supplierId: num(r.supplier_id),
       monthIdx: num(r.month_idx),
+      method: String(r.method),
       readings: num(r.readings),
       sumRatio: num(r.sum_ratio),
       minRatio: numOrNull(r.min_ratio),
@@ -138,12 +153,10 @@ export class SupplierMetricsQuery {
   }
 
   /**
-   * Tested samples by supplier and conductor purpose. A sample (one cut piece for one
-   * conductor) is tested with at least one non-voided reading, nonconforming when any of
-   * those is (the rule of inspection/lot-evaluation.ts sampleVerdict), a material mismatch
-   * when any of them found the material the label did not claim.
+   * Per sample with a live reading of a lot received in the range: nonconforming (nc) when any
+   * of its readings is, a material mismatch (mm) when any of them found another metal.
    */
-  async samplesByPurpose(range: ScorecardRange, supplierId?: number): Promise<SamplePurposeRow[]> {
+  private perSample(range: ScorecardRange, supplierId?: number): Knex.QueryBuilder {
     const k = this.knex;
     // Per sample, only the readings of lots received in the range (the range applied
     // inside the sub-query, so readings of other years are never grouped).
@@ -160,6 +173,41 @@ export class SupplierMetricsQuery {
       range,
     );
     if (supplierId !== undefined) perSample.andWhere('l0.supplier_id', supplierId);
+    return perSample;
+  }
+
+  /** Units tested and nonconforming by supplier (UnitRow). */
+  async units(range: ScorecardRange, supplierId?: number): Promise<UnitRow[]> {
+    const k = this.knex;
+    const perUnit = k
+      .from(this.perSample(range, supplierId).as('ps'))
+      .join('samples as s', 's.id', 'ps.sample_id')
+      .join('lots as l', 'l.id', 's.lot_id')
+      .select('l.supplier_id', 's.lot_id', 's.seq')
+      .select(k.raw('max(ps.nc) as nc'))
+      .groupBy('l.supplier_id', 's.lot_id', 's.seq');
+    const rows: Record<string, unknown>[] = await k
+      .from(perUnit.as('u'))
+      .select('u.supplier_id')
+      .select(k.raw('count(*) as tested'))
+      .select(k.raw('sum(u.nc) as nonconforming'))
+      .groupBy('u.supplier_id');
+    return rows.map((r) => ({
+      supplierId: num(r.supplier_id),
+      tested: num(r.tested),
+      nonconforming: num(r.nonconforming),
+    }));
+  }
+
+  /**
+   * Tested samples by supplier and conductor purpose. A sample (one cut piece for one
+   * conductor) is tested with at least one non-voided reading, nonconforming when any of
+   * those is (the rule of inspection/lot-evaluation.ts sampleVerdict), a material mismatch
+   * when any of them found the material the label did not claim.
+   */
+  async samplesByPurpose(range: ScorecardRange, supplierId?: number): Promise<SamplePurposeRow[]> {
+    const k = this.knex;
+    const perSample = this.perSample(range, supplierId);
     const q = k
       .from(perSample.as('ps'))
       .join('samples as s', 's.id', 'ps.sample_id')

@@ -29,7 +29,9 @@ const VERDICT_CODES: Record<string, Verdict> = {
 
 function parseReading(text: string) {
   const words = text.split(' ');
-  const flags = new Set(words.filter((w) => w === 'mismatch' || w === 'void'));
+  const flags = new Set(
+    words.filter((w) => w === 'mismatch' || w === 'void' || w === 'resistance'),
+  );
   const verdict = VERDICT_CODES[words[1]];
   if (!verdict) throw new Error(`reading "${text}": verdict must be ok, nc or inc`);
   return {
@@ -38,6 +40,7 @@ function parseReading(text: string) {
     measuresAs: words.slice(2, words.length - flags.size).join(' '),
     mismatch: flags.has('mismatch'),
     voided: flags.has('void'),
+    method: flags.has('resistance') ? ('resistance' as const) : ('mass' as const),
   };
 }
 
@@ -120,6 +123,8 @@ export class ScorecardFixtures {
     receivedAt: string,
     status: LotStatus,
     samples: SampleSpec[],
+    /** The unit (seq) of each sample; by default each sample is a unit of its own. */
+    units?: number[],
   ): Promise<number> {
     const em = this.em();
     const clerk = await this.clerk(em);
@@ -139,14 +144,17 @@ export class ScorecardFixtures {
       const sample = em.create(Sample, {
         lot,
         conductor: em.getReference(ConductorSpec, product.conductorIds[conductor]),
-        seq: i + 1,
+        seq: units?.[i] ?? i + 1,
         createdBy: clerk,
       });
       for (const r of readings.map(parseReading)) {
         em.create(Reading, {
           sample,
-          method: 'mass',
-          inputs: { massG: 1, lengthMm: 100 },
+          method: r.method,
+          inputs:
+            r.method === 'mass'
+              ? { massG: 1, lengthMm: 100 }
+              : { resistanceOhm: 0.001, lengthMm: 1000 },
           areaMm2: r.ratio * 21.15,
           uMm2: 0.1,
           expandedUMm2: 0.2,

@@ -4,7 +4,8 @@ import {
   areaFromMass,
   areaFromResistance,
   areaFromStrands,
-  measuresAs,
+  assessSample,
+  conductorMeasuresAs,
   parseGauge,
   voltageDrop,
   type AreaResult,
@@ -49,17 +50,31 @@ function attempt<T>(compute: () => T): Calc<T> {
 
 export interface AreaOutcome {
   result: AreaResult;
-  /** The nearest standard size (the library's "measures as"). */
-  measuresAs: Gauge;
+  /**
+   * The one "measures as" of issue 13, as on the Lot page, CSV and evidence pack: the largest
+   * standard size the conductor meets (AWG: 98 % of its nominal area, ASTM B496; metric
+   * copper: IEC 60228's maximum resistance at 20 °C, class 5), or "below the smallest size".
+   */
+  measuresAs: string;
   /** Present when a label was chosen: measured area ÷ that label's nominal area. */
   compare: { gauge: Gauge; ratio: number } | null;
 }
 
-function outcome(result: AreaResult, compareLabel: string): AreaOutcome {
+function outcome(result: AreaResult, compareLabel: string, material: MaterialId): AreaOutcome {
   const gauge = compareLabel.trim() === '' ? null : parseGauge(compareLabel);
+  // Against a label, the verdict's own rule (assessSample) names the size; without one, the
+  // AWG area rule.
+  const measures = gauge
+    ? assessSample({
+        gauge,
+        claimedMaterial: material,
+        areaMm2: result.areaMm2,
+        UMm2: result.UMm2,
+      }).measuresAs.label
+    : conductorMeasuresAs({ system: 'awg', areaMm2: result.areaMm2 }).label;
   return {
     result,
-    measuresAs: measuresAs(result.areaMm2, gauge?.system ?? 'awg').gauge,
+    measuresAs: measures,
     compare: gauge ? { gauge, ratio: result.areaMm2 / gauge.nominalAreaMm2 } : null,
   };
 }
@@ -94,6 +109,7 @@ export const calcAreaFromMass = (input: MassCalcInput): Calc<AreaOutcome> =>
         strandingIncrement: readNumber('strandingIncrement', input.strandingIncrementPercent) / 100,
       }),
       input.compareLabel,
+      input.material,
     ),
   );
 
@@ -114,6 +130,8 @@ export const calcAreaFromStrands = (input: StrandsCalcInput): Calc<AreaOutcome> 
         ),
       }),
       input.compareLabel,
+      // Strands give the geometric area; a metric label is judged as plain copper.
+      'copper',
     ),
   );
 
@@ -138,6 +156,7 @@ export const calcAreaFromResistance = (input: ResistanceCalcInput): Calc<AreaOut
         strandingIncrement: readNumber('strandingIncrement', input.strandingIncrementPercent) / 100,
       }),
       input.compareLabel,
+      input.material,
     ),
   );
 

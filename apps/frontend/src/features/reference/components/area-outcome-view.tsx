@@ -30,7 +30,7 @@ export function AreaOutcomeView({ calc }: { calc: Calc<AreaOutcome> }) {
       </Typography>
       <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
         <Typography>
-          Measures as <strong>{measuresAs.label}</strong>
+          Measures as <strong>{measuresAs}</strong>
         </Typography>
         {compare && (
           <Typography color={compare.ratio >= MIN_AREA_RATIO ? 'success.main' : 'error.main'}>

@@ -63,14 +63,30 @@ const columnsFor = (range: DateRange): DataTableColumns<ScorecardRow> =>
       cell: ({ row }) => <TrendSparkline trend={row.original.trend} name={row.original.name} />,
     }),
     col.accessor('dppm', {
-      header: 'Nonconf. ppm',
+      header: 'Nonconf. units ppm',
       ...sortable,
-      cell: ({ getValue }) => formatWhole(getValue()),
+      cell: ({ row, getValue }) => (
+        <Tooltip
+          title={`${row.original.nonconformingUnits} of ${row.original.unitsTested} units nonconforming (a kit with one short conductor is one unit)`}
+        >
+          <span>{formatWhole(getValue())}</span>
+        </Tooltip>
+      ),
     }),
     col.accessor('meanAreaRatio', {
       header: 'Mean area',
       ...sortable,
-      cell: ({ getValue }) => formatPercent(getValue()),
+      cell: ({ row, getValue }) => (
+        <Tooltip
+          title={
+            row.original.areaRatioByMethod
+              .map((m) => `${m.method}: ${formatPercent(m.meanAreaRatio)} (${m.readings})`)
+              .join(', ') || 'no readings'
+          }
+        >
+          <span>{formatPercent(getValue())}</span>
+        </Tooltip>
+      ),
     }),
     col.accessor('lowestAreaRatio', {
       header: 'Lowest',

@@ -27,14 +27,23 @@ function tiles(s: ScorecardRow): Tile[] {
       detail: 'by received date, both ends of the range included',
     },
     {
-      label: 'Nonconforming samples',
-      value: `${s.nonconformingSamples} of ${s.samplesTested}`,
-      detail: `${formatWhole(s.dppm)} per million samples tested`,
+      label: 'Nonconforming units',
+      value: `${s.nonconformingUnits} of ${s.unitsTested}`,
+      detail: `${formatPercent(s.unitNonconformingRate)} (${formatWhole(s.dppm)} per million units); a kit with one short conductor is one unit; ${s.nonconformingSamples} of ${s.samplesTested} conductors`,
     },
     {
-      label: 'Mean area ratio',
-      value: formatPercent(s.meanAreaRatio),
-      detail: `lowest ${formatPercent(s.lowestAreaRatio)} over ${s.readings} readings (voided ones left out)`,
+      label: 'Area ratio by method',
+      value: s.areaRatioByMethod.length
+        ? s.areaRatioByMethod.map((m) => formatPercent(m.meanAreaRatio)).join(' · ')
+        : NONE,
+      detail: s.areaRatioByMethod.length
+        ? `mean of ${s.areaRatioByMethod
+            .map(
+              (m) =>
+                `${m.method} (${m.readings} readings, lowest ${formatPercent(m.lowestAreaRatio)})`,
+            )
+            .join(', ')}; methods are not pooled; voided readings left out`
+        : 'no readings in the range',
     },
     {
       label: 'Worst shortfall',
