@@ -75,8 +75,17 @@ describe('e-mail through a real MailDev', () => {
       )
     ).toString('utf8');
     const rows = Papa.parse<string[]>(csv.replace(/^\ufeff/, '').trim(), { newline: '\r\n' }).data;
-    expect(rows[0].slice(0, 3)).toEqual(['readingId', 'lotId', 'poNumber']);
-    expect(rows[1].slice(1, 3)).toEqual([String(lot.id), lot.poNumber]);
+    expect(rows[0].slice(0, 6)).toEqual([
+      'Reading',
+      'Lot',
+      'Supplier lot code',
+      'PO',
+      'Packing slip',
+      'RTV',
+    ]);
+    expect(rows[1][1]).toBe(String(lot.id));
+    expect(rows[1][3]).toBe(lot.poNumber);
+    expect(rows[1][5]).toBe(ret.number);
     const pdf = await mail.attachment(
       email.id,
       names.find((n) => n.endsWith('.pdf'))!,
