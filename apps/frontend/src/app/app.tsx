@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { RouterProvider } from 'react-router-dom';
+import { RouterProvider } from 'react-router/dom';
 import { AppProvider } from '@/app/provider';
 import { createRouter } from '@/app/router';
 

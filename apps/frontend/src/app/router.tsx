@@ -1,4 +1,4 @@
-import { createBrowserRouter, Navigate, type RouteObject } from 'react-router-dom';
+import { createBrowserRouter, Navigate, type RouteObject } from 'react-router';
 import { AppShell } from '@/app/layout/app-shell';
 import { RequireAuth } from '@/app/layout/require-auth';
 import { RoleGate } from '@/app/layout/role-gate';

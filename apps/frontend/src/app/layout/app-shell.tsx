@@ -1,7 +1,7 @@
 import MenuIcon from '@mui/icons-material/Menu';
 import { AppBar, Box, Drawer, IconButton, Toolbar, Typography } from '@mui/material';
 import { useState } from 'react';
-import { Outlet } from 'react-router-dom';
+import { Outlet } from 'react-router';
 import { SideNav } from '@/app/layout/side-nav';
 import { UserMenu } from '@/app/layout/user-menu';
 

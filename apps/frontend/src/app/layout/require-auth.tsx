@@ -1,4 +1,4 @@
-import { Navigate, Outlet, useLocation } from 'react-router-dom';
+import { Navigate, Outlet, useLocation } from 'react-router';
 import { paths } from '@/config/paths';
 import { useAuth } from '@/features/auth/auth-context';
 

@@ -1,6 +1,6 @@
 import { Alert, Button } from '@mui/material';
 import type { ReactNode } from 'react';
-import { Link as RouterLink, useLocation } from 'react-router-dom';
+import { Link as RouterLink, useLocation } from 'react-router';
 import { canOpen, homePathFor } from '@/app/navigation';
 import { useSessionUser } from '@/features/auth/auth-context';
 

@@ -1,5 +1,5 @@
 import { List, ListItemButton, ListItemIcon, ListItemText, Toolbar } from '@mui/material';
-import { NavLink } from 'react-router-dom';
+import { NavLink } from 'react-router';
 import { navItemsFor } from '@/app/navigation';
 import { useSessionUser } from '@/features/auth/auth-context';
 

@@ -1,6 +1,6 @@
 import ArrowBackOutlined from '@mui/icons-material/ArrowBackOutlined';
 import { Alert, Button, Skeleton, Stack } from '@mui/material';
-import { Link as RouterLink, useParams } from 'react-router-dom';
+import { Link as RouterLink, useParams } from 'react-router';
 import { SectionBoundary } from '@/components/section-boundary';
 import { paths } from '@/config/paths';
 import { useSessionUser } from '@/features/auth/auth-context';

@@ -1,6 +1,6 @@
 import { Alert, Box, Button, Stack, Typography } from '@mui/material';
 import { useEffect } from 'react';
-import { Link as RouterLink, useParams } from 'react-router-dom';
+import { Link as RouterLink, useParams } from 'react-router';
 import { SectionBoundary } from '@/components/section-boundary';
 import { paths } from '@/config/paths';
 import { useSessionUser } from '@/features/auth/auth-context';

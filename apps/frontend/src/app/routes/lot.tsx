@@ -1,6 +1,6 @@
 import PhoneIphoneOutlined from '@mui/icons-material/PhoneIphoneOutlined';
 import { Alert, Box, Button, Grid, Stack } from '@mui/material';
-import { Link as RouterLink, useParams } from 'react-router-dom';
+import { Link as RouterLink, useParams } from 'react-router';
 import { SectionBoundary } from '@/components/section-boundary';
 import { paths } from '@/config/paths';
 import { LotTimeline } from '@/features/audit/components/lot-timeline';

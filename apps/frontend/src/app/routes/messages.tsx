@@ -1,5 +1,5 @@
 import { MenuItem, Paper, Stack, TextField, Typography } from '@mui/material';
-import { useSearchParams } from 'react-router-dom';
+import { useSearchParams } from 'react-router';
 import { SectionBoundary } from '@/components/section-boundary';
 import { MessagesList } from '@/features/messages/components/messages-list';
 import { MESSAGE_STATUSES, type MessageStatus } from '@/features/messages/types';

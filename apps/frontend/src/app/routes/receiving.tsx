@@ -1,5 +1,5 @@
 import { Stack, Typography } from '@mui/material';
-import { useNavigate } from 'react-router-dom';
+import { useNavigate } from 'react-router';
 import { SectionBoundary } from '@/components/section-boundary';
 import { paths } from '@/config/paths';
 import { ReceiveLotForm } from '@/features/lots/components/receive-lot-form';

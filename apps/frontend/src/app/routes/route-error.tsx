@@ -1,5 +1,5 @@
 import { Alert, AlertTitle, Box, Button } from '@mui/material';
-import { isRouteErrorResponse, useRouteError } from 'react-router-dom';
+import { isRouteErrorResponse, useRouteError } from 'react-router';
 import { NotFoundRoute } from '@/app/routes/not-found';
 
 /** Route-level boundary: a screen that fails to render shows this in its place. */

@@ -1,5 +1,5 @@
 import { Alert, Box, Paper, Typography } from '@mui/material';
-import { Navigate, useSearchParams } from 'react-router-dom';
+import { Navigate, useSearchParams } from 'react-router';
 import { afterSignInPath } from '@/app/navigation';
 import { shellColors } from '@/app/theme';
 import { useAuth } from '@/features/auth/auth-context';

@@ -1,7 +1,7 @@
 import ArrowBackOutlined from '@mui/icons-material/ArrowBackOutlined';
 import { Box, Button, Skeleton, Stack, Typography } from '@mui/material';
 import { lazy, Suspense } from 'react';
-import { Link as RouterLink, useParams } from 'react-router-dom';
+import { Link as RouterLink, useParams } from 'react-router';
 import { CsvDownloadButton } from '@/components/data-table/csv-download-button';
 import { SafetyCaution } from '@/components/safety-caution';
 import { SectionBoundary } from '@/components/section-boundary';

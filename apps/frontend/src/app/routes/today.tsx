@@ -1,6 +1,6 @@
 import LocalShippingOutlined from '@mui/icons-material/LocalShippingOutlined';
 import { Button, Grid, Stack, Typography } from '@mui/material';
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { SafetyCaution } from '@/components/safety-caution';
 import { SectionBoundary } from '@/components/section-boundary';
 import { paths } from '@/config/paths';

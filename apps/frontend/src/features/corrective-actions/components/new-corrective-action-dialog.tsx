@@ -10,7 +10,7 @@ import {
   TextField,
 } from '@mui/material';
 import { Controller, useForm, useWatch } from 'react-hook-form';
-import { useNavigate } from 'react-router-dom';
+import { useNavigate } from 'react-router';
 import { paths } from '@/config/paths';
 import {
   createCorrectiveActionSchema,

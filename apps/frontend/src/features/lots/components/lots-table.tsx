@@ -1,6 +1,6 @@
 import { Link, Stack } from '@mui/material';
 import { useMemo } from 'react';
-import { Link as RouterLink, useNavigate } from 'react-router-dom';
+import { Link as RouterLink, useNavigate } from 'react-router';
 import { CsvDownloadButton } from '@/components/data-table/csv-download-button';
 import { createDataTableColumnHelper, DataTable } from '@/components/data-table/data-table';
 import { useListParams } from '@/components/data-table/use-list-params';

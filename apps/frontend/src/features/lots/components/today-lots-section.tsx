@@ -11,7 +11,7 @@ import {
   Stack,
   Typography,
 } from '@mui/material';
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { paths } from '@/config/paths';
 import { useLots } from '@/features/lots/api/get-lots';
 import type { LotStatus } from '@/features/lots/types';

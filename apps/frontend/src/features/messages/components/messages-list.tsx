@@ -10,7 +10,7 @@ import {
   Stack,
   Typography,
 } from '@mui/material';
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { paths } from '@/config/paths';
 import { useMessages, type MessagesQuery } from '@/features/messages/api/get-messages';
 import { useRetryMessage } from '@/features/messages/api/retry-message';

@@ -17,7 +17,7 @@ import {
 } from '@mui/material';
 import RemoveCircleOutline from '@mui/icons-material/RemoveCircleOutlineOutlined';
 import { useState } from 'react';
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { downloadCsv } from '@/components/data-table/csv-download-button';
 import { paths } from '@/config/paths';
 import { useReturnStep } from '@/features/returns/api/return-steps';

@@ -1,6 +1,6 @@
 import AssignmentReturnOutlined from '@mui/icons-material/AssignmentReturnOutlined';
 import { Button, MenuItem, Paper, TextField } from '@mui/material';
-import { useSearchParams } from 'react-router-dom';
+import { useSearchParams } from 'react-router';
 import { CsvDownloadButton } from '@/components/data-table/csv-download-button';
 import { FilterBar, FilterBarSpacer } from '@/components/data-table/filter-bar';
 import { useListParams } from '@/components/data-table/use-list-params';

@@ -1,5 +1,5 @@
 import { Link } from '@mui/material';
-import { Link as RouterLink, useNavigate } from 'react-router-dom';
+import { Link as RouterLink, useNavigate } from 'react-router';
 import {
   createDataTableColumnHelper,
   DataTable,

@@ -1,6 +1,6 @@
 import { Link, Stack, Tooltip, Typography } from '@mui/material';
 import { useMemo } from 'react';
-import { Link as RouterLink, useNavigate } from 'react-router-dom';
+import { Link as RouterLink, useNavigate } from 'react-router';
 import {
   createDataTableColumnHelper,
   DataTable,

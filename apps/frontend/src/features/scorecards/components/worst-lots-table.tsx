@@ -8,7 +8,7 @@ import {
   TableRow,
   Typography,
 } from '@mui/material';
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { paths } from '@/config/paths';
 import { formatPercent, NONE } from '@/features/scorecards/lib/format';
 import type { WorstLot } from '@/features/scorecards/types';

@@ -1,5 +1,5 @@
 import { useCallback, useMemo } from 'react';
-import { useSearchParams } from 'react-router-dom';
+import { useSearchParams } from 'react-router';
 import { rangeFromParams } from '@/features/scorecards/lib/date-range';
 import type { DateRange } from '@/features/scorecards/types';
 
