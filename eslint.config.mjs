@@ -1,6 +1,7 @@
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import reactHooks from 'eslint-plugin-react-hooks';
+import pluginQuery from '@tanstack/eslint-plugin-query';
 import globals from 'globals';
 import { existsSync, readdirSync } from 'node:fs';
 
@@ -58,8 +59,12 @@ export default tseslint.config(
   {
     files: ['apps/frontend/**/*.{ts,tsx}'],
     languageOptions: { globals: { ...globals.browser } },
-    plugins: { 'react-hooks': reactHooks },
-    rules: { ...reactHooks.configs.recommended.rules },
+    plugins: { 'react-hooks': reactHooks, '@tanstack/query': pluginQuery },
+    rules: {
+      ...reactHooks.configs.recommended.rules,
+      // Query keys, stable clients, no rest-destructured results (TanStack Query's own rules).
+      ...pluginQuery.configs['flat/recommended'][0].rules,
+    },
   },
   ...featureBlocks,
   {

@@ -6,16 +6,16 @@ import { ErrorBoundary } from '@/components/error-boundary';
 import { FullPageError } from '@/components/full-page-state';
 import { Toaster } from '@/components/toaster';
 import { AuthProvider } from '@/features/auth/auth-context';
-import { meQueryKey } from '@/features/auth/api/get-me';
 import { createQueryClient } from '@/lib/query-client';
 import { UnitsProvider } from '@/lib/units';
+import { queryKeys } from '@/lib/query-keys';
 
 export function AppProvider({ children }: { children: ReactNode }) {
   const [queryClient] = useState(() =>
     createQueryClient({
       // The session ended: forget the user; the sign-in gate then sends the user to
       // the sign-in page and remembers where they were.
-      onUnauthorized: (client) => client.setQueryData(meQueryKey, null),
+      onUnauthorized: (client) => client.setQueryData(queryKeys.auth.me(), null),
     }),
   );
 

@@ -10,7 +10,8 @@ function resource<const R extends string>(name: R) {
     lists: () => [...all, 'list'] as const,
     list: <P extends object>(params: P) => [...all, 'list', params] as const,
     details: () => [...all, 'detail'] as const,
-    detail: (id: number) => [...all, 'detail', id] as const,
+    // null: a query kept disabled until there is an id.
+    detail: (id: number | null) => [...all, 'detail', id] as const,
   };
 }
 
@@ -46,7 +47,8 @@ export const queryKeys = {
   },
   returns: {
     ...returns,
-    returnableLots: (supplierId: number) => [...returns.all, 'returnable-lots', supplierId] as const,
+    returnableLots: (supplierId: number) =>
+      [...returns.all, 'returnable-lots', supplierId] as const,
   },
   messages: resource('messages'),
   scorecards: {

@@ -1,6 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import type { Page } from '@/components/data-table/data-table';
 import { api } from '@/lib/api-client';
+import { queryKeys } from '@/lib/query-keys';
 
 /** What a supplier choice shows: name, code and standing. */
 export interface SupplierChoice {
@@ -16,7 +17,7 @@ const SEARCH_PAGE = 20;
 // Under the suppliers key, so any supplier change refreshes the choices too.
 export const supplierSearchQueryOptions = (q: string) =>
   queryOptions({
-    queryKey: ['suppliers', 'choices', q.trim()] as const,
+    queryKey: queryKeys.suppliers.choices(q.trim()),
     queryFn: ({ signal }) => {
       const search = new URLSearchParams({ pageSize: String(SEARCH_PAGE), sort: 'name:asc' });
       if (q.trim()) search.set('q', q.trim());
@@ -30,7 +31,7 @@ export const useSupplierSearch = (q: string) => useQuery(supplierSearchQueryOpti
 /** The chosen supplier by id (an id from the address bar or a preselected form). */
 export const useSupplierChoice = (id: number | null) =>
   useQuery({
-    queryKey: ['suppliers', 'detail', id] as const,
+    queryKey: queryKeys.suppliers.detail(id),
     queryFn: ({ signal }) => api.get<SupplierChoice>(`/suppliers/${id}`, signal),
     enabled: id !== null,
   });

@@ -1,16 +1,15 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { TimelineEvent } from '@/features/audit/types';
+import { queryKeys } from '@/lib/query-keys';
 
 // Under ['lots'] so that whatever refreshes a lot refreshes its timeline too.
-export const lotTimelineKey = (lotId: number) => ['lots', 'timeline', lotId] as const;
-
 export const getLotTimeline = (lotId: number, signal?: AbortSignal) =>
   api.get<TimelineEvent[]>(`/lots/${lotId}/timeline`, signal);
 
 export const lotTimelineQueryOptions = (lotId: number) =>
   queryOptions({
-    queryKey: lotTimelineKey(lotId),
+    queryKey: queryKeys.lots.timeline(lotId),
     queryFn: ({ signal }) => getLotTimeline(lotId, signal),
   });
 

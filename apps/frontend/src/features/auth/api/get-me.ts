@@ -1,8 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api, isApiError } from '@/lib/api-client';
 import type { SessionUser } from '@/features/auth/types';
-
-export const meQueryKey = ['auth', 'me'] as const;
+import { queryKeys } from '@/lib/query-keys';
 
 /** The signed-in user, or null when there is no valid session (a 401 is an answer here). */
 export async function getMe(signal?: AbortSignal): Promise<SessionUser | null> {
@@ -16,7 +15,7 @@ export async function getMe(signal?: AbortSignal): Promise<SessionUser | null> {
 
 export const meQueryOptions = () =>
   queryOptions({
-    queryKey: meQueryKey,
+    queryKey: queryKeys.auth.me(),
     queryFn: ({ signal }) => getMe(signal),
     staleTime: 5 * 60_000,
   });

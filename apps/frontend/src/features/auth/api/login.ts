@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
-import { meQueryKey } from '@/features/auth/api/get-me';
 import type { SessionUser } from '@/features/auth/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export const loginSchema = z.object({
   email: z
@@ -31,8 +31,10 @@ export function useLogin() {
     onSuccess: ({ user }) => {
       // Nothing cached for a previous user may leak into this session. (Not clear():
       // that would also drop the session query the auth context is watching.)
-      queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== 'auth' });
-      queryClient.setQueryData(meQueryKey, user);
+      queryClient.removeQueries({
+        predicate: (query) => query.queryKey[0] !== queryKeys.auth.all[0],
+      });
+      queryClient.setQueryData(queryKeys.auth.me(), user);
     },
   });
 }

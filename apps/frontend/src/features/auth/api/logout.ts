@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { meQueryKey } from '@/features/auth/api/get-me';
+import { queryKeys } from '@/lib/query-keys';
 
 export const logout = () => api.post<void>('/auth/logout');
 
@@ -12,8 +12,10 @@ export function useLogout() {
     meta: { ignoreUnauthorized: true },
     // Signed out either way: an already-ended session is still signed out.
     onSettled: () => {
-      queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== 'auth' });
-      queryClient.setQueryData(meQueryKey, null);
+      queryClient.removeQueries({
+        predicate: (query) => query.queryKey[0] !== queryKeys.auth.all[0],
+      });
+      queryClient.setQueryData(queryKeys.auth.me(), null);
     },
   });
 }

@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { todayIso } from '@/features/corrective-actions/lib/car-rules';
 import type { CorrectiveAction } from '@/features/corrective-actions/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export const createCorrectiveActionSchema = z.object({
   supplierId: z.number('Choose the supplier.').int().positive('Choose the supplier.'),
@@ -28,6 +29,6 @@ export function useCreateCorrectiveAction() {
   return useMutation({
     mutationFn: createCorrectiveAction,
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['corrective-actions'] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.correctiveActions.all }),
   });
 }

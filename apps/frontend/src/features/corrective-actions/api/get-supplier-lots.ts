@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { Page } from '@/features/corrective-actions/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export interface SupplierLot {
   id: number;
@@ -15,7 +16,7 @@ const DECIDED = 'rejected,accepted_on_concession,returned,accepted';
 
 export const supplierLotsQueryOptions = (supplierId: number) =>
   queryOptions({
-    queryKey: ['lots', 'list', { supplierId, status: DECIDED, pageSize: 100 }] as const,
+    queryKey: queryKeys.lots.list({ supplierId, status: DECIDED, pageSize: 100 }),
     queryFn: ({ signal }) =>
       api.get<Page<SupplierLot>>(
         `/lots?supplierId=${supplierId}&status=${DECIDED}&pageSize=100&sort=receivedAt:desc`,

@@ -1,5 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { queryKeys } from '@/lib/query-keys';
 
 export interface ScarFile {
   id: number;
@@ -20,7 +21,7 @@ export function useSendToSupplier(id: number) {
         {},
       ),
     meta: { inlineErrors: true },
-    onSettled: () => client.invalidateQueries({ queryKey: ['messages'] }),
+    onSettled: () => client.invalidateQueries({ queryKey: queryKeys.messages.all }),
   });
 }
 
@@ -33,6 +34,6 @@ export function useRevokeLinks(id: number) {
 
 export const useScarFiles = (id: number) =>
   useQuery({
-    queryKey: ['corrective-actions', id, 'files'],
+    queryKey: queryKeys.correctiveActions.files(id),
     queryFn: ({ signal }) => api.get<ScarFile[]>(`/corrective-actions/${id}/attachments`, signal),
   });

@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import type { CorrectiveAction, CorrectiveActionStatus } from '@/features/corrective-actions/types';
+import { queryKeys } from '@/lib/query-keys';
 
 const answer = (what: string) =>
   z
@@ -42,6 +43,6 @@ export function useUpdateCorrectiveAction({ inlineErrors = false } = {}) {
     mutationFn: updateCorrectiveAction,
     meta: { inlineErrors },
     // A 409 means someone else changed it: reload it either way.
-    onSettled: () => queryClient.invalidateQueries({ queryKey: ['corrective-actions'] }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: queryKeys.correctiveActions.all }),
   });
 }

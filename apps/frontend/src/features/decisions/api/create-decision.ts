@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { reasonError } from '@/features/decisions/lib/reason-rule';
 import type { DecisionOutcome, DecisionResult, Recommendation } from '@/features/decisions/types';
+import { queryKeys } from '@/lib/query-keys';
 
 const OUTCOMES = ['accept', 'accept_on_concession', 'reject'] as const;
 
@@ -36,6 +37,6 @@ export function useCreateDecision() {
     mutationFn: createDecision,
     meta: { inlineErrors: true },
     // The lot, its timeline, the lists and Today all change with a decision.
-    onSettled: () => queryClient.invalidateQueries({ queryKey: ['lots'] }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: queryKeys.lots.all }),
   });
 }

@@ -17,6 +17,7 @@ import { SwitchingNoticeView } from '@/features/decisions/components/switching-n
 import { decisionConflict } from '@/features/decisions/lib/conflict';
 import type { DecidableLot, DecisionResult } from '@/features/decisions/types';
 import { splitServerErrors } from '@/lib/server-field-errors';
+import { queryKeys } from '@/lib/query-keys';
 
 const DECIDABLE = ['awaiting_decision', 'accepted', 'accepted_on_concession', 'rejected'];
 const words = (status: string) => status.replace(/_/g, ' ');
@@ -46,7 +47,7 @@ export function DecisionPanel({ lot }: { lot: DecidableLot }) {
 
   const reload = () => {
     decide.reset();
-    void queryClient.invalidateQueries({ queryKey: ['lots', 'detail', lot.id] });
+    void queryClient.invalidateQueries({ queryKey: queryKeys.lots.detail(lot.id) });
   };
 
   return (

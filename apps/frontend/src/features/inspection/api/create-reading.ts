@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { ReadingRequest } from '@/features/inspection/lib/reading-form';
 import type { Reading } from '@/features/inspection/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export const createReading = (sampleId: number, request: ReadingRequest) =>
   api.post<Reading>(`/samples/${sampleId}/readings`, request);
@@ -12,6 +13,6 @@ export function useCreateReading(sampleId: number) {
   return useMutation({
     mutationFn: (request: ReadingRequest) => createReading(sampleId, request),
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['lots'] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.lots.all }),
   });
 }

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { Sample } from '@/features/inspection/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export interface CreateSampleRequest {
   conductorId: number;
@@ -20,6 +21,6 @@ export function useCreateSample(lotId: number) {
   return useMutation({
     mutationFn: (request: CreateSampleRequest) => createSample(lotId, request),
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['lots'] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.lots.all }),
   });
 }

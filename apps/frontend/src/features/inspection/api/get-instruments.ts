@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { Instrument } from '@/features/inspection/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export interface InstrumentListParams {
   /** Due-soon and overdue instruments only (docs/api-conventions.md). */
@@ -14,9 +15,6 @@ interface InstrumentPage {
   total: number;
 }
 
-export const instrumentsKey = (params: InstrumentListParams) =>
-  ['instruments', 'list', params] as const;
-
 export const getInstruments = (params: InstrumentListParams, signal?: AbortSignal) => {
   const search = new URLSearchParams();
   if (params.dueWithinDays !== undefined) search.set('dueWithinDays', String(params.dueWithinDays));
@@ -27,7 +25,7 @@ export const getInstruments = (params: InstrumentListParams, signal?: AbortSigna
 
 export const instrumentsQueryOptions = (params: InstrumentListParams) =>
   queryOptions({
-    queryKey: instrumentsKey(params),
+    queryKey: queryKeys.instruments.list(params),
     queryFn: ({ signal }) => getInstruments(params, signal),
   });
 

@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { ApiError, type ApiErrorBody } from '@/lib/api-client';
+import { queryKeys } from '@/lib/query-keys';
 
 export interface ImportRowError {
   /** Spreadsheet row (the header is row 1, the first reading row 2), or null for the whole file. */
@@ -65,6 +66,6 @@ export function useImportReadings(lotId: number) {
   return useMutation({
     mutationFn: (file: File) => importReadings(lotId, file),
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['lots'] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.lots.all }),
   });
 }

@@ -2,6 +2,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useEffect, useState } from 'react';
 import { flushQueue } from '@/features/inspection/api/record-bench-reading';
 import { queuedFor, remove, type QueuedReading } from '@/features/inspection/lib/offline-queue';
+import { queryKeys } from '@/lib/query-keys';
 
 /** Try again this often while readings wait and the device says it is online (common practice, no source). */
 const RETRY_MS = 10_000;
@@ -24,7 +25,7 @@ export function useBenchQueue(lotId: number) {
     setSending(true);
     try {
       const { sent } = await flushQueue(lotId);
-      if (sent > 0) await queryClient.invalidateQueries({ queryKey: ['lots'] });
+      if (sent > 0) await queryClient.invalidateQueries({ queryKey: queryKeys.lots.all });
     } finally {
       setSending(false);
       await refresh();

@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import type { Reading } from '@/features/inspection/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export const VOID_REASON_MIN_LENGTH = 10;
 
@@ -23,6 +24,6 @@ export function useVoidReading() {
     mutationFn: ({ readingId, ...input }: VoidReadingInput & { readingId: number }) =>
       voidReading(readingId, input),
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['lots'] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.lots.all }),
   });
 }

@@ -1,13 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
-import { instrumentsKeys } from '@/features/instruments/api/get-instruments';
 import {
   INSTRUMENT_KINDS,
   RESOLUTION_UNITS,
   UNITS_BY_KIND,
   type Instrument,
 } from '@/features/instruments/types';
+import { queryKeys } from '@/lib/query-keys';
 
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
 const realDate = (v: string) => DATE.test(v) && !Number.isNaN(Date.parse(`${v}T00:00:00Z`));
@@ -87,6 +87,6 @@ export function useCreateInstrument() {
   return useMutation({
     mutationFn: createInstrument,
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: instrumentsKeys.all }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.instruments.all }),
   });
 }

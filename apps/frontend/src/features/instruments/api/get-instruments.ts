@@ -3,21 +3,17 @@ import type { Page } from '@/components/data-table/data-table';
 import { toQueryString } from '@/components/data-table/use-list-params';
 import { api } from '@/lib/api-client';
 import type { Instrument } from '@/features/instruments/types';
+import { queryKeys } from '@/lib/query-keys';
 
 /** Query parameters of GET /api/instruments: page, pageSize, sort, kind, active, dueWithinDays. */
 export type InstrumentListParams = Record<string, string>;
-
-export const instrumentsKeys = {
-  all: ['instruments'] as const,
-  list: (params: InstrumentListParams) => [...instrumentsKeys.all, 'list', params] as const,
-};
 
 export const getInstruments = (params: InstrumentListParams, signal?: AbortSignal) =>
   api.get<Page<Instrument>>(`/instruments${toQueryString(params)}`, signal);
 
 export const instrumentsQueryOptions = (params: InstrumentListParams) =>
   queryOptions({
-    queryKey: instrumentsKeys.list(params),
+    queryKey: queryKeys.instruments.list(params),
     queryFn: ({ signal }) => getInstruments(params, signal),
     placeholderData: keepPreviousData,
   });

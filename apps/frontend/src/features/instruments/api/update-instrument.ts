@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { InstrumentBody } from '@/features/instruments/api/create-instrument';
-import { instrumentsKeys } from '@/features/instruments/api/get-instruments';
 import type { Instrument } from '@/features/instruments/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export type InstrumentPatch = Partial<InstrumentBody> & { active?: boolean };
 
@@ -22,6 +22,6 @@ export function useUpdateInstrument() {
   return useMutation({
     mutationFn: updateInstrument,
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: instrumentsKeys.all }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.instruments.all }),
   });
 }

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
-import { lotsKeys } from '@/features/lots/api/get-lots';
 import type { LotSummary } from '@/features/lots/types';
+import { queryKeys } from '@/lib/query-keys';
 
 /** Units a delivery is counted in, as packing slips write them. */
 export const LOT_UNITS = ['spools', 'reels', 'coils', 'kits', 'boxes', 'metres', 'feet'] as const;
@@ -76,6 +76,6 @@ export function useCreateLot() {
   return useMutation({
     mutationFn: createLot,
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: lotsKeys.all }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.lots.all }),
   });
 }

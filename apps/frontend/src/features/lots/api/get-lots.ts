@@ -2,19 +2,14 @@ import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query'
 import { api } from '@/lib/api-client';
 import { lotQueryString, type LotListParams } from '@/features/lots/lib/lot-query';
 import type { LotSummary, Page } from '@/features/lots/types';
-
-export const lotsKeys = {
-  all: ['lots'] as const,
-  lists: () => [...lotsKeys.all, 'list'] as const,
-  list: (params: LotListParams) => [...lotsKeys.lists(), params] as const,
-};
+import { queryKeys } from '@/lib/query-keys';
 
 export const getLots = (params: LotListParams, signal?: AbortSignal) =>
   api.get<Page<LotSummary>>(`/lots${lotQueryString(params)}`, signal);
 
 export const lotsQueryOptions = (params: LotListParams) =>
   queryOptions({
-    queryKey: lotsKeys.list(params),
+    queryKey: queryKeys.lots.list(params),
     queryFn: ({ signal }) => getLots(params, signal),
     placeholderData: keepPreviousData,
   });

@@ -1,13 +1,14 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { Page, ProductOption } from '@/features/lots/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export const productOptionsQueryOptions = (supplierId: number, q: string) => {
   const params = { supplierId, q: q.trim(), pageSize: 50 };
   return queryOptions({
-    queryKey: ['products', 'list', params] as const,
+    queryKey: queryKeys.products.list(params),
     queryFn: ({ signal }) => {
-      const search = new URLSearchParams({ supplierId: String(supplierId), pageSize: '50' });
+      const search = new URLSearchParams({ supplierId: String(params.supplierId), pageSize: '50' });
       if (params.q) search.set('q', params.q);
       return api.get<Page<ProductOption>>(`/products?${search.toString()}`, signal);
     },

@@ -1,9 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { SamplingPlanAnswer } from '@/features/lots/types';
-
-export const samplingPlanKey = (productId: number, quantity: number) =>
-  ['products', 'sampling-plan', productId, quantity] as const;
+import { queryKeys } from '@/lib/query-keys';
 
 export const getSamplingPlan = (productId: number, quantity: number, signal?: AbortSignal) =>
   api.get<SamplingPlanAnswer>(
@@ -13,7 +11,7 @@ export const getSamplingPlan = (productId: number, quantity: number, signal?: Ab
 
 export const samplingPlanQueryOptions = (productId: number, quantity: number) =>
   queryOptions({
-    queryKey: samplingPlanKey(productId, quantity),
+    queryKey: queryKeys.products.samplingPlan(productId, quantity),
     queryFn: ({ signal }) => getSamplingPlan(productId, quantity, signal),
     // The form shows its own preview and the server's error beside it.
     meta: { inlineErrors: true },

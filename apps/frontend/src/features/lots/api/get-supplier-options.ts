@@ -1,12 +1,13 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { Page, SupplierOption } from '@/features/lots/types';
+import { queryKeys } from '@/lib/query-keys';
 
 // Same layered key as the supplier screens use for the same request, so their edits refresh it.
 export const supplierOptionsQueryOptions = (q: string) => {
   const params = { q: q.trim(), pageSize: 20 };
   return queryOptions({
-    queryKey: ['suppliers', 'list', params] as const,
+    queryKey: queryKeys.suppliers.list(params),
     queryFn: ({ signal }) => {
       const search = new URLSearchParams({ pageSize: '20' });
       if (params.q) search.set('q', params.q);

@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { MessageStatus, OutboundMessage, Page } from '@/features/messages/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export interface RelatedRecord {
   /** e.g. 'vendor_return' */
@@ -14,11 +15,6 @@ export interface MessagesQuery {
   status?: MessageStatus | '';
 }
 
-export const messagesKeys = {
-  all: ['messages'] as const,
-  list: (q: MessagesQuery) => [...messagesKeys.all, 'list', q] as const,
-};
-
 export function getMessages(q: MessagesQuery, signal?: AbortSignal) {
   const params = new URLSearchParams({ pageSize: '100' });
   if (q.related) {
@@ -31,7 +27,7 @@ export function getMessages(q: MessagesQuery, signal?: AbortSignal) {
 
 export const messagesQueryOptions = (q: MessagesQuery) =>
   queryOptions({
-    queryKey: messagesKeys.list(q),
+    queryKey: queryKeys.messages.list(q),
     queryFn: ({ signal }) => getMessages(q, signal),
     // The queue retries on its own: keep the list fresh while it is open.
     refetchInterval: 15_000,

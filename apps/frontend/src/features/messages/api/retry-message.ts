@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { messagesKeys } from '@/features/messages/api/get-messages';
 import type { OutboundMessage } from '@/features/messages/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export const retryMessage = (id: number) => api.post<OutboundMessage>(`/messages/${id}/retry`);
 
@@ -9,6 +9,6 @@ export function useRetryMessage() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: retryMessage,
-    onSettled: () => queryClient.invalidateQueries({ queryKey: messagesKeys.all }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: queryKeys.messages.all }),
   });
 }

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { ApiError, type ApiErrorBody } from '@/lib/api-client';
 import type { Photo } from '@/features/photos/types';
+import { queryKeys } from '@/lib/query-keys';
 
 /** Same limits as the server (issue 4): JPEG, PNG or WebP, at most 15 MB. */
 export const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const;
@@ -69,6 +70,6 @@ export function useUploadPhoto(lotId: number) {
   return useMutation({
     mutationFn: (input: UploadPhotoInput) => uploadPhoto(lotId, input),
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['lots', 'detail', lotId] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.lots.detail(lotId) }),
   });
 }

@@ -2,7 +2,6 @@ import { AQLS, INSPECTION_LEVELS } from '@gaugeproof/standards';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
-import { productsKeys } from '@/features/products/api/get-products';
 import { previewGauge } from '@/features/products/product-rules';
 import {
   CLAIMED_MATERIALS,
@@ -10,6 +9,7 @@ import {
   PRODUCT_KINDS,
   type Product,
 } from '@/features/products/types';
+import { queryKeys } from '@/lib/query-keys';
 
 const optionalNumber = (test: (n: number) => boolean, message: string) =>
   z
@@ -124,6 +124,6 @@ export function useCreateProduct() {
   return useMutation({
     mutationFn: createProduct,
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: productsKeys.all }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.products.all }),
   });
 }

@@ -1,14 +1,14 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { productsKeys } from '@/features/products/api/get-products';
 import type { Product } from '@/features/products/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export const getProduct = (id: number, signal?: AbortSignal) =>
   api.get<Product>(`/products/${id}`, signal);
 
 export const productQueryOptions = (id: number) =>
   queryOptions({
-    queryKey: productsKeys.detail(id),
+    queryKey: queryKeys.products.detail(id),
     queryFn: ({ signal }) => getProduct(id, signal),
   });
 

@@ -3,22 +3,17 @@ import type { Page } from '@/components/data-table/data-table';
 import { toQueryString } from '@/components/data-table/use-list-params';
 import { api } from '@/lib/api-client';
 import type { Product } from '@/features/products/types';
+import { queryKeys } from '@/lib/query-keys';
 
 /** Query parameters of GET /api/products: page, pageSize, sort, q, supplierId, kind. */
 export type ProductListParams = Record<string, string>;
-
-export const productsKeys = {
-  all: ['products'] as const,
-  list: (params: ProductListParams) => [...productsKeys.all, 'list', params] as const,
-  detail: (id: number) => [...productsKeys.all, 'detail', id] as const,
-};
 
 export const getProducts = (params: ProductListParams, signal?: AbortSignal) =>
   api.get<Page<Product>>(`/products${toQueryString(params)}`, signal);
 
 export const productsQueryOptions = (params: ProductListParams) =>
   queryOptions({
-    queryKey: productsKeys.list(params),
+    queryKey: queryKeys.products.list(params),
     queryFn: ({ signal }) => getProducts(params, signal),
     placeholderData: keepPreviousData,
   });

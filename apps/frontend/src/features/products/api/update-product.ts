@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { ProductBody, ProductInput } from '@/features/products/api/create-product';
-import { productsKeys } from '@/features/products/api/get-products';
 import type { Product } from '@/features/products/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export type ProductPatch = Partial<Omit<ProductBody, 'supplierId' | 'sku' | 'kind'>> & {
   active?: boolean;
@@ -52,6 +52,6 @@ export function useUpdateProduct() {
   return useMutation({
     mutationFn: updateProduct,
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: productsKeys.all }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.products.all }),
   });
 }

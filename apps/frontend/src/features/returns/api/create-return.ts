@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { costsFromForm, costsSchema } from '@/features/returns/api/cost-schema';
 import type { VendorReturn } from '@/features/returns/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export const createReturnSchema = z.object({
   supplierId: z.number('Choose the supplier.').int().positive('Choose the supplier.'),
@@ -27,8 +28,8 @@ export function useCreateReturn() {
     mutationFn: createReturn,
     meta: { inlineErrors: true },
     onSuccess: async () => {
-      await queryClient.invalidateQueries({ queryKey: ['returns'] });
-      await queryClient.invalidateQueries({ queryKey: ['lots'] });
+      await queryClient.invalidateQueries({ queryKey: queryKeys.returns.all });
+      await queryClient.invalidateQueries({ queryKey: queryKeys.lots.all });
     },
   });
 }

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
+import { queryKeys } from '@/lib/query-keys';
 
 export const emailReturnSchema = z.object({
   to: z.string().trim().pipe(z.email('Enter a valid e-mail address.')),
@@ -29,9 +30,9 @@ export function useEmailReturn() {
     meta: { inlineErrors: true },
     // E-mailing a draft marks it e-mailed and its lots returned.
     onSettled: async () => {
-      await queryClient.invalidateQueries({ queryKey: ['messages'] });
-      await queryClient.invalidateQueries({ queryKey: ['returns'] });
-      await queryClient.invalidateQueries({ queryKey: ['lots'] });
+      await queryClient.invalidateQueries({ queryKey: queryKeys.messages.all });
+      await queryClient.invalidateQueries({ queryKey: queryKeys.returns.all });
+      await queryClient.invalidateQueries({ queryKey: queryKeys.lots.all });
     },
   });
 }

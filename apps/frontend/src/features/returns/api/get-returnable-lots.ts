@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { getReturns } from '@/features/returns/api/get-returns';
 import type { Page } from '@/features/returns/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export interface ReturnableLot {
   id: number;
@@ -30,7 +31,7 @@ export async function getReturnableLots(supplierId: number, signal?: AbortSignal
 
 export const returnableLotsQueryOptions = (supplierId: number) =>
   queryOptions({
-    queryKey: ['returns', 'returnable-lots', supplierId] as const,
+    queryKey: queryKeys.returns.returnableLots(supplierId),
     queryFn: ({ signal }) => getReturnableLots(supplierId, signal),
   });
 

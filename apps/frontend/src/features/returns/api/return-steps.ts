@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import type { ReturnStep } from '@/features/returns/lib/return-steps';
 import type { VendorReturn } from '@/features/returns/types';
+import { queryKeys } from '@/lib/query-keys';
 
 const isoDate = z
   .string()
@@ -61,9 +62,9 @@ export function useReturnStep() {
     mutationFn: takeReturnStep,
     meta: { inlineErrors: true },
     onSettled: async () => {
-      await queryClient.invalidateQueries({ queryKey: ['returns'] });
+      await queryClient.invalidateQueries({ queryKey: queryKeys.returns.all });
       // Shipping a draft marks its lots returned; cancelling frees them.
-      await queryClient.invalidateQueries({ queryKey: ['lots'] });
+      await queryClient.invalidateQueries({ queryKey: queryKeys.lots.all });
     },
   });
 }

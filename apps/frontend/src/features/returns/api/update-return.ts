@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { costsSchema } from '@/features/returns/api/cost-schema';
 import type { ReturnCosts, VendorReturn } from '@/features/returns/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export const editReturnSchema = z.object({
   rmaNumber: z.string().trim().max(64, 'At most 64 characters.'),
@@ -40,8 +41,8 @@ export function useUpdateReturn({ inlineErrors = false } = {}) {
     meta: { inlineErrors },
     // A 409 means someone else changed it first: reload it either way.
     onSettled: async () => {
-      await queryClient.invalidateQueries({ queryKey: ['returns'] });
-      await queryClient.invalidateQueries({ queryKey: ['lots'] });
+      await queryClient.invalidateQueries({ queryKey: queryKeys.returns.all });
+      await queryClient.invalidateQueries({ queryKey: queryKeys.lots.all });
     },
   });
 }

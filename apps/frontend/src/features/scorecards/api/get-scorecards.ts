@@ -1,15 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { DateRange, ScorecardList } from '@/features/scorecards/types';
-
-export const scorecardsKeys = {
-  all: ['scorecards'] as const,
-  lists: () => [...scorecardsKeys.all, 'list'] as const,
-  list: (range: DateRange) => [...scorecardsKeys.lists(), range] as const,
-  details: () => [...scorecardsKeys.all, 'detail'] as const,
-  detail: (supplierId: number, range: DateRange) =>
-    [...scorecardsKeys.details(), supplierId, range] as const,
-};
+import { queryKeys } from '@/lib/query-keys';
 
 export const rangeQuery = (range: DateRange) =>
   `?${new URLSearchParams({ from: range.from, to: range.to }).toString()}`;
@@ -19,7 +11,7 @@ export const getScorecards = (range: DateRange, signal?: AbortSignal) =>
 
 export const scorecardsQueryOptions = (range: DateRange) =>
   queryOptions({
-    queryKey: scorecardsKeys.list(range),
+    queryKey: queryKeys.scorecards.list(range),
     queryFn: ({ signal }) => getScorecards(range, signal),
     placeholderData: keepPreviousData,
   });

@@ -1,6 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { ApiError, api, isApiError } from '@/lib/api-client';
+import { queryKeys } from '@/lib/query-keys';
 
 interface PortalLot {
   poNumber: string;
@@ -51,8 +52,6 @@ export interface PortalRequest {
 }
 
 const path = (token: string, rest = '') => `/supplier-portal/${encodeURIComponent(token)}${rest}`;
-const key = (token: string) => ['supplier-portal', token] as const;
-
 export type PortalPage = PortalRequest | PortalReturn;
 
 /** Address of a return notice's photo n (1-based) on the public API. */
@@ -62,7 +61,7 @@ export const portalEvidenceUrl = (token: string) => `/api${path(token, '/evidenc
 
 export const usePortalRequest = (token: string) =>
   useQuery({
-    queryKey: key(token),
+    queryKey: queryKeys.supplierPortal.request(token),
     queryFn: ({ signal }) => api.get<PortalPage>(path(token), signal),
     retry: (count, error) => !(isApiError(error) && error.status < 500) && count < 2,
     meta: { inlineErrors: true },
@@ -92,7 +91,7 @@ export function useSendAnswer(token: string) {
   return useMutation({
     mutationFn: (input: AnswerInput) => api.post<PortalRequest>(path(token, '/response'), input),
     meta: { inlineErrors: true },
-    onSuccess: (data) => client.setQueryData(key(token), data),
+    onSuccess: (data) => client.setQueryData(queryKeys.supplierPortal.request(token), data),
   });
 }
 
@@ -122,6 +121,7 @@ export function useUploadFile(token: string) {
       return body;
     },
     meta: { inlineErrors: true },
-    onSettled: () => client.invalidateQueries({ queryKey: key(token) }),
+    onSettled: () =>
+      client.invalidateQueries({ queryKey: queryKeys.supplierPortal.request(token) }),
   });
 }

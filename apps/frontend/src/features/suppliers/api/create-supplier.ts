@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
-import { suppliersKeys } from '@/features/suppliers/api/get-suppliers';
 import { SUPPLIER_STATUSES, type Supplier } from '@/features/suppliers/types';
+import { queryKeys } from '@/lib/query-keys';
 
 /** The supplier form, for creating and editing; the server checks the same rules again. */
 export const supplierSchema = z.object({
@@ -45,6 +45,6 @@ export function useCreateSupplier() {
   return useMutation({
     mutationFn: createSupplier,
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: suppliersKeys.all }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.suppliers.all }),
   });
 }

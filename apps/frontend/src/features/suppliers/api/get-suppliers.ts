@@ -3,21 +3,17 @@ import type { Page } from '@/components/data-table/data-table';
 import { toQueryString } from '@/components/data-table/use-list-params';
 import { api } from '@/lib/api-client';
 import type { Supplier } from '@/features/suppliers/types';
+import { queryKeys } from '@/lib/query-keys';
 
 /** Query parameters of GET /api/suppliers: page, pageSize, sort, q, status. */
 export type SupplierListParams = Record<string, string>;
-
-export const suppliersKeys = {
-  all: ['suppliers'] as const,
-  list: (params: SupplierListParams) => [...suppliersKeys.all, 'list', params] as const,
-};
 
 export const getSuppliers = (params: SupplierListParams, signal?: AbortSignal) =>
   api.get<Page<Supplier>>(`/suppliers${toQueryString(params)}`, signal);
 
 export const suppliersQueryOptions = (params: SupplierListParams) =>
   queryOptions({
-    queryKey: suppliersKeys.list(params),
+    queryKey: queryKeys.suppliers.list(params),
     queryFn: ({ signal }) => getSuppliers(params, signal),
     placeholderData: keepPreviousData,
   });

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { SupplierBody } from '@/features/suppliers/api/create-supplier';
-import { suppliersKeys } from '@/features/suppliers/api/get-suppliers';
 import type { Supplier } from '@/features/suppliers/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export type SupplierPatch = Partial<SupplierBody>;
 
@@ -23,6 +23,6 @@ export function useUpdateSupplier() {
   return useMutation({
     mutationFn: updateSupplier,
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: suppliersKeys.all }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.suppliers.all }),
   });
 }

@@ -2,8 +2,8 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { ROLES } from '@/lib/roles';
-import { usersKeys } from '@/features/users/api/get-users';
 import type { User } from '@/features/users/types';
+import { queryKeys } from '@/lib/query-keys';
 
 export const PASSWORD_MIN_LENGTH = 10;
 
@@ -25,6 +25,6 @@ export function useCreateUser() {
   return useMutation({
     mutationFn: createUser,
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: usersKeys.all }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.users.all }),
   });
 }

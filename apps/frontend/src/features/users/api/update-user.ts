@@ -3,8 +3,8 @@ import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { ROLES, type Role } from '@/lib/roles';
 import { PASSWORD_MIN_LENGTH } from '@/features/users/api/create-user';
-import { usersKeys } from '@/features/users/api/get-users';
 import type { User } from '@/features/users/types';
+import { queryKeys } from '@/lib/query-keys';
 
 /** The edit form: an empty password means "leave it as it is". */
 export const editUserSchema = z.object({
@@ -40,6 +40,6 @@ export function useUpdateUser({ inlineErrors = false } = {}) {
   return useMutation({
     mutationFn: updateUser,
     meta: { inlineErrors },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: usersKeys.all }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.users.all }),
   });
 }

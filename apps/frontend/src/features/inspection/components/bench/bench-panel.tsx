@@ -34,6 +34,7 @@ import { conductorLabel, verdictLabels } from '@/features/inspection/lib/labels'
 import type { InputField, MethodDefinition } from '@/features/inspection/lib/reading-methods';
 import type { ReadingFormValues, ReadingRequest } from '@/features/inspection/lib/reading-form';
 import type { Instrument, LotDetail, Reading, ReadingMethod } from '@/features/inspection/types';
+import { queryKeys } from '@/lib/query-keys';
 
 // The serial code loads only where the browser has serial ports, on first use of bench mode.
 const BalanceButton = lazy(() => import('@/features/inspection/components/bench/balance-button'));
@@ -119,7 +120,7 @@ export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
       },
       request,
     );
-    if (reading) void queryClient.invalidateQueries({ queryKey: ['lots'] });
+    if (reading) void queryClient.invalidateQueries({ queryKey: queryKeys.lots.all });
     else void queue.refresh();
     return reading;
   };
