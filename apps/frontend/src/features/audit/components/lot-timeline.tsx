@@ -3,8 +3,7 @@ import { useState } from 'react';
 import { useLotTimeline } from '@/features/audit/api/get-lot-timeline';
 import type { TimelineEvent } from '@/features/audit/types';
 import { errorMessage } from '@/lib/query-client';
-
-const dateTime = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/dates';
 
 const dotColour = (action: string) =>
   action.startsWith('decision')
@@ -33,7 +32,7 @@ function Entry({ event, last }: { event: TimelineEvent; last: boolean }) {
       <Box sx={{ pb: 1.5 }}>
         <Typography variant="body2">{event.summary}</Typography>
         <Typography variant="caption" color="text.secondary">
-          {event.actor?.name ?? 'The system'} · {dateTime.format(new Date(event.at))}
+          {event.actor?.name ?? 'The system'} · {formatDateTime(event.at)}
         </Typography>
       </Box>
     </Stack>

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
-import { todayIso } from '@/features/corrective-actions/lib/car-rules';
+import { todayIso } from '@/lib/dates';
 import type { CorrectiveAction } from '@/features/corrective-actions/types';
 import { queryKeys } from '@/lib/query-keys';
 

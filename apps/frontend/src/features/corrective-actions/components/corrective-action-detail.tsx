@@ -32,8 +32,7 @@ import {
 import { carStatusLabels, type CorrectiveAction } from '@/features/corrective-actions/types';
 import { errorMessage } from '@/lib/query-client';
 import { toasts } from '@/lib/toast-store';
-
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
+import { formatDate } from '@/lib/dates';
 
 function Answer({ label, text }: { label: string; text: string | null }) {
   return (
@@ -83,7 +82,7 @@ export function CorrectiveActionDetail({
             <Grid size={{ xs: 6, md: 3 }}>
               <Answer
                 label="Raised"
-                text={`${dateFormat.format(new Date(car.createdAt))} by ${car.createdBy.name}`}
+                text={`${formatDate(car.createdAt)} by ${car.createdBy.name}`}
               />
             </Grid>
             <Grid size={12}>
@@ -125,14 +124,14 @@ export function CorrectiveActionDetail({
               {car.respondedAt && (
                 <Answer
                   label="Answered"
-                  text={`${dateFormat.format(new Date(car.respondedAt))}${car.respondedBy ? ` · ${car.respondedBy}` : ''}`}
+                  text={`${formatDate(car.respondedAt)}${car.respondedBy ? ` · ${car.respondedBy}` : ''}`}
                 />
               )}
               {car.reopenComment && <Answer label="Last asked for more" text={car.reopenComment} />}
               {car.verification && (
                 <Answer
                   label="Verified"
-                  text={`${dateFormat.format(new Date(car.verification.at))} by ${car.verification.by?.name ?? '—'}: ${car.verification.note ?? ''}${car.verification.lot ? ` (lot ${car.verification.lot.id}, PO ${car.verification.lot.poNumber})` : ''}`}
+                  text={`${formatDate(car.verification.at)} by ${car.verification.by?.name ?? '—'}: ${car.verification.note ?? ''}${car.verification.lot ? ` (lot ${car.verification.lot.id}, PO ${car.verification.lot.poNumber})` : ''}`}
                 />
               )}
             </Stack>
@@ -235,7 +234,7 @@ function ScarFiles({ id }: { id: number }) {
                     {f.filename}
                   </Link>
                 }
-                secondary={`${(f.sizeBytes / 1024).toFixed(0)} KB · ${f.addedBy} · ${dateFormat.format(new Date(f.createdAt))}`}
+                secondary={`${(f.sizeBytes / 1024).toFixed(0)} KB · ${f.addedBy} · ${formatDate(f.createdAt)}`}
               />
             </ListItem>
           ))}

@@ -19,7 +19,7 @@ import {
 } from '@/features/corrective-actions/api/create-corrective-action';
 import { SupplierLotsPicker } from '@/features/corrective-actions/components/supplier-lots-picker';
 import { SupplierSelect } from '@/components/supplier-select/supplier-select';
-import { todayIso } from '@/features/corrective-actions/lib/car-rules';
+import { todayIso } from '@/lib/dates';
 import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 

@@ -27,12 +27,7 @@ export function statusCommands(status: CorrectiveActionStatus): CorrectiveAction
 export const awaitingResponse = (status: CorrectiveActionStatus) =>
   status === 'open' || status === 'reopened';
 
-/** Today's calendar date in the user's time zone, YYYY-MM-DD. */
-export function todayIso(now = new Date()): string {
-  const m = String(now.getMonth() + 1).padStart(2, '0');
-  const d = String(now.getDate()).padStart(2, '0');
-  return `${now.getFullYear()}-${m}-${d}`;
-}
+export { todayIso } from '@/lib/dates';
 
 export const commandLabels: Partial<Record<CorrectiveActionStatus, string>> = {
   verified: 'Verify the response',

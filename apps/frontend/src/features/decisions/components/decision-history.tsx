@@ -11,8 +11,8 @@ import {
 import { useLotDecisions } from '@/features/decisions/api/get-lot-decisions';
 import { errorMessage } from '@/lib/query-client';
 import { outcomeLabels, type Decision } from '@/features/decisions/types';
+import { formatDateTime } from '@/lib/dates';
 
-const dateTime = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 const outcomeColour = {
   accept: 'success',
   accept_on_concession: 'warning',
@@ -63,7 +63,7 @@ function DecisionList({ decisions }: { decisions: readonly Decision[] }) {
             }
             secondary={
               <>
-                {`${d.decidedBy.name}, ${dateTime.format(new Date(d.decidedAt))} · recommended ${d.recommendation}`}
+                {`${d.decidedBy.name}, ${formatDateTime(d.decidedAt)} · recommended ${d.recommendation}`}
                 {d.reason && (
                   <Typography component="span" variant="body2" sx={{ display: 'block' }}>
                     “{d.reason}”

@@ -16,8 +16,7 @@ import { VerdictChip } from '@/features/inspection/components/verdict-chip';
 import { identifiedLabels, methodLabels } from '@/features/inspection/lib/labels';
 import type { Reading } from '@/features/inspection/types';
 import { useUnits, type Units } from '@/lib/units';
-
-const dateTime = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/dates';
 
 function inputText(units: Units, name: string, raw: number | number[]): string {
   // Raw inputs are shown in full, as typed (issue 13).
@@ -148,7 +147,7 @@ export function ReadingsTable({ readings, canVoid, onVoid }: ReadingsTableProps)
               <TableCell>
                 <span style={{ whiteSpace: 'nowrap' }}>{r.takenBy.name}</span>
                 <br />
-                <span style={{ whiteSpace: 'nowrap' }}>{dateTime.format(new Date(r.takenAt))}</span>
+                <span style={{ whiteSpace: 'nowrap' }}>{formatDateTime(r.takenAt)}</span>
                 <Typography variant="caption" component="div" color="text.secondary">
                   {r.instruments.map((i) => `${i.name} (${i.serial})`).join(', ') || '—'}
                 </Typography>
@@ -173,7 +172,7 @@ export function ReadingsTable({ readings, canVoid, onVoid }: ReadingsTableProps)
                 <TableCell colSpan={9}>
                   <Typography variant="body2" color="error">
                     Void: {r.voidReason} — {r.voidedBy?.name ?? 'someone'}
-                    {r.voidedAt ? `, ${dateTime.format(new Date(r.voidedAt))}` : ''}
+                    {r.voidedAt ? `, ${formatDateTime(r.voidedAt)}` : ''}
                   </Typography>
                 </TableCell>
               </TableRow>

@@ -1,9 +1,6 @@
 import { Chip } from '@mui/material';
 import type { Instrument } from '@/features/instruments/types';
-
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeZone: 'UTC' });
-export const formatCalendarDate = (date: string) =>
-  dateFormat.format(new Date(`${date}T00:00:00Z`));
+import { formatCalendarDate } from '@/lib/dates';
 
 /** Calibration status (ISO 9001 7.1.5): ok, due within 14 days, or overdue. */
 export function CalibrationChip({ instrument }: { instrument: Instrument }) {

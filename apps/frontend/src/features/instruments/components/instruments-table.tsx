@@ -5,11 +5,9 @@ import {
   createDataTableColumnHelper,
   type DataTableProps,
 } from '@/components/data-table/data-table';
-import {
-  CalibrationChip,
-  formatCalendarDate,
-} from '@/features/instruments/components/calibration-chip';
+import { CalibrationChip } from '@/features/instruments/components/calibration-chip';
 import { kindLabels, unitLabels, type Instrument } from '@/features/instruments/types';
+import { formatCalendarDate } from '@/lib/dates';
 
 const helper = createDataTableColumnHelper<Instrument>();
 

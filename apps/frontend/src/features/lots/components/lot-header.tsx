@@ -5,8 +5,7 @@ import { LotStatusChip } from '@/features/lots/components/lot-status-chip';
 import { SamplingPlanSummary } from '@/features/lots/components/sampling-plan-summary';
 import { SupplierStatusAlert } from '@/features/lots/components/supplier-status-alert';
 import type { LotSummary } from '@/features/lots/types';
-
-const dateTime = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/dates';
 
 function Fact({ label, value }: { label: string; value: string }) {
   return (
@@ -65,7 +64,7 @@ export function LotHeader({ lot, actions }: LotHeaderProps) {
                 <Grid size={6}>
                   <Fact
                     label="Received"
-                    value={`${dateTime.format(new Date(lot.receivedAt))} by ${lot.receivedBy.name}`}
+                    value={`${formatDateTime(lot.receivedAt)} by ${lot.receivedBy.name}`}
                   />
                 </Grid>
                 {lot.notes && (

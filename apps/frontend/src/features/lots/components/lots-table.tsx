@@ -10,9 +10,9 @@ import { LotStatusChip } from '@/features/lots/components/lot-status-chip';
 import { LOT_FILTERS, LotsFilters, parseStatuses } from '@/features/lots/components/lots-filters';
 import type { LotListParams } from '@/features/lots/lib/lot-query';
 import type { LotSummary } from '@/features/lots/types';
+import { formatDate } from '@/lib/dates';
 
 const helper = createDataTableColumnHelper<LotSummary>();
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
 
 const columns = helper.columns([
   helper.accessor('id', {
@@ -30,7 +30,7 @@ const columns = helper.columns([
   helper.accessor('receivedAt', {
     header: 'Received',
     enableSorting: true,
-    cell: (info) => dateFormat.format(new Date(info.getValue())),
+    cell: (info) => formatDate(info.getValue()),
   }),
   helper.accessor('status', {
     header: 'Status',

@@ -16,6 +16,7 @@ import { paths } from '@/config/paths';
 import { useLots } from '@/features/lots/api/get-lots';
 import type { LotStatus } from '@/features/lots/types';
 import { errorMessage } from '@/lib/query-client';
+import { formatDate } from '@/lib/dates';
 
 interface TodayLotsSectionProps {
   title: string;
@@ -24,7 +25,6 @@ interface TodayLotsSectionProps {
   emptyText: string;
 }
 
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
 const daysAgo = (iso: string) => Math.floor((Date.now() - new Date(iso).getTime()) / 86_400_000);
 
 /** The ten oldest lots in one status, oldest first: the order work should be done in. */
@@ -74,7 +74,7 @@ export function TodayLotsSection({ title, status, emptyText }: TodayLotsSectionP
                 <ListItemButton key={lot.id} component={RouterLink} to={paths.lot.getHref(lot.id)}>
                   <ListItemText
                     primary={`Lot ${lot.id} · ${lot.product.sku} · PO ${lot.poNumber}`}
-                    secondary={`${lot.supplier.name} · ${lot.quantity} ${lot.unit} · received ${dateFormat.format(new Date(lot.receivedAt))}${age >= 1 ? ` (${age} d ago)` : ''}`}
+                    secondary={`${lot.supplier.name} · ${lot.quantity} ${lot.unit} · received ${formatDate(lot.receivedAt)}${age >= 1 ? ` (${age} d ago)` : ''}`}
                   />
                 </ListItemButton>
               );

@@ -17,8 +17,7 @@ import { useRetryMessage } from '@/features/messages/api/retry-message';
 import type { MessageStatus, OutboundMessage } from '@/features/messages/types';
 import { errorMessage } from '@/lib/query-client';
 import { toasts } from '@/lib/toast-store';
-
-const dateTime = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/dates';
 
 /** How a message's state reads to purchasing. */
 export function messageState(m: OutboundMessage): {
@@ -54,11 +53,11 @@ function MessageRow({ message, showRelated }: { message: OutboundMessage; showRe
   const state = messageState(message);
   const when = message.sentAt ?? message.lastAttemptAt ?? message.createdAt;
   const facts = [
-    dateTime.format(new Date(when)),
+    formatDateTime(when),
     `${message.attempts} attempt(s)`,
     message.replyTo ? `replies to ${message.replyTo}` : null,
     message.attachments.map((a) => a.filename).join(', ') || 'no attachments',
-    message.nextAttemptAt ? `next try ${dateTime.format(new Date(message.nextAttemptAt))}` : null,
+    message.nextAttemptAt ? `next try ${formatDateTime(message.nextAttemptAt)}` : null,
   ].filter(Boolean);
   return (
     <ListItem

@@ -8,8 +8,7 @@ import {
   Typography,
 } from '@mui/material';
 import type { Photo } from '@/features/photos/types';
-
-const dateTime = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/dates';
 
 export function PhotoViewerDialog({
   photo,
@@ -31,8 +30,7 @@ export function PhotoViewerDialog({
             />
             <Typography variant="caption" color="text.secondary" component="p" sx={{ mt: 1 }}>
               {photo.width} × {photo.height} px · {(photo.sizeBytes / 1024).toFixed(0)} kB ·
-              uploaded by {photo.uploadedBy.name}, {dateTime.format(new Date(photo.createdAt))} ·
-              SHA-256{' '}
+              uploaded by {photo.uploadedBy.name}, {formatDateTime(photo.createdAt)} · SHA-256{' '}
               <span style={{ fontFamily: 'monospace', wordBreak: 'break-all' }}>
                 {photo.sha256}
               </span>

@@ -32,8 +32,7 @@ import { draftOnly, returnEditable, type ReturnStep } from '@/features/returns/l
 import { returnStatusLabels, type VendorReturn } from '@/features/returns/types';
 import { errorMessage } from '@/lib/query-client';
 import { toasts } from '@/lib/toast-store';
-
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
+import { formatCalendarDate, formatDate } from '@/lib/dates';
 
 /** One return to vendor: its lots, status, costs, documents and the e-mail to the supplier. */
 export function ReturnDetail({ ret }: { ret: VendorReturn }) {
@@ -78,8 +77,8 @@ export function ReturnDetail({ ret }: { ret: VendorReturn }) {
         <ReturnStatusChip status={ret.status} />
       </Stack>
       <Typography color="text.secondary">
-        To {ret.supplier.name} ({ret.supplier.code}) · raised{' '}
-        {dateFormat.format(new Date(ret.createdAt))} by {ret.createdBy.name} · chargeback{' '}
+        To {ret.supplier.name} ({ret.supplier.code}) · raised {formatDate(ret.createdAt)} by{' '}
+        {ret.createdBy.name} · chargeback{' '}
         <strong>{formatMoney(ret.chargebackTotal, ret.currency)}</strong>
       </Typography>
       <Card>
@@ -194,19 +193,18 @@ export function ReturnDetail({ ret }: { ret: VendorReturn }) {
 /** What each step recorded: e-mail, shipment, credit, cancellation. */
 function ReturnFacts({ ret }: { ret: VendorReturn }) {
   const facts: string[] = [];
-  const day = (iso: string) => dateFormat.format(new Date(iso));
-  if (ret.emailedAt) facts.push(`Notice e-mailed ${day(ret.emailedAt)}`);
+  if (ret.emailedAt) facts.push(`Notice e-mailed ${formatDate(ret.emailedAt)}`);
   if (ret.shipment)
     facts.push(
-      `Shipped ${day(`${ret.shipment.shippedOn}T12:00:00Z`)} by ${ret.shipment.carrier}${ret.shipment.trackingNumber ? `, tracking ${ret.shipment.trackingNumber}` : ''}, ${ret.shipment.quantity} ${ret.lots[0]?.unit ?? ''}`.trim(),
+      `Shipped ${formatCalendarDate(ret.shipment.shippedOn)} by ${ret.shipment.carrier}${ret.shipment.trackingNumber ? `, tracking ${ret.shipment.trackingNumber}` : ''}, ${ret.shipment.quantity} ${ret.lots[0]?.unit ?? ''}`.trim(),
     );
-  if (ret.acknowledgedAt) facts.push(`Acknowledged ${day(ret.acknowledgedAt)}`);
+  if (ret.acknowledgedAt) facts.push(`Acknowledged ${formatDate(ret.acknowledgedAt)}`);
   if (ret.credit)
     facts.push(
       `Credit note ${ret.credit.creditNoteNumber}: ${formatMoney(ret.credit.amount, ret.currency)}`,
     );
   if (ret.cancelReason && ret.cancelledAt)
-    facts.push(`Cancelled ${day(ret.cancelledAt)}: ${ret.cancelReason}`);
+    facts.push(`Cancelled ${formatDate(ret.cancelledAt)}: ${ret.cancelReason}`);
   if (!facts.length) return null;
   return (
     <List dense disablePadding aria-label="Return history" sx={{ mt: 2 }}>

@@ -21,6 +21,7 @@ import {
 import { formatMoney } from '@/features/returns/lib/chargeback';
 import type { ReturnStep } from '@/features/returns/lib/return-steps';
 import type { VendorReturn } from '@/features/returns/types';
+import { todayIso } from '@/lib/dates';
 import { errorMessage } from '@/lib/query-client';
 import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
@@ -33,7 +34,6 @@ const titles: Record<DialogStep, string> = {
   credit: 'Record the credit note',
   cancel: 'Cancel the return',
 };
-const today = () => new Date().toISOString().slice(0, 10);
 
 interface Field {
   name: string;
@@ -77,7 +77,7 @@ function defaults(step: DialogStep, ret: VendorReturn): Record<string, string> {
     return {
       carrier: '',
       trackingNumber: '',
-      shippedOn: today(),
+      shippedOn: todayIso(),
       quantity: String(ret.lots.reduce((n, l) => n + l.quantity, 0)),
     };
   if (step === 'credit') return { creditNoteNumber: '', creditAmount: String(ret.chargebackTotal) };

@@ -9,6 +9,7 @@ import {
 } from '@mui/material';
 import { useReturnableLots } from '@/features/returns/api/get-returnable-lots';
 import { errorMessage } from '@/lib/query-client';
+import { formatDate } from '@/lib/dates';
 
 interface ReturnableLotsPickerProps {
   supplierId: number | null;
@@ -16,8 +17,6 @@ interface ReturnableLotsPickerProps {
   onChange: (lotIds: number[]) => void;
   error?: string;
 }
-
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
 
 /** The supplier's rejected lots not yet on an open return, to tick. */
 export function ReturnableLotsPicker({
@@ -62,7 +61,7 @@ export function ReturnableLotsPicker({
                 onChange={(e) => toggle(lot.id, e.target.checked)}
               />
             }
-            label={`Lot ${lot.id} · PO ${lot.poNumber} · ${lot.product.sku} · ${lot.quantity} ${lot.unit} · received ${dateFormat.format(new Date(lot.receivedAt))}`}
+            label={`Lot ${lot.id} · PO ${lot.poNumber} · ${lot.product.sku} · ${lot.quantity} ${lot.unit} · received ${formatDate(lot.receivedAt)}`}
           />
         ))}
       </FormGroup>

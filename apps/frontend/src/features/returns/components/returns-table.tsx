@@ -9,9 +9,9 @@ import { paths } from '@/config/paths';
 import { ReturnStatusChip } from '@/features/returns/components/return-status-chip';
 import { formatMoney } from '@/features/returns/lib/chargeback';
 import type { VendorReturn } from '@/features/returns/types';
+import { formatDate } from '@/lib/dates';
 
 const helper = createDataTableColumnHelper<VendorReturn>();
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
 
 // Sortable ids are the server's sort fields: createdAt, number, status, chargebackTotal.
 const columns = helper.columns([
@@ -32,7 +32,7 @@ const columns = helper.columns([
   helper.accessor('createdAt', {
     header: 'Raised',
     enableSorting: true,
-    cell: (info) => dateFormat.format(new Date(info.getValue())),
+    cell: (info) => formatDate(info.getValue()),
   }),
   helper.accessor('status', {
     header: 'Status',

@@ -1,6 +1,6 @@
 import { LineChart } from '@mui/x-charts/LineChart';
 import { acceptanceSeries } from '@/features/scorecards/lib/chart-data';
-import { formatMonth } from '@/features/scorecards/lib/format';
+import { formatMonth } from '@/lib/dates';
 import type { TrendPoint } from '@/features/scorecards/types';
 
 interface Props {

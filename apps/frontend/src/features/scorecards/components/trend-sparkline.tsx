@@ -1,7 +1,7 @@
 import { Typography } from '@mui/material';
 import { SparkLineChart } from '@mui/x-charts/SparkLineChart';
 import { sparklinePoints } from '@/features/scorecards/lib/chart-data';
-import { formatMonth } from '@/features/scorecards/lib/format';
+import { formatMonth } from '@/lib/dates';
 import type { TrendPoint } from '@/features/scorecards/types';
 
 /** Acceptance rate by month, months with decided lots only; a dash with fewer than two. */

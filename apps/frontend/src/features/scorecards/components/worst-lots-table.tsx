@@ -12,8 +12,7 @@ import { Link as RouterLink } from 'react-router';
 import { paths } from '@/config/paths';
 import { formatPercent, NONE } from '@/features/scorecards/lib/format';
 import type { WorstLot } from '@/features/scorecards/types';
-
-const day = (iso: string) => iso.slice(0, 10);
+import { isoDayOf } from '@/lib/dates';
 
 /** The lots with the lowest measured area, lowest first, each linking to its lot page. */
 export function WorstLotsTable({ lots }: { lots: WorstLot[] }) {
@@ -49,7 +48,7 @@ export function WorstLotsTable({ lots }: { lots: WorstLot[] }) {
                 </Link>
               </TableCell>
               <TableCell>{lot.poNumber}</TableCell>
-              <TableCell>{day(lot.receivedAt)}</TableCell>
+              <TableCell>{isoDayOf(lot.receivedAt)}</TableCell>
               <TableCell>{lot.sku}</TableCell>
               <TableCell>{lot.label ?? NONE}</TableCell>
               <TableCell>{lot.measuresAs ?? NONE}</TableCell>

@@ -20,16 +20,6 @@ export const formatMoney = (value: number) => money.format(value);
 export const formatDays = (value: number | null) =>
   value === null ? NONE : `${value.toFixed(1)} d`;
 
-/** `2026-03` → `Mar 2026` */
-export function formatMonth(month: string): string {
-  const [y, m] = month.split('-').map(Number);
-  return new Date(Date.UTC(y, m - 1, 1)).toLocaleDateString('en-US', {
-    month: 'short',
-    year: 'numeric',
-    timeZone: 'UTC',
-  });
-}
-
 export const purposeLabels: Record<string, string> = {
   power: 'Power',
   ground: 'Ground',

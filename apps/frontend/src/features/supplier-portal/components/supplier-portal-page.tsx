@@ -30,6 +30,7 @@ import {
   type PortalReturn,
 } from '@/features/supplier-portal/api/portal';
 import { isApiError } from '@/lib/api-client';
+import { isoDayOf } from '@/lib/dates';
 import { errorMessage } from '@/lib/query-client';
 import { splitServerErrors } from '@/lib/server-field-errors';
 
@@ -303,7 +304,7 @@ export function SupplierPortalPage({ token }: { token: string }) {
         </Typography>
         <Typography color="text.secondary">
           For {r.supplier.name} · answer by {r.dueOn} · this link works until{' '}
-          {r.linkExpiresAt.slice(0, 10)}
+          {isoDayOf(r.linkExpiresAt)}
         </Typography>
       </div>
       {r.status === 'reopened' && r.reopenComment && (
@@ -314,7 +315,7 @@ export function SupplierPortalPage({ token }: { token: string }) {
       {!r.canAnswer && (
         <Alert severity="success">
           {r.status === 'responded'
-            ? `Your answer arrived${r.answer.respondedAt ? ` on ${r.answer.respondedAt.slice(0, 10)}` : ''}. Your customer will review it.`
+            ? `Your answer arrived${r.answer.respondedAt ? ` on ${isoDayOf(r.answer.respondedAt)}` : ''}. Your customer will review it.`
             : `This request is ${r.status}. Thank you.`}
         </Alert>
       )}

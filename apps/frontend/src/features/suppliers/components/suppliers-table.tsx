@@ -7,9 +7,9 @@ import {
 } from '@/components/data-table/data-table';
 import { SupplierStatusChip } from '@/features/suppliers/components/supplier-status-chip';
 import type { Supplier } from '@/features/suppliers/types';
+import { formatDate } from '@/lib/dates';
 
 const helper = createDataTableColumnHelper<Supplier>();
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
 
 type SuppliersTableProps = Omit<DataTableProps<Supplier>, 'columns' | 'label' | 'getRowId'> & {
   /** Present only for roles that may edit. */
@@ -33,7 +33,7 @@ export function SuppliersTable({ onEdit, ...props }: SuppliersTableProps) {
         }),
         helper.accessor('updatedAt', {
           header: 'Updated',
-          cell: (info) => dateFormat.format(new Date(info.getValue())),
+          cell: (info) => formatDate(info.getValue()),
         }),
         ...(onEdit
           ? [

@@ -13,10 +13,10 @@ import { createColumnHelper, tableFeatures, useTable } from '@tanstack/react-tab
 import { useMemo } from 'react';
 import type { User } from '@/features/users/types';
 import { roleLabels } from '@/lib/roles';
+import { formatDate } from '@/lib/dates';
 
 const features = tableFeatures({});
 const helper = createColumnHelper<typeof features, User>();
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
 
 interface UsersTableProps {
   users: User[];
@@ -50,7 +50,7 @@ export function UsersTable({
         }),
         helper.accessor('createdAt', {
           header: 'Created',
-          cell: (info) => dateFormat.format(new Date(info.getValue())),
+          cell: (info) => formatDate(info.getValue()),
         }),
         helper.display({
           id: 'actions',

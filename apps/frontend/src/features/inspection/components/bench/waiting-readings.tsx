@@ -1,8 +1,7 @@
 import CloudUploadOutlined from '@mui/icons-material/CloudUploadOutlined';
 import { Alert, Button, List, ListItem, ListItemText, Stack, Typography } from '@mui/material';
 import type { QueuedReading } from '@/features/inspection/lib/offline-queue';
-
-const time = new Intl.DateTimeFormat(undefined, { timeStyle: 'short' });
+import { formatTime } from '@/lib/dates';
 
 interface WaitingReadingsProps {
   entries: readonly QueuedReading[];
@@ -48,7 +47,7 @@ export function WaitingReadings({ entries, sending, onSend, onDiscard }: Waiting
             }
           >
             <ListItemText
-              primary={`${e.label} · ${e.request.method} · taken ${time.format(e.queuedAt)}`}
+              primary={`${e.label} · ${e.request.method} · taken ${formatTime(e.queuedAt)}`}
               secondary={
                 e.refused ? `Refused by the server, not recorded: ${e.refused}` : 'waiting to send'
               }
