@@ -129,7 +129,7 @@ export function lotListQuery({ statuses, q, page, pageSize, walk }) {
              where ${where} order by l.received_at desc, l.id desc limit ? offset ?`,
       bindings: [...bindings, pageSize, (page - 1) * pageSize],
     },
-    count: { sql: `select count(*) as n ${from} where ${where}`, bindings },
+    count: { sql: `select count(*) as n from lots l where ${where}`, bindings },
     share: {
       sql: `select (select count(*) from lots where status in (${statuses.map(() => '?').join(', ')})) * 1.0 /
                    max(1, (select count(*) from lots)) as share`,

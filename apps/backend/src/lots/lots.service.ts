@@ -4,12 +4,11 @@ import {
   Optional,
   UnprocessableEntityException,
 } from '@nestjs/common';
-import { EntityManager, raw } from '@mikro-orm/core';
-import type { QueryBuilder, SqlEntityManager } from '@mikro-orm/knex';
+import { EntityManager } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
-import { addDays } from '../common/calendar';
-import { likePattern, paging, parseSort, type Page } from '../common/paging';
+import { paging, type Page } from '../common/paging';
+import { plainSql } from '../common/plain-sql';
 import { InspectionState } from '../products/entities/inspection-state.entity';
 import { Product } from '../products/entities/product.entity';
 import { planForLot } from '../products/sampling-plan';
@@ -19,24 +18,18 @@ import { LotFiltersDto } from './dto/list-lots.dto';
 import { Lot } from './entities/lot.entity';
 import { LotListCache } from './lot-list-cache';
 import {
-  LIST_COLUMNS,
-  lotSummary,
-  summaryOfRow,
-  supplierWarning,
-  type LotSummary,
-} from './lot-summary';
+  lotCountSql,
+  lotFilterSql,
+  lotPageSql,
+  lotSort,
+  type LotFilterSql,
+  type LotSort,
+} from './lot-list-sql';
+import { lotSummary, summaryOfRow, supplierWarning, type LotSummary } from './lot-summary';
 import { lotCsvRow } from './lots-csv';
 import type { CsvRow } from '../common/csv';
 import { jsonAnswer, type JsonAnswer } from '../common/json-answer';
 
-const SORTS = ['receivedAt', 'poNumber', 'status', 'supplier', 'quantity'] as const;
-const SORT_COLUMNS: Record<(typeof SORTS)[number], string> = {
-  receivedAt: 'l.receivedAt',
-  poNumber: 'l.poNumber',
-  status: 'l.status',
-  supplier: 's.name',
-  quantity: 'l.quantity',
-};
 /**
  * Share of all lots above which a status filter walks the received-at index instead of
  * the status index (our choice, from EXPLAIN QUERY PLAN on the bench set: a quarter of
@@ -115,14 +108,21 @@ export class LotsService {
   /** A page of the lot list, read from the database. */
   async list(q: LotFiltersDto): Promise<Page<LotSummary>> {
     const { page, pageSize, offset } = paging(q);
-    const qb = this.filtered(q, await this.walkInReceivedOrder(q));
+    const sort = lotSort(q);
+    const filter = lotFilterSql(q, await this.walkInReceivedOrder(q, sort));
     const { page: _p, pageSize: _s, sort: _o, ...filters } = q;
-    const count = () => qb.clone().getCount('l.id');
+    const count = () => this.count(this.em, filter);
     const total = this.cache
       ? await this.cache.total(JSON.stringify(filters), count)
       : await count();
-    const items = await this.summaries(qb, q, pageSize, offset);
+    const items = await this.summaries(this.em, filter, sort, pageSize, offset);
     return { items, total, page, pageSize };
+  }
+
+  private async count(em: EntityManager, filter: LotFilterSql): Promise<number> {
+    const { sql, bindings } = lotCountSql(filter);
+    const [row] = await plainSql<{ n: unknown }[]>(em, sql, bindings);
+    return Number(row.n);
   }
 
   /**
@@ -130,17 +130,14 @@ export class LotsService {
    * (most of a list request's cost once the SQL is cheap).
    */
   private async summaries(
-    qb: QueryBuilder<Lot>,
-    q: LotFiltersDto,
+    em: EntityManager,
+    filter: LotFilterSql,
+    sort: [LotSort, 'asc' | 'desc'],
     limit: number,
     offset: number,
   ): Promise<LotSummary[]> {
-    const rows = await this.sorted(qb.clone(), q)
-      .select(LIST_COLUMNS.map((c) => raw(c)))
-      .join('l.receivedBy', 'u')
-      .limit(limit)
-      .offset(offset)
-      .execute<Record<string, unknown>[]>('all', false);
+    const { sql, bindings } = lotPageSql(filter, sort, limit, offset);
+    const rows = await plainSql(em, sql, bindings);
     return rows.map(summaryOfRow);
   }
 
@@ -154,12 +151,12 @@ export class LotsService {
   async exportRows(q: LotFiltersDto, actor: RequestUser): Promise<AsyncGenerator<CsvRow[]>> {
     // Checked before anything: a bad sort found while streaming cut the file after a 200
     // (and the export was audited as done).
-    parseSort(q.sort, SORTS, ['receivedAt', 'desc']);
+    const sort = lotSort(q);
     // Its own EntityManager: the pages are read after the handler has returned, while the
     // response streams, outside the request's context.
     const em = this.em.fork();
-    const qb = this.filtered(q, await this.walkInReceivedOrder(q), em);
-    const total = await qb.clone().getCount('l.id');
+    const filter = lotFilterSql(q, await this.walkInReceivedOrder(q, sort));
+    const total = await this.count(em, filter);
     if (total > LOT_EXPORT_MAX_ROWS) {
       throw new UnprocessableEntityException(
         `${total} lots match; narrow the filters to at most ${LOT_EXPORT_MAX_ROWS} for one export.`,
@@ -172,16 +169,17 @@ export class LotsService {
       after: { filters: { ...filters }, rows: total },
     });
     await em.flush();
-    return this.exportPages(qb, q, total);
+    return this.exportPages(em, filter, sort, total);
   }
 
   private async *exportPages(
-    qb: QueryBuilder<Lot>,
-    q: LotFiltersDto,
+    em: EntityManager,
+    filter: LotFilterSql,
+    sort: [LotSort, 'asc' | 'desc'],
     total: number,
   ): AsyncGenerator<CsvRow[]> {
     for (let offset = 0; offset < total; offset += EXPORT_PAGE_SIZE) {
-      const page = await this.summaries(qb, q, EXPORT_PAGE_SIZE, offset);
+      const page = await this.summaries(em, filter, sort, EXPORT_PAGE_SIZE, offset);
       if (page.length === 0) return;
       yield page.map(lotCsvRow);
     }
@@ -196,67 +194,17 @@ export class LotsService {
    * added, and chose the sort over 45 000 decided lots (60 ms a page on the bench set).
    * Shares come from the cached totals, so this costs nothing between lot writes.
    */
-  private async walkInReceivedOrder(q: LotFiltersDto): Promise<boolean> {
-    if (!this.cache || !q.status?.length) return false;
-    if (parseSort(q.sort, SORTS, ['receivedAt', 'desc'])[0] !== 'receivedAt') return false;
-    const count = (filters: LotFiltersDto) => () => this.filtered(filters).getCount('l.id');
+  private async walkInReceivedOrder(
+    q: LotFiltersDto,
+    [field]: [LotSort, 'asc' | 'desc'],
+  ): Promise<boolean> {
+    if (!this.cache || !q.status?.length || field !== 'receivedAt') return false;
+    const count = (filters: LotFiltersDto) => () => this.count(this.em, lotFilterSql(filters));
     const all = await this.cache.total(JSON.stringify({}), count({}));
     const some = await this.cache.total(
       JSON.stringify({ status: q.status }),
       count({ status: q.status }),
     );
     return all > 0 && some / all >= WALK_SHARE;
-  }
-
-  /**
-   * The filters as SQL. `walkByDate`: the status test is written so no index can serve it
-   * (`coalesce` of a NOT NULL column, the same rows on every database), see
-   * walkInReceivedOrder. `em`: the manager the query is built on.
-   */
-  private filtered(q: LotFiltersDto, walkByDate = false, em = this.em): QueryBuilder<Lot> {
-    if (q.receivedFrom && q.receivedTo && q.receivedTo < q.receivedFrom) {
-      throw new BadRequestException(['receivedTo must not be before receivedFrom']);
-    }
-    const qb = (em as SqlEntityManager)
-      .createQueryBuilder(Lot, 'l')
-      .select('l.*')
-      .join('l.product', 'p')
-      .join('l.supplier', 's');
-    if (q.status?.length && walkByDate) {
-      qb.andWhere(`coalesce(l.status, '') in (${q.status.map(() => '?').join(', ')})`, q.status);
-    } else if (q.status?.length) {
-      qb.andWhere({ status: { $in: q.status } });
-    }
-    if (q.supplierId) qb.andWhere({ supplier: q.supplierId });
-    if (q.productId) qb.andWhere({ product: q.productId });
-    if (q.receivedFrom) {
-      qb.andWhere({ receivedAt: { $gte: new Date(`${q.receivedFrom}T00:00:00Z`) } });
-    }
-    if (q.receivedTo) {
-      qb.andWhere({ receivedAt: { $lt: new Date(`${addDays(q.receivedTo, 1)}T00:00:00Z`) } });
-    }
-    if (q.q?.trim()) {
-      // Names and SKUs match anywhere and are looked up once in their small tables; PO,
-      // packing slip and supplier lot code match by their start, as a clerk types them.
-      const any = likePattern(q.q);
-      const start = any.slice(1);
-      const like = (col: string) => `lower(${col}) like ? escape '\\'`;
-      qb.andWhere(
-        `(${[
-          `l.supplier_id in (select id from suppliers where ${like('name')})`,
-          `l.product_id in (select id from products where ${like('sku')})`,
-          like('l.po_number'),
-          like('l.packing_slip'),
-          like('l.supplier_lot_code'),
-        ].join(' or ')})`,
-        [any, any, start, start, start],
-      );
-    }
-    return qb;
-  }
-
-  private sorted(qb: QueryBuilder<Lot>, q: LotFiltersDto): QueryBuilder<Lot> {
-    const [field, dir] = parseSort(q.sort, SORTS, ['receivedAt', 'desc']);
-    return qb.orderBy({ [SORT_COLUMNS[field]]: dir, 'l.id': dir });
   }
 }
