@@ -2,6 +2,7 @@ import { CssBaseline, ThemeProvider } from '@mui/material';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
 import { theme } from '@/app/theme';
+import { warmStart } from '@/app/warm-start';
 import { ErrorBoundary } from '@/components/error-boundary';
 import { FullPageError } from '@/components/full-page-state';
 import { Toaster } from '@/components/toaster';
@@ -11,13 +12,15 @@ import { UnitsProvider } from '@/lib/units';
 import { queryKeys } from '@/lib/query-keys';
 
 export function AppProvider({ children }: { children: ReactNode }) {
-  const [queryClient] = useState(() =>
-    createQueryClient({
+  const [queryClient] = useState(() => {
+    const client = createQueryClient({
       // The session ended: forget the user; the sign-in gate then sends the user to
       // the sign-in page and remembers where they were.
-      onUnauthorized: (client) => client.setQueryData(queryKeys.auth.me(), null),
-    }),
-  );
+      onUnauthorized: (c) => c.setQueryData(queryKeys.auth.me(), null),
+    });
+    warmStart(client, window.location.pathname);
+    return client;
+  });
 
   return (
     <ThemeProvider theme={theme}>

@@ -7,12 +7,13 @@ import { homePathFor } from '@/app/navigation';
 import { NotFoundRoute } from '@/app/routes/not-found';
 import { RouteError } from '@/app/routes/route-error';
 import { SignInRoute } from '@/app/routes/sign-in';
+import { loadLotRoute } from '@/app/warm-start';
 import { paths } from '@/config/paths';
 import { useSessionUser } from '@/features/auth/auth-context';
 
 /** Each screen's code loads on its first visit (first-screen budget of issue 7). */
 const TodayRoute = lazyRoute(() => import('@/app/routes/today'), 'TodayRoute');
-const LotRoute = lazyRoute(() => import('@/app/routes/lot'), 'LotRoute');
+const LotRoute = lazyRoute(loadLotRoute, 'LotRoute');
 const LotBenchRoute = lazyRoute(() => import('@/app/routes/lot-bench'), 'LotBenchRoute');
 const LotsRoute = lazyRoute(() => import('@/app/routes/lots'), 'LotsRoute');
 const ReceivingRoute = lazyRoute(() => import('@/app/routes/receiving'), 'ReceivingRoute');
