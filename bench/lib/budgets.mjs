@@ -17,6 +17,9 @@ const LIMITS = {
   firstScreenKb: 300, // issue 7: gzip
   lotPageMs: 1500, // issue 7
   growth: 1.5, // issue 19: lot list p95 and Lot page grow ≤ 1.5 × when the data grows 5 ×
+  faultHealthMs: 1000, // a second's wait for an unrelated request while one user imports (common practice, no source)
+  faultPngStatus: 422, // issue 17: a photo whose data would inflate past its pixels is refused
+  faultPeakMb: 250, // issue 7's server ceiling (exportPeakMb), also with the PNG in hand
 };
 
 export function judge(report, m, { growthLabel }) {
@@ -96,6 +99,8 @@ export function judge(report, m, { growthLabel }) {
   f(`fault readings import of ${fl.import?.rows ?? 2000} rows`, fl.import?.ms, 'ms', 0);
   f('fault health check p95 during the import', fl.import?.healthP95Ms, 'ms');
   f('fault health check slowest answer during the import', fl.import?.healthMaxMs, 'ms', 0);
+  f('fault health checks answered during the import', fl.import?.healthCalls, '', 0);
+  f('fault health checks failed during the import', fl.import?.healthFailed, '', 0);
   f(
     fl.backup?.finished === false
       ? 'fault backup under one reading a second: NOT FINISHED, stopped after'
@@ -153,5 +158,35 @@ export function judge(report, m, { growthLabel }) {
   ]);
   report.budget('growth-scorecards', [
     [gSc <= gRows, `${fmt(gSc, 2)}x vs ≤ ${fmt(gRows, 2)}x, the growth of the rows read`],
+  ]);
+  // Faults: survived, and the import does not hold everyone else up.
+  report.budget('fault-import', [
+    [Number.isFinite(fl.import?.ms), `${fl.import?.rows ?? 2000} rows imported`],
+    [
+      fl.import?.healthMaxMs <= L.faultHealthMs && fl.import?.healthFailed === 0,
+      `health checks meanwhile: slowest ${fmt(fl.import?.healthMaxMs, 0)} ms vs ≤ ${L.faultHealthMs} ms, ${fl.import?.healthFailed ?? 'n/a'} failed`,
+    ],
+  ]);
+  report.budget('fault-backup', [
+    [
+      fl.backup?.finished === true,
+      fl.backup?.finished === true
+        ? `finished in ${fmt(fl.backup.ms / 1000)} s under one reading a second`
+        : 'did not finish',
+    ],
+    [
+      fl.backup?.readingsDuring > 0,
+      `${fl.backup?.readingsDuring ?? 0} readings answered meanwhile`,
+    ],
+  ]);
+  report.budget('fault-png', [
+    [
+      fl.png?.status === L.faultPngStatus,
+      `answered ${fl.png?.status ?? 'nothing'} vs ${L.faultPngStatus}`,
+    ],
+    [
+      fl.png?.peakAfterMb <= L.faultPeakMb,
+      `server peak ${fmt(fl.png?.peakAfterMb)} MB vs ≤ ${L.faultPeakMb} MB`,
+    ],
   ]);
 }

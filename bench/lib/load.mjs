@@ -64,6 +64,46 @@ export function load({ url, connections, seconds, method = 'GET', headers, body,
       timeouts: result.timeouts,
       statuses: Object.fromEntries(statuses),
       firstError,
+      latencies,
+      elapsed: Math.min(elapsed, result.duration || seconds) || seconds,
     };
   }
+}
+
+/** Loads run one after another, as one: answers over their summed time, pooled latencies. */
+function merged(parts) {
+  const latencies = parts.flatMap((p) => p.latencies).sort((a, b) => a - b);
+  const elapsed = parts.reduce((t, p) => t + p.elapsed, 0);
+  const statuses = {};
+  for (const p of parts)
+    for (const [k, n] of Object.entries(p.statuses)) statuses[k] = (statuses[k] ?? 0) + n;
+  return {
+    rps: latencies.length / elapsed,
+    p50: percentile(latencies, 50),
+    p95: percentile(latencies, 95),
+    p99: percentile(latencies, 99),
+    ok: latencies.length,
+    failed: parts.reduce((n, p) => n + p.failed, 0),
+    timeouts: parts.reduce((n, p) => n + p.timeouts, 0),
+    statuses,
+    firstError: parts.find((p) => p.firstError)?.firstError ?? null,
+    latencies,
+    elapsed,
+  };
+}
+
+/**
+ * Two loads (`load` options without `seconds`) in turns, a b a b …, `turn` seconds each
+ * until each has had `seconds`, each side's turns merged. On a machine others share, the
+ * load from outside drifts over a run: measured one after the other, the API and its
+ * ceiling met different weather and their ratio moved with it; in turns, both meet it.
+ */
+export async function inTurns(a, b, { seconds, turn = 2 }) {
+  const turns = Math.max(1, Math.round(seconds / turn));
+  const sides = [[], []];
+  for (let i = 0; i < turns; i++) {
+    sides[0].push(await load({ ...a, seconds: seconds / turns }));
+    sides[1].push(await load({ ...b, seconds: seconds / turns }));
+  }
+  return sides.map(merged);
 }

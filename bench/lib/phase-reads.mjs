@@ -2,7 +2,7 @@
 import { fork } from 'node:child_process';
 import { join } from 'node:path';
 import Database from 'better-sqlite3';
-import { load, median } from './load.mjs';
+import { inTurns, load, median } from './load.mjs';
 import { scorecardsRaw } from './raw-sql.mjs';
 import { freePort, getJson } from './server.mjs';
 
@@ -129,8 +129,8 @@ async function startRaw(script, args) {
 
 /**
  * The lot list: one query under load (its page kept by the server), the same filter with
- * no page kept between requests (uncachedPaths), and both against the raw server.
- * `uncachedOnly` runs the uncached API load alone (the growth runs).
+ * no page kept between requests (uncachedPaths), each against the raw server in turns
+ * (load.mjs inTurns). `uncachedOnly` runs the uncached API load alone (the growth runs).
  */
 export async function lotListPhase({ base, token, dbPath, seconds, connections, uncachedOnly }) {
   const params = lotListParams(dbPath);
@@ -147,21 +147,16 @@ export async function lotListPhase({ base, token, dbPath, seconds, connections, 
     }
     return r;
   };
-  const apiUncached = checked(
-    'lot list uncached',
-    await load({
-      url: base,
-      connections,
-      seconds,
-      headers,
-      nextRequest: uncachedPaths('/api/lots', params),
-    }),
-  );
-  if (uncachedOnly) return { apiUncached, total: first.total, params };
-  const api = checked(
-    'lot list',
-    await load({ url: base + apiPath, connections, seconds, headers }),
-  );
+  const uncachedApi = {
+    url: base,
+    connections,
+    headers,
+    nextRequest: uncachedPaths('/api/lots', params),
+  };
+  if (uncachedOnly) {
+    const apiUncached = checked('lot list uncached', await load({ ...uncachedApi, seconds }));
+    return { apiUncached, total: first.total, params };
+  }
 
   const port = await freePort();
   const child = await startRaw('raw-lots-server.mjs', [dbPath, String(port)]);
@@ -171,19 +166,20 @@ export async function lotListPhase({ base, token, dbPath, seconds, connections, 
     if (check.total !== first.total) {
       console.error(`  note: raw server counts ${check.total} lots, the API ${first.total}`);
     }
-    const raw = checked(
-      'raw lot list',
-      await load({ url: rawBase + listPath('/lots', params), connections, seconds }),
+    const [apiUncached, rawUncached] = await inTurns(
+      uncachedApi,
+      { url: rawBase, connections, nextRequest: uncachedPaths('/lots', params) },
+      { seconds },
     );
-    const rawUncached = checked(
-      'raw lot list uncached',
-      await load({
-        url: rawBase,
-        connections,
-        seconds,
-        nextRequest: uncachedPaths('/lots', params),
-      }),
+    checked('lot list uncached', apiUncached);
+    checked('raw lot list uncached', rawUncached);
+    const [api, raw] = await inTurns(
+      { url: base + apiPath, connections, headers },
+      { url: rawBase + listPath('/lots', params), connections },
+      { seconds },
     );
+    checked('lot list', api);
+    checked('raw lot list', raw);
     return { api, apiUncached, raw, rawUncached, total: first.total, params };
   } finally {
     child.kill('SIGTERM');

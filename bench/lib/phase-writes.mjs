@@ -2,7 +2,7 @@
 // server's peak memory.
 import Database from 'better-sqlite3';
 import { MATERIALS } from '@gaugeproof/standards';
-import { load } from './load.mjs';
+import { inTurns, load } from './load.mjs';
 import { startRaw } from './phase-reads.mjs';
 import { rawExports } from './raw-exports.mjs';
 import { freePort, peakRssMb } from './server.mjs';
@@ -74,7 +74,8 @@ function readingBody(s, i, instruments) {
 /**
  * Mass readings posted round-robin under load, through the API on half of the prepared
  * samples and through the raw server (raw-readings-server.mjs) on the other half, so each
- * starts from samples in the same state. `apiOnly` skips the raw server.
+ * starts from samples in the same state, the two in turns (load.mjs inTurns). `apiOnly` skips
+ * the raw server.
  */
 export async function readingsPhase({
   base,
@@ -103,30 +104,30 @@ export async function readingsPhase({
       throw new Error(`${name}: ${r.failed} failed answers ${JSON.stringify(r.statuses)}`);
     return r;
   };
-  const api = checked(
-    'readings',
-    await load({
-      url: base,
-      connections,
-      seconds,
-      headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' },
-      nextRequest: requests(half(false), '/api'),
-    }),
-  );
-  if (apiOnly) return { api, samples, instruments };
+  const apiLoad = {
+    url: base,
+    connections,
+    headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' },
+    nextRequest: requests(half(false), '/api'),
+  };
+  if (apiOnly) {
+    return { api: checked('readings', await load({ ...apiLoad, seconds })), samples, instruments };
+  }
   const port = await freePort();
   const child = await startRaw('raw-readings-server.mjs', [dbPath, String(port), String(clerkId)]);
   try {
-    const raw = checked(
-      'raw readings',
-      await load({
+    const [api, raw] = await inTurns(
+      apiLoad,
+      {
         url: `http://127.0.0.1:${port}`,
         connections,
-        seconds,
         headers: { 'content-type': 'application/json' },
         nextRequest: requests(half(true), ''),
-      }),
+      },
+      { seconds },
     );
+    checked('readings', api);
+    checked('raw readings', raw);
     return { api, raw, samples, instruments };
   } finally {
     child.kill('SIGTERM');
@@ -168,42 +169,60 @@ function exportTargets(dbPath) {
 }
 
 /**
- * The return's CSV repeatedly (it is small) for at least a second of work, then the whole
- * reading history of the busiest supplier; the server's VmHWM afterwards.
+ * The return's CSV (it is small) through the API and by the raw ceiling in turns, one call
+ * each, until each side has had a second of work and five calls (in turns, so both meet
+ * the same load from outside on a shared machine); then the whole reading history of the
+ * busiest supplier, API then raw; the server's VmHWM afterwards.
  */
 export async function exportsPhase({ base, token, dbPath, pid }) {
   const { returnId, supplierId } = exportTargets(dbPath);
-  const ret = { rows: 0, ms: 0, calls: 0 };
-  while (ret.calls < 5 || (ret.ms < 1000 && ret.calls < 200)) {
-    const one = await downloadCsv(base, `/api/returns/${returnId}/export.csv`, token);
-    if (one.rows === 0) throw new Error(`return ${returnId} export has no rows`);
-    ret.rows += one.rows;
-    ret.ms += one.ms;
-    ret.calls++;
-  }
-  const supplier = await downloadCsv(
-    base,
-    `/api/suppliers/${supplierId}/readings/export.csv`,
-    token,
-  );
-  if (supplier.rows === 0) throw new Error(`supplier ${supplierId} readings export has no rows`);
-  // The server's peak first: the raw exports run in this process, not the server's.
-  const peakMb = peakRssMb(pid);
-  const raw = await rawExports(dbPath, { returnId, supplierId });
-  if (
-    Math.round(raw.returnRows) !== Math.round(ret.rows / ret.calls) ||
-    raw.supplierRows !== supplier.rows
-  ) {
-    console.error(
-      `  note: raw exports wrote ${raw.returnRows} and ${raw.supplierRows} rows, the API ${ret.rows / ret.calls} and ${supplier.rows}`,
+  const raw = rawExports(dbPath, { returnId, supplierId });
+  try {
+    const ret = { rows: 0, ms: 0, calls: 0 };
+    const rawRet = { rows: 0, ms: 0, calls: 0 };
+    const enough = (side) => side.calls >= 5 && (side.ms >= 1000 || side.calls >= 200);
+    while (!enough(ret) || !enough(rawRet)) {
+      const one = await downloadCsv(base, `/api/returns/${returnId}/export.csv`, token);
+      if (one.rows === 0) throw new Error(`return ${returnId} export has no rows`);
+      ret.rows += one.rows;
+      ret.ms += one.ms;
+      ret.calls++;
+      const twin = await raw.returnOnce();
+      rawRet.rows += twin.rows;
+      rawRet.ms += twin.ms;
+      rawRet.calls++;
+    }
+    const supplier = await downloadCsv(
+      base,
+      `/api/suppliers/${supplierId}/readings/export.csv`,
+      token,
     );
+    if (supplier.rows === 0) throw new Error(`supplier ${supplierId} readings export has no rows`);
+    // The server's peak first: the raw exports run in this process, not the server's.
+    const peakMb = peakRssMb(pid);
+    const rawSup = await raw.supplierOnce();
+    if (
+      Math.round(rawRet.rows / rawRet.calls) !== Math.round(ret.rows / ret.calls) ||
+      rawSup.rows !== supplier.rows
+    ) {
+      console.error(
+        `  note: raw exports wrote ${rawRet.rows / rawRet.calls} and ${rawSup.rows} rows, the API ${ret.rows / ret.calls} and ${supplier.rows}`,
+      );
+    }
+    return {
+      raw: {
+        returnRowsPerS: rawRet.rows / (rawRet.ms / 1000),
+        returnRows: rawRet.rows / rawRet.calls,
+        supplierRowsPerS: rawSup.rows / (rawSup.ms / 1000),
+        supplierRows: rawSup.rows,
+      },
+      returnRowsPerS: ret.rows / (ret.ms / 1000),
+      returnRows: ret.rows / ret.calls,
+      supplierRowsPerS: supplier.rows / (supplier.ms / 1000),
+      supplierRows: supplier.rows,
+      peakMb,
+    };
+  } finally {
+    raw.close();
   }
-  return {
-    raw,
-    returnRowsPerS: ret.rows / (ret.ms / 1000),
-    returnRows: ret.rows / ret.calls,
-    supplierRowsPerS: supplier.rows / (supplier.ms / 1000),
-    supplierRows: supplier.rows,
-    peakMb,
-  };
 }

@@ -98,28 +98,22 @@ async function exportOnce(stmt, id) {
   return rows;
 }
 
-/** The return's CSV repeated for a second (5 times at least), then the supplier's once. */
-export async function rawExports(dbPath, { returnId, supplierId }) {
+/**
+ * The ceiling on one file: `returnOnce()` writes the return's CSV once (rows, ms),
+ * `supplierOnce()` the supplier's; `close()` when done.
+ */
+export function rawExports(dbPath, { returnId, supplierId }) {
   const db = new Database(dbPath, { readonly: true, fileMustExist: true });
-  try {
-    const ret = { rows: 0, ms: 0, calls: 0 };
-    const retStmt = db.prepare(SQL.return);
-    while (ret.calls < 5 || (ret.ms < 1000 && ret.calls < 200)) {
-      const t0 = performance.now();
-      ret.rows += await exportOnce(retStmt, returnId);
-      ret.ms += performance.now() - t0;
-      ret.calls++;
-    }
+  const retStmt = db.prepare(SQL.return);
+  const supStmt = db.prepare(SQL.supplier);
+  const timed = async (stmt, id) => {
     const t0 = performance.now();
-    const supplierRows = await exportOnce(db.prepare(SQL.supplier), supplierId);
-    const supplierMs = performance.now() - t0;
-    return {
-      returnRowsPerS: ret.rows / (ret.ms / 1000),
-      returnRows: ret.rows / ret.calls,
-      supplierRowsPerS: supplierRows / (supplierMs / 1000),
-      supplierRows,
-    };
-  } finally {
-    db.close();
-  }
+    const rows = await exportOnce(stmt, id);
+    return { rows, ms: performance.now() - t0 };
+  };
+  return {
+    returnOnce: () => timed(retStmt, returnId),
+    supplierOnce: () => timed(supStmt, supplierId),
+    close: () => db.close(),
+  };
 }

@@ -186,7 +186,9 @@ const server = createServer((req, res) => {
   req.on('data', (d) => (text += d));
   req.on('end', () => {
     try {
-      const out = write(Number(m[1]), JSON.parse(text));
+      // BEGIN IMMEDIATE, as the server's transactions begin (database/sqlite.config.ts):
+      // the API's last writes of its turn may still be committing when this one starts.
+      const out = write.immediate(Number(m[1]), JSON.parse(text));
       if (out === 404) {
         res.writeHead(404).end();
         return;
