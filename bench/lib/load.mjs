@@ -15,18 +15,28 @@ export function median(values) {
 }
 
 /**
- * Runs `connections` clients for `seconds` against one request (or `nextRequest()` per
- * request) and returns requests per second over 2xx answers, latency percentiles in ms and
- * the count of answers that were not 2xx (a broken path: the caller treats them as failure).
+ * Runs `connections` clients for `seconds` (or until `amount` requests are answered)
+ * against one request (or `nextRequest()` per request) and returns requests per second over
+ * 2xx answers, latency percentiles in ms and the count of answers that were not 2xx (a
+ * broken path: the caller treats them as failure).
  */
-export function load({ url, connections, seconds, method = 'GET', headers, body, nextRequest }) {
+export function load({
+  url,
+  connections,
+  seconds,
+  amount,
+  method = 'GET',
+  headers,
+  body,
+  nextRequest,
+}) {
   const latencies = [];
   const statuses = new Map();
   let firstError = null;
   const instance = autocannon({
     url,
     connections,
-    duration: seconds,
+    ...(amount ? { amount } : { duration: seconds }),
     // Slow answers are measured, not dropped: only past 30 s does one count as a timeout.
     timeout: 30,
     method,
@@ -48,13 +58,14 @@ export function load({ url, connections, seconds, method = 'GET', headers, body,
   async function summarise() {
     const result = await instance;
     const elapsed = (performance.now() - started) / 1000;
+    const window = amount ? elapsed : Math.min(elapsed, result.duration || seconds) || seconds;
     latencies.sort((a, b) => a - b);
     const ok = latencies.length;
     const refused = [...statuses]
       .filter(([s]) => s < 200 || s >= 300)
       .reduce((n, [, c]) => n + c, 0);
     return {
-      rps: ok / (Math.min(elapsed, result.duration || seconds) || seconds),
+      rps: ok / window,
       p50: percentile(latencies, 50),
       p95: percentile(latencies, 95),
       p99: percentile(latencies, 99),
@@ -65,7 +76,7 @@ export function load({ url, connections, seconds, method = 'GET', headers, body,
       statuses: Object.fromEntries(statuses),
       firstError,
       latencies,
-      elapsed: Math.min(elapsed, result.duration || seconds) || seconds,
+      elapsed: window,
     };
   }
 }
@@ -77,13 +88,16 @@ function merged(parts) {
   const statuses = {};
   for (const p of parts)
     for (const [k, n] of Object.entries(p.statuses)) statuses[k] = (statuses[k] ?? 0) + n;
+  const refused = Object.entries(statuses)
+    .filter(([k]) => Number(k) < 200 || Number(k) >= 300)
+    .reduce((n, [, c]) => n + c, 0);
   return {
     rps: latencies.length / elapsed,
     p50: percentile(latencies, 50),
     p95: percentile(latencies, 95),
     p99: percentile(latencies, 99),
     ok: latencies.length,
-    failed: parts.reduce((n, p) => n + p.failed, 0),
+    failed: refused + (latencies.length === 0 ? 1 : 0),
     timeouts: parts.reduce((n, p) => n + p.timeouts, 0),
     statuses,
     firstError: parts.find((p) => p.firstError)?.firstError ?? null,
@@ -93,17 +107,24 @@ function merged(parts) {
 }
 
 /**
- * Two loads (`load` options without `seconds`) in turns, a b a b …, `turn` seconds each
- * until each has had `seconds`, each side's turns merged. On a machine others share, the
- * load from outside drifts over a run: measured one after the other, the API and its
- * ceiling met different weather and their ratio moved with it; in turns, both meet it.
+ * Loads (`load` options without `seconds`; two: the API and its ceiling) in turns, a b a b …, each turn `perTurn`
+ * requests per connection, all answered before the other side's turn, until each side has
+ * had `seconds`; each side's turns merged. One load alone is run the same way (the growth
+ * runs), so its figures compare with those taken in turns. On a machine others share, the load from outside
+ * drifts over a run: measured one after the other, the API and its ceiling met different
+ * weather and their ratio moved with it; in turns, both meet it. Turns end when their last
+ * answer is in (not after a time), so no request of one side is still being worked on in
+ * the other's turn.
  */
-export async function inTurns(a, b, { seconds, turn = 2 }) {
-  const turns = Math.max(1, Math.round(seconds / turn));
-  const sides = [[], []];
-  for (let i = 0; i < turns; i++) {
-    sides[0].push(await load({ ...a, seconds: seconds / turns }));
-    sides[1].push(await load({ ...b, seconds: seconds / turns }));
+export async function inTurns(specs, { seconds, perTurn = 4 }) {
+  const sides = specs.map(() => []);
+  const spent = specs.map(() => 0);
+  while (spent.some((t) => t < seconds)) {
+    for (const k of specs.keys()) {
+      const r = await load({ ...specs[k], amount: specs[k].connections * perTurn });
+      sides[k].push(r);
+      spent[k] += r.elapsed;
+    }
   }
   return sides.map(merged);
 }

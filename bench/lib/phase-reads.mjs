@@ -2,7 +2,7 @@
 import { fork } from 'node:child_process';
 import { join } from 'node:path';
 import Database from 'better-sqlite3';
-import { inTurns, load, median } from './load.mjs';
+import { inTurns, median } from './load.mjs';
 import { scorecardsRaw } from './raw-sql.mjs';
 import { freePort, getJson } from './server.mjs';
 
@@ -154,7 +154,8 @@ export async function lotListPhase({ base, token, dbPath, seconds, connections, 
     nextRequest: uncachedPaths('/api/lots', params),
   };
   if (uncachedOnly) {
-    const apiUncached = checked('lot list uncached', await load({ ...uncachedApi, seconds }));
+    const [apiUncached] = await inTurns([uncachedApi], { seconds });
+    checked('lot list uncached', apiUncached);
     return { apiUncached, total: first.total, params };
   }
 
@@ -167,15 +168,16 @@ export async function lotListPhase({ base, token, dbPath, seconds, connections, 
       console.error(`  note: raw server counts ${check.total} lots, the API ${first.total}`);
     }
     const [apiUncached, rawUncached] = await inTurns(
-      uncachedApi,
-      { url: rawBase, connections, nextRequest: uncachedPaths('/lots', params) },
+      [uncachedApi, { url: rawBase, connections, nextRequest: uncachedPaths('/lots', params) }],
       { seconds },
     );
     checked('lot list uncached', apiUncached);
     checked('raw lot list uncached', rawUncached);
     const [api, raw] = await inTurns(
-      { url: base + apiPath, connections, headers },
-      { url: rawBase + listPath('/lots', params), connections },
+      [
+        { url: base + apiPath, connections, headers },
+        { url: rawBase + listPath('/lots', params), connections },
+      ],
       { seconds },
     );
     checked('lot list', api);

@@ -117,13 +117,15 @@ export async function readingsPhase({
   const child = await startRaw('raw-readings-server.mjs', [dbPath, String(port), String(clerkId)]);
   try {
     const [api, raw] = await inTurns(
-      apiLoad,
-      {
-        url: `http://127.0.0.1:${port}`,
-        connections,
-        headers: { 'content-type': 'application/json' },
-        nextRequest: requests(half(true), ''),
-      },
+      [
+        apiLoad,
+        {
+          url: `http://127.0.0.1:${port}`,
+          connections,
+          headers: { 'content-type': 'application/json' },
+          nextRequest: requests(half(true), ''),
+        },
+      ],
       { seconds },
     );
     checked('readings', api);
