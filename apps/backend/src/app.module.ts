@@ -23,6 +23,7 @@ import { ExportsModule } from './exports/exports.module';
 import { DecisionsModule } from './decisions/decisions.module';
 import { DocumentsModule } from './documents/documents.module';
 import { MailModule } from './mail/mail.module';
+import { NoticesModule } from './notices/notices.module';
 import { ReturnsModule } from './returns/returns.module';
 import type { AppConfig } from './config/env';
 import { JsonBodyMiddleware } from './common/json-body.middleware';
@@ -56,6 +57,7 @@ const DOMAIN_MODULES = [
   DecisionsModule,
   DocumentsModule,
   MailModule,
+  NoticesModule,
   ReturnsModule,
   ExportsModule,
   CorrectiveActionsModule,

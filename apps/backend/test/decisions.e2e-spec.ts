@@ -13,10 +13,22 @@ beforeAll(async () => {
 afterAll(async () => t.close());
 
 const LONG_REASON = 'Power conductor measured two sizes small on three units';
+/** The terms a concession needs (issue 14 §7). */
+const TERMS = {
+  scope: 'Customer bench test only, labelled as such',
+  quantity: 1,
+  expiresOn: new Date(Date.now() + 30 * 86_400_000).toISOString().slice(0, 10),
+};
 
 async function decide(
   lotId: number,
-  body: { outcome: string; reason?: string; version: number; approveReduced?: boolean },
+  body: {
+    outcome: string;
+    reason?: string;
+    version: number;
+    approveReduced?: boolean;
+    concession?: typeof TERMS;
+  },
   token = qa,
 ) {
   return t.http
@@ -96,7 +108,9 @@ describe('POST /api/lots/:id/decisions', () => {
       outcome: 'accept_on_concession',
       reason: LONG_REASON,
       version: lot.version,
+      concession: TERMS,
     });
+    // Not against a reject (the evaluation is incomplete): no second approval is needed.
     expect(withReason.status).toBe(201);
     expect(withReason.body.decision.recommendation).toBe('incomplete');
   });
@@ -151,12 +165,19 @@ describe('POST /api/lots/:id/decisions', () => {
     const { lot } = await fx.lot(product.id, { nonconforming: 1 });
     const first = await decide(lot.id, { outcome: 'reject', version: lot.version });
     expect(first.status).toBe(201);
-    const second = await decide(lot.id, {
+    const asked = await decide(lot.id, {
       outcome: 'accept_on_concession',
       reason: 'Used for a customer bench test only, labelled as such',
       version: first.body.lot.version,
+      concession: TERMS,
     });
-    expect(second.status).toBe(201);
+    // Against a reject: an admin approves it (the product's default policy).
+    expect(asked.status).toBe(202);
+    const second = await t.http
+      .post(`/api/concessions/${asked.body.concession.id}/approve`)
+      .set('Authorization', `Bearer ${await t.token(DEMO.admin)}`)
+      .send({ version: asked.body.concession.version });
+    expect(second.status).toBe(200);
     expect(second.body.lot.status).toBe('accepted_on_concession');
     const stale = await decide(lot.id, { outcome: 'reject', version: first.body.lot.version });
     expect(stale.status).toBe(409);

@@ -23,9 +23,10 @@ async function draftReturn(
   return { ret: res.body as { id: number; number: string }, lot };
 }
 
+/** The e-mails to suppliers (not the staff notices the rejections raise), waiting for `n`. */
 async function waitForEmails(mail: MailDev, n: number) {
   for (let i = 0; i < 50; i++) {
-    const emails = await mail.emails();
+    const emails = (await mail.emails()).filter((e) => e.subject.startsWith('Return '));
     if (emails.length >= n) return emails;
     await new Promise((r) => setTimeout(r, 100));
   }

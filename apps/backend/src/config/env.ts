@@ -16,6 +16,12 @@ export interface AppConfig {
   mailFrom: string;
   /** The outbound queue: how often each server looks for due mail, back-off and attempts. */
   mail: { queuePollMs: number; retryBaseMs: number; maxAttempts: number };
+  /**
+   * Staff notices (issue 14): how often each server looks for lots awaiting a decision and
+   * overdue SCARs and sends due digests (NOTICE_POLL_MS, 0 = never), and the hour (UTC) from
+   * which the daily digest goes (DIGEST_HOUR_UTC).
+   */
+  notices: { pollMs: number; digestHourUtc: number };
   /** ISO 4217 code of new returns' amounts unless purchasing picks another (CURRENCY). */
   currency: string;
   jwtSecret: string;
@@ -136,6 +142,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     retryBaseMs: whole('MAIL_RETRY_BASE_MS', 60_000, 100, 86_400_000),
     maxAttempts: whole('MAIL_MAX_ATTEMPTS', 6, 1, 50),
   };
+  const notices = {
+    pollMs: whole('NOTICE_POLL_MS', 60_000, 0, 3_600_000),
+    digestHourUtc: whole('DIGEST_HOUR_UTC', 6, 0, 23),
+  };
   const currency = (env.CURRENCY || 'USD').trim().toUpperCase();
   if (!isCurrencyCode(currency)) {
     problems.push(`CURRENCY must be an ISO 4217 code such as EUR or USD (got "${env.CURRENCY}")`);
@@ -173,6 +183,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     smtpUrl,
     mailFrom: env.MAIL_FROM || 'Gaugeproof <gaugeproof@localhost>',
     mail,
+    notices,
     currency,
     jwtSecret: jwtSecret || persistentSecret(dirname(dbPath)),
     seedDemo: seedRaw !== 'false',

@@ -1,5 +1,6 @@
 import { AuditEvent } from '../audit/entities/audit-event.entity';
 import { CorrectiveAction } from '../corrective-actions/entities/corrective-action.entity';
+import { Concession } from '../decisions/entities/concession.entity';
 import { Decision } from '../decisions/entities/decision.entity';
 import { Nonconformance } from '../decisions/entities/nonconformance.entity';
 import { ClientKey } from '../inspection/entities/client-key.entity';
@@ -9,6 +10,8 @@ import { Sample } from '../inspection/entities/sample.entity';
 import { Instrument } from '../instruments/entities/instrument.entity';
 import { Lot } from '../lots/entities/lot.entity';
 import { OutboundMessage } from '../mail/entities/outbound-message.entity';
+import { Notice } from '../notices/entities/notice.entity';
+import { NoticeSettings } from '../notices/entities/notice-settings.entity';
 import { Photo } from '../photos/entities/photo.entity';
 import { ConductorSpec } from '../products/entities/conductor-spec.entity';
 import { InspectionState } from '../products/entities/inspection-state.entity';
@@ -35,6 +38,7 @@ export const ENTITIES = [
   Instrument,
   Photo,
   Decision,
+  Concession,
   Nonconformance,
   VendorReturn,
   OpenReturnLot,
@@ -44,5 +48,7 @@ export const ENTITIES = [
   ScarAttachment,
   AuditEvent,
   OutboundMessage,
+  NoticeSettings,
+  Notice,
   ClientKey,
 ];

@@ -1,4 +1,7 @@
-import { Body, Controller, Param, Post } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Post, Res } from '@nestjs/common';
+import type { Response } from 'express';
+import { ALL_ROLES } from '../auth/roles';
+import { ReviewConcessionDto } from './dto/concession.dto';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
@@ -13,13 +16,47 @@ import { IdPipe } from '../common/id.pipe';
 export class DecisionsController {
   constructor(private readonly decisions: DecisionsService) {}
 
+  /**
+   * 201 with the decision; 202 when it is a concession against a reject recommendation
+   * that waits for a second QA lead's or an admin's approval (nothing decided yet).
+   */
   @Post('lots/:id/decisions')
-  decide(
+  async decide(
     @Param('id', IdPipe) id: number,
     @Body() dto: CreateDecisionDto,
     @CurrentUser() actor: RequestUser,
+    @Res({ passthrough: true }) res: Response,
   ) {
-    return this.decisions.decide(id, dto, actor);
+    const result = await this.decisions.decide(id, dto, actor);
+    if (result.pendingApproval) res.status(202);
+    return result;
+  }
+
+  @Get('lots/:id/concessions')
+  @Roles(...ALL_ROLES)
+  concessions(@Param('id', IdPipe) id: number) {
+    return this.decisions.concessionsOf(id);
+  }
+
+  /** A second QA lead or an admin puts a pending concession in force (not its requester). */
+  @Post('concessions/:id/approve')
+  @HttpCode(200)
+  approve(
+    @Param('id', IdPipe) id: number,
+    @Body() dto: ReviewConcessionDto,
+    @CurrentUser() actor: RequestUser,
+  ) {
+    return this.decisions.approve(id, dto, actor);
+  }
+
+  @Post('concessions/:id/refuse')
+  @HttpCode(200)
+  refuse(
+    @Param('id', IdPipe) id: number,
+    @Body() dto: ReviewConcessionDto,
+    @CurrentUser() actor: RequestUser,
+  ) {
+    return this.decisions.refuse(id, dto, actor);
   }
 
   /** Brings a discontinued stream back on tightened inspection (ISO 2859-1). */

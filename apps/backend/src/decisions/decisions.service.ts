@@ -3,18 +3,25 @@ import {
   ConflictException,
   Injectable,
   NotFoundException,
+  Optional,
   UnprocessableEntityException,
 } from '@nestjs/common';
 import { EntityManager, OptimisticLockError } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
+import { isCalendarDate, isoDate } from '../common/calendar';
+import { DomainError } from '../common/domain-error';
 import { retryOnUniqueConflict } from '../common/numbering';
 import { LotEvaluationService, type Evaluation } from '../inspection/lot-evaluation';
 import { Lot, type LotStatus } from '../lots/entities/lot.entity';
 import { lotSummary } from '../lots/lot-summary';
+import { NoticesService } from '../notices/notices.service';
 import { User } from '../users/entities/user.entity';
+import { concessionView } from './concession-view';
 import { decisionView } from './decision-view';
+import { ReviewConcessionDto } from './dto/concession.dto';
 import { CreateDecisionDto } from './dto/create-decision.dto';
+import { Concession } from './entities/concession.entity';
 import { Decision, type DecisionOutcome } from './entities/decision.entity';
 import { openNonconformance } from './nonconformances';
 import { InspectionStreams } from './inspection-streams';
@@ -33,6 +40,8 @@ const STATUS_OF: Record<DecisionOutcome, LotStatus> = {
 };
 /** Shortest reason for a decision against the recommendation or on concession (issue 5). */
 const MIN_REASON = 20;
+/** Shortest note that refuses a concession (our choice, as for a reopened SCAR). */
+const MIN_REFUSAL = 10;
 
 @Injectable()
 export class DecisionsService {
@@ -41,13 +50,17 @@ export class DecisionsService {
     private readonly audit: AuditService,
     private readonly evaluations: LotEvaluationService,
     private readonly streams: InspectionStreams,
+    /** Absent only in the demo seed: its history raises no notices. */
+    @Optional() private readonly notices?: NoticesService,
   ) {}
 
   async decide(lotId: number, dto: CreateDecisionDto, actor: RequestUser) {
     try {
-      return await retryOnUniqueConflict(() =>
+      const result = await retryOnUniqueConflict(() =>
         this.em.transactional((tx) => this.decideIn(tx, lotId, dto, actor)),
       );
+      if (result.decision?.outcome === 'reject') this.notices?.deliver();
+      return result;
     } catch (e) {
       if (e instanceof OptimisticLockError) throw await this.stale(lotId);
       throw e;
@@ -92,28 +105,131 @@ export class DecisionsService {
     }
     const reason = dto.reason.trim();
     checkReason(dto.outcome, evaluation, reason);
+    const pending = await tx.findOne(
+      Concession,
+      { lot: lot.id, status: 'pending' },
+      { populate: ['requestedBy'] },
+    );
+    if (pending) {
+      throw DomainError.refused(
+        `A concession on this lot waits for approval (asked by ${pending.requestedBy.name} on ${isoDate(pending.requestedAt)}): approve or refuse it first`,
+      );
+    }
 
+    if (dto.outcome !== 'accept_on_concession') {
+      return {
+        ...(await this.record(
+          tx,
+          lot,
+          dto.outcome,
+          reason,
+          evaluation,
+          actor,
+          actor.id,
+          dto.approveReduced === true,
+        )),
+        pendingApproval: false,
+        concession: null,
+      };
+    }
+    const terms = checkTerms(dto, lot);
+    const needsSecondApproval =
+      evaluation.recommendation === 'reject' && lot.product.concessionNeedsApproval;
+    const concession = tx.create(Concession, {
+      lot,
+      scope: terms.scope,
+      quantity: terms.quantity,
+      expiresOn: terms.expiresOn,
+      reason,
+      recommendation: evaluation.recommendation,
+      needsSecondApproval,
+      lotVersion: lot.version,
+      requestedBy: tx.getReference(User, actor.id),
+    });
+    await tx.flush();
+    this.audit.record(tx, actor, {
+      action: 'concession.request',
+      entityType: 'concession',
+      entityId: concession.id,
+      lotId: lot.id,
+      after: { ...terms, reason, recommendation: evaluation.recommendation, needsSecondApproval },
+    });
+    if (needsSecondApproval) {
+      await tx.flush();
+      await tx.populate(concession, ['requestedBy', 'lot']);
+      return {
+        pendingApproval: true,
+        concession: concessionView(concession),
+        decision: null,
+        lot: lotSummary(lot),
+        evaluation,
+        ncrNumber: null,
+        switching: null,
+      };
+    }
+    // No second approval needed: the QA lead who decides is the approver.
+    const result = await this.record(
+      tx,
+      lot,
+      dto.outcome,
+      reason,
+      evaluation,
+      actor,
+      actor.id,
+      dto.approveReduced === true,
+    );
+    concession.status = 'approved';
+    concession.reviewedBy = tx.getReference(User, actor.id);
+    concession.reviewedAt = new Date();
+    concession.decision = tx.getReference(Decision, result.decision.id);
+    await tx.flush();
+    await tx.populate(concession, ['requestedBy', 'reviewedBy', 'lot']);
+    return { ...result, pendingApproval: false, concession: concessionView(concession) };
+  }
+
+  /** Writes a decision: the lot's status, its NCR on a reject, the switching state, audit. */
+  private async record(
+    tx: EntityManager,
+    lot: Lot,
+    outcome: DecisionOutcome,
+    reason: string,
+    evaluation: Evaluation,
+    actor: RequestUser,
+    decidedById: number,
+    approveReduced: boolean,
+  ) {
     const before = { status: lot.status, version: lot.version };
     const decision = tx.create(Decision, {
       lot,
-      outcome: dto.outcome,
+      outcome,
       recommendation: evaluation.recommendation,
       reason,
       evaluation: { ...evaluation },
       lotVersion: lot.version,
-      decidedBy: tx.getReference(User, actor.id),
+      decidedBy: tx.getReference(User, decidedById),
     });
-    lot.status = STATUS_OF[dto.outcome];
+    lot.status = STATUS_OF[outcome];
     await tx.flush();
 
     const ncrNumber =
-      dto.outcome === 'reject'
-        ? await openNonconformance(tx, this.audit, actor, lot, decision)
-        : null;
+      outcome === 'reject' ? await openNonconformance(tx, this.audit, actor, lot, decision) : null;
     const switching = await this.streams.recordDecision(tx, actor, lot, decision, {
       evaluation,
-      approveReduced: dto.approveReduced === true,
+      approveReduced,
     });
+    if (outcome === 'reject' && this.notices) {
+      const url = this.notices.link('');
+      await this.notices.raise(tx, {
+        kind: 'lot_rejected',
+        key: `lot_rejected:${decision.id}`,
+        subject: `Lot ${lot.id} was rejected: ${lot.supplier.name}, PO ${lot.poNumber}`,
+        body: [
+          `${actor.name} rejected lot ${lot.id} on ${isoDate(decision.decidedAt)}: PO ${lot.poNumber}, ${lot.supplier.name}, ${lot.product.sku}, ${lot.quantity} ${lot.unit}. ${evaluation.nonconforming} nonconforming of ${evaluation.samplesTested} tested${ncrNumber ? `; ${ncrNumber}` : ''}.`,
+          `It has no return yet. Raise one here: ${url}/returns?raiseLot=${lot.id}&raiseSupplier=${lot.supplier.id}`,
+          `The lot: ${url}/lots/${lot.id}`,
+        ].join('\n\n'),
+      });
+    }
     this.audit.record(tx, actor, {
       action: 'decision.create',
       entityType: 'decision',
@@ -140,6 +256,125 @@ export class DecisionsService {
     };
   }
 
+  /** A lot's concessions, newest first. */
+  async concessionsOf(lotId: number) {
+    const rows = await this.em
+      .fork()
+      .find(
+        Concession,
+        { lot: lotId },
+        { populate: ['requestedBy', 'reviewedBy', 'lot'], orderBy: { id: 'desc' } },
+      );
+    return rows.map((c) => concessionView(c));
+  }
+
+  private async pendingConcession(tx: EntityManager, id: number, dto: ReviewConcessionDto) {
+    const c = await tx.findOne(Concession, id, {
+      populate: ['lot', 'lot.product', 'lot.supplier', 'lot.receivedBy', 'requestedBy'],
+    });
+    if (!c) throw DomainError.notFound(`There is no concession ${id}`);
+    if (c.status !== 'pending') {
+      throw DomainError.refused(`This concession is ${c.status} already; nothing to review`);
+    }
+    if (dto.version !== c.version) {
+      throw DomainError.conflict('Someone changed this concession first; reload it', 'version');
+    }
+    return c;
+  }
+
+  /**
+   * A second QA lead or an admin approves a pending concession: the accept-on-concession
+   * decision is written then, as the requester's, with the approver recorded. The approver
+   * cannot be the requester.
+   */
+  async approve(id: number, dto: ReviewConcessionDto, actor: RequestUser) {
+    try {
+      return await retryOnUniqueConflict(() =>
+        this.em.transactional(async (tx) => {
+          const c = await this.pendingConcession(tx, id, dto);
+          if (c.requestedBy.id === actor.id) {
+            throw DomainError.refused(
+              'You asked for this concession: a second QA lead or an admin must approve it',
+            );
+          }
+          const lot = c.lot;
+          if (lot.version !== c.lotVersion || !DECIDABLE.includes(lot.status)) {
+            throw DomainError.conflict(
+              'The lot changed since this concession was asked for (a reading or a decision): refuse it and ask again on the lot as it is now',
+            );
+          }
+          const evaluation = await this.evaluations.evaluate(lot, tx);
+          const result = await this.record(
+            tx,
+            lot,
+            'accept_on_concession',
+            c.reason,
+            evaluation,
+            actor,
+            c.requestedBy.id,
+            false,
+          );
+          c.status = 'approved';
+          c.reviewedBy = tx.getReference(User, actor.id);
+          c.reviewedAt = new Date();
+          c.reviewNote = dto.note?.trim() || null;
+          c.decision = tx.getReference(Decision, result.decision.id);
+          this.audit.record(tx, actor, {
+            action: 'concession.approve',
+            entityType: 'concession',
+            entityId: c.id,
+            lotId: lot.id,
+            before: { status: 'pending' },
+            after: { status: 'approved', decisionId: result.decision.id, note: c.reviewNote },
+          });
+          await tx.flush();
+          await tx.populate(c, ['reviewedBy']);
+          return { ...result, pendingApproval: false, concession: concessionView(c) };
+        }),
+      );
+    } catch (e) {
+      if (e instanceof OptimisticLockError) {
+        throw DomainError.conflict('Someone reviewed this concession or the lot first; reload');
+      }
+      throw e;
+    }
+  }
+
+  /** Turns a pending concession down with a note (its requester may withdraw it so too). */
+  async refuse(id: number, dto: ReviewConcessionDto, actor: RequestUser) {
+    const note = dto.note?.trim() ?? '';
+    if (note.length < MIN_REFUSAL) {
+      throw DomainError.invalid([
+        { field: 'note', message: `note must say in at least ${MIN_REFUSAL} characters why` },
+      ]);
+    }
+    try {
+      return await this.em.transactional(async (tx) => {
+        const c = await this.pendingConcession(tx, id, dto);
+        c.status = 'refused';
+        c.reviewedBy = tx.getReference(User, actor.id);
+        c.reviewedAt = new Date();
+        c.reviewNote = note;
+        this.audit.record(tx, actor, {
+          action: 'concession.refuse',
+          entityType: 'concession',
+          entityId: c.id,
+          lotId: c.lot.id,
+          before: { status: 'pending' },
+          after: { status: 'refused', note, withdrawn: c.requestedBy.id === actor.id },
+        });
+        await tx.flush();
+        await tx.populate(c, ['reviewedBy']);
+        return concessionView(c);
+      });
+    } catch (e) {
+      if (e instanceof OptimisticLockError) {
+        throw DomainError.conflict('Someone reviewed this concession first; reload');
+      }
+      throw e;
+    }
+  }
+
   restore(productId: number, reason: string, actor: RequestUser) {
     return this.em.transactional((tx) => this.streams.restore(tx, actor, productId, reason));
   }
@@ -153,4 +388,37 @@ function checkReason(outcome: DecisionOutcome, evaluation: Evaluation, reason: s
     ? 'a concession'
     : `a decision against the recommendation (${evaluation.recommendation})`;
   throw new BadRequestException([`reason must be at least ${MIN_REASON} characters for ${why}`]);
+}
+
+/** The terms a concession needs: what for, how much (at most the lot), until when. */
+function checkTerms(dto: CreateDecisionDto, lot: Lot) {
+  const t = dto.concession;
+  if (!t) {
+    throw DomainError.invalid([
+      {
+        field: 'concession',
+        message: 'concession must give the terms: scope, quantity and expiresOn',
+      },
+    ]);
+  }
+  const errors: { field: string; message: string }[] = [];
+  if (t.quantity > lot.quantity) {
+    errors.push({
+      field: 'concession.quantity',
+      message: `concession.quantity must be at most the lot's ${lot.quantity} ${lot.unit}`,
+    });
+  }
+  if (!isCalendarDate(t.expiresOn)) {
+    errors.push({
+      field: 'concession.expiresOn',
+      message: 'concession.expiresOn must be a real date',
+    });
+  } else if (t.expiresOn < isoDate(new Date())) {
+    errors.push({
+      field: 'concession.expiresOn',
+      message: 'concession.expiresOn must be today or later',
+    });
+  }
+  if (errors.length) throw DomainError.invalid(errors);
+  return { scope: t.scope.trim(), quantity: t.quantity, expiresOn: t.expiresOn };
 }

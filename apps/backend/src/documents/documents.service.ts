@@ -2,6 +2,7 @@ import { Inject, Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import { APP_CONFIG } from '../config/config.module';
 import type { AppConfig } from '../config/env';
+import { Concession } from '../decisions/entities/concession.entity';
 import { Decision } from '../decisions/entities/decision.entity';
 import { ncrNumberOfLot } from '../decisions/decision-view';
 import { Lot } from '../lots/entities/lot.entity';
@@ -32,7 +33,24 @@ export class DocumentsService {
       { lot },
       { orderBy: { decidedAt: 'desc', id: 'desc' }, populate: ['decidedBy'] },
     );
+    // The terms of the concession the lot's standing decision put in force.
+    const concession =
+      decision?.outcome === 'accept_on_concession'
+        ? await this.em.findOne(
+            Concession,
+            { decision: decision.id, status: 'approved' },
+            { populate: ['reviewedBy'] },
+          )
+        : null;
     return lotTagPdf({
+      concession: concession
+        ? {
+            scope: concession.scope,
+            quantity: `${concession.quantity} ${lot.unit}`,
+            expiresOn: concession.expiresOn,
+            approvedBy: concession.reviewedBy?.name ?? '—',
+          }
+        : null,
       lotId: lot.id,
       status: lot.status,
       poNumber: lot.poNumber,

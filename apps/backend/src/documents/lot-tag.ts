@@ -15,6 +15,13 @@ export interface LotTagData {
   decidedAt: Date | null;
   ncrNumber: string | null;
   url: string;
+  /** The terms of the concession in force (accepted on concession only). */
+  concession?: {
+    scope: string;
+    quantity: string;
+    expiresOn: string;
+    approvedBy: string;
+  } | null;
 }
 
 /** The big word on the tag and its colour, from the lot's status. */
@@ -91,6 +98,23 @@ export async function lotTagPdf(data: LotTagData): Promise<Buffer> {
       30,
     );
 
+    if (data.concession) {
+      // The terms take the lower part; the QR code moves to its corner.
+      const c = data.concession;
+      const terms = full - 96;
+      fitText(doc, 'MAY BE USED ONLY FOR', x, 292, terms, 10, { bold: true, size: 7 });
+      fitText(doc, c.scope, x, 303, terms, 52, { bold: true, size: 10, minSize: 6 });
+      label(doc, x, 358, 'Quantity', c.quantity, terms / 2);
+      label(doc, x + terms / 2, 358, 'Until', c.expiresOn, terms / 2);
+      label(doc, x, 385, 'Approved by', c.approvedBy, terms);
+      doc.image(qr, x + full - 88, 330, { width: 88 });
+      fitText(doc, 'Scan for the lot', x + full - 88, 312, 88, 16, {
+        size: 6,
+        colour: COLOURS.muted,
+        align: 'center',
+      });
+      return;
+    }
     doc.image(qr, x, 294, { width: 120 });
     const side = full - 130;
     fitText(doc, 'Scan for the lot page, its readings and its history.', x + 130, 298, side, 26, {

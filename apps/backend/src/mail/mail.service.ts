@@ -37,6 +37,15 @@ export interface OutgoingMail {
   relatedId: number;
 }
 
+/** A message the product sends on its own (a staff notice): no sender, no attachments. */
+export interface QueuedMail {
+  to: string;
+  subject: string;
+  body: string;
+  relatedType: string;
+  relatedId: number | null;
+}
+
 /** Give up on an unreachable SMTP server quickly: the message is kept and tried again. */
 const SMTP_TIMEOUT_MS = 10_000;
 /** A server holds a message this long while it sends it (three SMTP timeouts and some). */
@@ -115,6 +124,23 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
     return messageView(await this.em.fork().findOneOrFail(OutboundMessage, message.id));
   }
 
+  /**
+   * Stores a message in the caller's unit of work, due at once, without an attempt: it
+   * exists exactly when that unit of work commits, and the queue sends it (call `drain()`
+   * after the commit to send it at once).
+   */
+  enqueue(em: EntityManager, mail: QueuedMail): OutboundMessage {
+    return em.create(OutboundMessage, {
+      to: mail.to,
+      subject: mail.subject,
+      body: mail.body,
+      attachments: [],
+      relatedType: mail.relatedType,
+      relatedId: mail.relatedId,
+      nextAttemptAt: new Date(),
+    });
+  }
+
   async retry(id: number, actor: RequestUser): Promise<MessageView> {
     const em = this.em.fork();
     const message = await em.findOne(OutboundMessage, id);
@@ -145,7 +171,8 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
     const { page, pageSize, offset } = paging(q);
     const where: FilterQuery<OutboundMessage> = {};
     if (q.status) where.status = q.status;
-    if (q.relatedType) where.relatedType = q.relatedType;
+    // Staff notices are not mail to suppliers: listed only when asked for by name.
+    where.relatedType = q.relatedType ? q.relatedType : { $ne: 'notice' };
     if (q.relatedId) where.relatedId = q.relatedId;
     const [items, total] = await this.em.findAndCount(OutboundMessage, where, {
       orderBy: { createdAt: 'desc', id: 'desc' },

@@ -19,8 +19,10 @@ import { Migration20261203115000 } from './sqlite/Migration20261203115000';
 import { Migration20261203120000 } from './sqlite/Migration20261203120000';
 import { Migration20261203120504 } from './postgresql/Migration20261203120504';
 import { Migration20261203133643 } from './postgresql/Migration20261203133643';
+import { Migration20261203143251 } from './postgresql/Migration20261203143251';
 import { Migration20261203120500 } from './sqlite/Migration20261203120500';
 import { Migration20261203133640 } from './sqlite/Migration20261203133640';
+import { Migration20261203143250 } from './sqlite/Migration20261203143250';
 
 /**
  * Migrations per driver, in order, each driver in its own folder; listed in code so the
@@ -39,6 +41,7 @@ export const SQLITE_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203120000', class: Migration20261203120000 },
   { name: 'Migration20261203120500', class: Migration20261203120500 },
   { name: 'Migration20261203133640', class: Migration20261203133640 },
+  { name: 'Migration20261203143250', class: Migration20261203143250 },
 ];
 
 export const POSTGRES_MIGRATIONS: MigrationObject[] = [
@@ -53,4 +56,5 @@ export const POSTGRES_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203120010', class: Migration20261203120010 },
   { name: 'Migration20261203120504', class: Migration20261203120504 },
   { name: 'Migration20261203133643', class: Migration20261203133643 },
+  { name: 'Migration20261203143251', class: Migration20261203143251 },
 ];

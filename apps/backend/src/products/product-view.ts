@@ -71,6 +71,7 @@ export function productView(
     inspectionLevel: p.inspectionLevel,
     aql: p.aql,
     minAreaRatio: p.minAreaRatio,
+    concessionNeedsApproval: p.concessionNeedsApproval,
     active: p.active,
     conductors: conductors.map(conductorView),
     inspectionState: inspectionStateView(state),

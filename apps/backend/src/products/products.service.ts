@@ -37,7 +37,12 @@ const SORT_COLUMNS: Record<(typeof SORTS)[number], string> = {
  */
 const CRITERIA_ROLES: readonly Role[] = ['qa_lead', 'admin'];
 /** Defaults of a new product: S-3 and AQL 1.0 (our choice), 0.98 area ratio (ASTM B496). */
-const DEFAULT_CRITERIA = { inspectionLevel: 'S-3', aql: '1.0', minAreaRatio: 0.98 } as const;
+const DEFAULT_CRITERIA = {
+  inspectionLevel: 'S-3',
+  aql: '1.0',
+  minAreaRatio: 0.98,
+  concessionNeedsApproval: true,
+} as const;
 
 /** The parts of a product view a lot is judged against. */
 function acceptanceCriteria(v: ProductView) {
@@ -45,6 +50,7 @@ function acceptanceCriteria(v: ProductView) {
     inspectionLevel: v.inspectionLevel,
     aql: v.aql,
     minAreaRatio: v.minAreaRatio,
+    concessionNeedsApproval: v.concessionNeedsApproval,
     conductors: v.conductors.map((c) => ({
       position: c.position,
       purpose: c.purpose,
@@ -120,6 +126,11 @@ export class ProductsService {
           ['inspectionLevel', dto.inspectionLevel, DEFAULT_CRITERIA.inspectionLevel],
           ['aql', dto.aql, DEFAULT_CRITERIA.aql],
           ['minAreaRatio', dto.minAreaRatio, DEFAULT_CRITERIA.minAreaRatio],
+          [
+            'concessionNeedsApproval',
+            dto.concessionNeedsApproval,
+            DEFAULT_CRITERIA.concessionNeedsApproval,
+          ],
         ] as const
       ).filter(([, given, usual]) => given !== undefined && given !== usual);
       if (off.length) {
@@ -138,6 +149,8 @@ export class ProductsService {
         inspectionLevel: dto.inspectionLevel ?? DEFAULT_CRITERIA.inspectionLevel,
         aql: dto.aql ?? DEFAULT_CRITERIA.aql,
         minAreaRatio: dto.minAreaRatio ?? DEFAULT_CRITERIA.minAreaRatio,
+        concessionNeedsApproval:
+          dto.concessionNeedsApproval ?? DEFAULT_CRITERIA.concessionNeedsApproval,
       });
       replaceConductors(em, product, conductors);
       // Every supplier-product stream starts on normal inspection (ISO 2859-1).
@@ -173,6 +186,8 @@ export class ProductsService {
       if (dto.inspectionLevel !== undefined) product.inspectionLevel = dto.inspectionLevel;
       if (dto.aql !== undefined) product.aql = dto.aql;
       if (dto.minAreaRatio !== undefined) product.minAreaRatio = dto.minAreaRatio;
+      if (dto.concessionNeedsApproval !== undefined)
+        product.concessionNeedsApproval = dto.concessionNeedsApproval;
       if (dto.active !== undefined) product.active = dto.active;
       if (conductors) replaceConductors(em, product, conductors);
       const criteriaBefore = acceptanceCriteria(before);

@@ -62,6 +62,12 @@ export class ReturnsController {
     );
   }
 
+  /** Rejected lots that are on no return yet, for purchasing's Today. */
+  @Get('unreturned-lots')
+  unreturnedLots() {
+    return this.returns.unreturnedLots();
+  }
+
   @Get(':id')
   get(@Param('id', IdPipe) id: number) {
     return this.returns.get(id);

@@ -15,6 +15,7 @@ import { paging, parseSort, type Page } from '../common/paging';
 import { plainSql } from '../common/plain-sql';
 import { APP_CONFIG } from '../config/config.module';
 import { isCurrencyCode, type AppConfig } from '../config/env';
+import { Decision } from '../decisions/entities/decision.entity';
 import { Lot } from '../lots/entities/lot.entity';
 import { User } from '../users/entities/user.entity';
 import { CreateReturnDto } from './dto/create-return.dto';
@@ -218,6 +219,45 @@ export class ReturnsService {
     if (q.status) where.status = { $in: q.status.split(',') as ReturnStatus[] };
     if (q.supplierId) where.supplier = q.supplierId;
     return where;
+  }
+
+  /**
+   * Purchasing's queue (Today): rejected lots on no open return (not even a draft), oldest
+   * rejection first, with how long each has waited.
+   */
+  async unreturnedLots(limit = 100) {
+    const em = this.em.fork();
+    const rows = await plainSql<{ id: number }[]>(
+      em,
+      `select l.id from lots l where l.status = 'rejected'
+         and not exists (select 1 from open_return_lots o where o.lot_id = l.id)
+       order by l.received_at asc, l.id asc limit ?`,
+      [limit + 1],
+    );
+    const ids = rows.slice(0, limit).map((r) => Number(r.id));
+    const lots = await em.find(Lot, { id: { $in: ids } }, { populate: ['supplier', 'product'] });
+    const rejections = await em.find(
+      Decision,
+      { lot: { $in: ids }, outcome: 'reject' },
+      { orderBy: { decidedAt: 'asc' } },
+    );
+    const rejectedAt = new Map(rejections.map((d) => [d.lot.id, d.decidedAt]));
+    const items = lots
+      .map((l) => ({
+        id: l.id,
+        poNumber: l.poNumber,
+        supplierLotCode: l.supplierLotCode,
+        quantity: l.quantity,
+        unit: l.unit,
+        receivedAt: l.receivedAt,
+        rejectedAt: rejectedAt.get(l.id) ?? null,
+        supplier: { id: l.supplier.id, name: l.supplier.name },
+        product: { id: l.product.id, sku: l.product.sku },
+      }))
+      .sort(
+        (a, b) => (a.rejectedAt?.getTime() ?? 0) - (b.rejectedAt?.getTime() ?? 0) || a.id - b.id,
+      );
+    return { items, more: rows.length > limit };
   }
 
   async list(q: ListReturnsDto): Promise<Page<ReturnView>> {

@@ -1,4 +1,5 @@
 import { Sample } from '../inspection/entities/sample.entity';
+import { Concession } from '../decisions/entities/concession.entity';
 import { Decision } from '../decisions/entities/decision.entity';
 import { Nonconformance } from '../decisions/entities/nonconformance.entity';
 import { Lot } from '../lots/entities/lot.entity';
@@ -33,13 +34,43 @@ async function decide(ctx: ScenarioContext, lot: Lot, story: LotStory, received:
     reason: REASONS[evaluation.recommendation],
   };
   ctx.clock.set(new Date(received.getTime() + DAY_MS + ctx.rnd.int(60, 180) * 60_000));
-  const { decision } = await ctx.decisions.decide(
+  const terms = story.concession;
+  let result = await ctx.decisions.decide(
     lot.id,
-    { outcome: chosen.outcome, reason: chosen.reason, version: lot.version },
+    {
+      outcome: chosen.outcome,
+      reason: chosen.reason,
+      version: lot.version,
+      concession: terms
+        ? {
+            scope: terms.scope,
+            quantity: terms.quantity,
+            expiresOn: new Date(ctx.clock.now.getTime() + terms.days * DAY_MS)
+              .toISOString()
+              .slice(0, 10),
+          }
+        : undefined,
+    },
     ctx.users.qa,
   );
+  if (result.pendingApproval && result.concession) {
+    // Against a reject, the admin approves the QA lead's concession (the product's policy).
+    result = await ctx.decisions.approve(
+      result.concession.id,
+      { version: result.concession.version, note: 'Terms agreed with engineering.' },
+      ctx.users.admin,
+    );
+  }
+  const decision = result.decision!;
   const at = new Date(ctx.clock.now);
   await ctx.em.nativeUpdate(Decision, { id: decision.id }, { decidedAt: at });
+  if (result.concession) {
+    await ctx.em.nativeUpdate(
+      Concession,
+      { id: result.concession.id },
+      { requestedAt: at, reviewedAt: at },
+    );
+  }
   await ctx.em.nativeUpdate(Nonconformance, { lot: lot.id }, { createdAt: at });
 }
 

@@ -29,6 +29,8 @@ export interface LotStory {
   voided?: string;
   /** Default: the recommendation, once every planned unit is measured and not `today`. */
   decision?: { outcome: DecisionOutcome; reason: string } | 'none';
+  /** The terms of an accept-on-concession decision (approved by the admin in the story). */
+  concession?: { scope: string; quantity: number; days: number };
   photo?: 'copper' | 'cca' | 'undersized';
 }
 
@@ -105,6 +107,11 @@ export const STORY: LotStory[] = [
       reason:
         'Drum 3 is 2.5 % short of 25 mm²; engineering reviewed it for the short battery straps of the fleet job and the supplier was told. Drum kept apart and labelled.',
     },
+    concession: {
+      scope: 'Battery straps of 0.5 m or less on the fleet job only',
+      quantity: 1,
+      days: 180,
+    },
   },
   { key: 'vwk-4', product: 'kit4', daysAgo: 99, quantity: 16, unit: 'kits' },
   { key: 'hl4-6', product: 'spool4', daysAgo: 98, quantity: 8, unit: 'spools' },
@@ -163,6 +170,11 @@ export const STORY: LotStory[] = [
       outcome: 'accept_on_concession',
       reason:
         'Spool 2 is 3.5 % short of 8 AWG; the rest conform. Taken for the low-current lighting looms only, after engineering review; supplier told.',
+    },
+    concession: {
+      scope: 'Low-current lighting looms only; not for power or fused runs',
+      quantity: 1,
+      days: 120,
     },
   },
   { key: 'ts25-6', product: 'spool25', daysAgo: 19, quantity: 4, unit: 'drums', strands: true },

@@ -22,6 +22,7 @@ import { typeOfKey } from '../photos/photos.service';
 import { VendorReturn } from '../returns/entities/vendor-return.entity';
 import { ReturnDocuments } from '../returns/return-documents';
 import { StorageService } from '../storage/storage.service';
+import { NoticesService } from '../notices/notices.service';
 import { User } from '../users/entities/user.entity';
 import { SendCorrectiveActionDto, SupplierResponseDto } from './dto/portal.dto';
 import { ReturnLink } from './entities/return-link.entity';
@@ -71,6 +72,7 @@ export class SupplierPortalService {
     private readonly mail: MailService,
     private readonly storage: StorageService,
     private readonly documents: ReturnDocuments,
+    private readonly notices: NoticesService,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
@@ -361,7 +363,7 @@ export class SupplierPortalService {
       });
     }
     try {
-      return await this.em.fork().transactional(async (tx) => {
+      const view = await this.em.fork().transactional(async (tx) => {
         const link = await this.resolve(tx, token);
         const car = link.correctiveAction;
         if (car.status !== 'open' && car.status !== 'reopened') {
@@ -397,9 +399,24 @@ export class SupplierPortalService {
             },
           });
         }
+        await this.notices.raise(tx, {
+          kind: 'scar_answered',
+          key: `scar_answered:${car.id}:${car.version}`,
+          subject: `${car.supplier.name} answered ${car.number}`,
+          body: [
+            `${car.supplier.name} answered corrective action ${car.number} through its link (${link.sentTo}).`,
+            `Containment: ${car.containment}`,
+            `Root cause: ${car.rootCause}`,
+            `Corrective action: ${car.correctiveAction}`,
+            `In place by: ${car.promisedOn}`,
+            `Review it, ask for more or verify it here: ${this.notices.link(`/corrective-actions/${car.id}`)}`,
+          ].join('\n\n'),
+        });
         await tx.flush();
         return this.viewOf(tx, link);
       });
+      this.notices.deliver();
+      return view;
     } catch (e) {
       if (e instanceof OptimisticLockError) {
         throw new UnprocessableEntityException(

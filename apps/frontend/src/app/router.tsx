@@ -33,6 +33,7 @@ const SupplierPortalRoute = lazyRoute(
   'SupplierPortalRoute',
 );
 const MessagesRoute = lazyRoute(() => import('@/app/routes/messages'), 'MessagesRoute');
+const ProfileRoute = lazyRoute(() => import('@/app/routes/profile'), 'ProfileRoute');
 const ReturnDetailRoute = lazyRoute(
   () => import('@/app/routes/return-detail'),
   'ReturnDetailRoute',
@@ -147,6 +148,14 @@ const shellRoutes: RouteObject[] = [
     element: (
       <RoleGate>
         <SupplierScorecardRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.profile.path,
+    element: (
+      <RoleGate>
+        <ProfileRoute />
       </RoleGate>
     ),
   },

@@ -31,6 +31,7 @@ export const paths = {
   },
   returnDetail: { path: '/returns/:id', getHref: (id: number | string) => `/returns/${id}` },
   messages: { path: '/messages', getHref: () => '/messages' },
+  profile: { path: '/profile', getHref: () => '/profile' },
   supplierPortal: { path: '/supplier/:token', getHref: (token: string) => `/supplier/${token}` },
   correctiveActions: { path: '/corrective-actions', getHref: () => '/corrective-actions' },
   correctiveActionDetail: {

@@ -1,5 +1,16 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { IsBoolean, IsIn, IsInt, IsOptional, IsString, MaxLength, Min } from 'class-validator';
+import { Type } from 'class-transformer';
+import {
+  IsBoolean,
+  IsIn,
+  IsInt,
+  IsOptional,
+  IsString,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
+import { ConcessionTermsDto } from './concession.dto';
 import { DECISION_OUTCOMES, type DecisionOutcome } from '../entities/decision.entity';
 
 export class CreateDecisionDto {
@@ -25,4 +36,13 @@ export class CreateDecisionDto {
   @IsOptional()
   @IsBoolean({ message: 'approveReduced must be true or false' })
   readonly approveReduced?: boolean;
+
+  @ApiPropertyOptional({
+    type: ConcessionTermsDto,
+    description: 'Required with accept_on_concession: what for, how much, until when.',
+  })
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => ConcessionTermsDto)
+  readonly concession?: ConcessionTermsDto;
 }

@@ -6,7 +6,7 @@ import {
   type Aql,
   type InspectionLevel,
 } from '@gaugeproof/standards';
-import { IsIn, IsNumber, IsOptional, Max, Min, ValidateIf } from 'class-validator';
+import { IsBoolean, IsIn, IsNumber, IsOptional, Max, Min, ValidateIf } from 'class-validator';
 
 /**
  * AQLs a plan that counts nonconforming units may use: 10 and below (ANSI/ASQ Z1.4;
@@ -49,4 +49,10 @@ export class ProductPolicyDto {
   @Min(0.5, { message: 'minAreaRatio must be from 0.5 to 1.0' })
   @Max(1, { message: 'minAreaRatio must be from 0.5 to 1.0' })
   readonly minAreaRatio?: number;
+
+  /** A concession against a reject needs a second QA lead or an admin (default on). */
+  @ApiPropertyOptional({ default: true })
+  @IsOptional()
+  @IsBoolean({ message: 'concessionNeedsApproval must be true or false' })
+  readonly concessionNeedsApproval?: boolean;
 }

@@ -60,4 +60,12 @@ export class Product {
 
   @Property({ type: 'Date', onUpdate: () => new Date() })
   updatedAt: Opt<Date> = new Date();
+
+  // Last, as the migration adds it (SQLite compares column order).
+  /**
+   * Accepting a lot on concession against a reject recommendation needs a second QA lead's
+   * or an admin's approval (issue 14 §7; on by default).
+   */
+  @Property({ type: 'boolean', default: true })
+  concessionNeedsApproval: Opt<boolean> = true;
 }

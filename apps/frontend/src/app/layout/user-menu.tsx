@@ -1,5 +1,8 @@
 import AccountCircleOutlined from '@mui/icons-material/AccountCircleOutlined';
 import Logout from '@mui/icons-material/Logout';
+import NotificationsOutlined from '@mui/icons-material/NotificationsOutlined';
+import { Link as RouterLink } from 'react-router-dom';
+import { paths } from '@/config/paths';
 import {
   Box,
   Button,
@@ -72,6 +75,16 @@ export function UserMenu() {
           </ToggleButtonGroup>
         </Box>
         <Divider />
+        <MenuItem
+          component={RouterLink}
+          to={paths.profile.getHref()}
+          onClick={() => setAnchor(null)}
+        >
+          <ListItemIcon>
+            <NotificationsOutlined fontSize="small" />
+          </ListItemIcon>
+          Profile and e-mail notices
+        </MenuItem>
         <MenuItem
           disabled={signingOut}
           onClick={() => {

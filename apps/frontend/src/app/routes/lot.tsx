@@ -138,7 +138,7 @@ export function LotRoute() {
             <Box id="decision" sx={{ scrollMarginTop: 80 }}>
               <SectionBoundary name="decision">
                 {DECIDERS.includes(user.role) ? (
-                  <DecisionPanel lot={data} />
+                  <DecisionPanel lot={data} meId={user.id} />
                 ) : (
                   <DecisionsCard lotId={data.id} />
                 )}

@@ -8,10 +8,12 @@ import { useSessionUser } from '@/features/auth/auth-context';
 import { OverdueCorrectiveActionsSection } from '@/features/corrective-actions/components/overdue-corrective-actions-section';
 import { InstrumentsDueSection } from '@/features/inspection/components/instruments-due-section';
 import { TodayLotsSection } from '@/features/lots/components/today-lots-section';
+import { UnreturnedLotsSection } from '@/features/returns/components/unreturned-lots-section';
 import { roleLabels } from '@/lib/roles';
 
 const CAN_RECEIVE = ['clerk', 'qa_lead', 'admin'];
 const FOLLOWS_SUPPLIERS = ['purchasing', 'qa_lead', 'admin'];
+const RETURNS_GOODS = ['purchasing', 'admin'];
 
 export function TodayRoute() {
   const user = useSessionUser();
@@ -43,6 +45,13 @@ export function TodayRoute() {
         )}
       </Stack>
       <Grid container spacing={2}>
+        {RETURNS_GOODS.includes(user.role) && (
+          <Grid size={{ xs: 12, lg: 6 }}>
+            <SectionBoundary name="rejected lots without a return">
+              <UnreturnedLotsSection />
+            </SectionBoundary>
+          </Grid>
+        )}
         <Grid size={{ xs: 12, lg: 6 }}>
           <SectionBoundary name="lots on hold">
             <TodayLotsSection

@@ -28,6 +28,8 @@ export interface DecidableLot {
   id: number;
   status: string;
   version: number;
+  quantity: number;
+  unit: string;
   evaluation: EvaluationCounts;
   ncrNumber: string | null;
 }
@@ -42,6 +44,8 @@ export interface SwitchingNotice {
 }
 
 export interface DecisionResult {
+  /** True when a concession was asked for and waits for a second approval (nothing decided). */
+  pendingApproval?: boolean;
   decision: Decision;
   lot: { id: number; status: string; version: number };
   evaluation: EvaluationCounts;

@@ -8,18 +8,64 @@ import { queryKeys } from '@/lib/query-keys';
 const OUTCOMES = ['accept', 'accept_on_concession', 'reject'] as const;
 
 /** The decision form; the reason rule depends on the evaluation's recommendation. */
-export const decisionSchema = (recommendation: Recommendation) =>
+export const decisionSchema = (recommendation: Recommendation, lotQuantity = Infinity) =>
   z
     .object({
       // '' while nothing is chosen yet; the pipe turns it into the message.
       outcome: z.enum(['', ...OUTCOMES]).pipe(z.enum(OUTCOMES, 'Choose an outcome.')),
       reason: z.string(),
+      // The concession's terms, asked for only with "Accept on concession".
+      scope: z.string(),
+      quantity: z.string(),
+      expiresOn: z.string(),
     })
     .superRefine((value, ctx) => {
       const message = reasonError(value.outcome, recommendation, value.reason);
       if (message) ctx.addIssue({ code: 'custom', path: ['reason'], message });
+      if (value.outcome !== 'accept_on_concession') return;
+      if (value.scope.trim().length < 10)
+        ctx.addIssue({
+          code: 'custom',
+          path: ['scope'],
+          message: 'Say in at least 10 characters what the material may be used for.',
+        });
+      const q = Number(value.quantity);
+      if (!value.quantity.trim() || !Number.isFinite(q) || q <= 0)
+        ctx.addIssue({ code: 'custom', path: ['quantity'], message: 'Give a quantity above 0.' });
+      else if (q > lotQuantity)
+        ctx.addIssue({
+          code: 'custom',
+          path: ['quantity'],
+          message: `At most the lot's ${lotQuantity}.`,
+        });
+      const today = new Date().toISOString().slice(0, 10);
+      if (!/^\d{4}-\d{2}-\d{2}$/.test(value.expiresOn))
+        ctx.addIssue({
+          code: 'custom',
+          path: ['expiresOn'],
+          message: 'Pick the last day it holds.',
+        });
+      else if (value.expiresOn < today)
+        ctx.addIssue({ code: 'custom', path: ['expiresOn'], message: 'Today or later.' });
     });
-export type DecisionInput = { outcome: DecisionOutcome; reason: string };
+export type DecisionFormValues = z.infer<ReturnType<typeof decisionSchema>>;
+export type ConcessionTerms = { scope: string; quantity: number; expiresOn: string };
+export type DecisionInput = {
+  outcome: DecisionOutcome;
+  reason: string;
+  concession?: ConcessionTerms;
+};
+
+/** What the form sends: the terms only with a concession. */
+export function decisionInputOf(v: DecisionFormValues): DecisionInput {
+  return v.outcome === 'accept_on_concession'
+    ? {
+        outcome: v.outcome,
+        reason: v.reason,
+        concession: { scope: v.scope.trim(), quantity: Number(v.quantity), expiresOn: v.expiresOn },
+      }
+    : { outcome: v.outcome, reason: v.reason };
+}
 
 export interface DecisionRequest extends DecisionInput {
   lotId: number;

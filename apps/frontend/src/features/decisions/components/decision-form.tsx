@@ -10,9 +10,16 @@ import {
   RadioGroup,
   Stack,
   TextField,
+  Typography,
 } from '@mui/material';
 import { Controller, useForm } from 'react-hook-form';
-import { decisionSchema, type DecisionInput } from '@/features/decisions/api/create-decision';
+import { SafetyCaution } from '@/components/safety-caution';
+import {
+  decisionInputOf,
+  decisionSchema,
+  type DecisionFormValues,
+  type DecisionInput,
+} from '@/features/decisions/api/create-decision';
 import { MIN_REASON_LENGTH, reasonRequirement } from '@/features/decisions/lib/reason-rule';
 import {
   outcomeLabels,
@@ -21,11 +28,23 @@ import {
 } from '@/features/decisions/types';
 import { splitServerErrors } from '@/lib/server-field-errors';
 
-const FIELDS = ['outcome', 'reason'] as const;
+/** The server's field names and the form's (a concession's terms are nested there). */
+const SERVER_FIELDS = {
+  outcome: 'outcome',
+  reason: 'reason',
+  'concession.scope': 'scope',
+  'concession.quantity': 'quantity',
+  'concession.expiresOn': 'expiresOn',
+  concession: 'scope',
+} as const;
+const FIELDS = Object.keys(SERVER_FIELDS) as (keyof typeof SERVER_FIELDS)[];
 const OUTCOMES = Object.keys(outcomeLabels) as DecisionOutcome[];
 
 interface DecisionFormProps {
   recommendation: Recommendation;
+  /** The lot's quantity and unit: a concession covers at most the lot. */
+  lotQuantity: number;
+  unit: string;
   submitLabel: string;
   /** Sends the decision; rejects with the server's error. */
   onDecide: (input: DecisionInput) => Promise<unknown>;
@@ -34,33 +53,45 @@ interface DecisionFormProps {
 
 export function DecisionForm({
   recommendation,
+  lotQuantity,
+  unit,
   submitLabel,
   onDecide,
   formErrors,
 }: DecisionFormProps) {
   const form = useForm({
-    resolver: zodResolver(decisionSchema(recommendation)),
+    resolver: zodResolver(decisionSchema(recommendation, lotQuantity)),
     mode: 'onChange',
     defaultValues: {
       outcome: recommendation === 'incomplete' ? '' : recommendation,
       reason: '',
-    } as { outcome: DecisionOutcome | ''; reason: string },
+      scope: '',
+      quantity: String(lotQuantity),
+      expiresOn: '',
+    } as {
+      outcome: DecisionOutcome | '';
+      reason: string;
+      scope: string;
+      quantity: string;
+      expiresOn: string;
+    },
   });
   const { errors, isSubmitting } = form.formState;
   const outcome = form.watch('outcome');
   const reason = form.watch('reason');
   const requirement = outcome ? reasonRequirement(outcome, recommendation) : null;
   const length = reason.trim().length;
+  const concession = outcome === 'accept_on_concession';
 
-  const onSubmit = form.handleSubmit(async (input) => {
+  const onSubmit = form.handleSubmit(async (values: DecisionFormValues) => {
     try {
-      await onDecide(input);
-      form.reset({ outcome: input.outcome, reason: '' });
+      await onDecide(decisionInputOf(values));
+      form.reset({ ...values, reason: '' });
     } catch (error) {
       const { fieldErrors } = splitServerErrors(error, FIELDS);
       for (const field of FIELDS) {
         const message = fieldErrors[field];
-        if (message) form.setError(field, { type: 'server', message });
+        if (message) form.setError(SERVER_FIELDS[field], { type: 'server', message });
       }
     }
   });
@@ -98,6 +129,49 @@ export function DecisionForm({
             </FormControl>
           )}
         />
+        {concession && (
+          <Stack spacing={2} role="group" aria-label="Concession terms">
+            <SafetyCaution />
+            <Typography variant="body2">
+              A concession releases this lot for a stated use only. Give its terms; they print on
+              the lot's tag.
+              {recommendation === 'reject' &&
+                " Against a reject recommendation, a second QA lead or an admin approves it before the lot is released (the product's policy, on unless a QA lead turned it off)."}
+            </Typography>
+            <TextField
+              label="May be used for"
+              multiline
+              minRows={2}
+              required
+              error={!!errors.scope}
+              helperText={
+                errors.scope?.message ??
+                'e.g. "ground runs of 1 m or less; not for power or fused runs"'
+              }
+              {...form.register('scope')}
+            />
+            <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
+              <TextField
+                label={`Quantity (${unit})`}
+                type="number"
+                required
+                slotProps={{ htmlInput: { min: 0, step: 'any' } }}
+                error={!!errors.quantity}
+                helperText={errors.quantity?.message ?? `Of the lot's ${lotQuantity} ${unit}`}
+                {...form.register('quantity')}
+              />
+              <TextField
+                label="Holds until"
+                type="date"
+                required
+                slotProps={{ inputLabel: { shrink: true } }}
+                error={!!errors.expiresOn}
+                helperText={errors.expiresOn?.message ?? 'The last day it may be used'}
+                {...form.register('expiresOn')}
+              />
+            </Stack>
+          </Stack>
+        )}
         <TextField
           label={requirement ? 'Reason (required)' : 'Reason (optional)'}
           multiline
@@ -114,7 +188,7 @@ export function DecisionForm({
         />
         <div>
           <Button type="submit" variant="contained" loading={isSubmitting}>
-            {submitLabel}
+            {concession && recommendation === 'reject' ? 'Ask for the concession' : submitLabel}
           </Button>
         </div>
       </Stack>

@@ -16,6 +16,8 @@ const lot: DecidableLot = {
   id: 7,
   status: 'awaiting_decision',
   version: 3,
+  quantity: 200,
+  unit: 'kits',
   ncrNumber: null,
   evaluation: {
     samplesPlanned: 5,
@@ -33,11 +35,15 @@ function renderPanel() {
   });
   // The decision history reads the lot detail.
   fetchMock.mockImplementation(async (input) =>
-    String(input) === '/api/lots/7' ? json(200, { id: 7, decisions: [] }) : json(500, {}),
+    String(input) === '/api/lots/7'
+      ? json(200, { id: 7, decisions: [] })
+      : String(input) === '/api/lots/7/concessions'
+        ? json(200, [])
+        : json(500, {}),
   );
   render(
     <QueryClientProvider client={client}>
-      <DecisionPanel lot={lot} />
+      <DecisionPanel lot={lot} meId={2} />
     </QueryClientProvider>,
   );
   return userEvent.setup({ delay: null });

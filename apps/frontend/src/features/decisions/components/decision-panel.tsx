@@ -11,6 +11,7 @@ import {
 import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useCreateDecision, type DecisionInput } from '@/features/decisions/api/create-decision';
+import { ConcessionCard } from '@/features/decisions/components/concession-card';
 import { DecisionForm } from '@/features/decisions/components/decision-form';
 import { DecisionHistory } from '@/features/decisions/components/decision-history';
 import { SwitchingNoticeView } from '@/features/decisions/components/switching-notice';
@@ -24,22 +25,37 @@ const words = (status: string) => status.replace(/_/g, ' ');
 
 /** The QA lead's decision on a lot, with what it did to the switching state. */
 /** Shown to QA leads and admins only; the server checks the role again. */
-export function DecisionPanel({ lot }: { lot: DecidableLot }) {
+export function DecisionPanel({ lot, meId }: { lot: DecidableLot; meId: number }) {
   const queryClient = useQueryClient();
   const decide = useCreateDecision();
   const [result, setResult] = useState<DecisionResult | null>(null);
   const [last, setLast] = useState<DecisionInput | null>(null);
   const [revising, setRevising] = useState(false);
+  const [asked, setAsked] = useState(false);
   const conflict = decisionConflict(decide.error);
   const decided = lot.status !== 'awaiting_decision';
   const formErrors =
     decide.isError && !conflict
-      ? splitServerErrors(decide.error, ['outcome', 'reason']).formErrors
+      ? splitServerErrors(decide.error, [
+          'outcome',
+          'reason',
+          'concession',
+          'concession.scope',
+          'concession.quantity',
+          'concession.expiresOn',
+        ]).formErrors
       : [];
 
   const send = async (input: DecisionInput, version: number, approveReduced?: boolean) => {
     setResult(null);
+    setAsked(false);
     const answer = await decide.mutateAsync({ lotId: lot.id, version, ...input, approveReduced });
+    if (answer.pendingApproval) {
+      // A concession against a reject waits for a second QA lead or an admin.
+      setAsked(true);
+      setRevising(false);
+      return;
+    }
     setLast(input);
     setResult(answer);
     setRevising(false);
@@ -62,6 +78,13 @@ export function DecisionPanel({ lot }: { lot: DecidableLot }) {
             {lot.evaluation.nonconforming} nonconforming, {lot.evaluation.inconclusive}{' '}
             inconclusive. Recommendation: <strong>{lot.evaluation.recommendation}</strong>.
           </Typography>
+          <ConcessionCard lotId={lot.id} meId={meId} />
+          {asked && (
+            <Alert severity="info">
+              Concession asked for. The lot stays held until a second QA lead or an admin approves
+              it; they see it on this page.
+            </Alert>
+          )}
           {result && (
             <SwitchingNoticeView
               result={result}
@@ -89,6 +112,8 @@ export function DecisionPanel({ lot }: { lot: DecidableLot }) {
             <DecisionForm
               key={lot.version}
               recommendation={lot.evaluation.recommendation}
+              lotQuantity={lot.quantity}
+              unit={lot.unit}
               submitLabel={decided ? 'Record the new decision' : 'Record the decision'}
               formErrors={formErrors}
               onDecide={(input) => send(input, lot.version)}

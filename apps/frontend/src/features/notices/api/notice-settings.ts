@@ -1,0 +1,39 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+
+export const NOTICE_SWITCHES = [
+  'lotAwaitsDecision',
+  'lotRejectNumber',
+  'lotRejected',
+  'scarOverdue',
+  'scarAnswered',
+] as const;
+export type NoticeSwitch = (typeof NOTICE_SWITCHES)[number];
+export type NoticeChoices = Record<NoticeSwitch, boolean> & { digest: boolean };
+
+/** GET /api/me/notices: the user's choices and the notices their role is offered. */
+export interface MyNotices {
+  choices: NoticeChoices;
+  offered: NoticeSwitch[];
+  digestHourUtc: number;
+}
+
+const key = ['me', 'notices'] as const;
+
+export const myNoticesQueryOptions = () =>
+  queryOptions({
+    queryKey: key,
+    queryFn: ({ signal }) => api.get<MyNotices>('/me/notices', signal),
+  });
+
+export const useMyNotices = () => useQuery(myNoticesQueryOptions());
+
+/** Changes switches; each change is saved at once (the page has no save button). */
+export function useUpdateNotices() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (change: Partial<NoticeChoices>) => api.patch<MyNotices>('/me/notices', change),
+    meta: { inlineErrors: true },
+    onSuccess: (data) => client.setQueryData(key, data),
+  });
+}
