@@ -1,7 +1,7 @@
 import AccountCircleOutlined from '@mui/icons-material/AccountCircleOutlined';
 import Logout from '@mui/icons-material/Logout';
 import NotificationsOutlined from '@mui/icons-material/NotificationsOutlined';
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { paths } from '@/config/paths';
 import {
   Box,

@@ -11,7 +11,7 @@ import {
   Stack,
   Typography,
 } from '@mui/material';
-import { Link as RouterLink } from 'react-router-dom';
+import { Link as RouterLink } from 'react-router';
 import { paths } from '@/config/paths';
 import { useUnreturnedLots } from '@/features/returns/api/get-unreturned-lots';
 import { errorMessage } from '@/lib/query-client';
