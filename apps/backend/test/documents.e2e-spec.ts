@@ -132,34 +132,82 @@ describe('documents in any script', () => {
     for (const name of ['RECEIVED', 'NCR', 'DECISION']) expect(text).toContain(name);
   });
 
+  it("prints a concession tag's title whole and what the concession allows, nothing overlapping", async () => {
+    const supplier = await fx.supplier('Harbourlight Cable Works', 'tags@harbourlight.example');
+    const product = await fx.product(supplier.id);
+    const { lot } = await fx.lot(product.id, { nonconforming: 2 });
+    const terms = 'Use for 12 V test benches only, at most 40 kits, until 2027-01-31';
+    const decided = await t.http
+      .post(`/api/lots/${lot.id}/decisions`)
+      .set(auth(qa))
+      .send({ outcome: 'accept_on_concession', reason: terms, version: lot.version });
+    expect(decided.status, JSON.stringify(decided.body)).toBe(201);
+    const { words } = pdfWords(await tagOf(lot.id));
+    const text = words.map((w) => w.text).join(' ');
+    // "CONCESSION" is one word on one line, never "CONCESSIO" over "N"
+    expect(words.map((w) => w.text)).toContain('CONCESSION');
+    expect(words.map((w) => w.text)).not.toContain('CONCESSIO');
+    expect(text).toContain('CONCESSION ALLOWS');
+    expect(text).toContain('Use for 12 V test benches only');
+    expect(text).toContain('Approved by:');
+    const overlaps: string[] = [];
+    for (let i = 0; i < words.length; i++) {
+      for (let j = i + 1; j < words.length; j++) {
+        const a = words[i];
+        const b = words[j];
+        const dx = Math.min(a.x1, b.x1) - Math.max(a.x0, b.x0);
+        const dy = Math.min(a.y1, b.y1) - Math.max(a.y0, b.y0);
+        if (dx > 0.5 && dy > 0.5) overlaps.push(`${a.text} / ${b.text}`);
+      }
+    }
+    expect(overlaps).toEqual([]);
+  });
+
   it('prints any script in the evidence pack', async () => {
     const pdf = await evidencePackPdf({
       number: 'RTV-0001',
+      documentNumber: 'RTV-0001-EP1',
+      issuedAt: new Date('2026-11-04T09:00:00Z'),
+      paper: 'A4',
       supplier: CYRILLIC,
-      status: 'draft',
+      status: 'Draft: not yet sent to the supplier',
       rmaNumber: GREEK,
-      createdAt: new Date('2026-11-03T14:05:00Z'),
-      chargeback: [`Lot 1: ${POLISH}`],
+      raisedAt: new Date('2026-11-03T14:05:00Z'),
+      supplierNote: `${POLISH}`,
+      chargeback: [['Other', `EUR 10.00, ${POLISH}`]],
+      total: 'EUR 10.00',
       lots: [
         {
           title: `Lot 1 · ${POLISH}`,
+          facts: [['PO', 'PO-1']],
           plan: 'S-3, AQL 2.5, code letter D, 8 units',
           counts: '8 of 8 units tested, 1 nonconforming',
-          decision: `reject by Ωμέγα Δοκιμή`,
+          decision: `Rejected by Ωμέγα Δοκιμή`,
           sections: [],
+          disagreements: [],
+          consequences: [],
           readings: [
             {
-              unit: 1,
+              id: 1,
+              unit: 'Unit 1',
               conductor: 'power',
-              method: 'diameter',
-              inputs: 'd = 5.19 mm',
-              areaMm2: 21.15,
-              expandedUMm2: 0.24,
-              areaRatio: 1,
+              label: '4 AWG',
+              method: 'Solid diameter',
+              inputs: 'diameter 5.19 mm',
+              instruments: '',
+              result: '21.15 ± 0.24 mm²',
+              coverage: 'k = 2',
+              ofNominal: '100.0 %',
               measuresAs: '4 AWG',
               material: 'copper',
               verdict: 'conforms',
               voided: false,
+              voidReason: null,
+              confirmedUnusual: false,
+              takenAt: '2026-11-03 14:05 UTC',
+              reasons: [],
+              budget: [],
+              budgetSummary: '',
             },
           ],
           thumbnails: [],
@@ -168,7 +216,7 @@ describe('documents in any script', () => {
       cautions: [],
     });
     const text = pdfText(pdf);
-    for (const want of [`Evidence pack · ${CYRILLIC}`, GREEK, POLISH, 'Ωμέγα Δοκιμή', '4 AWG']) {
+    for (const want of [`Evidence pack for ${CYRILLIC}`, GREEK, POLISH, 'Ωμέγα Δοκιμή', '4 AWG']) {
       expect(text).toContain(want);
     }
   });

@@ -1,3 +1,6 @@
+import { execFileSync } from 'node:child_process';
+import { writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Fixtures, rejectedLot } from './helpers/decision-fixtures';
@@ -92,6 +95,12 @@ describe('e-mail through a real MailDev', () => {
       names.find((n) => n.endsWith('.pdf'))!,
     );
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
+    // The pack says the notice went out, not "draft": the return is marked before it is built.
+    const file = join(t.dir, 'mailed-evidence.pdf');
+    writeFileSync(file, pdf);
+    const text = execFileSync('pdftotext', [file, '-']).toString().replace(/\s+/g, ' ');
+    expect(text).toMatch(/Status: Notice e-mailed \d{4}-\d\d-\d\d \d\d:\d\d UTC/);
+    expect(text).not.toContain('Draft');
     const timeline = await t.http
       .get(`/api/lots/${lot.id}/timeline`)
       .set(auth(await t.token(DEMO.buyer)));

@@ -6,6 +6,7 @@ import type { Response } from 'superagent';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Jimp } from 'jimp';
 import { AuditEvent } from '../src/audit/entities/audit-event.entity';
+import { Decision } from '../src/decisions/entities/decision.entity';
 import { Photo } from '../src/photos/entities/photo.entity';
 import { StorageService } from '../src/storage/storage.service';
 import { User } from '../src/users/entities/user.entity';
@@ -431,7 +432,19 @@ describe('a return id in the path', () => {
 });
 
 describe('GET /api/returns/:id/evidence.pdf', () => {
-  it('holds the plan, counts, readings with uncertainty, drawings, photos, decision, chargeback and caution', async () => {
+  const pdfOf = async (id: number, query = '') => {
+    const res = await t.http
+      .get(`/api/returns/${id}/evidence.pdf${query}`)
+      .set(auth(buyer))
+      .buffer(true)
+      .parse(collect);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('application/pdf');
+    return res.body as Buffer;
+  };
+  const textOf = (pdf: Buffer) => pdfTool('pdftotext', pdf, ['-layout']).replace(/\s+/g, ' ');
+
+  it('is written for the supplier: one size per reading, inputs in words, U at GUM precision, budgets, metals, photos, plan, decision, chargeback with currency', async () => {
     const { lots, ncrs } = await supplierWithRejects('Meadowlark Wire Goods');
     const image = new Jimp({ width: 64, height: 48, color: 0xb87333ff });
     const storage = t.app.get(StorageService);
@@ -450,39 +463,82 @@ describe('GET /api/returns/:id/evidence.pdf', () => {
       uploadedBy: await em.findOneOrFail(User, { email: DEMO.clerk }),
     });
     await em.flush();
+    // The QA lead's own reason: internal until purchasing shares it.
+    await em.nativeUpdate(
+      Decision,
+      { lot: lots[0].id },
+      { reason: 'Internal: third short lot this quarter' },
+    );
     const ret = (
-      await createReturn([lots[0].id], { costs: { inspectionHours: 1, hourlyRate: 40 } })
+      await createReturn([lots[0].id], {
+        costs: { inspectionHours: 1, hourlyRate: 40 },
+        currency: 'EUR',
+        supplierNote: 'The power conductor is 8 AWG where the label says 4 AWG.',
+      })
     ).body;
-    const res = await t.http
-      .get(`/api/returns/${ret.id}/evidence.pdf`)
-      .set(auth(buyer))
-      .buffer(true)
-      .parse(collect);
-    expect(res.status).toBe(200);
-    expect(res.headers['content-type']).toBe('application/pdf');
-    const text = pdfTool('pdftotext', res.body as Buffer, ['-layout']).replace(/\s+/g, ' ');
+    const pdf = await pdfOf(ret.id);
+    const text = textOf(pdf);
+    const plan = lots[0].samplingPlan;
     for (const want of [
       `Return to vendor ${ret.number}`,
-      'Meadowlark Wire Goods',
+      `Evidence pack for Meadowlark Wire Goods`,
+      `${ret.number}-EP`, // the document's own number
+      'Issued:',
+      'Status: Draft: not yet sent to the supplier',
+      'Note to the supplier',
+      'The power conductor is 8 AWG where the label says 4 AWG.',
+      // The chargeback with its ISO 4217 currency
+      '1 h × EUR 40.00 = EUR 40.00',
+      'Total chargeback: EUR 40.00',
+      `PO: ${lots[0].poNumber}`,
       'AQL 2.5',
-      `Reject: ${lots[0].samplingPlan.sampleSize} of ${lots[0].samplingPlan.sampleSize} units tested, 2 nonconforming`,
-      `rejected by`,
+      'ANSI/ASQ Z1.4',
+      `Reject: ${plan.sampleSize} of ${plan.sampleSize} units tested, 2 nonconforming`,
+      `Rejected by`,
       ncrs[0],
       'Every reading, with its expanded uncertainty',
-      '± 0.24',
-      '8 AWG',
+      // One size name per reading: the drawing and the table say the same
       'Label 4 AWG',
-      'Total chargeback: 40.00',
+      'Measures as 8 AWG',
+      // Inputs in words with units, U to two significant figures (GUM 7.2.6)
+      'mass 38.08 g, length 500 mm', // the fixture's 8.4 mm² × 8.89 g/cm³ × 0.5 m × 1.02
+      '8.40 ± 0.24 mm² (k = 2)',
+      '39.7 %',
+      // The metal palette's legend
+      'Copper-clad aluminium',
+      'Metal not identified',
+      'Uncertainty budget of each reading',
+      'mass: resolution',
+      'GUM F.2.2.1',
       'Cut end of unit 1, power',
       "defer to local codes, the equipment maker's instructions and licensed practice",
     ]) {
       expect(text).toContain(want);
     }
-    const images = pdfTool('pdfimages', res.body as Buffer, ['-list']);
+    expect(text).not.toContain('massG');
+    expect(text).not.toContain('± 0.00 ');
+    expect(text).not.toContain('Measured 8.4');
+    expect(text).not.toContain('Internal: third short lot');
+    const images = pdfTool('pdfimages', pdf, ['-list']);
     expect(
       images.split('\n').filter((l) => /^\s+\d+\s+\d+\s+image/.test(l)).length,
     ).toBeGreaterThanOrEqual(1);
-    if (process.env.KEEP_PACK) writeFileSync(process.env.KEEP_PACK, res.body as Buffer);
+    expect(pdfTool('pdfinfo', pdf)).toMatch(/Page size:\s+595\.\d+ x 841\.\d+ pts \(A4\)/);
+    if (process.env.KEEP_PACK) writeFileSync(process.env.KEEP_PACK, pdf);
+
+    // Purchasing shares the QA lead's reason; US Letter on request.
+    const shared = await t.http
+      .patch(`/api/returns/${ret.id}`)
+      .set(auth(buyer))
+      .send({ version: ret.version, shareDecisionReason: true });
+    expect(shared.status, JSON.stringify(shared.body)).toBe(200);
+    const letter = await pdfOf(ret.id, '?paper=letter');
+    expect(textOf(letter)).toContain('Reason: Internal: third short lot this quarter');
+    expect(pdfTool('pdfinfo', letter)).toMatch(/Page size:\s+612 x 792 pts \(letter\)/);
+    if (process.env.KEEP_PACK) writeFileSync(`${process.env.KEEP_PACK}.letter.pdf`, letter);
+    const bad = await t.http.get(`/api/returns/${ret.id}/evidence.pdf?paper=a3`).set(auth(buyer));
+    expect(bad.status).toBe(400);
+    expect(bad.body.errors).toEqual([{ field: 'paper', message: 'paper must be a4 or letter' }]);
   });
 });
 

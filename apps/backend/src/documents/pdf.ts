@@ -95,10 +95,14 @@ export function fitText(
   const font = o.bold ? FONT.bold : FONT.body;
   const minSize = o.minSize ?? Math.min(o.size, 6);
   doc.font(font).fillColor(o.colour ?? COLOURS.ink);
+  // The longest word must fit on a line too: pdfkit breaks a word wider than the box inside
+  // it ("CONCESSIO / N" on the tag), which reads as two words.
+  const words = text.split(/\s+/).filter(Boolean);
   let size = o.size;
   for (; size > minSize; size = Math.max(minSize, size - 0.5)) {
     doc.fontSize(size);
-    if (doc.heightOfString(text, { width, lineGap: 0 }) <= height) break;
+    const widest = Math.max(0, ...words.map((w) => doc.widthOfString(w)));
+    if (widest <= width && doc.heightOfString(text, { width, lineGap: 0 }) <= height) break;
   }
   doc.fontSize(size);
   doc.text(text, x, y, { width, height, ellipsis: true, lineGap: 0, align: o.align ?? 'left' });

@@ -1,23 +1,131 @@
 import { Injectable, Logger } from '@nestjs/common';
-import { INSTALLER_CAUTIONS, largestSizeReached } from '@gaugeproof/standards';
+import {
+  formatPercent,
+  formatWithUncertainty,
+  INSTALLER_CAUTIONS,
+  SAMPLING_PLAN_NAME,
+  type BudgetComponent,
+  type InstallerConsequence,
+} from '@gaugeproof/standards';
 import { Readable } from 'node:stream';
-import type { CrossSection } from '../documents/cross-section';
-import { evidencePackPdf, type EvidenceLot } from '../documents/evidence-pack';
+import { inputsInWords, materialWords, methodWords } from '../common/reading-words';
+import { drawnMetal, type CrossSection } from '../documents/cross-section';
+import {
+  evidencePackPdf,
+  type EvidenceBudgetLine,
+  type EvidenceLot,
+  type EvidenceReading,
+  type Paper,
+} from '../documents/evidence-pack';
+import { paperDate } from '../documents/pdf';
+import { coverageFactorOf } from '../exports/readings-csv';
+import type { InstrumentSnapshot, Reading } from '../inspection/entities/reading.entity';
+import { disagreementOf } from '../inspection/views';
 import { StorageService } from '../storage/storage.service';
 import type { VendorReturn } from './entities/vendor-return.entity';
 import { ReadingsExportService } from '../exports/readings-export.service';
+import { money } from './return-money';
 import { ReturnEvidence, type LotEvidence } from './return-evidence';
 
 const OUTCOME: Record<string, string> = {
-  accept: 'accepted',
-  accept_on_concession: 'accepted on concession',
-  reject: 'rejected',
+  accept: 'Accepted',
+  accept_on_concession: 'Accepted on concession',
+  reject: 'Rejected',
 };
 
 async function toBuffer(stream: Readable): Promise<Buffer> {
   const parts: Buffer[] = [];
   for await (const c of stream) parts.push(Buffer.isBuffer(c) ? c : Buffer.from(c as string));
   return Buffer.concat(parts);
+}
+
+/** The return's status as the supplier reads it: never "draft" once the notice has left. */
+export function statusWords(ret: VendorReturn): string {
+  switch (ret.status) {
+    case 'draft':
+      return 'Draft: not yet sent to the supplier';
+    case 'emailed':
+      return `Notice e-mailed ${paperDate(ret.emailedAt)}`;
+    case 'shipped':
+      return `Goods shipped ${ret.shippedOn ?? ''}${ret.carrier ? ` by ${ret.carrier}` : ''}${ret.trackingNumber ? `, tracking ${ret.trackingNumber}` : ''}`;
+    case 'acknowledged':
+      return `Acknowledged by the supplier ${paperDate(ret.acknowledgedAt)}`;
+    case 'credited':
+      return `Credited${ret.creditNoteNumber ? `, credit note ${ret.creditNoteNumber}` : ''}`;
+    case 'closed':
+      return `Closed ${paperDate(ret.closedAt)}`;
+    case 'cancelled':
+      return `Cancelled ${paperDate(ret.cancelledAt)}`;
+    default:
+      return ret.status;
+  }
+}
+
+const unitOf = (r: Reading) => r.sample.unitRef ?? `Unit ${r.sample.seq}`;
+/** Two significant figures, the trade's minus sign. */
+const sig2 = (v: number) => (v === 0 ? '0' : Number(v.toPrecision(2)).toString().replace('-', '−'));
+const full = (v: number) => Number(v.toPrecision(6)).toString().replace('-', '−');
+
+function budgetLine(b: BudgetComponent): EvidenceBudgetLine {
+  // A dimensionless input (a factor) has unit '1': printed without one.
+  const unit = b.unit && b.unit !== '1' ? ` ${b.unit}` : '';
+  return {
+    name: b.name,
+    value: `${full(b.value)}${unit}`,
+    u: `${sig2(b.standardUncertainty)}${unit}`,
+    sensitivity: full(b.sensitivity),
+    share: `${sig2(b.relativeContribution * 100)} %`,
+    note:
+      b.degreesOfFreedom !== undefined ? `${b.note}; ν = ${b.degreesOfFreedom} (Type A)` : b.note,
+  };
+}
+
+function instrumentsText(list: readonly InstrumentSnapshot[]): string {
+  return list
+    .map((i) => `${i.name} (${i.serial}), calibration due ${i.calibrationDueOn}`)
+    .join('; ');
+}
+
+/** A reading as the evidence pack prints it: one size name, inputs in words, full budget. */
+export function evidenceReading(r: Reading): EvidenceReading {
+  const result = r.result as {
+    budget?: BudgetComponent[];
+    reasons?: string[];
+    coverageFactor?: number;
+    effectiveDegreesOfFreedom?: number | null;
+    note?: string;
+  };
+  const k = result.coverageFactor ?? coverageFactorOf(r.uMm2, r.expandedUMm2) ?? 2;
+  const dof = result.effectiveDegreesOfFreedom;
+  const rel = r.areaMm2 > 0 ? r.uMm2 / r.areaMm2 : 0;
+  return {
+    id: r.id,
+    unit: unitOf(r),
+    conductor: r.sample.conductor.purpose,
+    label: r.sample.conductor.gaugeLabel,
+    method: methodWords(r.method, r.fourWire),
+    inputs: inputsInWords(r.inputs),
+    instruments: instrumentsText(r.instruments ?? []),
+    result: formatWithUncertainty(r.areaMm2, r.expandedUMm2, 'mm²'),
+    coverage: `k = ${k}`,
+    ofNominal: formatPercent(r.areaRatio),
+    measuresAs: r.measuresAs,
+    material: materialWords(r.identifiedMaterial),
+    verdict: r.verdict,
+    voided: r.voided,
+    voidReason: r.voidReason,
+    confirmedUnusual: r.confirmedUnusual,
+    takenAt: paperDate(r.takenAt),
+    reasons: result.reasons ?? [],
+    budget: (result.budget ?? []).map(budgetLine),
+    budgetSummary: [
+      `Combined relative standard uncertainty ${sig2(rel * 100)} %`,
+      `U = k·u = ${sig2(r.expandedUMm2)} mm² with k = ${k}${dof ? ` (ν_eff = ${Math.floor(dof)}, Welch–Satterthwaite, GUM G.4.1)` : ''}.`,
+      result.note ?? '',
+    ]
+      .filter(Boolean)
+      .join('; '),
+  };
 }
 
 /** The smallest live reading per conductor (the worst unit), drawn against the label. */
@@ -27,17 +135,52 @@ function sections(e: LotEvidence): CrossSection[] {
     .filter((c) => c.active)
     .map((c) => {
       const live = e.readings.filter((r) => !r.voided && r.sample.conductor.id === c.id);
-      const smallest = live.length ? Math.min(...live.map((r) => r.areaMm2)) : null;
-      const reached = smallest ? largestSizeReached(smallest, c.gaugeSystem) : null;
+      const worst = live.length ? live.reduce((a, b) => (b.areaMm2 < a.areaMm2 ? b : a)) : null;
       return {
-        title: `${c.purpose} conductor, smallest of ${live.length} reading(s)`,
+        title: `${c.purpose} conductor ${c.gaugeLabel}: smallest of ${live.length} reading(s)${worst ? `, ${unitOf(worst)}` : ''}`,
         labelText: c.gaugeLabel,
+        claimedMetal: drawnMetal(c.claimedMaterial),
         nominalAreaMm2: c.nominalAreaMm2,
-        measuredAreaMm2: smallest,
-        measuresAs: smallest ? (reached?.gauge.label ?? 'below the smallest size') : null,
-        minAreaRatio: e.lot.product.minAreaRatio,
+        measuredAreaMm2: worst?.areaMm2 ?? null,
+        measuredText: worst
+          ? formatWithUncertainty(worst.areaMm2, worst.expandedUMm2, 'mm²')
+          : null,
+        measuresAs: worst?.measuresAs ?? null,
+        foundMetal: drawnMetal(worst?.identifiedMaterial),
+        ratioText: worst
+          ? `${formatPercent(worst.areaRatio)} of the ${c.gaugeLabel} nominal area`
+          : null,
+        failing: worst?.verdict === 'nonconforming',
       };
     });
+}
+
+/** Samples whose readings disagree by more than their combined U, in words. */
+function disagreements(e: LotEvidence): string[] {
+  const bySample = new Map<number, Reading[]>();
+  for (const r of e.readings) {
+    const list = bySample.get(r.sample.id) ?? [];
+    list.push(r);
+    bySample.set(r.sample.id, list);
+  }
+  const out: string[] = [];
+  for (const list of bySample.values()) {
+    const d = disagreementOf(list);
+    if (d) out.push(`${unitOf(list[0])}, ${list[0].sample.conductor.purpose}: ${d.message}`);
+  }
+  return out;
+}
+
+/** The installer's consequence of each conductor's worst nonconforming reading, once each. */
+function consequences(e: LotEvidence): string[] {
+  const out = new Set<string>();
+  for (const r of e.readings) {
+    if (r.voided || r.verdict !== 'nonconforming') continue;
+    const c = (r.result as { consequence?: InstallerConsequence | null }).consequence;
+    if (c?.text)
+      out.add(`${r.sample.conductor.purpose} ${r.sample.conductor.gaugeLabel}: ${c.text}`);
+  }
+  return [...out];
 }
 
 /** The return's CSV and evidence pack, from the same evidence. */
@@ -81,49 +224,59 @@ export class ReturnDocuments {
     return out;
   }
 
-  async pdf(ret: VendorReturn): Promise<Buffer> {
+  async pdf(ret: VendorReturn, paper: Paper = 'A4'): Promise<Buffer> {
     const lots: EvidenceLot[] = [];
     for (const e of await this.evidence.lots(ret)) {
       const p = e.lot.samplingPlan;
       const last = e.decisions.at(-1);
+      // The QA lead's reason is internal unless purchasing ticked "share decision reason".
+      const reason =
+        last && ret.shareDecisionReason && last.reason ? ` Reason: ${last.reason}` : '';
       lots.push({
-        title: `Lot ${e.lot.id} · PO ${e.lot.poNumber} · ${e.lot.product.sku} · ${e.lot.quantity} ${e.lot.unit}`,
-        plan: `${p.severity} inspection, level ${p.level}, AQL ${p.aql}, code ${p.codeLetter}: ${p.sampleSize} units, accept ${p.accept}, reject ${p.reject} (ISO 2859-1)`,
+        title: `Lot ${e.lot.id} · ${e.lot.product.sku}`,
+        facts: [
+          ['PO', e.lot.poNumber],
+          ['Your lot code', e.lot.supplierLotCode ?? '—'],
+          ['Packing slip', e.lot.packingSlip ?? '—'],
+          ['Received', paperDate(e.lot.receivedAt)],
+          ['Quantity', `${e.lot.quantity} ${e.lot.unit}`],
+          ['NCR', last?.ncrNumber ?? '—'],
+          ['Product', e.lot.product.description],
+          ['Supplier', e.lot.supplier.name],
+        ],
+        plan: `${p.severity} inspection, level ${p.level}, AQL ${p.aql}, code letter ${p.codeLetter}: ${p.sampleSize} units, accept at ${p.accept} nonconforming, reject at ${p.reject} (${SAMPLING_PLAN_NAME}).`,
         counts: e.evaluation.message,
         decision: last
-          ? `${OUTCOME[last.outcome]} by ${last.decidedBy.name}, ${last.decidedAt.toISOString().slice(0, 10)}${last.ncrNumber ? `, ${last.ncrNumber}` : ''}. Reason: ${last.reason || '(followed the recommendation)'}`
+          ? `${OUTCOME[last.outcome]} by ${last.decidedBy.name} on ${paperDate(last.decidedAt)}${last.ncrNumber ? `, ${last.ncrNumber}` : ''}.${reason}`
           : 'not decided',
         sections: sections(e),
-        readings: e.readings.map((r) => ({
-          unit: r.sample.seq,
-          conductor: r.sample.conductor.purpose,
-          method: r.method,
-          inputs: Object.entries(r.inputs)
-            .map(([k, v]) => `${k} ${v}`)
-            .join(', '),
-          areaMm2: r.areaMm2,
-          expandedUMm2: r.expandedUMm2,
-          areaRatio: r.areaRatio,
-          measuresAs: r.measuresAs,
-          material: r.identifiedMaterial,
-          verdict: r.verdict,
-          voided: r.voided,
-        })),
+        disagreements: disagreements(e),
+        consequences: consequences(e),
+        readings: e.readings.map(evidenceReading),
         thumbnails: await this.thumbnails(e),
       });
     }
     const c = ret.costs;
+    const m = (amount: number) => money(amount, ret.currency);
+    const hours = c.inspectionHours ?? 0;
+    const rate = c.hourlyRate ?? 0;
     return evidencePackPdf({
       number: ret.number,
+      documentNumber: `${ret.number}-EP${ret.version}`,
+      issuedAt: new Date(),
+      paper,
       supplier: `${ret.supplier.name} (${ret.supplier.code})`,
-      status: ret.status,
+      status: statusWords(ret),
       rmaNumber: ret.rmaNumber,
-      createdAt: ret.createdAt,
+      raisedAt: ret.createdAt,
+      supplierNote: ret.supplierNote,
       chargeback: [
-        `Inspection: ${c.inspectionHours ?? 0} h × ${(c.hourlyRate ?? 0).toFixed(2)} = ${((c.inspectionHours ?? 0) * (c.hourlyRate ?? 0)).toFixed(2)}`,
-        `Freight: ${(c.freight ?? 0).toFixed(2)}    Other: ${(c.other ?? 0).toFixed(2)}`,
-        `Total chargeback: ${ret.chargebackTotal.toFixed(2)}`,
+        ['Inspection', `${hours} h × ${m(rate)} = ${m(hours * rate)}`],
+        ['Freight', m(c.freight ?? 0)],
+        ['Other', m(c.other ?? 0)],
+        ['Currency', `${ret.currency} (ISO 4217)`],
       ],
+      total: m(ret.chargebackTotal),
       lots,
       cautions: INSTALLER_CAUTIONS,
     });

@@ -19,14 +19,13 @@ import { EmailReturnDto } from './dto/email-return.dto';
 import { VendorReturn as VendorReturnEntity } from './entities/vendor-return.entity';
 import type { VendorReturn } from './entities/vendor-return.entity';
 import { ReturnDocuments } from './return-documents';
+import { money } from './return-money';
 import { ReturnsService, type ReturnRef } from './returns.service';
 
 const RELATED = 'vendor_return';
 
-/** An amount with its ISO 4217 code, e.g. "EUR 1,234.50". */
-export function money(amount: number, currency: string): string {
-  return `${currency} ${amount.toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 })}`;
-}
+// The evidence pack prints amounts the same way.
+export { money };
 
 /** E-mails a return to the supplier with its CSV and evidence pack attached. */
 @Injectable()

@@ -15,6 +15,7 @@ import type { RequestUser } from '../auth/request-user';
 import { attachmentName, CSV_CONTENT_TYPE, csvStream } from '../common/csv';
 import { CreateReturnDto } from './dto/create-return.dto';
 import { EmailReturnDto } from './dto/email-return.dto';
+import { EvidenceQueryDto } from './dto/evidence-query.dto';
 import { ListReturnsDto } from './dto/list-returns.dto';
 import {
   AcknowledgeReturnDto,
@@ -149,9 +150,13 @@ export class ReturnsController {
 
   @Get(':id/evidence.pdf')
   @ApiProduces('application/pdf')
-  async evidence(@Param('id', IdPipe) id: number, @CurrentUser() actor: RequestUser) {
+  async evidence(
+    @Param('id', IdPipe) id: number,
+    @Query() q: EvidenceQueryDto,
+    @CurrentUser() actor: RequestUser,
+  ) {
     const ret = await this.returns.loadForDocuments(id);
-    const pdf = await this.documents.pdf(ret);
+    const pdf = await this.documents.pdf(ret, q.paper === 'letter' ? 'LETTER' : 'A4');
     await this.mail.recordExport(refOf(ret), 'evidence pack', actor);
     return new StreamableFile(pdf, {
       type: 'application/pdf',

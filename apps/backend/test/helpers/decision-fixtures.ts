@@ -1,5 +1,5 @@
 import { EntityManager, MikroORM } from '@mikro-orm/core';
-import { samplingPlan, type Severity } from '@gaugeproof/standards';
+import { areaFromMass, samplingPlan, type Severity } from '@gaugeproof/standards';
 import { Reading, type Verdict } from '../../src/inspection/entities/reading.entity';
 import { Sample } from '../../src/inspection/entities/sample.entity';
 import { Lot, type LotStatus } from '../../src/lots/entities/lot.entity';
@@ -153,10 +153,18 @@ export async function rejectedLot(t: TestApp, fx: Fixtures, productId: number, p
 /** A mass reading whose result suits its verdict (8.4 mm² measures as 8 AWG). */
 function reading(sample: Sample, takenBy: User, verdict: Verdict) {
   const areaMm2 = verdict === 'nonconforming' ? 8.4 : verdict === 'inconclusive' ? 20.8 : 21.3;
+  const inputs = { massG: Math.round(areaMm2 * 8.89 * 0.5 * 1.02 * 100) / 100, lengthMm: 500 };
+  // The budget the standards library gives for these inputs (0.01 g balance, 1 mm rule).
+  const budget = areaFromMass({
+    ...inputs,
+    material: 'copper',
+    massResolutionG: 0.01,
+    lengthResolutionMm: 1,
+  }).budget;
   return {
     sample,
     method: 'mass' as const,
-    inputs: { massG: Math.round(areaMm2 * 8.89 * 0.5 * 1.02 * 100) / 100, lengthMm: 500 },
+    inputs,
     areaMm2,
     uMm2: 0.12,
     expandedUMm2: 0.24,
@@ -165,7 +173,11 @@ function reading(sample: Sample, takenBy: User, verdict: Verdict) {
       verdict === 'nonconforming' ? '8 AWG' : verdict === 'inconclusive' ? '6 AWG' : '4 AWG',
     identifiedMaterial: 'copper',
     verdict,
-    result: { reasons: [] },
+    result: {
+      reasons: [`Measures as ${verdict === 'nonconforming' ? '8 AWG' : '4 AWG'} (fixture).`],
+      budget,
+      coverageFactor: 2,
+    },
     takenBy,
   };
 }
