@@ -121,6 +121,15 @@ export function ReturnDetail({ ret }: { ret: VendorReturn }) {
           Download evidence pack (PDF)
         </Button>
         <Button
+          variant="text"
+          href={`/api/returns/${ret.id}/evidence.pdf?paper=letter`}
+          target="_blank"
+          rel="noopener"
+          aria-label="Download evidence pack on US Letter paper"
+        >
+          US Letter
+        </Button>
+        <Button
           variant="contained"
           startIcon={<MailOutlined />}
           disabled={!returnEditable(ret.status)}
