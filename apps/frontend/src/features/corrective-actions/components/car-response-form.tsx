@@ -1,13 +1,14 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Alert, Button, Stack, TextField } from '@mui/material';
+import { Button, Stack } from '@mui/material';
 import { useForm } from 'react-hook-form';
+import { FormTextField } from '@/components/form/form-text-field';
+import { ServerErrorAlert, submitWithServerErrors } from '@/components/form/server-errors';
 import {
   responseSchema,
   useUpdateCorrectiveAction,
   type ResponseInput,
 } from '@/features/corrective-actions/api/update-corrective-action';
 import type { CorrectiveAction } from '@/features/corrective-actions/types';
-import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 
 const FIELDS = ['containment', 'rootCause', 'correctiveAction'] as const;
@@ -38,43 +39,33 @@ export function CarResponseForm({ car }: { car: CorrectiveAction }) {
       correctiveAction: car.correctiveAction ?? '',
     },
   });
-  const { errors, isSubmitting } = form.formState;
-  const formErrors = update.isError ? splitServerErrors(update.error, FIELDS).formErrors : [];
 
-  const onSubmit = form.handleSubmit(async (input) => {
-    try {
-      const saved = await update.mutateAsync({
-        id: car.id,
-        patch: { ...input, version: car.version, status: 'responded' },
-      });
-      toasts.success(`The supplier's response to ${saved.number} is recorded.`);
-    } catch (error) {
-      const { fieldErrors } = splitServerErrors(error, FIELDS);
-      for (const f of FIELDS) {
-        const message = fieldErrors[f];
-        if (message) form.setError(f, { type: 'server', message });
-      }
-    }
+  const onSubmit = submitWithServerErrors(form, FIELDS, async (input) => {
+    const saved = await update.mutateAsync({
+      id: car.id,
+      patch: { ...input, version: car.version, status: 'responded' },
+    });
+    toasts.success(`The supplier's response to ${saved.number} is recorded.`);
   });
 
   return (
     <form noValidate onSubmit={onSubmit} aria-label="Supplier response">
       <Stack spacing={2}>
-        {formErrors.length > 0 && <Alert severity="error">{formErrors.join(' ')}</Alert>}
+        <ServerErrorAlert error={update.error} fields={FIELDS} />
         {FIELDS.map((f) => (
-          <TextField
+          <FormTextField
             key={f}
+            control={form.control}
+            name={f}
             label={LABELS[f].label}
             required
             multiline
             minRows={2}
-            error={!!errors[f]}
-            helperText={errors[f]?.message ?? LABELS[f].hint}
-            {...form.register(f)}
+            helperText={LABELS[f].hint}
           />
         ))}
         <div>
-          <Button type="submit" variant="contained" loading={isSubmitting}>
+          <Button type="submit" variant="contained" loading={form.formState.isSubmitting}>
             Record the response
           </Button>
         </div>

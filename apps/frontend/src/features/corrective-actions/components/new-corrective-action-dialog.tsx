@@ -1,16 +1,9 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import {
-  Alert,
-  Button,
-  Dialog,
-  DialogActions,
-  DialogContent,
-  DialogTitle,
-  Stack,
-  TextField,
-} from '@mui/material';
+import { Button, Dialog, DialogActions, DialogContent, DialogTitle, Stack } from '@mui/material';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { useNavigate } from 'react-router';
+import { FormTextField } from '@/components/form/form-text-field';
+import { ServerErrorAlert, submitWithServerErrors } from '@/components/form/server-errors';
 import { paths } from '@/config/paths';
 import {
   createCorrectiveActionSchema,
@@ -20,7 +13,6 @@ import {
 import { SupplierLotsPicker } from '@/features/corrective-actions/components/supplier-lots-picker';
 import { SupplierSelect } from '@/components/supplier-select/supplier-select';
 import { todayIso } from '@/lib/dates';
-import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 
 const FIELDS = ['supplierId', 'lotIds', 'problem', 'dueOn'] as const;
@@ -33,23 +25,13 @@ export function NewCorrectiveActionDialog({ onClose }: { onClose: () => void }) 
     mode: 'onChange',
     defaultValues: { supplierId: 0, lotIds: [], problem: '', dueOn: '' },
   });
-  const { errors, isSubmitting } = form.formState;
   const supplierId = useWatch({ control: form.control, name: 'supplierId' });
-  const formErrors = create.isError ? splitServerErrors(create.error, FIELDS).formErrors : [];
 
-  const onSubmit = form.handleSubmit(async (input) => {
-    try {
-      const created = await create.mutateAsync(input);
-      toasts.success(`${created.number} is open; the response is due ${created.dueOn}.`);
-      onClose();
-      void navigate(paths.correctiveActionDetail.getHref(created.id));
-    } catch (error) {
-      const { fieldErrors } = splitServerErrors(error, FIELDS);
-      for (const f of FIELDS) {
-        const message = fieldErrors[f];
-        if (message) form.setError(f, { type: 'server', message });
-      }
-    }
+  const onSubmit = submitWithServerErrors(form, FIELDS, async (input) => {
+    const created = await create.mutateAsync(input);
+    toasts.success(`${created.number} is open; the response is due ${created.dueOn}.`);
+    onClose();
+    void navigate(paths.correctiveActionDetail.getHref(created.id));
   });
 
   return (
@@ -58,7 +40,7 @@ export function NewCorrectiveActionDialog({ onClose }: { onClose: () => void }) 
         <DialogTitle>New corrective action request (SCAR)</DialogTitle>
         <DialogContent>
           <Stack spacing={2} sx={{ pt: 1 }}>
-            {formErrors.length > 0 && <Alert severity="error">{formErrors.join(' ')}</Alert>}
+            <ServerErrorAlert error={create.error} fields={FIELDS} />
             <Controller
               control={form.control}
               name="supplierId"
@@ -86,33 +68,30 @@ export function NewCorrectiveActionDialog({ onClose }: { onClose: () => void }) 
                 />
               )}
             />
-            <TextField
+            <FormTextField
+              control={form.control}
+              name="problem"
               label="Problem"
               required
               multiline
               minRows={3}
-              error={!!errors.problem}
-              helperText={
-                errors.problem?.message ??
-                'What was found, on which lots, and what the supplier must answer.'
-              }
-              {...form.register('problem')}
+              helperText="What was found, on which lots, and what the supplier must answer."
             />
-            <TextField
+            <FormTextField
+              control={form.control}
+              name="dueOn"
               label="Response due on"
               type="date"
               required
               slotProps={{ inputLabel: { shrink: true }, htmlInput: { min: todayIso() } }}
-              error={!!errors.dueOn}
-              helperText={errors.dueOn?.message ?? ' '}
+              helperText=" "
               sx={{ maxWidth: 240 }}
-              {...form.register('dueOn')}
             />
           </Stack>
         </DialogContent>
         <DialogActions>
           <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="contained" loading={isSubmitting}>
+          <Button type="submit" variant="contained" loading={form.formState.isSubmitting}>
             Raise the request
           </Button>
         </DialogActions>
