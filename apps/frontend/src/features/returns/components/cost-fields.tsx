@@ -1,35 +1,42 @@
-import { InputAdornment, Stack, TextField, Typography } from '@mui/material';
-import type { FieldError, UseFormRegisterReturn } from 'react-hook-form';
-import { costsFromForm, type CostsForm } from '@/features/returns/api/cost-schema';
+import { InputAdornment, Stack, Typography } from '@mui/material';
+import type { Control, FieldValues, Path } from 'react-hook-form';
+import { FormTextField } from '@/components/form/form-text-field';
+import { COST_FIELDS, costsFromForm, type CostsForm } from '@/features/returns/api/cost-schema';
 import { chargebackTotal, formatMoney } from '@/features/returns/lib/chargeback';
 
 type CostName = keyof CostsForm;
 
-interface CostFieldsProps {
+/** The cost fields' paths in a form holding `costs`, where the server's messages land. */
+export const COST_PATHS = COST_FIELDS.map((name) => `costs.${name}` as const);
+
+interface CostFieldsProps<T extends FieldValues & { costs: CostsForm }, O> {
+  control: Control<T, unknown, O>;
   /** The form's current costs (watched), for the live total. */
   costs: CostsForm;
   /** ISO 4217 code of the amounts; a new return takes the server's default. */
   currency?: string;
-  register: (name: CostName) => UseFormRegisterReturn;
-  errors: Partial<Record<CostName, FieldError>> | undefined;
 }
 
 /** The chargeback's parts with the total worked out as they are typed. */
-export function CostFields({ costs, currency, register, errors }: CostFieldsProps) {
+export function CostFields<T extends FieldValues & { costs: CostsForm }, O>({
+  control,
+  costs,
+  currency,
+}: CostFieldsProps<T, O>) {
   const total = chargebackTotal(costsFromForm(costs));
   const field = (name: CostName, label: string, unit?: string) => (
-    <TextField
+    <FormTextField
+      control={control}
+      name={`costs.${name}` as Path<T>}
       label={label}
       inputMode="decimal"
-      error={!!errors?.[name]}
-      helperText={errors?.[name]?.message ?? ' '}
+      helperText=" "
       slotProps={
         unit
           ? { input: { endAdornment: <InputAdornment position="end">{unit}</InputAdornment> } }
           : undefined
       }
       sx={{ flex: 1, minWidth: 130 }}
-      {...register(name)}
     />
   );
   return (

@@ -1,20 +1,21 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Alert, Button, Checkbox, FormControlLabel, Stack, TextField } from '@mui/material';
+import { Alert, Button, Checkbox, FormControlLabel, Stack } from '@mui/material';
 import { Controller, useForm, useWatch } from 'react-hook-form';
+import { FormTextField } from '@/components/form/form-text-field';
+import { ServerErrorAlert, submitWithServerErrors } from '@/components/form/server-errors';
 import { costsFromForm, costsToForm } from '@/features/returns/api/cost-schema';
 import {
   editReturnSchema,
   useUpdateReturn,
   type EditReturnForm,
 } from '@/features/returns/api/update-return';
-import { CostFields } from '@/features/returns/components/cost-fields';
+import { COST_PATHS, CostFields } from '@/features/returns/components/cost-fields';
 import { draftOnly } from '@/features/returns/lib/return-steps';
 import type { VendorReturn } from '@/features/returns/types';
 import { isApiError } from '@/lib/api-client';
-import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 
-const FIELDS = ['rmaNumber', 'notes', 'supplierNote', 'currency', 'costs'] as const;
+const FIELDS = ['rmaNumber', 'notes', 'supplierNote', 'currency', ...COST_PATHS] as const;
 
 const formOf = (r: VendorReturn): EditReturnForm => ({
   rmaNumber: r.rmaNumber ?? '',
@@ -37,13 +38,12 @@ export function EditReturnForm({ ret }: { ret: VendorReturn }) {
     mode: 'onChange',
     defaultValues: formOf(ret),
   });
-  const { errors, isSubmitting, isDirty } = form.formState;
+  const { isSubmitting, isDirty } = form.formState;
   const costs = useWatch({ control: form.control, name: 'costs' });
   const currency = useWatch({ control: form.control, name: 'currency' });
-  const serverErrors = update.isError ? splitServerErrors(update.error, FIELDS) : null;
   const stale = update.isError && isApiError(update.error) && update.error.status === 409;
 
-  const onSubmit = form.handleSubmit(async (input) => {
+  const onSubmit = submitWithServerErrors(form, FIELDS, async (input) => {
     try {
       const saved = await update.mutateAsync({
         id: ret.id,
@@ -65,10 +65,7 @@ export function EditReturnForm({ ret }: { ret: VendorReturn }) {
       const body = isApiError(error) && error.status === 409 ? error.body : null;
       const current = (body as { current?: VendorReturn } | null)?.current;
       if (current) form.reset(formOf(current));
-      const { fieldErrors } = splitServerErrors(error, FIELDS);
-      for (const f of ['rmaNumber', 'notes', 'supplierNote', 'currency'] as const) {
-        if (fieldErrors[f]) form.setError(f, { type: 'server', message: fieldErrors[f] });
-      }
+      throw error;
     }
   });
 
@@ -81,27 +78,16 @@ export function EditReturnForm({ ret }: { ret: VendorReturn }) {
             saved, make them again.
           </Alert>
         ) : (
-          serverErrors &&
-          serverErrors.formErrors.length > 0 && (
-            <Alert severity="error">{serverErrors.formErrors.join(' ')}</Alert>
-          )
+          <ServerErrorAlert error={update.error} fields={FIELDS} />
         )}
-        <TextField
-          label="Supplier RMA number"
-          error={!!errors.rmaNumber}
-          helperText={errors.rmaNumber?.message}
-          {...form.register('rmaNumber')}
-        />
-        <TextField
+        <FormTextField control={form.control} name="rmaNumber" label="Supplier RMA number" />
+        <FormTextField
+          control={form.control}
+          name="supplierNote"
           label="Note to the supplier"
           multiline
           minRows={2}
-          error={!!errors.supplierNote}
-          helperText={
-            errors.supplierNote?.message ??
-            'Goes into the e-mail and the evidence pack: why the goods come back.'
-          }
-          {...form.register('supplierNote')}
+          helperText="Goes into the e-mail and the evidence pack: why the goods come back."
         />
         <Controller
           control={form.control}
@@ -118,29 +104,28 @@ export function EditReturnForm({ ret }: { ret: VendorReturn }) {
             />
           )}
         />
-        <TextField
+        <FormTextField
+          control={form.control}
+          name="notes"
           label="Internal notes"
           multiline
           minRows={2}
-          error={!!errors.notes}
-          helperText={errors.notes?.message ?? 'Stay inside the company; never sent.'}
-          {...form.register('notes')}
+          helperText="Stay inside the company; never sent."
         />
         {draft && (
           <>
-            <TextField
+            <FormTextField
+              control={form.control}
+              name="currency"
               label="Currency"
               sx={{ maxWidth: 160 }}
               slotProps={{ htmlInput: { maxLength: 3, style: { textTransform: 'uppercase' } } }}
-              error={!!errors.currency}
-              helperText={errors.currency?.message ?? 'ISO 4217 code'}
-              {...form.register('currency')}
+              helperText="ISO 4217 code"
             />
             <CostFields
+              control={form.control}
               costs={costs}
               currency={/^[A-Za-z]{3}$/.test(currency) ? currency.toUpperCase() : undefined}
-              register={(name) => form.register(`costs.${name}`)}
-              errors={errors.costs}
             />
           </>
         )}

@@ -1,16 +1,9 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import {
-  Alert,
-  Button,
-  Dialog,
-  DialogActions,
-  DialogContent,
-  DialogTitle,
-  Stack,
-  TextField,
-} from '@mui/material';
+import { Button, Dialog, DialogActions, DialogContent, DialogTitle, Stack } from '@mui/material';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { useNavigate } from 'react-router';
+import { FormTextField } from '@/components/form/form-text-field';
+import { ServerErrorAlert, submitWithServerErrors } from '@/components/form/server-errors';
 import { paths } from '@/config/paths';
 import { emptyCosts } from '@/features/returns/api/cost-schema';
 import {
@@ -18,13 +11,12 @@ import {
   useCreateReturn,
   type CreateReturnForm,
 } from '@/features/returns/api/create-return';
-import { CostFields } from '@/features/returns/components/cost-fields';
+import { COST_PATHS, CostFields } from '@/features/returns/components/cost-fields';
 import { ReturnableLotsPicker } from '@/features/returns/components/returnable-lots-picker';
 import { SupplierSelect } from '@/components/supplier-select/supplier-select';
-import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 
-const FIELDS = ['lotIds', 'rmaNumber', 'notes', 'costs'] as const;
+const FIELDS = ['lotIds', 'rmaNumber', 'notes', ...COST_PATHS] as const;
 
 interface NewReturnDialogProps {
   onClose: () => void;
@@ -46,25 +38,14 @@ export function NewReturnDialog({ onClose, initial }: NewReturnDialogProps) {
       costs: emptyCosts,
     },
   });
-  const { errors, isSubmitting } = form.formState;
   const costs = useWatch({ control: form.control, name: 'costs' });
   const supplierId = useWatch({ control: form.control, name: 'supplierId' });
-  const serverErrors = create.isError ? splitServerErrors(create.error, FIELDS) : null;
 
-  const onSubmit = form.handleSubmit(async (input) => {
-    try {
-      const created = await create.mutateAsync(input);
-      toasts.success(`Return ${created.number} is raised as a draft.`);
-      onClose();
-      void navigate(paths.returnDetail.getHref(created.id));
-    } catch (error) {
-      const { fieldErrors } = splitServerErrors(error, FIELDS);
-      if (fieldErrors.rmaNumber)
-        form.setError('rmaNumber', { type: 'server', message: fieldErrors.rmaNumber });
-      if (fieldErrors.notes) form.setError('notes', { type: 'server', message: fieldErrors.notes });
-      if (fieldErrors.lotIds)
-        form.setError('lotIds', { type: 'server', message: fieldErrors.lotIds });
-    }
+  const onSubmit = submitWithServerErrors(form, FIELDS, async (input) => {
+    const created = await create.mutateAsync(input);
+    toasts.success(`Return ${created.number} is raised as a draft.`);
+    onClose();
+    void navigate(paths.returnDetail.getHref(created.id));
   });
 
   return (
@@ -73,9 +54,7 @@ export function NewReturnDialog({ onClose, initial }: NewReturnDialogProps) {
         <DialogTitle>New return to vendor</DialogTitle>
         <DialogContent>
           <Stack spacing={2} sx={{ pt: 1 }}>
-            {serverErrors && serverErrors.formErrors.length > 0 && (
-              <Alert severity="error">{serverErrors.formErrors.join(' ')}</Alert>
-            )}
+            <ServerErrorAlert error={create.error} fields={FIELDS} />
             <Controller
               control={form.control}
               name="supplierId"
@@ -103,30 +82,24 @@ export function NewReturnDialog({ onClose, initial }: NewReturnDialogProps) {
                 />
               )}
             />
-            <TextField
+            <FormTextField
+              control={form.control}
+              name="rmaNumber"
               label="Supplier RMA number (optional)"
-              error={!!errors.rmaNumber}
-              helperText={errors.rmaNumber?.message}
-              {...form.register('rmaNumber')}
             />
-            <TextField
+            <FormTextField
+              control={form.control}
+              name="notes"
               label="Notes (optional)"
               multiline
               minRows={2}
-              error={!!errors.notes}
-              helperText={errors.notes?.message}
-              {...form.register('notes')}
             />
-            <CostFields
-              costs={costs}
-              register={(name) => form.register(`costs.${name}`)}
-              errors={errors.costs}
-            />
+            <CostFields control={form.control} costs={costs} />
           </Stack>
         </DialogContent>
         <DialogActions>
           <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="contained" loading={isSubmitting}>
+          <Button type="submit" variant="contained" loading={form.formState.isSubmitting}>
             Raise the return
           </Button>
         </DialogActions>
