@@ -1,6 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Alert, Button, Stack, TextField } from '@mui/material';
+import { Alert, Button, Stack } from '@mui/material';
 import { useForm } from 'react-hook-form';
+import { FormTextField } from '@/components/form/form-text-field';
 import { loginSchema, useLogin, type LoginInput } from '@/features/auth/api/login';
 import type { SessionUser } from '@/features/auth/types';
 import { isApiError } from '@/lib/api-client';
@@ -14,12 +15,11 @@ export function signInErrorMessage(error: unknown): string {
 
 export function SignInForm({ onSignedIn }: { onSignedIn?: (user: SessionUser) => void }) {
   const login = useLogin();
-  const { register, handleSubmit, formState } = useForm<LoginInput>({
+  const { control, handleSubmit } = useForm<LoginInput>({
     resolver: zodResolver(loginSchema),
     mode: 'onTouched',
     defaultValues: { email: '', password: '' },
   });
-  const { errors } = formState;
 
   const onSubmit = handleSubmit((input) =>
     login.mutate(input, { onSuccess: ({ user }) => onSignedIn?.(user) }),
@@ -32,22 +32,20 @@ export function SignInForm({ onSignedIn }: { onSignedIn?: (user: SessionUser) =>
           {signInErrorMessage(login.error)}
         </Alert>
       )}
-      <TextField
+      <FormTextField
+        control={control}
+        name="email"
         label="E-mail"
         type="email"
         autoComplete="username"
         autoFocus
-        error={Boolean(errors.email)}
-        helperText={errors.email?.message}
-        {...register('email')}
       />
-      <TextField
+      <FormTextField
+        control={control}
+        name="password"
         label="Password"
         type="password"
         autoComplete="current-password"
-        error={Boolean(errors.password)}
-        helperText={errors.password?.message}
-        {...register('password')}
       />
       <Button
         type="submit"

@@ -8,7 +8,6 @@ import {
   DialogContentText,
   DialogTitle,
   Stack,
-  TextField,
 } from '@mui/material';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
@@ -21,9 +20,11 @@ import {
 import { formatMoney } from '@/features/returns/lib/chargeback';
 import type { ReturnStep } from '@/features/returns/lib/return-steps';
 import type { VendorReturn } from '@/features/returns/types';
+import { FormTextField } from '@/components/form/form-text-field';
+import { submitWithServerErrors } from '@/components/form/server-errors';
 import { todayIso } from '@/lib/dates';
-import { errorMessage } from '@/lib/query-client';
 import { splitServerErrors } from '@/lib/server-field-errors';
+import { errorMessage } from '@/lib/query-client';
 import { toasts } from '@/lib/toast-store';
 
 type DialogStep = Extract<ReturnStep, 'ship' | 'credit' | 'cancel'>;
@@ -102,28 +103,14 @@ export function ReturnStepDialog({
     defaultValues: defaults(step, ret),
   });
   const fields = fieldsOf(step, ret);
+  const names = fields.map((f) => f.name);
   const { errors, isSubmitting } = form.formState;
-  const formErrors = take.isError
-    ? splitServerErrors(
-        take.error,
-        fields.map((f) => f.name),
-      ).formErrors
-    : [];
+  const formErrors = take.isError ? splitServerErrors(take.error, names).formErrors : [];
 
-  const onSubmit = form.handleSubmit(async (body) => {
-    try {
-      const saved = await take.mutateAsync({ id: ret.id, step, version: ret.version, body });
-      toasts.success(`Return ${saved.number}: ${titles[step].toLowerCase()} — done.`);
-      onClose();
-    } catch (error) {
-      const { fieldErrors } = splitServerErrors(
-        error,
-        fields.map((f) => f.name),
-      );
-      for (const f of fields)
-        if (fieldErrors[f.name])
-          form.setError(f.name, { type: 'server', message: fieldErrors[f.name] });
-    }
+  const onSubmit = submitWithServerErrors(form, names, async (body) => {
+    const saved = await take.mutateAsync({ id: ret.id, step, version: ret.version, body });
+    toasts.success(`Return ${saved.number}: ${titles[step].toLowerCase()} — done.`);
+    onClose();
   });
 
   return (
@@ -144,16 +131,16 @@ export function ReturnStepDialog({
               <Alert severity="error">{errorMessage(take.error)}</Alert>
             )}
             {fields.map((f) => (
-              <TextField
+              <FormTextField
                 key={f.name}
+                control={form.control}
+                name={f.name}
                 label={f.label}
                 type={f.type ?? 'text'}
                 multiline={f.multiline}
                 minRows={f.multiline ? 3 : undefined}
                 slotProps={f.type === 'date' ? { inputLabel: { shrink: true } } : undefined}
-                error={!!errors[f.name]}
-                helperText={errors[f.name]?.message ?? f.helper}
-                {...form.register(f.name)}
+                helperText={f.helper}
               />
             ))}
           </Stack>
