@@ -197,7 +197,7 @@ function ReturnNotice({ token, r }: { token: string; r: PortalReturn }) {
           For {r.supplier.name}
           {r.emailedOn ? ` · sent ${r.emailedOn}` : ''}
           {r.rmaNumber ? ` · your RMA ${r.rmaNumber}` : ''} · this link works until{' '}
-          {r.linkExpiresAt.slice(0, 10)}
+          {isoDayOf(r.linkExpiresAt)}
         </Typography>
       </div>
       <Card>
