@@ -1,16 +1,7 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '@/lib/api-client';
+import { useQuery } from '@tanstack/react-query';
 import type { TimelineEvent } from '@/features/audit/types';
-import { queryKeys } from '@/lib/query-keys';
+import { lotTimelineQueryOptions } from '@/lib/lots-api';
 
 // Under ['lots'] so that whatever refreshes a lot refreshes its timeline too.
-export const getLotTimeline = (lotId: number, signal?: AbortSignal) =>
-  api.get<TimelineEvent[]>(`/lots/${lotId}/timeline`, signal);
-
-export const lotTimelineQueryOptions = (lotId: number) =>
-  queryOptions({
-    queryKey: queryKeys.lots.timeline(lotId),
-    queryFn: ({ signal }) => getLotTimeline(lotId, signal),
-  });
-
-export const useLotTimeline = (lotId: number) => useQuery(lotTimelineQueryOptions(lotId));
+export const useLotTimeline = (lotId: number) =>
+  useQuery(lotTimelineQueryOptions<TimelineEvent>(lotId));

@@ -1,7 +1,5 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '@/lib/api-client';
-import type { Page } from '@/features/corrective-actions/types';
-import { queryKeys } from '@/lib/query-keys';
+import { useQuery } from '@tanstack/react-query';
+import { lotsQueryOptions } from '@/lib/lots-api';
 
 export interface SupplierLot {
   id: number;
@@ -12,16 +10,14 @@ export interface SupplierLot {
 }
 
 /** The supplier's decided lots (the ones a corrective action is about), newest first. */
-const DECIDED = 'rejected,accepted_on_concession,returned,accepted';
+const DECIDED = ['rejected', 'accepted_on_concession', 'returned', 'accepted'];
 
 export const supplierLotsQueryOptions = (supplierId: number) =>
-  queryOptions({
-    queryKey: queryKeys.lots.list({ supplierId, status: DECIDED, pageSize: 100 }),
-    queryFn: ({ signal }) =>
-      api.get<Page<SupplierLot>>(
-        `/lots?supplierId=${supplierId}&status=${DECIDED}&pageSize=100&sort=receivedAt:desc`,
-        signal,
-      ),
+  lotsQueryOptions<SupplierLot>({
+    supplierId,
+    status: DECIDED,
+    pageSize: 100,
+    sort: 'receivedAt:desc',
   });
 
 export const useSupplierLots = (supplierId: number | null) =>

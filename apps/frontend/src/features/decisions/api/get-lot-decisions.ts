@@ -1,19 +1,15 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '@/lib/api-client';
+import { useQuery } from '@tanstack/react-query';
 import type { Decision } from '@/features/decisions/types';
-import { queryKeys } from '@/lib/query-keys';
+import { lotQueryOptions } from '@/lib/lots-api';
 
 interface LotWithDecisions {
   id: number;
   decisions: Decision[];
 }
 
-// The same request and key as the Lot page's detail: one cache entry, read for its decisions.
-export const lotDecisionsQueryOptions = (lotId: number) =>
-  queryOptions({
-    queryKey: queryKeys.lots.detail(lotId),
-    queryFn: ({ signal }) => api.get<LotWithDecisions>(`/lots/${lotId}`, signal),
-    select: (lot: LotWithDecisions) => lot.decisions ?? [],
+// The Lot page's own request and cache entry (lib/lots-api.ts), read for its decisions.
+export const useLotDecisions = (lotId: number) =>
+  useQuery({
+    ...lotQueryOptions<LotWithDecisions>(lotId),
+    select: (lot) => lot.decisions ?? [],
   });
-
-export const useLotDecisions = (lotId: number) => useQuery(lotDecisionsQueryOptions(lotId));

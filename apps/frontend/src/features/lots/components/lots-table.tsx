@@ -8,7 +8,7 @@ import { paths } from '@/config/paths';
 import { useLots } from '@/features/lots/api/get-lots';
 import { LotStatusChip } from '@/features/lots/components/lot-status-chip';
 import { LOT_FILTERS, LotsFilters, parseStatuses } from '@/features/lots/components/lots-filters';
-import type { LotListParams } from '@/features/lots/lib/lot-query';
+import type { LotListParams } from '@/lib/lots-api';
 import type { LotSummary } from '@/features/lots/types';
 import { formatDate } from '@/lib/dates';
 

@@ -1,7 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '@/lib/api-client';
 import { getReturns } from '@/features/returns/api/get-returns';
-import type { Page } from '@/features/returns/types';
+import { getLots } from '@/lib/lots-api';
 import { queryKeys } from '@/lib/query-keys';
 
 export interface ReturnableLot {
@@ -19,8 +18,8 @@ export interface ReturnableLot {
  */
 export async function getReturnableLots(supplierId: number, signal?: AbortSignal) {
   const [lots, open] = await Promise.all([
-    api.get<Page<ReturnableLot>>(
-      `/lots?status=rejected&supplierId=${supplierId}&pageSize=100&sort=receivedAt:asc`,
+    getLots<ReturnableLot>(
+      { status: ['rejected'], supplierId, pageSize: 100, sort: 'receivedAt:asc' },
       signal,
     ),
     getReturns({ supplierId: String(supplierId), status: 'draft', pageSize: '100' }, signal),
