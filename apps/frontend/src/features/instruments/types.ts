@@ -31,14 +31,7 @@ export interface Instrument {
   calibrationUncertainty: number | null;
 }
 
-export const kindLabels: Record<InstrumentKind, string> = {
-  balance: 'Balance',
-  micrometer: 'Micrometer',
-  caliper: 'Caliper',
-  length_rule: 'Length rule',
-  milliohm_meter: 'Milliohm meter',
-  thermometer: 'Thermometer',
-};
+export { instrumentKindLabels as kindLabels } from '@/lib/labels';
 
 export const unitLabels: Record<ResolutionUnit, string> = {
   g: 'g',

@@ -48,25 +48,8 @@ export interface Product {
 
 export const kindLabels: Record<ProductKind, string> = { spool: 'Spool', kit: 'Wiring kit' };
 
-export const purposeLabels: Record<ConductorPurpose, string> = {
-  power: 'Power',
-  ground: 'Ground',
-  remote: 'Remote turn-on',
-  speaker: 'Speaker',
-  other: 'Other',
-};
-
-export const materialLabels: Record<ClaimedMaterial, string> = {
-  copper: 'Copper',
-  tinned_copper: 'Tinned copper',
-  cca10: 'CCA class 10A',
-  cca15: 'CCA class 15A',
-  aluminium: 'Aluminium',
-};
-
-export const severityLabels: Record<InspectionSeverity, string> = {
-  normal: 'Normal inspection',
-  tightened: 'Tightened inspection',
-  reduced: 'Reduced inspection',
-  discontinued: 'Inspection discontinued',
-};
+export {
+  conductorPurposeLabels as purposeLabels,
+  claimedMaterialLabels as materialLabels,
+  inspectionSeverityLabels as severityLabels,
+} from '@/lib/labels';

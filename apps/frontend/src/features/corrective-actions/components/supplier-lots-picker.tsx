@@ -8,6 +8,7 @@ import {
   Typography,
 } from '@mui/material';
 import { useSupplierLots } from '@/features/corrective-actions/api/get-supplier-lots';
+import { inSentence, labelOf, lotStatusLabels } from '@/lib/labels';
 import { errorMessage } from '@/lib/query-client';
 
 interface SupplierLotsPickerProps {
@@ -51,7 +52,7 @@ export function SupplierLotsPicker({
                 onChange={(e) => toggle(lot.id, e.target.checked)}
               />
             }
-            label={`Lot ${lot.id} · PO ${lot.poNumber} · ${lot.product.sku} · ${lot.status.replace(/_/g, ' ')}`}
+            label={`Lot ${lot.id} · PO ${lot.poNumber} · ${lot.product.sku} · ${inSentence(labelOf(lotStatusLabels, lot.status))}`}
           />
         ))}
       </FormGroup>

@@ -18,10 +18,10 @@ import { SwitchingNoticeView } from '@/features/decisions/components/switching-n
 import { decisionConflict } from '@/features/decisions/lib/conflict';
 import type { DecidableLot, DecisionResult } from '@/features/decisions/types';
 import { splitServerErrors } from '@/lib/server-field-errors';
+import { inSentence, labelOf, lotStatusLabels } from '@/lib/labels';
 import { queryKeys } from '@/lib/query-keys';
 
 const DECIDABLE = ['awaiting_decision', 'accepted', 'accepted_on_concession', 'rejected'];
-const words = (status: string) => status.replace(/_/g, ' ');
 
 /** The QA lead's decision on a lot, with what it did to the switching state. */
 /** Shown to QA leads and admins only; the server checks the role again. */
@@ -104,8 +104,8 @@ export function DecisionPanel({ lot, meId }: { lot: DecidableLot; meId: number }
               }
             >
               <AlertTitle>Someone decided this lot first</AlertTitle>
-              The lot is now {words(conflict.status)} (version {conflict.version}). Reload to see
-              their decision before you decide again.
+              The lot is now {inSentence(labelOf(lotStatusLabels, conflict.status))} (version{' '}
+              {conflict.version}). Reload to see their decision before you decide again.
             </Alert>
           )}
           {DECIDABLE.includes(lot.status) && !conflict && (!decided || revising) && (

@@ -15,7 +15,11 @@ import { AddSampleButton } from '@/features/inspection/components/add-sample-but
 import { ConductorCaution } from '@/features/inspection/components/conductor-caution';
 import { SamplePanel } from '@/features/inspection/components/sample-panel';
 import { UnitGrid } from '@/features/inspection/components/unit-grid';
-import { conductorLabel, materialLabels, needsCaution } from '@/features/inspection/lib/labels';
+import {
+  claimedMaterialText,
+  conductorLabel,
+  needsCaution,
+} from '@/features/inspection/lib/labels';
 import type { Conductor, Instrument, Sample, Reading } from '@/features/inspection/types';
 import { useUnits } from '@/lib/units';
 
@@ -76,7 +80,7 @@ export function ConductorSection(props: ConductorSectionProps) {
                 {label}
               </Typography>
               <Typography color="text.secondary">
-                Sold as {materialLabels[conductor.claimedMaterial]}
+                Sold as {claimedMaterialText(conductor.claimedMaterial)}
                 {conductor.claimedStrands ? `, ${conductor.claimedStrands} strands` : ''} · nominal{' '}
                 {formatAreaMm2(conductor.nominalAreaMm2)} · {samples.length} of {props.plannedUnits}{' '}
                 units cut

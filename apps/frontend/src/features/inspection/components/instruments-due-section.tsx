@@ -12,16 +12,8 @@ import {
   Typography,
 } from '@mui/material';
 import { useInstruments } from '@/features/inspection/api/get-instruments';
+import { instrumentKindLabels, labelOf } from '@/lib/labels';
 import { errorMessage } from '@/lib/query-client';
-
-const kindLabels: Record<string, string> = {
-  balance: 'Balance',
-  micrometer: 'Micrometer',
-  caliper: 'Caliper',
-  length_rule: 'Length rule',
-  milliohm_meter: 'Milliohm meter',
-  thermometer: 'Thermometer',
-};
 
 /** Instruments due for calibration within 14 days or overdue: readings with an overdue one are refused. */
 export function InstrumentsDueSection() {
@@ -68,7 +60,7 @@ export function InstrumentsDueSection() {
               <ListItem key={i.id} disableGutters>
                 <ListItemText
                   primary={`${i.name} (${i.serial})`}
-                  secondary={`${kindLabels[i.kind] ?? i.kind} · due ${i.calibrationDueOn}`}
+                  secondary={`${labelOf(instrumentKindLabels, i.kind)} · due ${i.calibrationDueOn}`}
                 />
                 <Chip
                   size="small"

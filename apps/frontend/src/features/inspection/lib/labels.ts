@@ -6,14 +6,11 @@ import type {
   ReadingMethod,
   SampleVerdict,
 } from '@/features/inspection/types';
+import { claimedMaterialLabels, conductorPurposeLabels, inSentence } from '@/lib/labels';
 
-export const materialLabels: Record<ClaimedMaterial, string> = {
-  copper: 'copper',
-  tinned_copper: 'tinned copper',
-  cca10: 'CCA (10 % copper)',
-  cca15: 'CCA (15 % copper)',
-  aluminium: 'aluminium',
-};
+/** The claimed material inside a sentence ("Sold as copper"). */
+export const claimedMaterialText = (material: ClaimedMaterial): string =>
+  inSentence(claimedMaterialLabels[material]);
 
 export const identifiedLabels: Record<IdentifiedMaterial, string> = {
   copper: 'copper',
@@ -44,15 +41,8 @@ export const verdictColours: Record<SampleVerdict, 'success' | 'error' | 'warnin
   untested: 'default',
 };
 
-const purposeLabels: Record<Conductor['purpose'], string> = {
-  power: 'Power',
-  ground: 'Ground',
-  remote: 'Remote turn-on',
-  speaker: 'Speaker',
-  other: 'Other',
-};
-
-export const conductorLabel = (c: Conductor): string => `${purposeLabels[c.purpose]} ${c.gauge}`;
+export const conductorLabel = (c: Conductor): string =>
+  `${conductorPurposeLabels[c.purpose]} ${c.gauge}`;
 
 const COPPER: readonly ClaimedMaterial[] = ['copper', 'tinned_copper'];
 export const isCopperClaim = (material: ClaimedMaterial): boolean => COPPER.includes(material);

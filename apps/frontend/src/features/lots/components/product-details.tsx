@@ -1,13 +1,6 @@
 import { Alert, Chip, Stack, Typography } from '@mui/material';
-import type { ClaimedMaterial, ProductOption } from '@/features/lots/types';
-
-export const materialLabels: Record<ClaimedMaterial, string> = {
-  copper: 'copper',
-  tinned_copper: 'tinned copper',
-  cca10: 'CCA (10 % copper)',
-  cca15: 'CCA (15 % copper)',
-  aluminium: 'aluminium',
-};
+import type { ProductOption } from '@/features/lots/types';
+import { claimedMaterialLabels, inSentence } from '@/lib/labels';
 
 /** The conductors the label promises and the inspection policy the plan comes from. */
 export function ProductDetails({ product }: { product: ProductOption }) {
@@ -24,7 +17,7 @@ export function ProductDetails({ product }: { product: ProductOption }) {
           <Chip
             key={c.id}
             variant="outlined"
-            label={`${c.purpose}: ${c.gauge} ${materialLabels[c.claimedMaterial]}${c.claimedStrands ? `, ${c.claimedStrands} strands` : ''}`}
+            label={`${c.purpose}: ${c.gauge} ${inSentence(claimedMaterialLabels[c.claimedMaterial])}${c.claimedStrands ? `, ${c.claimedStrands} strands` : ''}`}
           />
         ))}
       </Stack>

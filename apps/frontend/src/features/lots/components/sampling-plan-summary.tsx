@@ -1,12 +1,7 @@
 import { Alert, Chip, Stack, Typography } from '@mui/material';
 import { cutInstruction } from '@/features/lots/lib/plan-preview';
 import type { SamplingPlan } from '@/features/lots/types';
-
-const severityLabels: Record<SamplingPlan['severity'], string> = {
-  normal: 'Normal inspection',
-  tightened: 'Tightened inspection',
-  reduced: 'Reduced inspection',
-};
+import { inspectionSeverityLabels } from '@/lib/labels';
 
 interface SamplingPlanSummaryProps {
   plan: SamplingPlan;
@@ -36,7 +31,7 @@ export function SamplingPlanSummary({ plan, unit }: SamplingPlanSummaryProps) {
         />
         <Chip
           size="small"
-          label={severityLabels[plan.severity]}
+          label={inspectionSeverityLabels[plan.severity]}
           color={plan.severity === 'tightened' ? 'warning' : 'default'}
         />
         <Chip size="small" variant="outlined" label={`Level ${plan.level} · AQL ${plan.aql}`} />

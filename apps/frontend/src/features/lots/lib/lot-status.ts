@@ -1,14 +1,6 @@
 import type { LotStatus } from '@/features/lots/types';
 
-export const lotStatusLabels: Record<LotStatus, string> = {
-  on_hold: 'On hold',
-  inspecting: 'Inspecting',
-  awaiting_decision: 'Awaiting decision',
-  accepted: 'Accepted',
-  accepted_on_concession: 'Accepted on concession',
-  rejected: 'Rejected',
-  returned: 'Returned',
-};
+export { lotStatusLabels } from '@/lib/labels';
 
 export type StatusColour = 'default' | 'info' | 'warning' | 'success' | 'error' | 'secondary';
 

@@ -33,6 +33,7 @@ import { returnStatusLabels, type VendorReturn } from '@/features/returns/types'
 import { errorMessage } from '@/lib/query-client';
 import { toasts } from '@/lib/toast-store';
 import { formatCalendarDate, formatDate } from '@/lib/dates';
+import { inSentence, labelOf, lotStatusLabels } from '@/lib/labels';
 
 /** One return to vendor: its lots, status, costs, documents and the e-mail to the supplier. */
 export function ReturnDetail({ ret }: { ret: VendorReturn }) {
@@ -169,7 +170,7 @@ export function ReturnDetail({ ret }: { ret: VendorReturn }) {
                       Lot {lot.id} · PO {lot.poNumber}
                     </Link>
                   }
-                  secondary={`${lot.quantity} ${lot.unit} · ${lot.status.replace(/_/g, ' ')}`}
+                  secondary={`${lot.quantity} ${lot.unit} · ${inSentence(labelOf(lotStatusLabels, lot.status))}`}
                 />
               </ListItem>
             ))}

@@ -1,6 +1,6 @@
 import { BarChart } from '@mui/x-charts/BarChart';
 import { purposeSeries } from '@/features/scorecards/lib/chart-data';
-import { purposeLabels } from '@/features/scorecards/lib/format';
+import { conductorPurposeLabels, labelOf } from '@/lib/labels';
 import type { PurposeCount } from '@/features/scorecards/types';
 
 /** Tested samples per conductor purpose, nonconforming stacked on conforming. */
@@ -21,7 +21,7 @@ export function PurposeChart({
         {
           scaleType: 'band',
           data: s.purposes,
-          valueFormatter: (p: string) => purposeLabels[p] ?? p,
+          valueFormatter: (p: string) => labelOf(conductorPurposeLabels, p),
           width: 110,
         },
       ]}

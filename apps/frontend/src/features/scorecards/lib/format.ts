@@ -19,11 +19,3 @@ export const formatWhole = (value: number | null) => (value === null ? NONE : wh
 export const formatMoney = (value: number) => money.format(value);
 export const formatDays = (value: number | null) =>
   value === null ? NONE : `${value.toFixed(1)} d`;
-
-export const purposeLabels: Record<string, string> = {
-  power: 'Power',
-  ground: 'Ground',
-  remote: 'Remote turn-on',
-  speaker: 'Speaker',
-  other: 'Other',
-};
