@@ -29,6 +29,7 @@ export const queryKeys = {
   lots: {
     ...lots,
     timeline: (lotId: number) => [...lots.all, 'timeline', lotId] as const,
+    concessions: (lotId: number) => [...lots.all, 'concessions', lotId] as const,
   },
   products: {
     ...products,
@@ -49,6 +50,7 @@ export const queryKeys = {
     ...returns,
     returnableLots: (supplierId: number) =>
       [...returns.all, 'returnable-lots', supplierId] as const,
+    unreturnedLots: () => [...returns.all, 'lots', 'unreturned'] as const,
   },
   messages: resource('messages'),
   scorecards: {

@@ -1,5 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { queryKeys } from '@/lib/query-keys';
 
 /** GET /api/lots/:id/concessions, newest first. */
 export interface Concession {
@@ -23,11 +24,9 @@ export interface Concession {
   version: number;
 }
 
-const key = (lotId: number) => ['lots', 'concessions', lotId] as const;
-
 export const lotConcessionsQueryOptions = (lotId: number) =>
   queryOptions({
-    queryKey: key(lotId),
+    queryKey: queryKeys.lots.concessions(lotId),
     queryFn: ({ signal }) => api.get<Concession[]>(`/lots/${lotId}/concessions`, signal),
   });
 
@@ -43,6 +42,6 @@ export function useReviewConcession(action: 'approve' | 'refuse') {
         note: note?.trim() || undefined,
       }),
     meta: { inlineErrors: true },
-    onSettled: () => client.invalidateQueries({ queryKey: ['lots'] }),
+    onSettled: () => client.invalidateQueries({ queryKey: queryKeys.lots.all }),
   });
 }

@@ -5,9 +5,8 @@ import {
   useReviewConcession,
   type Concession,
 } from '@/features/decisions/api/concessions';
+import { isoDayOf } from '@/lib/dates';
 import { errorMessage } from '@/lib/query-client';
-
-const day = (iso: string) => iso.slice(0, 10);
 
 /** The terms in one line: what for, how much, until when. */
 export function concessionTerms(c: Concession): string {
@@ -27,8 +26,8 @@ function Pending({ c, meId }: { c: Concession; meId: number }) {
       <AlertTitle>Concession waiting for a second approval</AlertTitle>
       <Stack spacing={1}>
         <Typography variant="body2">
-          {c.requestedBy.name} asked on {day(c.requestedAt)} to accept this lot against its reject
-          recommendation. {concessionTerms(c)}.
+          {c.requestedBy.name} asked on {isoDayOf(c.requestedAt)} to accept this lot against its
+          reject recommendation. {concessionTerms(c)}.
         </Typography>
         <Typography variant="body2">Reason: {c.reason}</Typography>
         <Typography variant="body2">
@@ -107,7 +106,7 @@ export function ConcessionCard({ lotId, meId }: { lotId: number; meId: number })
             {inForce.expired ? 'Concession expired' : 'Accepted on concession'}
           </AlertTitle>
           {concessionTerms(inForce)}. Approved by {inForce.reviewedBy?.name ?? '—'}
-          {inForce.reviewedAt ? ` on ${day(inForce.reviewedAt)}` : ''}
+          {inForce.reviewedAt ? ` on ${isoDayOf(inForce.reviewedAt)}` : ''}
           {inForce.needsSecondApproval ? ` (asked by ${inForce.requestedBy.name})` : ''}.
         </Alert>
       )}

@@ -1,5 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { queryKeys } from '@/lib/query-keys';
 
 /** GET /api/returns/unreturned-lots: rejected lots on no return yet, oldest rejection first. */
 export interface UnreturnedLot {
@@ -17,7 +18,7 @@ export interface UnreturnedLot {
 export const unreturnedLotsQueryOptions = () =>
   queryOptions({
     // Under 'returns' and 'lots' both: a new return and a new decision refresh it.
-    queryKey: ['returns', 'lots', 'unreturned'],
+    queryKey: queryKeys.returns.unreturnedLots(),
     queryFn: ({ signal }) =>
       api.get<{ items: UnreturnedLot[]; more: boolean }>('/returns/unreturned-lots', signal),
   });
