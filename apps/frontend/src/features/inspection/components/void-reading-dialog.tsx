@@ -7,9 +7,9 @@ import {
   DialogContent,
   DialogContentText,
   DialogTitle,
-  TextField,
 } from '@mui/material';
 import { useForm } from 'react-hook-form';
+import { FormTextField } from '@/components/form/form-text-field';
 import {
   useVoidReading,
   voidReadingSchema,
@@ -31,7 +31,7 @@ export function VoidReadingDialog({ readingId, onClose }: VoidReadingDialogProps
     mode: 'onChange',
     defaultValues: { reason: '' },
   });
-  const { errors, isSubmitting } = form.formState;
+  const { isSubmitting } = form.formState;
 
   const close = () => {
     form.reset({ reason: '' });
@@ -60,17 +60,15 @@ export function VoidReadingDialog({ readingId, onClose }: VoidReadingDialogProps
             verdict.
           </DialogContentText>
           {voidReading.isError && <Alert severity="error">{errorMessage(voidReading.error)}</Alert>}
-          <TextField
+          <FormTextField
+            control={form.control}
+            name="reason"
             label="Reason"
             multiline
             minRows={2}
             fullWidth
             autoFocus
-            error={!!errors.reason}
-            helperText={
-              errors.reason?.message ?? 'For example: length mis-typed, sample not fully stripped.'
-            }
-            {...form.register('reason')}
+            helperText="For example: length mis-typed, sample not fully stripped."
           />
         </DialogContent>
         <DialogActions>

@@ -1,6 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Button, ButtonGroup, Stack, TextField } from '@mui/material';
+import { Button, ButtonGroup, Stack } from '@mui/material';
 import { useForm } from 'react-hook-form';
+import { FormTextField } from '@/components/form/form-text-field';
 import {
   dateRangeSchema,
   presetOf,
@@ -24,7 +25,6 @@ export function DateRangePicker({ value, onChange }: DateRangePickerProps) {
     mode: 'onChange',
     values: value,
   });
-  const { errors } = form.formState;
 
   // Applied from the inputs' own change events, not an effect, so a preset chosen
   // meanwhile is never overwritten by the form's previous values.
@@ -38,22 +38,24 @@ export function DateRangePicker({ value, onChange }: DateRangePickerProps) {
   const active = presetOf(value);
   return (
     <Stack direction={{ xs: 'column', md: 'row' }} spacing={2} sx={{ alignItems: 'flex-start' }}>
-      <TextField
+      <FormTextField
+        control={form.control}
+        name="from"
+        onValueChange={apply}
         label="Received from"
         type="date"
         size="small"
-        {...form.register('from', { onChange: apply })}
-        error={Boolean(errors.from)}
-        helperText={errors.from?.message ?? ' '}
+        helperText=" "
         slotProps={{ inputLabel: { shrink: true } }}
       />
-      <TextField
+      <FormTextField
+        control={form.control}
+        name="to"
+        onValueChange={apply}
         label="Received to"
         type="date"
         size="small"
-        {...form.register('to', { onChange: apply })}
-        error={Boolean(errors.to)}
-        helperText={errors.to?.message ?? 'Both days included'}
+        helperText="Both days included"
         slotProps={{ inputLabel: { shrink: true } }}
       />
       <ButtonGroup size="small" aria-label="Range presets" sx={{ mt: { md: 0.5 } }}>
