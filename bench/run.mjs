@@ -13,7 +13,7 @@ import { imageBombFigures } from './lib/image-bomb.mjs';
 import { backupPhase, pngPhase } from './lib/phase-faults.mjs';
 import { importPhase } from './lib/phase-import.mjs';
 import { lotListPhase, scorecardsPhase } from './lib/phase-reads.mjs';
-import { exportsPhase, readingsPhase } from './lib/phase-writes.mjs';
+import { exportsPhase, openSample, readingsPhase } from './lib/phase-writes.mjs';
 import { judge } from './lib/budgets.mjs';
 import { Report } from './lib/report.mjs';
 import { signIn, startServer } from './lib/server.mjs';
@@ -168,15 +168,17 @@ try {
       importPhase({ base: faultServer.base, token: clerk, dbPath }),
     );
     m.faults.backup = await phase('fault: backup under readings', async () => {
-      const target = m.readings?.samples?.[0];
-      if (!target) throw new Error('no sample to post readings to (the readings phase failed)');
+      // The readings phase's samples, or (when it failed) one taken from the file.
+      const target = m.readings?.samples?.[0]
+        ? { sample: m.readings.samples[0], instruments: m.readings.instruments }
+        : openSample(dbPath);
       return backupPhase({
         base: faultServer.base,
         token: clerk,
         dbPath,
         uploadDir: join(scratch, 'uploads'),
-        sampleId: target.id,
-        instruments: m.readings.instruments,
+        sample: target.sample,
+        instruments: target.instruments,
         out: join(scratch, 'backup.sqlite'),
         limitS: quick ? 60 : 180,
       });

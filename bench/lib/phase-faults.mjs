@@ -7,6 +7,7 @@ import { spawn } from 'node:child_process';
 import { request } from 'node:http';
 import { join } from 'node:path';
 import { bombPng } from './image-bomb.mjs';
+import { readingBody } from './phase-writes.mjs';
 import { peakRssMb } from './server.mjs';
 
 const ROOT = join(import.meta.dirname, '..', '..');
@@ -22,7 +23,7 @@ export async function backupPhase({
   token,
   dbPath,
   uploadDir,
-  sampleId,
+  sample,
   instruments,
   out,
   limitS,
@@ -33,15 +34,10 @@ export async function backupPhase({
   const poster = (async () => {
     while (posting) {
       const t = performance.now();
-      const res = await fetch(`${base}/api/samples/${sampleId}/readings`, {
+      const res = await fetch(`${base}/api/samples/${sample.id}/readings`, {
         method: 'POST',
         headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' },
-        body: JSON.stringify({
-          method: 'mass',
-          massG: 100,
-          lengthMm: 1000,
-          instrumentIds: instruments,
-        }),
+        body: readingBody(sample, answered, instruments),
       });
       if (res.status === 201) answered++;
       else failures.push(`${res.status} ${(await res.text()).slice(0, 200)}`);

@@ -13,9 +13,8 @@ function importTarget(dbPath) {
   const db = new Database(dbPath, { readonly: true });
   const lot = db
     .prepare(
-      `select l.id, json_extract(l.sampling_plan, '$.sampleSize') as units,
-              (select count(*) from conductor_specs c where c.product_id = l.product_id and c.active = 1) as conductors,
-              (select min(c.nominal_area_mm2) from conductor_specs c where c.product_id = l.product_id and c.active = 1) as areaMm2
+      `select l.id, l.product_id, json_extract(l.sampling_plan, '$.sampleSize') as units,
+              (select count(*) from conductor_specs c where c.product_id = l.product_id and c.active = 1) as conductors
          from lots l where l.status in ('on_hold', 'inspecting', 'awaiting_decision')
         order by units * conductors desc, l.id desc limit 1`,
     )
@@ -27,21 +26,30 @@ function importTarget(dbPath) {
       )
       .get(kind).serial;
   const instruments = `${serial('balance')};${serial('length_rule')}`;
-  db.close();
   if (!lot) throw new Error('import: the data set has no open lot');
-  return { ...lot, instruments };
+  // The lot's conductors in the import's numbering (by position), each with its area and metal.
+  const specs = db
+    .prepare(
+      `select nominal_area_mm2 as areaMm2, claimed_material as material from conductor_specs
+        where product_id = ? and active = 1 order by position`,
+    )
+    .all(lot.product_id);
+  db.close();
+  return { ...lot, specs, instruments };
 }
 
 /** Mass rows spread over every planned unit and conductor of the lot. */
 function csvFor(target) {
-  const density = MATERIALS.copper.densityGPerCm3 / 1000;
   const lines = ['unit,conductor,method,massG,lengthMm,instruments'];
   for (let i = 0; i < IMPORT_ROWS; i++) {
     const unit = (i % target.units) + 1;
     const conductor = (Math.floor(i / target.units) % target.conductors) + 1;
-    // 1000 mm of the smallest conductor's nominal area of copper, 2 % lay, a little scatter.
+    // 1000 mm of the conductor's nominal area of its claimed metal, 2 % lay, a little
+    // scatter (another conductor's area or metal is a reading the server now questions).
+    const spec = target.specs[conductor - 1];
+    const density = (MATERIALS[spec.material] ?? MATERIALS.copper).densityGPerCm3 / 1000;
     const massG =
-      Math.round(target.areaMm2 * density * 1000 * 1.02 * (1 + (i % 7) / 500) * 100) / 100;
+      Math.round(spec.areaMm2 * density * 1000 * 1.02 * (1 + (i % 7) / 500) * 100) / 100;
     lines.push(`${unit},${conductor},mass,${massG},1000,${target.instruments}`);
   }
   return lines.join('\n');

@@ -14,14 +14,14 @@ function openLots(dbPath, limit) {
                  order by id desc limit ${Number(limit)}`;
   const conductors = db
     .prepare(
-      `select l.id as lot_id, cs.id as conductor_id, cs.nominal_area_mm2 from lots l
+      `select l.id as lot_id, cs.id as conductor_id, cs.nominal_area_mm2, cs.claimed_material from lots l
          join conductor_specs cs on cs.product_id = l.product_id and cs.active = 1
         where l.id in (${open}) and not exists (select 1 from samples s where s.lot_id = l.id)`,
     )
     .all();
   const samples = db
     .prepare(
-      `select s.id, cs.nominal_area_mm2 as areaMm2 from samples s
+      `select s.id, cs.nominal_area_mm2 as areaMm2, cs.claimed_material as material from samples s
          join conductor_specs cs on cs.id = s.conductor_id where s.lot_id in (${open})`,
     )
     .all();
@@ -34,6 +34,13 @@ function openLots(dbPath, limit) {
   const instruments = [instrument('balance'), instrument('length_rule')];
   db.close();
   return { conductors, samples, instruments };
+}
+
+/** A sample already cut on an open lot and a usable balance and rule (the backup's readings). */
+export function openSample(dbPath) {
+  const { samples, instruments } = openLots(dbPath, 300);
+  if (samples.length === 0) throw new Error('the data set has no sample on an open lot');
+  return { sample: samples[0], instruments };
 }
 
 /**
@@ -51,15 +58,22 @@ async function prepareSamples(base, token, dbPath) {
     if (res.status !== 201) {
       throw new Error(`POST /api/lots/${c.lot_id}/samples: ${res.status} ${await res.text()}`);
     }
-    samples.push({ id: (await res.json()).id, areaMm2: c.nominal_area_mm2 });
+    samples.push({
+      id: (await res.json()).id,
+      areaMm2: c.nominal_area_mm2,
+      material: c.claimed_material,
+    });
   }
   if (samples.length === 0) throw new Error('readings: the data set has no open lot');
   return { samples, instruments };
 }
 
-/** One mass reading's body: 1000 mm of the sample's nominal area of copper, a little scatter. */
-function readingBody(s, i, instruments) {
-  const density = MATERIALS.copper.densityGPerCm3 / 1000;
+/**
+ * One mass reading's body: 1000 mm of the sample's nominal area of its claimed metal, a
+ * little scatter (copper's mass on a CCA conductor is a reading the server now questions).
+ */
+export function readingBody(s, i, instruments) {
+  const density = (MATERIALS[s.material] ?? MATERIALS.copper).densityGPerCm3 / 1000;
   // ASTM B496's 2 % lay increment.
   const massG = Math.round(s.areaMm2 * density * 1000 * 1.02 * (0.99 + (i % 7) / 200) * 100) / 100;
   return JSON.stringify({
