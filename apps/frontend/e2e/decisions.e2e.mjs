@@ -91,3 +91,62 @@ test('a QA lead rejects a lot with a reason, sees the NCR number and prints the 
     .first()
     .waitFor();
 });
+
+test('a concession against a reject: terms with the safety caution, a second approver, the terms on the tag', async (t) => {
+  const lot = await lotAwaitingReject(await apiAs('admin@demo.example'), {
+    supplier: `Copperline Concession Wire ${STAMP}`,
+    code: `CCW${STAMP}`,
+    sku: `CCW-4-${STAMP}`,
+    purpose: 'ground',
+    poNumber: `PO-E2E-CON-${STAMP}`,
+  });
+  const qaBrowser = await launchBrowser();
+  const adminBrowser = await launchBrowser();
+  t.after(async () => {
+    await qaBrowser.close();
+    await adminBrowser.close();
+  });
+  const qa = await qaBrowser.context.newPage();
+  await qa.goto(url(`/sign-in?redirectTo=${encodeURIComponent(`/lots/${lot.id}`)}`));
+  await signIn(qa, 'qa@demo.example');
+  await qa.waitForURL((u) => u.pathname === `/lots/${lot.id}`);
+  const panel = qa.locator('[aria-label="Decision panel"]');
+  await panel.getByRole('radio', { name: 'Accept on concession' }).check();
+  const terms = panel.getByRole('group', { name: 'Concession terms' });
+  await terms.getByText('Safety caution').waitFor();
+  await terms
+    .getByText(/Follow local codes, the equipment maker's instructions and licensed practice/)
+    .waitFor();
+  await panel.getByRole('button', { name: 'Ask for the concession' }).click();
+  await terms
+    .getByText('Say in at least 10 characters what the material may be used for.')
+    .waitFor();
+  await terms
+    .getByLabel('May be used for')
+    .fill('Ground straps of 0.5 m or less on the demo bench only');
+  await terms.getByLabel(/Quantity/).fill('2');
+  await terms
+    .getByLabel('Holds until')
+    .fill(new Date(Date.now() + 30 * 86_400_000).toISOString().slice(0, 10));
+  await panel
+    .getByLabel(/Reason \(required\)/)
+    .fill('The ground run carries no load current here; the power side is refused.');
+  await screenshot(qa, 'concession-dialog');
+  await panel.getByRole('button', { name: 'Ask for the concession' }).click();
+  const waiting = panel.getByRole('region', { name: 'Concession waiting for approval' });
+  await waiting.getByText(/You asked for it: another QA lead or an admin approves it/).waitFor();
+  assert.equal(await waiting.getByRole('button', { name: 'Approve the concession' }).count(), 0);
+
+  const admin = await adminBrowser.context.newPage();
+  await admin.goto(url(`/sign-in?redirectTo=${encodeURIComponent(`/lots/${lot.id}`)}`));
+  await signIn(admin, 'admin@demo.example');
+  await admin.waitForURL((u) => u.pathname === `/lots/${lot.id}`);
+  const adminPanel = admin.locator('[aria-label="Decision panel"]');
+  await adminPanel.getByRole('button', { name: 'Approve the concession' }).click();
+  await adminPanel.getByText('Accepted on concession', { exact: true }).waitFor();
+  await adminPanel.getByText(/Use only for: Ground straps of 0\.5 m or less/).waitFor();
+  await screenshot(admin, 'concession-approved');
+  const tag = await admin.request.get(url(`/api/lots/${lot.id}/tag.pdf`));
+  assert.equal(tag.status(), 200);
+  assert.equal((await tag.body()).subarray(0, 5).toString('latin1'), '%PDF-');
+});

@@ -11,6 +11,7 @@ import {
 import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useCreateDecision, type DecisionInput } from '@/features/decisions/api/create-decision';
+import { useLotConcessions } from '@/features/decisions/api/concessions';
 import { ConcessionCard } from '@/features/decisions/components/concession-card';
 import { DecisionForm } from '@/features/decisions/components/decision-form';
 import { DecisionHistory } from '@/features/decisions/components/decision-history';
@@ -32,6 +33,8 @@ export function DecisionPanel({ lot, meId }: { lot: DecidableLot; meId: number }
   const [last, setLast] = useState<DecisionInput | null>(null);
   const [revising, setRevising] = useState(false);
   const [asked, setAsked] = useState(false);
+  // While a concession waits for its second approval, nothing else is decided on the lot.
+  const waiting = useLotConcessions(lot.id).data?.some((c) => c.status === 'pending') ?? false;
   const conflict = decisionConflict(decide.error);
   const decided = lot.status !== 'awaiting_decision';
   const formErrors =
@@ -108,7 +111,7 @@ export function DecisionPanel({ lot, meId }: { lot: DecidableLot; meId: number }
               {conflict.version}). Reload to see their decision before you decide again.
             </Alert>
           )}
-          {DECIDABLE.includes(lot.status) && !conflict && (!decided || revising) && (
+          {DECIDABLE.includes(lot.status) && !conflict && !waiting && (!decided || revising) && (
             <DecisionForm
               key={lot.version}
               recommendation={lot.evaluation.recommendation}
@@ -119,7 +122,7 @@ export function DecisionPanel({ lot, meId }: { lot: DecidableLot; meId: number }
               onDecide={(input) => send(input, lot.version)}
             />
           )}
-          {DECIDABLE.includes(lot.status) && !conflict && decided && !revising && (
+          {DECIDABLE.includes(lot.status) && !conflict && !waiting && decided && !revising && (
             <div>
               <Button variant="outlined" onClick={() => setRevising(true)}>
                 Supersede the decision
