@@ -52,6 +52,8 @@ export const queryKeys = {
       [...returns.all, 'returnable-lots', supplierId] as const,
     unreturnedLots: () => [...returns.all, 'lots', 'unreturned'] as const,
   },
+  /** The signed-in user's e-mail notices (profile page). */
+  notices: { mine: () => ['notices', 'mine'] as const },
   messages: resource('messages'),
   scorecards: {
     ...scorecards,

@@ -1,5 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { queryKeys } from '@/lib/query-keys';
 
 export const NOTICE_SWITCHES = [
   'lotAwaitsDecision',
@@ -18,11 +19,9 @@ export interface MyNotices {
   digestHourUtc: number;
 }
 
-const key = ['me', 'notices'] as const;
-
 export const myNoticesQueryOptions = () =>
   queryOptions({
-    queryKey: key,
+    queryKey: queryKeys.notices.mine(),
     queryFn: ({ signal }) => api.get<MyNotices>('/me/notices', signal),
   });
 
@@ -34,6 +33,6 @@ export function useUpdateNotices() {
   return useMutation({
     mutationFn: (change: Partial<NoticeChoices>) => api.patch<MyNotices>('/me/notices', change),
     meta: { inlineErrors: true },
-    onSuccess: (data) => client.setQueryData(key, data),
+    onSuccess: (data) => client.setQueryData(queryKeys.notices.mine(), data),
   });
 }
