@@ -33,6 +33,9 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
       contentSecurityPolicy: {
         directives: {
           'img-src': ["'self'", 'data:', 'blob:'],
+          // The barcode reader's polyfill is ZXing compiled to WebAssembly, served from our
+          // own origin; compiling it needs 'wasm-unsafe-eval' (no JavaScript eval is allowed).
+          'script-src': ["'self'", "'wasm-unsafe-eval'"],
           'upgrade-insecure-requests': null,
         },
       },

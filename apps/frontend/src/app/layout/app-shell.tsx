@@ -2,6 +2,7 @@ import MenuIcon from '@mui/icons-material/Menu';
 import { AppBar, Box, Drawer, IconButton, Toolbar, Typography } from '@mui/material';
 import { useState } from 'react';
 import { Outlet } from 'react-router';
+import { ScanTagButton } from '@/app/layout/scan-tag-button';
 import { SideNav } from '@/app/layout/side-nav';
 import { UserMenu } from '@/app/layout/user-menu';
 
@@ -38,6 +39,9 @@ export function AppShell() {
             Incoming inspection · supplier quality
           </Typography>
           <Box sx={{ flexGrow: 1 }} />
+          <Box sx={{ mr: 1.5 }}>
+            <ScanTagButton />
+          </Box>
           <UserMenu />
         </Toolbar>
       </AppBar>

@@ -1,7 +1,16 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Alert, Button, Grid, MenuItem, Stack, TextField } from '@mui/material';
+import { Alert, Button, Grid, InputAdornment, MenuItem, Stack, TextField } from '@mui/material';
 import { useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
+import { useNavigate } from 'react-router';
+import { ScanButton } from '@/components/scanner/scan-button';
+import {
+  FORMAT_LABELS,
+  fieldText,
+  lotOfTag,
+  type ScannedCode,
+} from '@/components/scanner/scan-codes';
+import { paths } from '@/config/paths';
 import {
   CREATE_LOT_FIELDS,
   createLotSchema,
@@ -17,6 +26,11 @@ import { SupplierAutocomplete } from '@/features/lots/components/supplier-autoco
 import { SupplierStatusAlert } from '@/features/lots/components/supplier-status-alert';
 import type { LotSummary, ProductOption, SupplierOption } from '@/features/lots/types';
 import { splitServerErrors } from '@/lib/server-field-errors';
+import { toasts } from '@/lib/toast-store';
+
+type CodeField = 'poNumber' | 'packingSlip' | 'supplierLotCode';
+/** The longest code a field keeps (createLotSchema). */
+const CODE_MAX = 64;
 
 const EMPTY: CreateLotForm = {
   supplierId: 0,
@@ -31,6 +45,7 @@ const EMPTY: CreateLotForm = {
 
 export function ReceiveLotForm({ onReceived }: { onReceived: (lot: LotSummary) => void }) {
   const create = useCreateLot();
+  const navigate = useNavigate();
   const [supplier, setSupplier] = useState<SupplierOption | null>(null);
   const [product, setProduct] = useState<ProductOption | null>(null);
   const form = useForm<CreateLotForm>({
@@ -70,17 +85,39 @@ export function ReceiveLotForm({ onReceived }: { onReceived: (lot: LotSummary) =
     }
   });
 
-  const text = (
-    name: 'poNumber' | 'packingSlip' | 'supplierLotCode',
-    label: string,
-    required = false,
-  ) => (
+  // A scanned label fills its field; our own hold tag opens its lot instead (issue 15).
+  const scanned = (name: CodeField, label: string) => (code: ScannedCode) => {
+    const tag = lotOfTag(code.text, window.location.origin);
+    if (tag) {
+      toasts.show(`That is the tag of lot ${tag.lotId}; it is open now.`);
+      void navigate(tag.bench ? paths.lotBench.getHref(tag.lotId) : paths.lot.getHref(tag.lotId));
+      return;
+    }
+    form.setValue(name, fieldText(code.text, CODE_MAX), {
+      shouldValidate: true,
+      shouldDirty: true,
+    });
+    toasts.success(`${label} read from the ${FORMAT_LABELS[code.format] ?? 'code'}.`);
+  };
+
+  const text = (name: CodeField, label: string, scanLabel: string, required = false) => (
     <TextField
       label={label}
       required={required}
       fullWidth
       error={!!errors[name]}
       helperText={errors[name]?.message}
+      slotProps={{
+        // A scanned value is set without a keystroke: lift the label over it.
+        inputLabel: form.watch(name) ? { shrink: true } : undefined,
+        input: {
+          endAdornment: (
+            <InputAdornment position="end">
+              <ScanButton label={scanLabel} onCode={scanned(name, label)} />
+            </InputAdornment>
+          ),
+        },
+      }}
       {...form.register(name)}
     />
   );
@@ -104,10 +141,10 @@ export function ReceiveLotForm({ onReceived }: { onReceived: (lot: LotSummary) =
               error={errors.productId?.message}
             />
             {product && <ProductDetails product={product} />}
-            {text('poNumber', 'PO number', true)}
+            {text('poNumber', 'PO number', 'Scan the PO number', true)}
             <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
-              {text('packingSlip', 'Packing-slip number')}
-              {text('supplierLotCode', 'Supplier lot code')}
+              {text('packingSlip', 'Packing-slip number', 'Scan the packing slip')}
+              {text('supplierLotCode', 'Supplier lot code', 'Scan the supplier lot label')}
             </Stack>
             <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
               <TextField
