@@ -4,6 +4,7 @@ import { existsSync, readdirSync } from 'node:fs';
 import { Jimp } from 'jimp';
 import { MikroORM } from '@mikro-orm/core';
 import { AuditEvent } from '../src/audit/entities/audit-event.entity';
+import { Lot } from '../src/lots/entities/lot.entity';
 import { Photo } from '../src/photos/entities/photo.entity';
 import { as, createLot, createProduct } from './helpers/fixtures';
 import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
@@ -170,5 +171,91 @@ describe('photo upload', () => {
     expect(res.status).toBe(404);
     const get = await as(t, DEMO.clerk, 'get', '/api/photos/999999/original');
     expect(get.status).toBe(404);
+  });
+});
+
+describe('voiding a photo (never deleted)', () => {
+  const REASON = 'Wrong reel: this is the lot beside it';
+  const voidAs = (who: string, id: number, reason: unknown = REASON) =>
+    as(t, who, 'post', `/api/photos/${id}/void`, { reason });
+
+  it('lets the clerk who took it void it with a reason; the file stays, shown with who, when and why, audited', async () => {
+    const taken = await upload(DEMO.clerk, png, 'label.png', { caption: 'Reel label' });
+    expect(taken.status).toBe(201);
+    const files = uploads().length;
+
+    const short = await voidAs(DEMO.clerk, taken.body.id, 'oops');
+    expect(short.status).toBe(400);
+    expect(short.body.errors).toEqual([
+      { field: 'reason', message: expect.stringContaining('at least 10 characters') },
+    ]);
+
+    const res = await voidAs(DEMO.clerk, taken.body.id);
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    expect(res.body).toMatchObject({
+      id: taken.body.id,
+      voided: true,
+      voidReason: REASON,
+      voidedBy: { name: expect.any(String) },
+      caption: 'Reel label',
+    });
+    expect(uploads().length).toBe(files);
+    expect((await as(t, DEMO.clerk, 'get', `/api/photos/${taken.body.id}/original`)).status).toBe(
+      200,
+    );
+
+    const lot = await as(t, DEMO.qa, 'get', `/api/lots/${lotId}`);
+    const shown = lot.body.photos.find((p: { id: number }) => p.id === taken.body.id);
+    expect(shown).toMatchObject({ voided: true, voidReason: REASON, voidedBy: res.body.voidedBy });
+
+    const event = await t.app
+      .get(MikroORM)
+      .em.fork()
+      .findOneOrFail(AuditEvent, { action: 'photo.void', entityId: taken.body.id });
+    expect(event).toMatchObject({
+      entityType: 'photo',
+      lotId,
+      actorEmail: DEMO.clerk,
+      before: expect.objectContaining({ voided: false }),
+      after: expect.objectContaining({ voided: true, voidReason: REASON }),
+    });
+
+    const again = await voidAs(DEMO.qa, taken.body.id);
+    expect(again.status).toBe(409);
+    expect(again.body.message).toContain(REASON);
+  });
+
+  it("refuses a clerk another person's photo and purchasing any; the QA lead may void any", async () => {
+    const byQa = await upload(DEMO.qa, png, 'reel.png');
+    expect(byQa.status).toBe(201);
+    expect((await voidAs(DEMO.clerk, byQa.body.id)).status).toBe(403);
+    expect((await voidAs(DEMO.buyer, byQa.body.id)).status).toBe(403);
+    expect(
+      (await t.http.post(`/api/photos/${byQa.body.id}/void`).send({ reason: REASON })).status,
+    ).toBe(401);
+    const byClerk = await upload(DEMO.clerk, png, 'end.png');
+    const res = await voidAs(DEMO.qa, byClerk.body.id);
+    expect(res.status).toBe(201);
+    expect(res.body.voided).toBe(true);
+    expect((await voidAs(DEMO.admin, 999_999)).status).toBe(404);
+  });
+
+  it('refuses a clerk once the lot is decided; the QA lead still may', async () => {
+    const taken = await upload(DEMO.clerk, png, 'late.png');
+    expect(taken.status).toBe(201);
+    const em = t.app.get(MikroORM).em.fork();
+    const lot = await em.findOneOrFail(Lot, { id: lotId });
+    const status = lot.status;
+    lot.status = 'accepted';
+    await em.flush();
+    try {
+      const res = await voidAs(DEMO.clerk, taken.body.id);
+      expect(res.status).toBe(422);
+      expect(res.body.message).toContain('only a QA lead');
+      expect((await voidAs(DEMO.qa, taken.body.id)).status).toBe(201);
+    } finally {
+      lot.status = status;
+      await em.flush();
+    }
   });
 });

@@ -38,7 +38,11 @@ export class LotDetailService {
     );
     const [state, photos, decisions, ncr] = await Promise.all([
       this.em.findOne(InspectionState, { product: lot.product }),
-      this.em.find(Photo, { lot }, { populate: ['uploadedBy', 'sample'], orderBy: { id: 'asc' } }),
+      this.em.find(
+        Photo,
+        { lot },
+        { populate: ['uploadedBy', 'sample', 'voidedBy'], orderBy: { id: 'asc' } },
+      ),
       this.em.find(
         Decision,
         { lot },

@@ -15,6 +15,10 @@ export function photoView(p: Photo) {
     sizeBytes: p.sizeBytes,
     uploadedBy: p.uploadedBy ? { id: p.uploadedBy.id, name: p.uploadedBy.name } : null,
     createdAt: p.createdAt,
+    voided: p.voided,
+    voidReason: p.voidReason,
+    voidedBy: p.voidedBy ? { id: p.voidedBy.id, name: p.voidedBy.name } : null,
+    voidedAt: p.voidedAt,
   };
 }
 export type PhotoView = ReturnType<typeof photoView>;

@@ -15,6 +15,7 @@ import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
 import { ALL_ROLES } from '../auth/roles';
 import { UploadPhotoDto } from './dto/upload-photo.dto';
+import { VoidPhotoDto } from './dto/void-photo.dto';
 import { PhotoUploadInterceptor } from './photo-upload.interceptor';
 import { PhotosService } from './photos.service';
 import { IdPipe } from '../common/id.pipe';
@@ -46,6 +47,17 @@ export class PhotosController {
     @CurrentUser() actor: RequestUser,
   ) {
     return this.photos.upload(lotId, file, dto, actor);
+  }
+
+  @Post('photos/:id/void')
+  @Roles('clerk', 'qa_lead', 'admin')
+  // A clerk only their own photo, before the lot is decided (PhotosService.void).
+  voidPhoto(
+    @Param('id', IdPipe) id: number,
+    @Body() dto: VoidPhotoDto,
+    @CurrentUser() actor: RequestUser,
+  ) {
+    return this.photos.void(id, dto.reason, actor);
   }
 
   @Get('photos/:id/original')

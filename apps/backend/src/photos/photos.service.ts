@@ -1,4 +1,11 @@
-import { Injectable, UnprocessableEntityException, BadRequestException } from '@nestjs/common';
+import {
+  BadRequestException,
+  ConflictException,
+  ForbiddenException,
+  Injectable,
+  NotFoundException,
+  UnprocessableEntityException,
+} from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import { createHash, randomUUID } from 'node:crypto';
 import type { Readable } from 'node:stream';
@@ -19,6 +26,8 @@ const EXTENSIONS: Record<ImageType, string> = {
   'image/png': 'png',
   'image/webp': 'webp',
 };
+/** Lot statuses before a decision (as ReadingsService.void). */
+const OPEN_STATUSES: readonly string[] = ['on_hold', 'inspecting', 'awaiting_decision'];
 /** A stored photo's type, by the extension its generated key ends with. */
 export const typeOfKey = (key: string): ImageType =>
   (Object.entries(EXTENSIONS).find(([, ext]) => key.endsWith(`.${ext}`))?.[0] ??
@@ -99,6 +108,51 @@ export class PhotosService {
       await Promise.all(written.map((k) => this.storage.delete(k).catch(() => undefined)));
       throw e;
     }
+  }
+
+  /**
+   * Voids a photo with a reason; the row and its files stay (shown struck with the reason).
+   * A clerk voids only photos they took, while the lot is undecided; the QA lead and the
+   * admin any photo. Audited as photo.void with before and after.
+   */
+  async void(id: number, reason: string, actor: RequestUser) {
+    const photo = await this.em.transactional(async (tx) => {
+      const p = await tx.findOne(Photo, { id }, { populate: ['lot', 'uploadedBy', 'voidedBy'] });
+      if (!p) throw new NotFoundException('No such record');
+      if (actor.role === 'clerk') {
+        if (p.uploadedBy.id !== actor.id) {
+          throw new ForbiddenException(
+            'A receiving clerk may void only photos they took; ask a QA lead to void this one.',
+          );
+        }
+        if (!OPEN_STATUSES.includes(p.lot.status)) {
+          throw new UnprocessableEntityException(
+            `Lot ${p.lot.poNumber} is already ${p.lot.status.replace(/_/g, ' ')}: after the decision only a QA lead can void its photos.`,
+          );
+        }
+      }
+      if (p.voided) {
+        throw new ConflictException(
+          `This photo was already voided on ${p.voidedAt?.toISOString().slice(0, 10)}: ${p.voidReason}`,
+        );
+      }
+      const at = new Date();
+      p.voided = true;
+      p.voidReason = reason;
+      p.voidedBy = await tx.findOneOrFail(User, { id: actor.id });
+      p.voidedAt = at;
+      await tx.flush();
+      this.audit.record(tx, actor, {
+        action: 'photo.void',
+        entityType: 'photo',
+        entityId: p.id,
+        lotId: p.lot.id,
+        before: { voided: false, sha256: p.sha256, caption: p.caption },
+        after: { voided: true, voidReason: reason, sha256: p.sha256, caption: p.caption },
+      });
+      return p;
+    });
+    return photoView(photo);
   }
 
   async open(

@@ -35,4 +35,27 @@ describe('resolveRange', () => {
     expect(() => resolveRange('2020-01-01', '2025-01-01')).toThrow();
     expect(resolveRange('2021-01-01', '2025-12-31').months).toHaveLength(60);
   });
+
+  it('counts twelve calendar months back from a `to` given alone, as from today', () => {
+    const r = resolveRange(undefined, '2026-12-03');
+    expect(r.from).toBe('2026-01-01');
+    expect(r.months.map((m) => m.month)).toEqual([
+      '2026-01',
+      '2026-02',
+      '2026-03',
+      '2026-04',
+      '2026-05',
+      '2026-06',
+      '2026-07',
+      '2026-08',
+      '2026-09',
+      '2026-10',
+      '2026-11',
+      '2026-12',
+    ]);
+    expect(resolveRange(undefined, '2026-03-31').from).toBe('2025-04-01');
+    expect(
+      resolveRange(undefined, undefined, new Date('2026-12-03T10:00:00Z')).months,
+    ).toHaveLength(12);
+  });
 });

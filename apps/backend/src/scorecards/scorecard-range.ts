@@ -35,10 +35,14 @@ function firstOfMonth(year: number, monthIndex: number): Date {
   return new Date(Date.UTC(year, monthIndex, 1));
 }
 
+/** The first day of the 12th calendar month back from `date`'s, its own month the 12th. */
+function twelveMonthsBefore(date: Date): string {
+  return isoDate(firstOfMonth(date.getUTCFullYear(), date.getUTCMonth() - 11));
+}
+
 /** Default range: the last 12 calendar months, this month included, up to today. */
 export function defaultRange(today: Date): { from: string; to: string } {
-  const from = firstOfMonth(today.getUTCFullYear(), today.getUTCMonth() - 11);
-  return { from: isoDate(from), to: isoDate(today) };
+  return { from: twelveMonthsBefore(today), to: isoDate(today) };
 }
 
 /** Month buckets covering [start, end), each clipped to the range. */
@@ -72,7 +76,9 @@ export function resolveRange(
   if (!isCalendarDate(toDate)) errors.push('to must be a real calendar date (YYYY-MM-DD)');
   if (errors.length) throw new BadRequestException(errors);
   // Only now: counting back from a `to` like 0000-00-00 threw a RangeError (a 500).
-  const fromDate = from ?? (to ? addDays(to, -364) : fallback.from);
+  // `to` alone: the twelve calendar months ending with its month, as without it (365 days
+  // back from a mid-month `to` spanned thirteen months).
+  const fromDate = from ?? (to ? twelveMonthsBefore(utcMidnight(toDate)) : fallback.from);
   if (fromDate > toDate) throw new BadRequestException(['from must be on or before to']);
   const start = utcMidnight(fromDate);
   const end = utcMidnight(addDays(toDate, 1));

@@ -44,4 +44,17 @@ export class Photo {
 
   @Property({ type: 'Date' })
   createdAt: Opt<Date> = new Date();
+
+  /** Never deleted: a wrong or misleading photo is voided with a reason (issue 15). */
+  @Property({ type: 'boolean' })
+  voided: Opt<boolean> = false;
+
+  @Property({ type: 'text', nullable: true })
+  voidReason: string | null = null;
+
+  @ManyToOne(() => User, { nullable: true })
+  voidedBy: User | null = null;
+
+  @Property({ type: 'Date', nullable: true })
+  voidedAt: Date | null = null;
 }

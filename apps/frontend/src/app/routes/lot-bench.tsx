@@ -8,11 +8,13 @@ import { useInstruments } from '@/features/inspection/api/get-instruments';
 import { useLot } from '@/features/inspection/api/get-lot';
 import { BenchPanel } from '@/features/inspection/components/bench/bench-panel';
 import { HoldBanner } from '@/features/lots/components/hold-banner';
+import { PhotosPanel } from '@/features/photos/components/photos-panel';
 import { LotStatusChip } from '@/features/lots/components/lot-status-chip';
 import { isApiError } from '@/lib/api-client';
 import type { Role } from '@/lib/roles';
 import { errorMessage } from '@/lib/query-client';
 import { lotLoadFallback } from './lot-load-fallback';
+import { photoSampleOptions } from './photo-sample-options';
 
 const RECORDERS: readonly Role[] = ['clerk', 'qa_lead', 'admin'];
 const OPEN_STATUSES = ['on_hold', 'inspecting', 'awaiting_decision'];
@@ -84,6 +86,21 @@ export function LotBenchRoute() {
             canRecord={canRecord}
           />
         </SectionBoundary>
+        {RECORDERS.includes(user.role) && (
+          <SectionBoundary name="photos">
+            <PhotosPanel
+              lotId={data.id}
+              photos={data.photos}
+              samples={photoSampleOptions(data)}
+              canUpload
+              canVoid={(p) =>
+                user.role !== 'clerk' ||
+                // A clerk voids their own photo until the lot is decided.
+                (OPEN_STATUSES.includes(data.status) && p.uploadedBy.id === user.id)
+              }
+            />
+          </SectionBoundary>
+        )}
       </Stack>
     </Box>
   );

@@ -17,6 +17,7 @@ import { PhotosPanel } from '@/features/photos/components/photos-panel';
 import { isApiError } from '@/lib/api-client';
 import type { Role } from '@/lib/roles';
 import { lotLoadFallback } from './lot-load-fallback';
+import { photoSampleOptions } from './photo-sample-options';
 
 const RECORDERS: readonly Role[] = ['clerk', 'qa_lead', 'admin'];
 const VOIDERS: readonly Role[] = ['qa_lead', 'admin'];
@@ -64,13 +65,7 @@ export function LotRoute() {
         Go to the decision
       </Button>
     ) : undefined;
-  const sampleOptions = data.samples.map((s) => {
-    const conductor = data.product.conductors.find((c) => c.id === s.conductorId);
-    return {
-      id: s.id,
-      label: `Unit ${s.seq} · ${conductor ? `${conductor.purpose} ${conductor.gauge}` : 'conductor'}`,
-    };
-  });
+  const sampleOptions = photoSampleOptions(data);
 
   return (
     <Stack spacing={3}>
@@ -117,6 +112,11 @@ export function LotRoute() {
                 photos={data.photos}
                 samples={sampleOptions}
                 canUpload={RECORDERS.includes(user.role)}
+                canVoid={(p) =>
+                  VOIDERS.includes(user.role) ||
+                  // A clerk voids their own photo until the lot is decided.
+                  (user.role === 'clerk' && open && p.uploadedBy.id === user.id)
+                }
               />
             </SectionBoundary>
           </Stack>

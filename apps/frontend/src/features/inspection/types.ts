@@ -135,6 +135,10 @@ export interface Photo {
   sizeBytes: number;
   uploadedBy: PersonRef;
   createdAt: string;
+  voided: boolean;
+  voidReason: string | null;
+  voidedBy: PersonRef | null;
+  voidedAt: string | null;
 }
 
 export type LotStatus =

@@ -11,6 +11,11 @@ export interface Photo {
   sizeBytes: number;
   uploadedBy: { id: number; name: string };
   createdAt: string;
+  /** Never deleted: a void photo stays, shown struck with its reason. */
+  voided: boolean;
+  voidReason: string | null;
+  voidedBy: { id: number; name: string } | null;
+  voidedAt: string | null;
 }
 
 /** A sample the photo can be attached to, labelled for the picker ("Unit 2 · power"). */

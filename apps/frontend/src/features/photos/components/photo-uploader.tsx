@@ -1,4 +1,5 @@
 import CloudUploadOutlined from '@mui/icons-material/CloudUploadOutlined';
+import PhotoCameraOutlined from '@mui/icons-material/PhotoCameraOutlined';
 import {
   Alert,
   Box,
@@ -20,42 +21,79 @@ interface PhotoUploaderProps {
   samples: readonly PhotoSampleOption[];
 }
 
+const ACCEPT = 'image/jpeg,image/png,image/webp';
+
+/** One file of a batch: waiting, sending (0…1), sent, or refused with the reason. */
+interface Job {
+  key: number;
+  name: string;
+  state: 'waiting' | 'sending' | 'sent' | 'refused';
+  progress: number;
+  message?: string;
+}
+
+let nextKey = 1;
+
+/**
+ * Photos for the lot or one of its samples: "Take photos" opens the camera directly
+ * (`capture`), "Choose photos" takes several at once; each file is sent in turn with its
+ * own progress. The sample and caption chosen go with the batch, then reset to the lot as
+ * a whole, so the next photo is never filed under the last sample by mistake.
+ */
 export function PhotoUploader({ lotId, samples }: PhotoUploaderProps) {
   const upload = useUploadPhoto(lotId);
-  const input = useRef<HTMLInputElement>(null);
+  const camera = useRef<HTMLInputElement>(null);
+  const picker = useRef<HTMLInputElement>(null);
   const [sampleId, setSampleId] = useState('');
   const [caption, setCaption] = useState('');
-  const [progress, setProgress] = useState<number | null>(null);
-  const [problem, setProblem] = useState<string | null>(null);
+  const [jobs, setJobs] = useState<readonly Job[]>([]);
   const [dragging, setDragging] = useState(false);
+  const busy = jobs.some((j) => j.state === 'waiting' || j.state === 'sending');
 
-  const send = async (file: File | undefined) => {
-    if (!file) return;
-    const localProblem = photoFileProblem(file);
-    setProblem(localProblem);
-    if (localProblem) return;
-    setProgress(0);
-    try {
-      await upload.mutateAsync({
-        file,
-        sampleId: sampleId ? Number(sampleId) : undefined,
-        caption,
-        onProgress: setProgress,
-      });
-      toasts.success(`${file.name} uploaded.`);
-      setCaption('');
-    } catch (error) {
-      setProblem(`${file.name} was not saved: ${errorMessage(error)}`);
-    } finally {
-      setProgress(null);
-      if (input.current) input.current.value = '';
+  const patch = (key: number, change: Partial<Job>) =>
+    setJobs((all) => all.map((j) => (j.key === key ? { ...j, ...change } : j)));
+
+  const send = async (list: FileList | null | undefined) => {
+    const files = list ? [...list] : [];
+    if (files.length === 0 || busy) return;
+    const chosen = { sampleId: sampleId ? Number(sampleId) : undefined, caption };
+    const batch: Job[] = files.map((f) => {
+      const problem = photoFileProblem(f);
+      return problem
+        ? { key: nextKey++, name: f.name, state: 'refused', progress: 0, message: problem }
+        : { key: nextKey++, name: f.name, state: 'waiting', progress: 0 };
+    });
+    setJobs(batch);
+    if (camera.current) camera.current.value = '';
+    if (picker.current) picker.current.value = '';
+    let sent = 0;
+    for (const [i, file] of files.entries()) {
+      const job = batch[i];
+      if (job.state === 'refused') continue;
+      patch(job.key, { state: 'sending' });
+      try {
+        await upload.mutateAsync({
+          file,
+          sampleId: chosen.sampleId,
+          caption: chosen.caption,
+          onProgress: (progress) => patch(job.key, { progress }),
+        });
+        patch(job.key, { state: 'sent', progress: 1 });
+        sent += 1;
+      } catch (error) {
+        patch(job.key, { state: 'refused', message: errorMessage(error) });
+      }
     }
+    // The batch is filed: the next photo starts from the lot as a whole, without a caption.
+    setSampleId('');
+    setCaption('');
+    if (sent > 0) toasts.success(sent === 1 ? 'Photo uploaded.' : `${sent} photos uploaded.`);
   };
 
   const onDrop = (event: DragEvent) => {
     event.preventDefault();
     setDragging(false);
-    void send(event.dataTransfer.files[0]);
+    void send(event.dataTransfer.files);
   };
 
   return (
@@ -67,6 +105,7 @@ export function PhotoUploader({ lotId, samples }: PhotoUploaderProps) {
           value={sampleId}
           onChange={(e) => setSampleId(e.target.value)}
           sx={{ minWidth: 220 }}
+          disabled={busy}
         >
           <MenuItem value="">The lot as a whole</MenuItem>
           {samples.map((s) => (
@@ -80,6 +119,7 @@ export function PhotoUploader({ lotId, samples }: PhotoUploaderProps) {
           value={caption}
           onChange={(e) => setCaption(e.target.value)}
           fullWidth
+          disabled={busy}
           slotProps={{ htmlInput: { maxLength: 200 } }}
         />
       </Stack>
@@ -101,39 +141,86 @@ export function PhotoUploader({ lotId, samples }: PhotoUploaderProps) {
         }}
       >
         <Typography color="text.secondary" gutterBottom>
-          Drop a photo here (JPEG, PNG or WebP, at most 15 MB), or
+          JPEG, PNG or WebP, at most 15 MB each; drop files here, or
         </Typography>
-        <Button
-          variant="outlined"
-          startIcon={<CloudUploadOutlined />}
-          onClick={() => input.current?.click()}
-          disabled={progress !== null}
+        <Stack
+          direction="row"
+          spacing={1.5}
+          sx={{ justifyContent: 'center', flexWrap: 'wrap', rowGap: 1 }}
         >
-          Choose a photo
-        </Button>
+          <Button
+            variant="contained"
+            size="large"
+            startIcon={<PhotoCameraOutlined />}
+            onClick={() => camera.current?.click()}
+            disabled={busy}
+          >
+            Take photos
+          </Button>
+          <Button
+            variant="outlined"
+            size="large"
+            startIcon={<CloudUploadOutlined />}
+            onClick={() => picker.current?.click()}
+            disabled={busy}
+          >
+            Choose photos
+          </Button>
+        </Stack>
         <input
-          ref={input}
+          ref={camera}
           type="file"
           hidden
-          accept="image/jpeg,image/png,image/webp"
-          aria-label="Photo file"
-          onChange={(e) => void send(e.target.files?.[0])}
+          accept={ACCEPT}
+          capture="environment"
+          multiple
+          aria-label="Photos from the camera"
+          onChange={(e) => void send(e.target.files)}
+        />
+        <input
+          ref={picker}
+          type="file"
+          hidden
+          accept={ACCEPT}
+          multiple
+          aria-label="Photo files"
+          onChange={(e) => void send(e.target.files)}
         />
       </Box>
-      {progress !== null && (
-        <Box>
-          <LinearProgress
-            variant="determinate"
-            value={Math.round(progress * 100)}
-            aria-label="Upload progress"
-          />
-          <Typography variant="caption">Uploading… {Math.round(progress * 100)} %</Typography>
-        </Box>
-      )}
-      {problem && (
-        <Alert severity="error" onClose={() => setProblem(null)}>
-          {problem}
-        </Alert>
+      {jobs.length > 0 && (
+        <Stack
+          spacing={1}
+          component="ul"
+          sx={{ listStyle: 'none', p: 0, m: 0 }}
+          aria-label="Uploads"
+        >
+          {jobs.map((job) => (
+            <Box component="li" key={job.key}>
+              {job.state === 'refused' ? (
+                <Alert severity="error">
+                  {job.name} was not saved: {job.message}
+                </Alert>
+              ) : (
+                <>
+                  <LinearProgress
+                    variant="determinate"
+                    value={Math.round(job.progress * 100)}
+                    aria-label={`Upload of ${job.name}`}
+                    color={job.state === 'sent' ? 'success' : 'primary'}
+                  />
+                  <Typography variant="caption">
+                    {job.name}:{' '}
+                    {job.state === 'waiting'
+                      ? 'waiting'
+                      : job.state === 'sent'
+                        ? 'uploaded'
+                        : `uploading… ${Math.round(job.progress * 100)} %`}
+                  </Typography>
+                </>
+              )}
+            </Box>
+          ))}
+        </Stack>
       )}
     </Stack>
   );
