@@ -32,6 +32,7 @@ export default defineConfig({
                 url.pathname === '/api/instruments'),
             handler: 'NetworkFirst',
             options: {
+              // Forgotten at sign-out and sign-in (src/lib/offline-answers.ts).
               cacheName: 'gaugeproof-bench-api',
               networkTimeoutSeconds: 5,
               expiration: { maxEntries: 50 },

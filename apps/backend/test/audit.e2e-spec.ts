@@ -145,6 +145,65 @@ describe('GET /api/audit (admin)', () => {
   });
 });
 
+describe('the audit screen: one record, facets and CSV (admin)', () => {
+  it('filters to one record by type and id, and lists the actions, types and people', async () => {
+    const { lot } = await rejectedLot();
+    const admin = await t.token(DEMO.admin);
+    const one = await t.http.get(`/api/audit?entityType=lot&entityId=${lot.id}`).set(auth(admin));
+    expect(one.status).toBe(200);
+    expect(one.body.total).toBeGreaterThanOrEqual(1);
+    for (const e of one.body.items) expect([e.entityType, e.entityId]).toEqual(['lot', lot.id]);
+    const bad = await t.http.get('/api/audit?entityId=abc').set(auth(admin));
+    expect(bad.status).toBe(400);
+    expect(bad.body.errors).toEqual([{ field: 'entityId', message: expect.any(String) }]);
+    const backwards = await t.http.get('/api/audit?from=2026-02-01&to=2026-01-01').set(auth(admin));
+    expect(backwards.status).toBe(400);
+
+    const facets = await t.http.get('/api/audit/facets').set(auth(admin));
+    expect(facets.status).toBe(200);
+    expect(facets.body.actions).toEqual(expect.arrayContaining(['decision.create', 'ncr.create']));
+    expect(facets.body.entityTypes).toEqual(expect.arrayContaining(['decision', 'lot']));
+    expect(facets.body.people.map((p: { email: string }) => p.email)).toContain(DEMO.qa);
+    for (const email of [DEMO.clerk, DEMO.qa, DEMO.buyer]) {
+      const token = await t.token(email);
+      expect((await t.http.get('/api/audit/facets').set(auth(token))).status).toBe(403);
+      expect((await t.http.get('/api/audit/export.csv').set(auth(token))).status).toBe(403);
+    }
+    expect((await t.http.get('/api/audit/export.csv')).status).toBe(401);
+  });
+
+  it('exports the filtered events through the CSV writer and audits the export', async () => {
+    const { lot } = await rejectedLot();
+    const admin = await t.token(DEMO.admin);
+    const list = await t.http
+      .get(`/api/audit?action=decision.create&pageSize=100`)
+      .set(auth(admin));
+    const res = await t.http
+      .get('/api/audit/export.csv?action=decision.create')
+      .set(auth(admin))
+      .buffer(true)
+      .parse(collect);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
+    expect(res.headers['content-disposition']).toBe('attachment; filename="audit-trail.csv"');
+    const text = (res.body as Buffer).toString('utf8').replace(/^\ufeff/, '');
+    const lines = text.trim().split(/\r?\n/);
+    expect(lines[0]).toBe(
+      'eventId,at,actorId,actorEmail,actorName,action,entityType,entityId,lotId,summary,before,after',
+    );
+    expect(lines).toHaveLength(1 + list.body.total);
+    expect(lines.slice(1).every((l) => l.includes(',decision.create,decision,'))).toBe(true);
+    expect(text).toContain(`,${lot.id},`);
+
+    const exported = await t.http.get('/api/audit?action=audit.export').set(auth(admin));
+    expect(exported.body.total).toBeGreaterThanOrEqual(1);
+    expect(exported.body.items[0]).toMatchObject({
+      actorEmail: DEMO.admin,
+      after: { filters: { action: 'decision.create' }, rows: list.body.total },
+    });
+  });
+});
+
 describe('GET /api/lots/:id/tag.pdf', () => {
   it('prints a REJECTED tag with lot, PO, NCR and QR code link', async () => {
     const { lot, ncrNumber } = await rejectedLot();

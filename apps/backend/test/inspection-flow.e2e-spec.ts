@@ -154,5 +154,25 @@ describe('evaluation', () => {
     expect(e.message).toMatch(/rejects at 2/);
     // Curtailed rejection (issue 13): the lot awaits its decision at once, unit 2 unread.
     expect((await lotRow(t, lotId)).status).toBe('awaiting_decision');
+
+    // Today for the QA lead lists it among the lots at their reject number; a lot awaiting
+    // its decision with every unit good is not listed. Clerk and purchasing are refused.
+    const good = await createLot(t, spool);
+    for (const c of spool.conductorIds)
+      for (const seq of [1, 2, 3]) await reading(good, c, seq, 195);
+    expect((await lotRow(t, good)).status).toBe('awaiting_decision');
+    const listed = await as(t, DEMO.qa, 'get', '/api/inspection/reject-reached');
+    expect(listed.status).toBe(200);
+    const ids = listed.body.items.map((l: { id: number }) => l.id);
+    expect(ids).toContain(lotId);
+    expect(ids).not.toContain(good);
+    expect(listed.body.items.find((l: { id: number }) => l.id === lotId)).toMatchObject({
+      nonconformingUnits: 2,
+      reject: 2,
+      status: 'awaiting_decision',
+    });
+    for (const who of [DEMO.clerk, DEMO.buyer]) {
+      expect((await as(t, who, 'get', '/api/inspection/reject-reached')).status).toBe(403);
+    }
   });
 });

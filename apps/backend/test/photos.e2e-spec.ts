@@ -191,7 +191,7 @@ describe('voiding a photo (never deleted)', () => {
     ]);
 
     const res = await voidAs(DEMO.clerk, taken.body.id);
-    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
     expect(res.body).toMatchObject({
       id: taken.body.id,
       voided: true,
@@ -235,7 +235,7 @@ describe('voiding a photo (never deleted)', () => {
     ).toBe(401);
     const byClerk = await upload(DEMO.clerk, png, 'end.png');
     const res = await voidAs(DEMO.qa, byClerk.body.id);
-    expect(res.status).toBe(201);
+    expect(res.status).toBe(200);
     expect(res.body.voided).toBe(true);
     expect((await voidAs(DEMO.admin, 999_999)).status).toBe(404);
   });
@@ -252,7 +252,7 @@ describe('voiding a photo (never deleted)', () => {
       const res = await voidAs(DEMO.clerk, taken.body.id);
       expect(res.status).toBe(422);
       expect(res.body.message).toContain('only a QA lead');
-      expect((await voidAs(DEMO.qa, taken.body.id)).status).toBe(201);
+      expect((await voidAs(DEMO.qa, taken.body.id)).status).toBe(200);
     } finally {
       lot.status = status;
       await em.flush();

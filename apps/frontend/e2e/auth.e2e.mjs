@@ -26,6 +26,7 @@ const screenRoles = {
   Scorecards: ['purchasing', 'qa_lead', 'admin'],
   Reference: ALL,
   Users: ['admin'],
+  'Audit trail': ['admin'],
 };
 const seenByRole = {};
 

@@ -240,11 +240,14 @@ test('readings taken offline are kept, survive a reload, and arrive exactly once
     if (unit === 1) await page.getByRole('button', { name: /^Next: Unit 2/ }).tap();
   }
   await page.getByText('2 readings waiting to send').waitFor();
+  // Kept on the device is not recorded: the progress says so.
+  await page.getByText('0 of 3 pieces recorded · 2 waiting to send').waitFor();
   await screenshot(page, 'bench-phone-offline');
 
   // The page reloads without the network, and the readings are still there.
   await page.reload();
   await page.getByText('2 readings waiting to send').waitFor();
+  await page.getByText('0 of 3 pieces recorded · 2 waiting to send').waitFor();
   await page.getByRole('heading', { name: 'Unit 3' }).waitFor();
   let stored = await admin('GET', `/lots/${offlineLot.id}`);
   assert.equal(stored.samples.length, 0, 'nothing reached the server while offline');

@@ -1,8 +1,10 @@
-import { Controller, Get, Param, Query } from '@nestjs/common';
-import { ApiTags } from '@nestjs/swagger';
-import { Roles } from '../auth/decorators';
+import { Controller, Get, Param, Query, StreamableFile } from '@nestjs/common';
+import { ApiProduces, ApiTags } from '@nestjs/swagger';
+import { CurrentUser, Roles } from '../auth/decorators';
+import type { RequestUser } from '../auth/request-user';
+import { attachmentName, CSV_CONTENT_TYPE, csvStream } from '../common/csv';
 import { ALL_ROLES } from '../auth/roles';
-import { AuditQueryService } from './audit-query.service';
+import { AUDIT_CSV_COLUMNS, AuditQueryService } from './audit-query.service';
 import { ListAuditDto } from './dto/list-audit.dto';
 import { IdPipe } from '../common/id.pipe';
 
@@ -22,5 +24,23 @@ export class AuditController {
   @Roles('admin')
   list(@Query() q: ListAuditDto) {
     return this.audit.list(q);
+  }
+
+  @Get('audit/facets')
+  @Roles('admin')
+  facets() {
+    return this.audit.facets();
+  }
+
+  /** The same filters and sort as the list, every matching event; audited as audit.export. */
+  @Get('audit/export.csv')
+  @Roles('admin')
+  @ApiProduces('text/csv')
+  async exportCsv(@Query() q: ListAuditDto, @CurrentUser() actor: RequestUser) {
+    const rows = await this.audit.exportRows(q, actor);
+    return new StreamableFile(csvStream(AUDIT_CSV_COLUMNS, rows), {
+      type: CSV_CONTENT_TYPE,
+      disposition: attachmentName('audit-trail.csv'),
+    });
   }
 }

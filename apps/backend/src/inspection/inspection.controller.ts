@@ -1,4 +1,5 @@
-import { Body, Controller, HttpCode, Param, Post } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/core';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
@@ -7,6 +8,7 @@ import { CreateSampleDto } from './dto/create-sample.dto';
 import { VoidReadingDto } from './dto/void-reading.dto';
 import { ReadingsService } from './readings.service';
 import { SamplesService } from './samples.service';
+import { lotsAtRejectNumber } from './reject-reached';
 import { IdPipe } from '../common/id.pipe';
 
 @ApiTags('inspection')
@@ -15,7 +17,15 @@ export class InspectionController {
   constructor(
     private readonly samples: SamplesService,
     private readonly readings: ReadingsService,
+    private readonly em: EntityManager,
   ) {}
+
+  /** Lots awaiting a decision that already reached their reject number (Today, QA lead). */
+  @Get('inspection/reject-reached')
+  @Roles('qa_lead', 'admin')
+  rejectReached() {
+    return lotsAtRejectNumber(this.em);
+  }
 
   @Post('lots/:id/samples')
   @Roles('clerk', 'qa_lead', 'admin')

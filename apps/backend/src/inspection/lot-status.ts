@@ -30,6 +30,8 @@ export interface Evidence {
   allPlannedUnitsRead: boolean;
   /** The nonconforming units already reach the reject number (issue 13: curtailed rejection). */
   rejectReached: boolean;
+  /** Units of the plan with a live nonconforming reading. */
+  nonconformingUnits: number;
 }
 
 /**
@@ -71,6 +73,7 @@ export async function evidenceOf(em: EntityManager, lot: LotRef): Promise<Eviden
     hasReading: Number(read.n) > 0,
     allPlannedUnitsRead: Number(units.n) >= needed,
     rejectReached: Number(bad.n) >= lot.reject,
+    nonconformingUnits: Number(bad.n),
   };
 }
 

@@ -1,6 +1,7 @@
 import {
   Body,
   Controller,
+  HttpCode,
   Get,
   Param,
   Post,
@@ -50,6 +51,7 @@ export class PhotosController {
   }
 
   @Post('photos/:id/void')
+  @HttpCode(200)
   @Roles('clerk', 'qa_lead', 'admin')
   // A clerk only their own photo, before the lot is decided (PhotosService.void).
   voidPhoto(

@@ -11,6 +11,7 @@ import InsightsOutlined from '@mui/icons-material/InsightsOutlined';
 import AssignmentReturnOutlined from '@mui/icons-material/AssignmentReturnOutlined';
 import FactCheckOutlined from '@mui/icons-material/FactCheckOutlined';
 import OutboxOutlined from '@mui/icons-material/OutboxOutlined';
+import HistoryEduOutlined from '@mui/icons-material/HistoryEduOutlined';
 import { paths } from '@/config/paths';
 import { ROLES, type Role } from '@/lib/roles';
 
@@ -85,6 +86,7 @@ export const navItems: readonly NavItem[] = [
     roles: ['purchasing', 'admin'],
   },
   { label: 'Users', path: paths.users.path, icon: ManageAccountsOutlined, roles: ['admin'] },
+  { label: 'Audit trail', path: paths.audit.path, icon: HistoryEduOutlined, roles: ['admin'] },
 ];
 
 export function navItemsFor(role: Role): NavItem[] {

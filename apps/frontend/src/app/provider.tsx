@@ -7,6 +7,7 @@ import { ErrorBoundary } from '@/components/error-boundary';
 import { FullPageError } from '@/components/full-page-state';
 import { Toaster } from '@/components/toaster';
 import { AuthProvider } from '@/features/auth/auth-context';
+import { forgetOfflineAnswers } from '@/lib/offline-answers';
 import { createQueryClient } from '@/lib/query-client';
 import { UnitsProvider } from '@/lib/units';
 import { queryKeys } from '@/lib/query-keys';
@@ -15,8 +16,12 @@ export function AppProvider({ children }: { children: ReactNode }) {
   const [queryClient] = useState(() => {
     const client = createQueryClient({
       // The session ended: forget the user; the sign-in gate then sends the user to
-      // the sign-in page and remembers where they were.
-      onUnauthorized: (c) => c.setQueryData(queryKeys.auth.me(), null),
+      // the sign-in page and remembers where they were. The service worker's copies of
+      // its answers go too (the next sign-in drops the rest of the query cache).
+      onUnauthorized: (c) => {
+        c.setQueryData(queryKeys.auth.me(), null);
+        void forgetOfflineAnswers();
+      },
     });
     warmStart(client, window.location.pathname);
     return client;

@@ -18,6 +18,7 @@ const LotBenchRoute = lazyRoute(() => import('@/app/routes/lot-bench'), 'LotBenc
 const LotsRoute = lazyRoute(() => import('@/app/routes/lots'), 'LotsRoute');
 const ReceivingRoute = lazyRoute(() => import('@/app/routes/receiving'), 'ReceivingRoute');
 const UsersRoute = lazyRoute(() => import('@/app/routes/users'), 'UsersRoute');
+const AuditRoute = lazyRoute(() => import('@/app/routes/audit'), 'AuditRoute');
 const ScorecardsRoute = lazyRoute(() => import('@/app/routes/scorecards'), 'ScorecardsRoute');
 const SupplierScorecardRoute = lazyRoute(
   () => import('@/app/routes/supplier-scorecard'),
@@ -68,6 +69,14 @@ const shellRoutes: RouteObject[] = [
     element: (
       <RoleGate>
         <UsersRoute />
+      </RoleGate>
+    ),
+  },
+  {
+    path: paths.audit.path,
+    element: (
+      <RoleGate>
+        <AuditRoute />
       </RoleGate>
     ),
   },

@@ -8,6 +8,7 @@ export const paths = {
   },
   today: { path: '/today', getHref: () => '/today' },
   users: { path: '/users', getHref: () => '/users' },
+  audit: { path: '/audit', getHref: () => '/audit' },
   suppliers: { path: '/suppliers', getHref: () => '/suppliers' },
   products: { path: '/products', getHref: () => '/products' },
   instruments: { path: '/instruments', getHref: () => '/instruments' },

@@ -1,6 +1,6 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsInt, IsOptional, IsString, Matches, MaxLength, Min } from 'class-validator';
+import { IsInt, IsOptional, IsString, Matches, Max, MaxLength, Min } from 'class-validator';
 import { ListQueryDto } from '../../common/paging';
 
 const DAY_OR_INSTANT = /^\d{4}-\d{2}-\d{2}(T[\d:.]+Z)?$/;
@@ -11,6 +11,14 @@ export class ListAuditDto extends ListQueryDto {
   @IsString()
   @MaxLength(48)
   readonly entityType?: string;
+
+  @ApiPropertyOptional({ description: 'Id of the record (with entityType: one record)' })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt({ message: 'entityId must be a whole number' })
+  @Min(1, { message: 'entityId must be a whole number' })
+  @Max(Number.MAX_SAFE_INTEGER, { message: 'entityId must be a whole number' })
+  readonly entityId?: number;
 
   @ApiPropertyOptional({ example: 'decision.create' })
   @IsOptional()

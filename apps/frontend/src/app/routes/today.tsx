@@ -7,6 +7,7 @@ import { paths } from '@/config/paths';
 import { useSessionUser } from '@/features/auth/auth-context';
 import { OverdueCorrectiveActionsSection } from '@/features/corrective-actions/components/overdue-corrective-actions-section';
 import { InstrumentsDueSection } from '@/features/inspection/components/instruments-due-section';
+import { RejectReachedSection } from '@/features/lots/components/reject-reached-section';
 import { TodayLotsSection } from '@/features/lots/components/today-lots-section';
 import { UnreturnedLotsSection } from '@/features/returns/components/unreturned-lots-section';
 import { roleLabels } from '@/lib/roles';
@@ -14,6 +15,7 @@ import { roleLabels } from '@/lib/roles';
 const CAN_RECEIVE = ['clerk', 'qa_lead', 'admin'];
 const FOLLOWS_SUPPLIERS = ['purchasing', 'qa_lead', 'admin'];
 const RETURNS_GOODS = ['purchasing', 'admin'];
+const DECIDES = ['qa_lead', 'admin'];
 
 export function TodayRoute() {
   const user = useSessionUser();
@@ -45,6 +47,13 @@ export function TodayRoute() {
         )}
       </Stack>
       <Grid container spacing={2}>
+        {DECIDES.includes(user.role) && (
+          <Grid size={{ xs: 12 }}>
+            <SectionBoundary name="lots at the reject number">
+              <RejectReachedSection />
+            </SectionBoundary>
+          </Grid>
+        )}
         {RETURNS_GOODS.includes(user.role) && (
           <Grid size={{ xs: 12, lg: 6 }}>
             <SectionBoundary name="rejected lots without a return">

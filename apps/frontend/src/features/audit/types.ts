@@ -7,6 +7,7 @@ export interface TimelineEvent {
   action: string;
   entityType: string;
   entityId: number | null;
+  lotId?: number | null;
   summary: string;
   before: Record<string, unknown> | null;
   after: Record<string, unknown> | null;

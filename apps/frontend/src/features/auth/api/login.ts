@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
+import { forgetOfflineAnswers } from '@/lib/offline-answers';
 import type { SessionUser } from '@/features/auth/types';
 import { queryKeys } from '@/lib/query-keys';
 
@@ -35,6 +36,7 @@ export function useLogin() {
         predicate: (query) => query.queryKey[0] !== queryKeys.auth.all[0],
       });
       queryClient.setQueryData(queryKeys.auth.me(), user);
+      void forgetOfflineAnswers();
     },
   });
 }

@@ -33,7 +33,7 @@ export function PhotoViewerDialog({
               <Alert severity="warning" sx={{ mb: 1.5 }}>
                 Void: {photo.voidReason}
                 {photo.voidedBy && photo.voidedAt
-                  ? ` (${photo.voidedBy.name}, ${dateTime.format(new Date(photo.voidedAt))})`
+                  ? ` (${photo.voidedBy.name}, ${formatDateTime(photo.voidedAt)})`
                   : ''}
                 . It stays in the record and no longer counts as evidence.
               </Alert>

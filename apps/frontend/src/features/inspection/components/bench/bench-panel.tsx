@@ -92,7 +92,22 @@ export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
     targets.find((t) => targetKey(t) === chosenKey) ??
     nextTarget(targets, undefined, recordedKeys) ??
     targets[0];
-  const doneCount = targets.filter((t) => isDone(t) || recordedKeys.has(targetKey(t))).length;
+  // Recorded means the server has it; a reading kept on the device is only waiting to send.
+  const [sent, setSent] = useState<ReadonlySet<string>>(new Set());
+  const waitingKeys = useMemo(
+    () =>
+      new Set(
+        queue.entries
+          .filter((e) => e.refused === null)
+          .map((e) => targetKey({ seq: e.seq, conductor: { id: e.conductorId } })),
+      ),
+    [queue.entries],
+  );
+  const isRecorded = (t: BenchTarget) => isDone(t) || sent.has(targetKey(t));
+  const doneCount = targets.filter(isRecorded).length;
+  const waitingCount = targets.filter(
+    (t) => !isRecorded(t) && waitingKeys.has(targetKey(t)),
+  ).length;
   const following = current ? nextTarget(targets, targetKey(current), recordedKeys) : undefined;
 
   if (!current) {
@@ -141,6 +156,7 @@ export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
     writeBenchMemory(next);
     setMemory(next);
     setRecorded((m) => new Map(m).set(key, reading?.sampleId ?? m.get(key) ?? 0));
+    if (reading) setSent((all) => new Set(all).add(key));
     // Stay on this piece to show its verdict; "next" moves on.
     setChosenKey(key);
     setLast({ key, reading });
@@ -157,6 +173,7 @@ export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
         <Stack direction="row" sx={{ justifyContent: 'space-between', alignItems: 'baseline' }}>
           <Typography component="p" sx={{ fontWeight: 700 }}>
             {doneCount} of {targets.length} pieces recorded
+            {waitingCount > 0 ? ` · ${waitingCount} waiting to send` : ''}
           </Typography>
           <Typography variant="body2" color="text.secondary">
             plan: {lot.samplingPlan.sampleSize} unit{lot.samplingPlan.sampleSize === 1 ? '' : 's'}
@@ -164,8 +181,9 @@ export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
           </Typography>
         </Stack>
         <LinearProgress
-          variant="determinate"
+          variant={waitingCount > 0 ? 'buffer' : 'determinate'}
           value={targets.length ? (100 * doneCount) / targets.length : 0}
+          valueBuffer={targets.length ? (100 * (doneCount + waitingCount)) / targets.length : 0}
           aria-label="Progress through the plan"
           sx={{ height: 10, borderRadius: 5, mt: 0.5 }}
         />
@@ -180,11 +198,13 @@ export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
       >
         {targets.map((t) => {
           const k = targetKey(t);
-          const state = recordedKeys.has(k)
-            ? 'recorded here'
-            : t.sample
-              ? verdictLabels[t.sample.verdict].toLowerCase()
-              : 'not cut';
+          const state = waitingKeys.has(k)
+            ? 'waiting to send'
+            : recordedKeys.has(k)
+              ? 'recorded here'
+              : t.sample
+                ? verdictLabels[t.sample.verdict].toLowerCase()
+                : 'not cut';
           return (
             <MenuItem key={k} value={k}>
               {pieceLabel(t, oneConductor)} — {state}
@@ -237,8 +257,10 @@ export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
               Next: {pieceLabel(following, oneConductor)}
             </Button>
           ) : (
-            <Alert severity="success">
-              Every planned piece has a reading. A QA lead decides the lot from here.
+            <Alert severity={waitingCount > 0 ? 'info' : 'success'}>
+              {waitingCount > 0
+                ? `Every planned piece has a reading; ${waitingCount} still waiting to send. They go when the network returns; a QA lead decides the lot after that.`
+                : 'Every planned piece has a reading. A QA lead decides the lot from here.'}
             </Alert>
           )}
           <Button onClick={() => setLast(null)}>Another reading on {label}</Button>

@@ -1,0 +1,38 @@
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import { toQueryString } from '@/components/data-table/use-list-params';
+import type { Page } from '@/components/data-table/data-table';
+import { api } from '@/lib/api-client';
+import type { TimelineEvent } from '@/features/audit/types';
+
+/** GET /api/audit (admin): page, pageSize, sort, entityType, entityId, action, actorId, from, to. */
+export type AuditListParams = Record<string, string>;
+
+export interface AuditFacets {
+  actions: string[];
+  entityTypes: string[];
+  people: { id: number; name: string; email: string }[];
+}
+
+export const auditKeys = {
+  all: ['audit'] as const,
+  list: (params: AuditListParams) => [...auditKeys.all, 'list', params] as const,
+  facets: () => [...auditKeys.all, 'facets'] as const,
+};
+
+export const auditEventsQueryOptions = (params: AuditListParams) =>
+  queryOptions({
+    queryKey: auditKeys.list(params),
+    queryFn: ({ signal }) => api.get<Page<TimelineEvent>>(`/audit${toQueryString(params)}`, signal),
+    placeholderData: keepPreviousData,
+  });
+
+export const useAuditEvents = (params: AuditListParams) =>
+  useQuery(auditEventsQueryOptions(params));
+
+/** The actions, record types and people that occur in the trail, for the filters. */
+export const useAuditFacets = () =>
+  useQuery({
+    queryKey: auditKeys.facets(),
+    queryFn: ({ signal }) => api.get<AuditFacets>('/audit/facets', signal),
+    staleTime: 60_000,
+  });
