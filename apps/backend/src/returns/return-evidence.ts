@@ -60,7 +60,12 @@ export class ReturnEvidence {
         evaluation: await this.evaluations.evaluate(lot, em),
         decisions: await decisionsOfLot(em, id),
         readings,
-        photos: await em.find(Photo, { lot: id }, { orderBy: { id: 'asc' }, limit: 12 }),
+        // A voided photo is no evidence: it stays on the Lot page only (issue 15).
+        photos: await em.find(
+          Photo,
+          { lot: id, voided: false },
+          { orderBy: { id: 'asc' }, limit: 12 },
+        ),
       });
     }
     return out;

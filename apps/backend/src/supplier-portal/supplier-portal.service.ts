@@ -224,12 +224,12 @@ export class SupplierPortalService {
     return found.kind === 'scar' ? this.viewOf(em, found.link) : this.returnViewOf(em, found.link);
   }
 
-  /** The photos a return notice shows: those of its own lots, oldest first. */
+  /** The photos a return notice shows: those of its own lots, oldest first, none voided. */
   private returnPhotos(em: EntityManager, ret: VendorReturn) {
     const lotIds = ret.lots.getItems().map((l) => l.id);
     return em.find(
       Photo,
-      { lot: { $in: lotIds } },
+      { lot: { $in: lotIds }, voided: false },
       { orderBy: { lot: 'asc', id: 'asc' }, populate: ['lot'] },
     );
   }
