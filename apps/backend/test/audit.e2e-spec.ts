@@ -147,12 +147,20 @@ describe('GET /api/audit (admin)', () => {
 
 describe('the audit screen: one record, facets and CSV (admin)', () => {
   it('filters to one record by type and id, and lists the actions, types and people', async () => {
-    const { lot } = await rejectedLot();
+    await rejectedLot();
     const admin = await t.token(DEMO.admin);
-    const one = await t.http.get(`/api/audit?entityType=lot&entityId=${lot.id}`).set(auth(admin));
+    const latest = await t.http
+      .get('/api/audit?action=decision.create&pageSize=1')
+      .set(auth(admin));
+    const decisionId = latest.body.items[0].entityId as number;
+    const one = await t.http
+      .get(`/api/audit?entityType=decision&entityId=${decisionId}`)
+      .set(auth(admin));
     expect(one.status).toBe(200);
     expect(one.body.total).toBeGreaterThanOrEqual(1);
-    for (const e of one.body.items) expect([e.entityType, e.entityId]).toEqual(['lot', lot.id]);
+    for (const e of one.body.items) {
+      expect([e.entityType, e.entityId]).toEqual(['decision', decisionId]);
+    }
     const bad = await t.http.get('/api/audit?entityId=abc').set(auth(admin));
     expect(bad.status).toBe(400);
     expect(bad.body.errors).toEqual([{ field: 'entityId', message: expect.any(String) }]);

@@ -1,6 +1,7 @@
 import { Stack, Typography } from '@mui/material';
 import { useSessionUser } from '@/features/auth/auth-context';
 import { SectionBoundary } from '@/components/section-boundary';
+import { RoleDutiesCard } from '@/features/users/components/role-duties-card';
 import { UsersPanel } from '@/features/users/components/users-panel';
 
 export function UsersRoute() {
@@ -16,6 +17,7 @@ export function UsersRoute() {
       <SectionBoundary name="user list">
         <UsersPanel currentUserId={me.id} />
       </SectionBoundary>
+      <RoleDutiesCard />
     </Stack>
   );
 }
