@@ -147,9 +147,10 @@ test("at a desk, a clerk cannot void another's photo; the QA lead can, and sees 
       .first()
       .click();
     await page.getByRole('menuitem', { name: 'Sign out' }).click();
+    await page.waitForURL((u) => u.pathname === '/sign-in');
+    // Signing in again brings the QA lead back to the lot.
     await signIn(page, 'qa@demo.example');
-    await page.waitForURL((u) => u.pathname === '/today');
-    await page.goto(url(`/lots/${lot.id}`));
+    await page.waitForURL((u) => u.pathname === `/lots/${lot.id}`);
     await page.getByRole('img', { name: 'Unit 1 cut ends' }).first().click();
     await page.getByRole('button', { name: 'Void…' }).click();
     const dialog = page.getByRole('dialog', { name: 'Void this photo?' });

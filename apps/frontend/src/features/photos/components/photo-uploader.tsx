@@ -106,6 +106,7 @@ export function PhotoUploader({ lotId, samples }: PhotoUploaderProps) {
           onChange={(e) => setSampleId(e.target.value)}
           sx={{ minWidth: 220 }}
           disabled={busy}
+          slotProps={{ select: { displayEmpty: true }, inputLabel: { shrink: true } }}
         >
           <MenuItem value="">The lot as a whole</MenuItem>
           {samples.map((s) => (
