@@ -139,20 +139,26 @@ describe('PATCH /api/instruments/:id', () => {
     const clerk = await call(t, DEMO.clerk, 'patch', `/api/instruments/${id}`, { active: false });
     expect(clerk.status).toBe(403);
     const bad = await call(t, DEMO.qa, 'patch', `/api/instruments/${id}`, {
+      version: made.body.version,
       calibrationDueOn: made.body.calibratedOn,
     });
     expect(bad.status).toBe(400);
     expect(bad.body.message).toEqual(['calibrationDueOn must be after calibratedOn']);
     const ok = await call(t, DEMO.qa, 'patch', `/api/instruments/${id}`, {
+      version: made.body.version,
       calibratedOn: dayFromToday(0),
       calibrationDueOn: dayFromToday(365),
     });
     expect(ok.status).toBe(200);
     expect(ok.body).toMatchObject({ calibrationStatus: 'ok', daysToDue: 365 });
-    const retired = await call(t, DEMO.admin, 'patch', `/api/instruments/${id}`, { active: false });
+    const retired = await call(t, DEMO.admin, 'patch', `/api/instruments/${id}`, {
+      version: ok.body.version,
+      active: false,
+    });
     expect(retired.body.active).toBe(false);
     expect(
-      (await call(t, DEMO.qa, 'patch', '/api/instruments/99999', { active: true })).status,
+      (await call(t, DEMO.qa, 'patch', '/api/instruments/99999', { version: 1, active: true }))
+        .status,
     ).toBe(404);
   });
 });
@@ -189,7 +195,10 @@ describe('InstrumentsService.assertUsable', () => {
       new Date('2026-10-01T00:00:00Z'),
     );
     expect(usable.map((i) => i.serial)).toEqual(['B-OK', 'B-2']);
-    await call(t, DEMO.qa, 'patch', `/api/instruments/${ok.body.id}`, { active: false });
+    await call(t, DEMO.qa, 'patch', `/api/instruments/${ok.body.id}`, {
+      version: ok.body.version,
+      active: false,
+    });
     await expect(service.assertUsable([ok.body.id], new Date())).rejects.toMatchObject({
       status: 422,
       message: expect.stringMatching(/serial B-OK\) is retired/),

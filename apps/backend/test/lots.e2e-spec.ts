@@ -11,7 +11,7 @@ import { makeProduct, makeSupplier, spoolBody } from './helpers/catalog';
 import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
 
 let t: TestApp;
-let good: { id: number; name: string };
+let good: { id: number; name: string; version: number };
 let suspended: { id: number; name: string };
 let spoolId: number;
 let levelTwoId: number;
@@ -154,7 +154,10 @@ describe('POST /api/lots', () => {
     );
     expect(res.body.message).toMatch(/until the QA lead restores inspection/);
     const off = await makeProduct(t, spoolBody(good.id, 'LS-OFF'));
-    await call(t, DEMO.qa, 'patch', `/api/products/${off.id}`, { active: false });
+    await call(t, DEMO.qa, 'patch', `/api/products/${off.id}`, {
+      version: off.version,
+      active: false,
+    });
     const inactive = await call(t, DEMO.clerk, 'post', '/api/lots', lotBody(off.id));
     expect(inactive.status).toBe(422);
     expect(inactive.body.message).toMatch(/no longer an active product/);
@@ -380,6 +383,7 @@ describe('the cached lot list', () => {
     expect(after.items[0]).toMatchObject({ id: created.body.id, status: 'on_hold' });
 
     const renamed = await call(t, DEMO.buyer, 'patch', `/api/suppliers/${good.id}`, {
+      version: good.version,
       name: 'Lotfixture Copper Works',
     });
     expect(renamed.status).toBe(200);

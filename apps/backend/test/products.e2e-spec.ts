@@ -171,6 +171,7 @@ describe('PATCH /api/products/:id', () => {
       (await call(t, DEMO.clerk, 'patch', `/api/products/${made.id}`, { active: false })).status,
     ).toBe(403);
     const res = await call(t, DEMO.qa, 'patch', `/api/products/${made.id}`, {
+      version: made.version,
       description: 'Kit with the heavier ground',
       aql: '0.65',
       inspectionLevel: 'II',
@@ -244,6 +245,7 @@ describe('PATCH /api/products/:id', () => {
     ];
     for (const change of loosen) {
       const res = await call(t, DEMO.buyer, 'patch', `/api/products/${made.id}`, {
+        version: made.version,
         description: 'Changed by purchasing',
         ...change,
       });
@@ -260,6 +262,7 @@ describe('PATCH /api/products/:id', () => {
     expect(kept.body.conductors[0].gauge).toBe('4 AWG');
     // Purchasing may edit the description, even sending the unchanged criteria along.
     const ok = await call(t, DEMO.buyer, 'patch', `/api/products/${made.id}`, {
+      version: kept.body.version,
       description: 'Renamed by purchasing',
       aql: '1.0',
       minAreaRatio: 0.98,
@@ -273,10 +276,15 @@ describe('PATCH /api/products/:id', () => {
       minAreaRatio: 0.6,
     });
     expect(created.status).toBe(403);
+    let version = ok.body.version as number;
     for (const who of [DEMO.qa, DEMO.admin]) {
-      const res = await call(t, who, 'patch', `/api/products/${made.id}`, { aql: '0.65' });
+      const res = await call(t, who, 'patch', `/api/products/${made.id}`, { version, aql: '0.65' });
       expect(res.status).toBe(200);
-      await call(t, who, 'patch', `/api/products/${made.id}`, { aql: '1.0' });
+      const back = await call(t, who, 'patch', `/api/products/${made.id}`, {
+        version: res.body.version,
+        aql: '1.0',
+      });
+      version = back.body.version;
     }
     expect(await em().count(AuditEvent, { entityId: made.id, action: 'product.criteria' })).toBe(4);
   });
@@ -284,6 +292,7 @@ describe('PATCH /api/products/:id', () => {
   it('validates like create, refuses fixed fields and deactivates', async () => {
     const made = await makeProduct(t, spoolBody(supplierId, 'SP-PATCH'));
     const bad = await call(t, DEMO.qa, 'patch', `/api/products/${made.id}`, {
+      version: made.version,
       conductors: [
         { purpose: 'power', gauge: '4', claimedMaterial: 'copper' },
         { purpose: 'ground', gauge: '3/0 SAE', claimedMaterial: 'copper' },
@@ -291,13 +300,20 @@ describe('PATCH /api/products/:id', () => {
     });
     expect(bad.status).toBe(400);
     expect(bad.body.message[0]).toMatch(/^conductors\[1\]\.gauge: "3\/0 SAE"/);
-    const fixed = await call(t, DEMO.qa, 'patch', `/api/products/${made.id}`, { sku: 'NEW' });
+    const fixed = await call(t, DEMO.qa, 'patch', `/api/products/${made.id}`, {
+      version: made.version,
+      sku: 'NEW',
+    });
     expect(fixed.body.message).toEqual(['property sku should not exist']);
-    const off = await call(t, DEMO.qa, 'patch', `/api/products/${made.id}`, { active: false });
+    const off = await call(t, DEMO.qa, 'patch', `/api/products/${made.id}`, {
+      version: made.version,
+      active: false,
+    });
     expect(off.body.active).toBe(false);
-    expect((await call(t, DEMO.qa, 'patch', '/api/products/99999', { active: false })).status).toBe(
-      404,
-    );
+    expect(
+      (await call(t, DEMO.qa, 'patch', '/api/products/99999', { version: 1, active: false }))
+        .status,
+    ).toBe(404);
   });
 });
 

@@ -154,6 +154,7 @@ describe('PATCH /api/suppliers/:id', () => {
       (await call(t, DEMO.qa, 'patch', `/api/suppliers/${id}`, { status: 'suspended' })).status,
     ).toBe(403);
     const res = await call(t, DEMO.buyer, 'patch', `/api/suppliers/${id}`, {
+      version: made.body.version,
       status: 'suspended',
       contactEmail: null,
       notes: 'Two undersized lots in a row',
@@ -164,10 +165,16 @@ describe('PATCH /api/suppliers/:id', () => {
       contactEmail: null,
       notes: 'Two undersized lots in a row',
     });
-    const bad = await call(t, DEMO.buyer, 'patch', `/api/suppliers/${id}`, { contactEmail: 'x@' });
+    const bad = await call(t, DEMO.buyer, 'patch', `/api/suppliers/${id}`, {
+      version: res.body.version,
+      contactEmail: 'x@',
+    });
     expect(bad.status).toBe(400);
     expect(bad.body.message).toEqual(['contactEmail must be an e-mail address']);
-    const dupe = await call(t, DEMO.admin, 'patch', `/api/suppliers/${id}`, { code: 'TS-B' });
+    const dupe = await call(t, DEMO.admin, 'patch', `/api/suppliers/${id}`, {
+      version: res.body.version,
+      code: 'TS-B',
+    });
     expect(dupe.status).toBe(409);
     const em = t.app.get(MikroORM).em.fork();
     const [event] = await em.find(AuditEvent, {

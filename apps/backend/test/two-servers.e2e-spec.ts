@@ -57,18 +57,30 @@ describe('two servers on one SQLite file', () => {
       ).body.accessToken as string;
     const [ta, tb] = [await login(a), await login(b)];
     const products = await api(a, 'GET', '/api/products?pageSize=1', ta);
-    const id = (products.body.items as { id: number }[])[0].id;
+    const { id, version } = (products.body.items as { id: number; version: number }[])[0];
+    // Forty edits of one loaded copy, half through each server: one is saved, the other
+    // thirty-nine are told someone saved first and get the product as it is now.
     const results = await Promise.all(
       Array.from({ length: 40 }, (_, i) =>
         api(i % 2 ? b : a, 'PATCH', `/api/products/${id}`, i % 2 ? tb : ta, {
+          version,
           description: `Edited by request ${i}`,
         }),
       ),
     );
     const statuses = results.map((r) => r.status);
     expect(statuses.filter((s) => s >= 500)).toEqual([]);
-    expect(statuses.every((s) => s === 200)).toBe(true);
+    expect(statuses.filter((s) => s === 200)).toHaveLength(1);
+    expect(statuses.filter((s) => s === 409)).toHaveLength(39);
+    const winner = results.find((r) => r.status === 200)!.body;
+    expect(winner.version).toBe(version + 1);
+    for (const lost of results.filter((r) => r.status === 409)) {
+      expect(lost.body.current).toMatchObject({
+        description: winner.description,
+        version: version + 1,
+      });
+    }
     const final = await api(b, 'GET', `/api/products/${id}`, tb);
-    expect(final.body.description).toMatch(/^Edited by request \d+$/);
+    expect(final.body).toMatchObject({ description: winner.description, version: version + 1 });
   }, 120_000);
 });

@@ -52,6 +52,7 @@ export function instrumentView(i: Instrument, now = new Date()) {
     active: i.active,
     calibrationStatus: calibrationStatus(i.calibrationDueOn, today),
     daysToDue: daysBetween(today, i.calibrationDueOn),
+    version: i.version,
     createdAt: i.createdAt,
     updatedAt: i.updatedAt,
   };

@@ -8,6 +8,7 @@ import { paging, parseSort, type Page } from '../common/paging';
 import { CreateInstrumentDto } from './dto/create-instrument.dto';
 import { ListInstrumentsDto } from './dto/list-instruments.dto';
 import { UpdateInstrumentDto } from './dto/update-instrument.dto';
+import { versionedEdit } from '../common/versioned-edit';
 import { Instrument } from './entities/instrument.entity';
 import {
   instrumentProblems,
@@ -127,33 +128,45 @@ export class InstrumentsService {
   }
 
   async update(id: number, dto: UpdateInstrumentDto, actor: RequestUser) {
-    const instrument = await this.em.findOneOrFail(Instrument, { id });
-    const before = instrumentView(instrument);
-    const next = {
-      kind: dto.kind ?? instrument.kind,
-      resolutionUnit: dto.resolutionUnit ?? instrument.resolutionUnit,
-      calibratedOn: dto.calibratedOn ?? instrument.calibratedOn,
-      calibrationDueOn: dto.calibrationDueOn ?? instrument.calibrationDueOn,
-    };
-    this.check(next);
-    const serial = dto.serial?.trim();
-    if (serial !== undefined && serial !== instrument.serial) await this.assertSerialFree(serial);
-    const given = Object.fromEntries(Object.entries(dto).filter(([, v]) => v !== undefined));
-    this.em.assign(instrument, {
-      ...given,
-      ...next,
-      ...(dto.name !== undefined ? { name: dto.name.trim() } : {}),
-      ...(serial !== undefined ? { serial } : {}),
+    const { version, ...fields } = dto;
+    return versionedEdit(this.em, {
+      version,
+      load: (em) => em.findOneOrFail(Instrument, { id }),
+      view: (_em, instrument) => instrumentView(instrument),
+      name: (instrument) => `instrument ${instrument.serial}`,
+      change: async (em, instrument) => {
+        const before = instrumentView(instrument);
+        const next = {
+          kind: fields.kind ?? instrument.kind,
+          resolutionUnit: fields.resolutionUnit ?? instrument.resolutionUnit,
+          calibratedOn: fields.calibratedOn ?? instrument.calibratedOn,
+          calibrationDueOn: fields.calibrationDueOn ?? instrument.calibrationDueOn,
+        };
+        this.check(next);
+        const serial = fields.serial?.trim();
+        if (serial !== undefined && serial !== instrument.serial) {
+          await this.assertSerialFree(serial, em);
+        }
+        const given = Object.fromEntries(Object.entries(fields).filter(([, v]) => v !== undefined));
+        em.assign(instrument, {
+          ...given,
+          ...next,
+          ...(fields.name !== undefined ? { name: fields.name.trim() } : {}),
+          ...(serial !== undefined ? { serial } : {}),
+        });
+        await em.flush();
+        const after = instrumentView(instrument);
+        this.audit.record(em, actor, {
+          action: 'instrument.update',
+          entityType: 'instrument',
+          entityId: instrument.id,
+          before,
+          after,
+        });
+        await em.flush();
+        return after;
+      },
     });
-    this.audit.record(this.em, actor, {
-      action: 'instrument.update',
-      entityType: 'instrument',
-      entityId: instrument.id,
-      before,
-      after: instrumentView(instrument),
-    });
-    await this.em.flush();
-    return instrumentView(instrument);
   }
 
   private check(i: Parameters<typeof instrumentProblems>[0]): void {
@@ -161,8 +174,8 @@ export class InstrumentsService {
     if (problems.length) throw new BadRequestException(problems);
   }
 
-  private async assertSerialFree(serial: string): Promise<void> {
-    if (await this.em.count(Instrument, { serial })) {
+  private async assertSerialFree(serial: string, em: EntityManager = this.em): Promise<void> {
+    if (await em.count(Instrument, { serial })) {
       throw new ConflictException(`An instrument with serial ${serial} is already registered`);
     }
   }

@@ -23,6 +23,8 @@ import { Migration20261203143251 } from './postgresql/Migration20261203143251';
 import { Migration20261203120500 } from './sqlite/Migration20261203120500';
 import { Migration20261203133640 } from './sqlite/Migration20261203133640';
 import { Migration20261203143250 } from './sqlite/Migration20261203143250';
+import { Migration20261203152700 } from './sqlite/Migration20261203152700';
+import { Migration20261203152710 } from './postgresql/Migration20261203152710';
 import { Migration20261203153113 } from './postgresql/Migration20261203153113';
 import { Migration20261203153110 } from './sqlite/Migration20261203153110';
 
@@ -44,6 +46,7 @@ export const SQLITE_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203120500', class: Migration20261203120500 },
   { name: 'Migration20261203133640', class: Migration20261203133640 },
   { name: 'Migration20261203143250', class: Migration20261203143250 },
+  { name: 'Migration20261203152700', class: Migration20261203152700 },
   { name: 'Migration20261203153110', class: Migration20261203153110 },
 ];
 
@@ -60,5 +63,6 @@ export const POSTGRES_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203120504', class: Migration20261203120504 },
   { name: 'Migration20261203133643', class: Migration20261203133643 },
   { name: 'Migration20261203143251', class: Migration20261203143251 },
+  { name: 'Migration20261203152710', class: Migration20261203152710 },
   { name: 'Migration20261203153113', class: Migration20261203153113 },
 ];

@@ -76,6 +76,7 @@ export function productView(
     conductors: conductors.map(conductorView),
     inspectionState: inspectionStateView(state),
     warnings: productWarnings(conductors.filter((c) => c.active)),
+    version: p.version,
     createdAt: p.createdAt,
     updatedAt: p.updatedAt,
   };

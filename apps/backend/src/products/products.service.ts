@@ -20,6 +20,7 @@ import { InspectionState } from './entities/inspection-state.entity';
 import { Product } from './entities/product.entity';
 import { productView, type ProductView } from './product-view';
 import { planForLot, type PlanAnswer } from './sampling-plan';
+import { versionedEdit } from '../common/versioned-edit';
 
 const SORTS = ['sku', 'description', 'kind', 'supplier', 'createdAt'] as const;
 const SORT_COLUMNS: Record<(typeof SORTS)[number], string> = {
@@ -173,51 +174,57 @@ export class ProductsService {
 
   async update(id: number, dto: UpdateProductDto, actor: RequestUser): Promise<ProductView> {
     const conductors = dto.conductors ? parseConductors(dto.conductors) : null;
-    return this.em.transactional(async (em) => {
-      const product = await em.findOneOrFail(
-        Product,
-        { id },
-        { populate: ['supplier', 'conductors'] },
-      );
-      const state = await em.findOne(InspectionState, { product });
-      const before = productView(product, state);
-      if (dto.description !== undefined) product.description = dto.description.trim();
-      if (dto.lengthPerUnitM !== undefined) product.lengthPerUnitM = dto.lengthPerUnitM;
-      if (dto.inspectionLevel !== undefined) product.inspectionLevel = dto.inspectionLevel;
-      if (dto.aql !== undefined) product.aql = dto.aql;
-      if (dto.minAreaRatio !== undefined) product.minAreaRatio = dto.minAreaRatio;
-      if (dto.concessionNeedsApproval !== undefined)
-        product.concessionNeedsApproval = dto.concessionNeedsApproval;
-      if (dto.active !== undefined) product.active = dto.active;
-      if (conductors) replaceConductors(em, product, conductors);
-      const criteriaBefore = acceptanceCriteria(before);
-      const criteriaAfter = acceptanceCriteria(productView(product, state));
-      const criteriaChanged = JSON.stringify(criteriaBefore) !== JSON.stringify(criteriaAfter);
-      if (criteriaChanged && !CRITERIA_ROLES.includes(actor.role)) {
-        // Nothing is flushed: the transaction ends with the refusal.
-        throw new ForbiddenException(
-          'Only a QA lead or an admin can change acceptance criteria (inspection level, AQL, minimum area ratio, conductor specs); nothing was saved.',
-        );
-      }
-      await em.flush();
-      const after = productView(product, state);
-      if (criteriaChanged) {
+    return versionedEdit(this.em, {
+      version: dto.version,
+      load: (em) => em.findOneOrFail(Product, { id }, { populate: ['supplier', 'conductors'] }),
+      view: async (em, product) =>
+        productView(product, await em.findOne(InspectionState, { product })),
+      name: (product) => `product ${product.sku}`,
+      change: async (em, product) => {
+        const state = await em.findOne(InspectionState, { product });
+        const before = productView(product, state);
+        if (dto.description !== undefined) product.description = dto.description.trim();
+        if (dto.lengthPerUnitM !== undefined) product.lengthPerUnitM = dto.lengthPerUnitM;
+        if (dto.inspectionLevel !== undefined) product.inspectionLevel = dto.inspectionLevel;
+        if (dto.aql !== undefined) product.aql = dto.aql;
+        if (dto.minAreaRatio !== undefined) product.minAreaRatio = dto.minAreaRatio;
+        if (dto.concessionNeedsApproval !== undefined)
+          product.concessionNeedsApproval = dto.concessionNeedsApproval;
+        if (dto.active !== undefined) product.active = dto.active;
+        if (conductors) {
+          replaceConductors(em, product, conductors);
+          // The product row is written too, so its version moves with its conductors.
+          product.updatedAt = new Date();
+        }
+        const criteriaBefore = acceptanceCriteria(before);
+        const criteriaAfter = acceptanceCriteria(productView(product, state));
+        const criteriaChanged = JSON.stringify(criteriaBefore) !== JSON.stringify(criteriaAfter);
+        if (criteriaChanged && !CRITERIA_ROLES.includes(actor.role)) {
+          // Nothing is flushed: the transaction ends with the refusal.
+          throw new ForbiddenException(
+            'Only a QA lead or an admin can change acceptance criteria (inspection level, AQL, minimum area ratio, conductor specs); nothing was saved.',
+          );
+        }
+        await em.flush();
+        const after = productView(product, state);
+        if (criteriaChanged) {
+          this.audit.record(em, actor, {
+            action: 'product.criteria',
+            entityType: 'product',
+            entityId: product.id,
+            before: criteriaBefore,
+            after: criteriaAfter,
+          });
+        }
         this.audit.record(em, actor, {
-          action: 'product.criteria',
+          action: 'product.update',
           entityType: 'product',
           entityId: product.id,
-          before: criteriaBefore,
-          after: criteriaAfter,
+          before,
+          after,
         });
-      }
-      this.audit.record(em, actor, {
-        action: 'product.update',
-        entityType: 'product',
-        entityId: product.id,
-        before,
-        after,
-      });
-      return after;
+        return after;
+      },
     });
   }
 

@@ -8,6 +8,7 @@ export function supplierView(s: Supplier) {
     contactEmail: s.contactEmail,
     status: s.status,
     notes: s.notes,
+    version: s.version,
     createdAt: s.createdAt,
     updatedAt: s.updatedAt,
   };

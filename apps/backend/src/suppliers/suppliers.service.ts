@@ -9,6 +9,7 @@ import { ListSuppliersDto } from './dto/list-suppliers.dto';
 import { UpdateSupplierDto } from './dto/update-supplier.dto';
 import { Supplier } from './entities/supplier.entity';
 import { supplierView, type SupplierView } from './supplier-view';
+import { versionedEdit } from '../common/versioned-edit';
 
 const SORTS = ['name', 'code', 'status'] as const;
 
@@ -69,31 +70,40 @@ export class SuppliersService {
   }
 
   async update(id: number, dto: UpdateSupplierDto, actor: RequestUser): Promise<SupplierView> {
-    const supplier = await this.em.findOneOrFail(Supplier, { id });
-    const before = supplierView(supplier);
-    if (dto.code !== undefined && normalCode(dto.code) !== supplier.code) {
-      await this.assertCodeFree(normalCode(dto.code));
-      supplier.code = normalCode(dto.code);
-    }
-    if (dto.name !== undefined) supplier.name = dto.name.trim();
-    if (dto.contactEmail !== undefined) {
-      supplier.contactEmail = blankToNull(dto.contactEmail)?.toLowerCase() ?? null;
-    }
-    if (dto.status !== undefined) supplier.status = dto.status;
-    if (dto.notes !== undefined) supplier.notes = blankToNull(dto.notes);
-    this.audit.record(this.em, actor, {
-      action: before.status !== supplier.status ? 'supplier.status' : 'supplier.update',
-      entityType: 'supplier',
-      entityId: supplier.id,
-      before,
-      after: supplierView(supplier),
+    return versionedEdit(this.em, {
+      version: dto.version,
+      load: (em) => em.findOneOrFail(Supplier, { id }),
+      view: (_em, supplier) => supplierView(supplier),
+      name: (supplier) => `supplier ${supplier.code}`,
+      change: async (em, supplier) => {
+        const before = supplierView(supplier);
+        if (dto.code !== undefined && normalCode(dto.code) !== supplier.code) {
+          await this.assertCodeFree(normalCode(dto.code), em);
+          supplier.code = normalCode(dto.code);
+        }
+        if (dto.name !== undefined) supplier.name = dto.name.trim();
+        if (dto.contactEmail !== undefined) {
+          supplier.contactEmail = blankToNull(dto.contactEmail)?.toLowerCase() ?? null;
+        }
+        if (dto.status !== undefined) supplier.status = dto.status;
+        if (dto.notes !== undefined) supplier.notes = blankToNull(dto.notes);
+        await em.flush();
+        const after = supplierView(supplier);
+        this.audit.record(em, actor, {
+          action: before.status !== supplier.status ? 'supplier.status' : 'supplier.update',
+          entityType: 'supplier',
+          entityId: supplier.id,
+          before,
+          after,
+        });
+        await em.flush();
+        return after;
+      },
     });
-    await this.em.flush();
-    return supplierView(supplier);
   }
 
-  private async assertCodeFree(code: string): Promise<void> {
-    if (await this.em.count(Supplier, { code })) {
+  private async assertCodeFree(code: string, em: EntityManager = this.em): Promise<void> {
+    if (await em.count(Supplier, { code })) {
       throw new ConflictException(`Supplier code ${code} is already used by another supplier`);
     }
   }

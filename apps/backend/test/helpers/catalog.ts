@@ -11,7 +11,7 @@ export async function makeSupplier(t: TestApp, code: string, extra: object = {})
     ...extra,
   });
   expect(res.status, JSON.stringify(res.body)).toBe(201);
-  return res.body as { id: number; name: string; code: string; status: string };
+  return res.body as { id: number; name: string; code: string; status: string; version: number };
 }
 
 export const spoolBody = (supplierId: number, sku: string, extra: object = {}) => ({
@@ -28,5 +28,5 @@ export const spoolBody = (supplierId: number, sku: string, extra: object = {}) =
 export async function makeProduct(t: TestApp, body: object) {
   const res = await call(t, DEMO.qa, 'post', '/api/products', body);
   expect(res.status, JSON.stringify(res.body)).toBe(201);
-  return res.body as { id: number; sku: string; conductors: { id: number }[] };
+  return res.body as { id: number; sku: string; version: number; conductors: { id: number }[] };
 }

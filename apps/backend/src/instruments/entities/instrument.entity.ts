@@ -61,4 +61,8 @@ export class Instrument {
   /** Expanded uncertainty (k = 2) from the calibration certificate, in `resolutionUnit`. */
   @Property({ type: 'double', nullable: true })
   calibrationUncertainty: number | null = null;
+
+  /** Optimistic lock: an edit made on a stale copy is refused with 409 (issue 17 item 7). */
+  @Property({ type: 'integer', version: true })
+  version!: Opt<number>;
 }

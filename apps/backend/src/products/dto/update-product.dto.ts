@@ -1,13 +1,16 @@
-import { ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
   ArrayMaxSize,
   ArrayMinSize,
   IsArray,
   IsBoolean,
+  IsInt,
   IsOptional,
   IsString,
+  Max,
   MaxLength,
+  Min,
   MinLength,
   ValidateNested,
 } from 'class-validator';
@@ -39,4 +42,12 @@ export class UpdateProductDto extends ProductPolicyDto {
   @IsOptional()
   @IsBoolean({ message: 'active must be true or false' })
   readonly active?: boolean;
+
+  @ApiProperty({
+    description: 'The version of the product the edit was made on; a stale one gets 409',
+  })
+  @IsInt({ message: 'version must be a whole number' })
+  @Min(1, { message: 'version must be a whole number' })
+  @Max(2147483647, { message: 'version must be a whole number' })
+  readonly version!: number;
 }

@@ -68,4 +68,8 @@ export class Product {
    */
   @Property({ type: 'boolean', default: true })
   concessionNeedsApproval: Opt<boolean> = true;
+
+  /** Optimistic lock: an edit made on a stale copy is refused with 409 (issue 17 item 7). */
+  @Property({ type: 'integer', version: true })
+  version!: Opt<number>;
 }

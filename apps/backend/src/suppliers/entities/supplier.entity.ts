@@ -29,4 +29,8 @@ export class Supplier {
 
   @Property({ type: 'Date', onUpdate: () => new Date() })
   updatedAt: Opt<Date> = new Date();
+
+  /** Optimistic lock: an edit made on a stale copy is refused with 409 (issue 17 item 7). */
+  @Property({ type: 'integer', version: true })
+  version!: Opt<number>;
 }

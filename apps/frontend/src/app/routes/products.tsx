@@ -6,6 +6,8 @@ import { ProductsPanel } from '@/features/products/components/products-panel';
 export function ProductsRoute() {
   const user = useSessionUser();
   const canWrite = user.role !== 'clerk'; // qa_lead, purchasing, admin; the server decides
+  // Acceptance criteria belong to QA (issue 17): purchasing edits the rest of a product.
+  const canSetCriteria = user.role === 'qa_lead' || user.role === 'admin';
   return (
     <Stack spacing={2}>
       <div>
@@ -16,7 +18,7 @@ export function ProductsRoute() {
         </Typography>
       </div>
       <SectionBoundary name="product list">
-        <ProductsPanel canWrite={canWrite} />
+        <ProductsPanel canWrite={canWrite} canSetCriteria={canSetCriteria} />
       </SectionBoundary>
     </Stack>
   );

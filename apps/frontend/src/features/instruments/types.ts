@@ -29,6 +29,8 @@ export interface Instrument {
   accuracyPercentOfReading: number | null;
   accuracyAbsolute: number | null;
   calibrationUncertainty: number | null;
+  /** Moves on every save; an edit sends the one it was made on (a stale one: 409). */
+  version: number;
 }
 
 export { instrumentKindLabels as kindLabels } from '@/lib/labels';

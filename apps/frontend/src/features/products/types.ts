@@ -44,6 +44,8 @@ export interface Product {
     reducedEligible: boolean;
   };
   warnings: string[];
+  /** Moves on every save; an edit sends the one it was made on (a stale one: 409). */
+  version: number;
 }
 
 export const kindLabels: Record<ProductKind, string> = { spool: 'Spool', kit: 'Wiring kit' };

@@ -8,6 +8,8 @@ export interface Supplier {
   contactEmail: string | null;
   status: SupplierStatus;
   notes: string | null;
+  /** Moves on every save; an edit sends the one it was made on (a stale one: 409). */
+  version: number;
   createdAt: string;
   updatedAt: string;
 }

@@ -6,8 +6,16 @@ import { queryKeys } from '@/lib/query-keys';
 
 export type InstrumentPatch = Partial<InstrumentBody> & { active?: boolean };
 
-export const updateInstrument = ({ id, patch }: { id: number; patch: InstrumentPatch }) =>
-  api.patch<Instrument>(`/instruments/${id}`, patch);
+/** An edit of the instrument as loaded at `version`; a stale version is answered 409. */
+export const updateInstrument = ({
+  id,
+  version,
+  patch,
+}: {
+  id: number;
+  version: number;
+  patch: InstrumentPatch;
+}) => api.patch<Instrument>(`/instruments/${id}`, { version, ...patch });
 
 export function instrumentPatch(before: Instrument, after: InstrumentBody): InstrumentPatch {
   const patch: InstrumentPatch = {};
@@ -22,6 +30,7 @@ export function useUpdateInstrument() {
   return useMutation({
     mutationFn: updateInstrument,
     meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.instruments.all }),
+    // A 409 means the list shows an old copy: load it again either way.
+    onSettled: () => queryClient.invalidateQueries({ queryKey: queryKeys.instruments.all }),
   });
 }

@@ -10,6 +10,7 @@ import {
   MenuItem,
   TextField,
 } from '@mui/material';
+import { useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import {
   instrumentSchema,
@@ -25,6 +26,7 @@ import {
   unitLabels,
   type Instrument,
 } from '@/features/instruments/types';
+import { StaleEditAlert, staleCurrent } from '@/components/stale-edit-alert';
 import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 
@@ -77,24 +79,51 @@ export function InstrumentDialog(props: { instrument: Instrument | null; onClose
   });
   const { errors, isSubmitting } = form.formState;
   const kind = useWatch({ control: form.control, name: 'kind' });
-  const formErrors = mutation.isError ? splitServerErrors(mutation.error, FIELDS).formErrors : [];
+  // The copy the edit is made on: its fields tell what the user changed, its version goes along.
+  const [loaded, setLoaded] = useState(instrument);
+  // The instrument as someone else saved it after this form was opened (a 409), until resolved.
+  const [theirs, setTheirs] = useState<Instrument | null>(null);
+  const formErrors =
+    mutation.isError && !theirs ? splitServerErrors(mutation.error, FIELDS).formErrors : [];
 
-  const onSubmit = form.handleSubmit(async (input) => {
+  const save = async (input: InstrumentInput, version: number | undefined) => {
     const body = toInstrumentBody(input);
     try {
-      const saved = instrument
-        ? await update.mutateAsync({ id: instrument.id, patch: instrumentPatch(instrument, body) })
+      const saved = loaded
+        ? await update.mutateAsync({
+            id: loaded.id,
+            version: version ?? loaded.version,
+            patch: instrumentPatch(loaded, body),
+          })
         : await create.mutateAsync(body);
       toasts.success(`${saved.name} saved.`);
       onClose();
     } catch (error) {
+      const current = staleCurrent<Instrument>(error);
+      if (current) {
+        setTheirs(current);
+        return;
+      }
       const { fieldErrors } = splitServerErrors(error, FIELDS);
       for (const field of FIELDS) {
         const message = fieldErrors[field];
         if (message) form.setError(field, { type: 'server', message });
       }
     }
+  };
+  const onSubmit = form.handleSubmit((input) => save(input, undefined));
+  const onSaveMine = form.handleSubmit((input) => {
+    const version = theirs?.version;
+    setTheirs(null);
+    return save(input, version);
   });
+  const onLoadTheirs = () => {
+    if (!theirs) return;
+    form.reset(toInput(theirs));
+    setLoaded(theirs);
+    setTheirs(null);
+    update.reset();
+  };
 
   const title = instrument ? `Edit ${instrument.name}` : 'New instrument';
   const select = (name: 'kind' | 'resolutionUnit', label: string, options: readonly string[]) => (
@@ -146,6 +175,14 @@ export function InstrumentDialog(props: { instrument: Instrument | null; onClose
       <form noValidate onSubmit={onSubmit} aria-label={title}>
         <DialogTitle>{title}</DialogTitle>
         <DialogContent>
+          {theirs && (
+            <StaleEditAlert
+              what="this instrument"
+              onLoadTheirs={onLoadTheirs}
+              onSaveMine={() => void onSaveMine()}
+              saving={isSubmitting}
+            />
+          )}
           {formErrors.length > 0 && <Alert severity="error">{formErrors.join(' ')}</Alert>}
           {select('kind', 'Kind', INSTRUMENT_KINDS)}
           {text('name', 'Name')}

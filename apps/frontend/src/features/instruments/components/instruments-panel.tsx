@@ -22,7 +22,7 @@ export function InstrumentsPanel({ canWrite }: { canWrite: boolean }) {
   const onToggleActive = useCallback(
     (i: Instrument) =>
       update(
-        { id: i.id, patch: { active: !i.active } },
+        { id: i.id, version: i.version, patch: { active: !i.active } },
         {
           onSuccess: () => toasts.success(`${i.name} ${i.active ? 'retired' : 'reinstated'}.`),
           onError: (error) => toasts.error(error.message),

@@ -8,8 +8,16 @@ export type ProductPatch = Partial<Omit<ProductBody, 'supplierId' | 'sku' | 'kin
   active?: boolean;
 };
 
-export const updateProduct = ({ id, patch }: { id: number; patch: ProductPatch }) =>
-  api.patch<Product>(`/products/${id}`, patch);
+/** An edit of the product as loaded at `version`; a stale version is answered 409. */
+export const updateProduct = ({
+  id,
+  version,
+  patch,
+}: {
+  id: number;
+  version: number;
+  patch: ProductPatch;
+}) => api.patch<Product>(`/products/${id}`, { version, ...patch });
 
 /** A saved product as the form's text values. */
 export function productToInput(product: Product): ProductInput {

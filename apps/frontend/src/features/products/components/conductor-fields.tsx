@@ -25,7 +25,14 @@ function GaugeHelper({ control, index }: { control: Control<ProductInput>; index
 }
 
 /** The conductors of a product: one for a spool, several for a kit. */
-export function ConductorFields({ control }: { control: Control<ProductInput> }) {
+/** The conductor list; `disabled` for those who may not change conductor specs. */
+export function ConductorFields({
+  control,
+  disabled = false,
+}: {
+  control: Control<ProductInput>;
+  disabled?: boolean;
+}) {
   const { fields, append, remove } = useFieldArray({ control, name: 'conductors' });
   return (
     <Box component="fieldset" sx={{ border: 0, p: 0, m: 0, mt: 2 }}>
@@ -48,7 +55,7 @@ export function ConductorFields({ control }: { control: Control<ProductInput> })
             control={control}
             name={`conductors.${index}.purpose`}
             render={({ field: f }) => (
-              <TextField select label="Purpose" {...f}>
+              <TextField select label="Purpose" {...f} disabled={disabled}>
                 {CONDUCTOR_PURPOSES.map((p) => (
                   <MenuItem key={p} value={p}>
                     {purposeLabels[p]}
@@ -65,6 +72,7 @@ export function ConductorFields({ control }: { control: Control<ProductInput> })
                 label="Label gauge"
                 placeholder="4 AWG, 1/0, 25 mm²"
                 {...f}
+                disabled={disabled}
                 error={!!fieldState.error}
                 helperText={
                   fieldState.error?.message ?? <GaugeHelper control={control} index={index} />
@@ -76,7 +84,7 @@ export function ConductorFields({ control }: { control: Control<ProductInput> })
             control={control}
             name={`conductors.${index}.claimedMaterial`}
             render={({ field: f }) => (
-              <TextField select label="Claimed material" {...f}>
+              <TextField select label="Claimed material" {...f} disabled={disabled}>
                 {CLAIMED_MATERIALS.map((m) => (
                   <MenuItem key={m} value={m}>
                     {materialLabels[m]}
@@ -93,6 +101,7 @@ export function ConductorFields({ control }: { control: Control<ProductInput> })
                 label="Claimed strands"
                 inputMode="numeric"
                 {...f}
+                disabled={disabled}
                 error={!!fieldState.error}
                 helperText={fieldState.error?.message}
               />
@@ -100,7 +109,7 @@ export function ConductorFields({ control }: { control: Control<ProductInput> })
           />
           <IconButton
             aria-label={`Remove conductor ${index + 1}`}
-            disabled={fields.length === 1}
+            disabled={disabled || fields.length === 1}
             onClick={() => remove(index)}
             sx={{ mt: { md: 2 } }}
           >
@@ -109,6 +118,7 @@ export function ConductorFields({ control }: { control: Control<ProductInput> })
         </Box>
       ))}
       <Button
+        disabled={disabled}
         startIcon={<AddOutlined />}
         onClick={() =>
           append({ ...EMPTY_CONDUCTOR, purpose: fields.length === 1 ? 'ground' : 'remote' })

@@ -4,8 +4,17 @@ import { Controller, type Control } from 'react-hook-form';
 import { FormRow } from '@/features/products/components/form-row';
 import type { ProductInput } from '@/features/products/api/create-product';
 
-/** Inspection policy: ISO 2859-1 level and AQL, and the minimum area ratio. */
-export function InspectionPolicyFields({ control }: { control: Control<ProductInput> }) {
+/**
+ * Inspection policy: ISO 2859-1 level and AQL, and the minimum area ratio. `disabled` for
+ * those who may not set acceptance criteria (the server refuses them too).
+ */
+export function InspectionPolicyFields({
+  control,
+  disabled = false,
+}: {
+  control: Control<ProductInput>;
+  disabled?: boolean;
+}) {
   return (
     <FormRow columns="1fr 1fr 1fr">
       <Controller
@@ -16,6 +25,7 @@ export function InspectionPolicyFields({ control }: { control: Control<ProductIn
             select
             label="Inspection level"
             {...field}
+            disabled={disabled}
             error={!!fieldState.error}
             helperText={
               fieldState.error?.message ??
@@ -40,6 +50,7 @@ export function InspectionPolicyFields({ control }: { control: Control<ProductIn
             select
             label="AQL"
             {...field}
+            disabled={disabled}
             error={!!fieldState.error}
             helperText={fieldState.error?.message ?? 'Percent nonconforming (ISO 2859-1).'}
           >
@@ -59,6 +70,7 @@ export function InspectionPolicyFields({ control }: { control: Control<ProductIn
             label="Minimum area"
             inputMode="decimal"
             {...field}
+            disabled={disabled}
             error={!!fieldState.error}
             helperText={fieldState.error?.message ?? 'Of nominal; ASTM B496 uses 98 %.'}
             slotProps={{

@@ -3,6 +3,7 @@ import { render, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { ProductDialog } from '@/features/products/components/product-dialog';
+import type { Product } from '@/features/products/types';
 import { UnitsProvider } from '@/lib/units';
 
 const supplierPage = {
@@ -19,13 +20,13 @@ function json(body: unknown, status = 200) {
   });
 }
 
-function renderDialog() {
+function renderDialog(product: Product | null = null, canSetCriteria = true) {
   const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   const onClose = vi.fn();
   render(
     <QueryClientProvider client={client}>
       <UnitsProvider>
-        <ProductDialog product={null} onClose={onClose} />
+        <ProductDialog product={product} canSetCriteria={canSetCriteria} onClose={onClose} />
       </UnitsProvider>
     </QueryClientProvider>,
   );
@@ -33,6 +34,35 @@ function renderDialog() {
 }
 
 afterEach(() => vi.unstubAllGlobals());
+
+/** A saved spool as GET /api/products/:id answers it (invented supplier and SKU). */
+const SPOOL: Product = {
+  id: 5,
+  supplier: { id: 7, name: 'Harbor Strand Co', code: 'HSC', status: 'approved' },
+  sku: 'HS-4',
+  kind: 'spool',
+  description: '4 AWG red, 50 m',
+  lengthPerUnitM: 50,
+  inspectionLevel: 'S-3',
+  aql: '1.0',
+  minAreaRatio: 0.98,
+  active: true,
+  conductors: [
+    {
+      id: 11,
+      position: 0,
+      purpose: 'power',
+      gauge: '4 AWG',
+      gaugeSystem: 'awg',
+      nominalAreaMm2: 21.15,
+      claimedMaterial: 'copper',
+      claimedStrands: null,
+    },
+  ],
+  inspectionState: { severity: 'normal', reason: null, reducedEligible: false },
+  warnings: [],
+  version: 2,
+};
 
 // A large MUI form under jsdom on a shared machine: allow time.
 describe('ProductDialog', { timeout: 60_000 }, () => {
@@ -111,5 +141,100 @@ describe('ProductDialog', { timeout: 60_000 }, () => {
       minAreaRatio: 0.98,
       conductors: [{ purpose: 'power', gauge: '4 AWG', claimedMaterial: 'copper' }],
     });
+  });
+
+  it('keeps an edit someone else saved over, says so, and saves it on their version', async () => {
+    const theirs = { ...SPOOL, description: 'Saved by a colleague', version: 3 };
+    const patches: Record<string, unknown>[] = [];
+    const fetchMock = vi.fn(async (_input: RequestInfo | URL, init?: RequestInit) => {
+      if (init?.method !== 'PATCH') return json(supplierPage);
+      const body = JSON.parse(String(init.body)) as Record<string, unknown>;
+      patches.push(body);
+      if (body.version === 2) {
+        return json(
+          {
+            statusCode: 409,
+            error: 'Conflict',
+            message:
+              'Someone else saved product HS-4 after you opened it; your change was not saved.',
+            path: '/api/products/5',
+            requestId: 'r2',
+            current: theirs,
+          },
+          409,
+        );
+      }
+      return json({ ...theirs, lengthPerUnitM: 75, version: 4 });
+    });
+    vi.stubGlobal('fetch', fetchMock);
+    const user = userEvent.setup({ delay: null });
+    const onClose = renderDialog(SPOOL);
+
+    const length = screen.getByLabelText('Length per unit (m)');
+    await user.clear(length);
+    await user.paste('75');
+    await user.click(screen.getByText('Save'));
+
+    expect(
+      await screen.findByText('Someone else saved this product while you were editing'),
+    ).toBeInTheDocument();
+    // What the user typed stays; nothing was closed.
+    expect(screen.getByLabelText('Length per unit (m)')).toHaveValue('75');
+    expect(onClose).not.toHaveBeenCalled();
+    await user.click(screen.getByText('Save my changes'));
+    await waitFor(() => expect(onClose).toHaveBeenCalled());
+    // Only the changed field goes, on the version the server gave back.
+    expect(patches).toEqual([
+      { version: 2, lengthPerUnitM: 75 },
+      { version: 3, lengthPerUnitM: 75 },
+    ]);
+  });
+
+  it('loads their version when asked, dropping the edit', async () => {
+    const theirs = { ...SPOOL, description: 'Saved by a colleague', version: 3 };
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (_input: RequestInfo | URL, init?: RequestInit) =>
+        init?.method === 'PATCH'
+          ? json(
+              {
+                statusCode: 409,
+                error: 'Conflict',
+                message: 'Someone else saved product HS-4 after you opened it.',
+                path: '/api/products/5',
+                requestId: 'r3',
+                current: theirs,
+              },
+              409,
+            )
+          : json(supplierPage),
+      ),
+    );
+    const user = userEvent.setup({ delay: null });
+    renderDialog(SPOOL);
+    const description = screen.getByLabelText('Description');
+    await user.clear(description);
+    await user.paste('My wording');
+    await user.click(screen.getByText('Save'));
+    await user.click(await screen.findByText('Load their version'));
+    expect(screen.getByLabelText('Description')).toHaveValue('Saved by a colleague');
+    expect(screen.queryByText(/while you were editing/)).not.toBeInTheDocument();
+  });
+
+  it('shows purchasing the acceptance criteria but not for changing', async () => {
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => json(supplierPage)),
+    );
+    renderDialog(SPOOL, false);
+    expect(
+      screen.getByText(
+        'Inspection level, AQL, minimum area and the conductors are acceptance criteria: only a QA lead or an administrator can change them.',
+      ),
+    ).toBeInTheDocument();
+    expect(screen.getByLabelText('Minimum area')).toBeDisabled();
+    expect(screen.getByLabelText('Label gauge')).toBeDisabled();
+    expect(screen.getByText('Add conductor').closest('button')).toBeDisabled();
+    expect(screen.getByLabelText('Description')).toBeEnabled();
   });
 });

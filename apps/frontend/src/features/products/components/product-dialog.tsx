@@ -9,7 +9,9 @@ import {
   Stack,
   Typography,
 } from '@mui/material';
+import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
+import { StaleEditAlert, staleCurrent } from '@/components/stale-edit-alert';
 import {
   EMPTY_PRODUCT,
   productSchema,
@@ -44,10 +46,15 @@ const FIELDS = [
 interface ProductDialogProps {
   /** null: a new product. */
   product: Product | null;
+  /**
+   * May set acceptance criteria (a QA lead or an admin). Others see them disabled: on a new
+   * product the defaults, on an edit also the conductors (the server refuses both).
+   */
+  canSetCriteria: boolean;
   onClose: () => void;
 }
 
-export function ProductDialog({ product, onClose }: ProductDialogProps) {
+export function ProductDialog({ product, canSetCriteria, onClose }: ProductDialogProps) {
   const create = useCreateProduct();
   const update = useUpdateProduct();
   const mutation = product ? update : create;
@@ -59,15 +66,22 @@ export function ProductDialog({ product, onClose }: ProductDialogProps) {
   const { isSubmitting, errors } = form.formState;
   const conductors = useWatch({ control: form.control, name: 'conductors' });
   const liveWarnings = kitWarnings(conductors);
-  const formErrors = mutation.isError ? splitServerErrors(mutation.error, FIELDS).formErrors : [];
+  // The copy the edit is made on: its fields tell what the user changed, its version goes along.
+  const [loaded, setLoaded] = useState(product);
+  // The product as someone else saved it after this form was opened (a 409), until resolved.
+  const [theirs, setTheirs] = useState<Product | null>(null);
+  const formErrors =
+    mutation.isError && !theirs ? splitServerErrors(mutation.error, FIELDS).formErrors : [];
+  const conductorsLocked = !canSetCriteria && product !== null;
 
-  const onSubmit = form.handleSubmit(async (input) => {
+  const save = async (input: ProductInput, version: number | undefined) => {
     const body = toProductBody(input);
     try {
-      const saved = product
+      const saved = loaded
         ? await update.mutateAsync({
-            id: product.id,
-            patch: productPatch(toProductBody(productToInput(product)), body),
+            id: loaded.id,
+            version: version ?? loaded.version,
+            patch: productPatch(toProductBody(productToInput(loaded)), body),
           })
         : await create.mutateAsync(body);
       if (saved.warnings.length > 0) {
@@ -75,13 +89,31 @@ export function ProductDialog({ product, onClose }: ProductDialogProps) {
       } else toasts.success(`${saved.sku} saved.`);
       onClose();
     } catch (error) {
+      const current = staleCurrent<Product>(error);
+      if (current) {
+        setTheirs(current);
+        return;
+      }
       const { fieldErrors } = splitServerErrors(error, FIELDS);
       for (const field of FIELDS) {
         const message = fieldErrors[field];
         if (message) form.setError(field, { type: 'server', message });
       }
     }
+  };
+  const onSubmit = form.handleSubmit((input) => save(input, undefined));
+  const onSaveMine = form.handleSubmit((input) => {
+    const version = theirs?.version;
+    setTheirs(null);
+    return save(input, version);
   });
+  const onLoadTheirs = () => {
+    if (!theirs) return;
+    form.reset(productToInput(theirs));
+    setLoaded(theirs);
+    setTheirs(null);
+    update.reset();
+  };
 
   const title = product ? `Edit ${product.sku}` : 'New product';
   return (
@@ -102,13 +134,28 @@ export function ProductDialog({ product, onClose }: ProductDialogProps) {
               {warning}
             </Alert>
           ))}
+          {theirs && (
+            <StaleEditAlert
+              what="this product"
+              onLoadTheirs={onLoadTheirs}
+              onSaveMine={() => void onSaveMine()}
+              saving={isSubmitting}
+            />
+          )}
           {formErrors.length > 0 && <Alert severity="error">{formErrors.join(' ')}</Alert>}
           <ProductMainFields control={form.control} locked={product !== null} />
           <Typography variant="subtitle1" sx={{ fontWeight: 600, mt: 2 }}>
             Inspection policy
           </Typography>
-          <InspectionPolicyFields control={form.control} />
-          <ConductorFields control={form.control} />
+          {!canSetCriteria && (
+            <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
+              {product
+                ? 'Inspection level, AQL, minimum area and the conductors are acceptance criteria: only a QA lead or an administrator can change them.'
+                : 'A new product starts on the default inspection level, AQL and minimum area; only a QA lead or an administrator can change them.'}
+            </Typography>
+          )}
+          <InspectionPolicyFields control={form.control} disabled={!canSetCriteria} />
+          <ConductorFields control={form.control} disabled={conductorsLocked} />
           {errors.conductors?.root?.message || errors.conductors?.message ? (
             <Alert severity="error">
               {errors.conductors.root?.message ?? errors.conductors.message}

@@ -9,7 +9,14 @@ import { ProductDialog } from '@/features/products/components/product-dialog';
 import { ProductsTable } from '@/features/products/components/products-table';
 import { PRODUCT_KINDS, kindLabels, type Product } from '@/features/products/types';
 
-export function ProductsPanel({ canWrite }: { canWrite: boolean }) {
+export function ProductsPanel({
+  canWrite,
+  canSetCriteria,
+}: {
+  canWrite: boolean;
+  /** May set acceptance criteria (QA lead, admin); the server decides. */
+  canSetCriteria: boolean;
+}) {
   const list = useListParams({
     filters: ['q', 'supplierId', 'kind'],
     defaultSort: { field: 'sku', direction: 'asc' },
@@ -76,6 +83,7 @@ export function ProductsPanel({ canWrite }: { canWrite: boolean }) {
       {editing && (
         <ProductDialog
           product={editing === 'new' ? null : editing}
+          canSetCriteria={canSetCriteria}
           onClose={() => setEditing(null)}
         />
       )}

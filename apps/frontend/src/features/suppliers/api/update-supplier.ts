@@ -6,8 +6,16 @@ import { queryKeys } from '@/lib/query-keys';
 
 export type SupplierPatch = Partial<SupplierBody>;
 
-export const updateSupplier = ({ id, patch }: { id: number; patch: SupplierPatch }) =>
-  api.patch<Supplier>(`/suppliers/${id}`, patch);
+/** An edit of the supplier as loaded at `version`; a stale version is answered 409. */
+export const updateSupplier = ({
+  id,
+  version,
+  patch,
+}: {
+  id: number;
+  version: number;
+  patch: SupplierPatch;
+}) => api.patch<Supplier>(`/suppliers/${id}`, { version, ...patch });
 
 /** Only what changed goes to the server (and into the audit trail). */
 export function supplierPatch(supplier: Supplier, body: SupplierBody): SupplierPatch {

@@ -1,6 +1,8 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, Dialog, DialogActions, DialogContent, DialogTitle, MenuItem } from '@mui/material';
+import { useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { StaleEditAlert, staleCurrent } from '@/components/stale-edit-alert';
 import { FormTextField } from '@/components/form/form-text-field';
 import { ServerErrorAlert, submitWithServerErrors } from '@/components/form/server-errors';
 import {
@@ -48,14 +50,43 @@ export function SupplierDialog({ supplier, onClose }: SupplierDialogProps) {
   });
   const { control } = form;
 
-  const onSubmit = submitWithServerErrors(form, FIELDS, async (input) => {
-    const body = toSupplierBody(input);
-    const saved = supplier
-      ? await update.mutateAsync({ id: supplier.id, patch: supplierPatch(supplier, body) })
-      : await create.mutateAsync(body);
-    toasts.success(supplier ? `${saved.name} saved.` : `${saved.name} added.`);
-    onClose();
-  });
+  // The copy the edit is made on: its fields tell what the user changed, its version goes along.
+  const [loaded, setLoaded] = useState(supplier);
+  // The supplier as someone else saved it after this form was opened (a 409), until resolved.
+  const [theirs, setTheirs] = useState<Supplier | null>(null);
+
+  const save = (version?: number) =>
+    submitWithServerErrors(form, FIELDS, async (input) => {
+      const body = toSupplierBody(input);
+      try {
+        const saved = loaded
+          ? await update.mutateAsync({
+              id: loaded.id,
+              version: version ?? loaded.version,
+              patch: supplierPatch(loaded, body),
+            })
+          : await create.mutateAsync(body);
+        toasts.success(supplier ? `${saved.name} saved.` : `${saved.name} added.`);
+        onClose();
+      } catch (error) {
+        const current = staleCurrent<Supplier>(error);
+        if (!current) throw error;
+        setTheirs(current);
+      }
+    });
+  const onSubmit = save();
+  const onSaveMine = () => {
+    const version = theirs?.version;
+    setTheirs(null);
+    void save(version)();
+  };
+  const onLoadTheirs = () => {
+    if (!theirs) return;
+    form.reset(toInput(theirs));
+    setLoaded(theirs);
+    setTheirs(null);
+    update.reset();
+  };
 
   const title = supplier ? `Edit ${supplier.name}` : 'New supplier';
   return (
@@ -63,7 +94,15 @@ export function SupplierDialog({ supplier, onClose }: SupplierDialogProps) {
       <form noValidate onSubmit={onSubmit} aria-label={title}>
         <DialogTitle>{title}</DialogTitle>
         <DialogContent>
-          <ServerErrorAlert error={mutation.error} fields={FIELDS} />
+          {theirs && (
+            <StaleEditAlert
+              what="this supplier"
+              onLoadTheirs={onLoadTheirs}
+              onSaveMine={onSaveMine}
+              saving={form.formState.isSubmitting}
+            />
+          )}
+          <ServerErrorAlert error={theirs ? null : mutation.error} fields={FIELDS} />
           <FormTextField control={control} name="name" label="Name" />
           <FormTextField
             control={control}
