@@ -23,7 +23,8 @@ const MAX_PAGES = 200;
  * The lot list's totals per filter set and its pages per query, kept until the next write
  * that could change them.
  * - Totals: counting every lot of a status set with a text filter reads tens of thousands
- *   of rows while the page walks an index and stops after 50; they change only with lots.
+ *   of rows while the page walks an index and stops after 50; they change with lots, and
+ *   with the supplier names and SKUs the text filter matches.
  * - Pages, as JSON answers: the screen every clerk, QA lead and buyer opens first, asked with the same few
  *   filter sets all day; a page shows the lot, its product, supplier and receiving clerk,
  *   so a write to any of those clears it.
@@ -32,7 +33,12 @@ const MAX_PAGES = 200;
  */
 @Injectable()
 export class LotListCache extends CacheProvider {
-  private readonly totals = new WriteInvalidatedCache<number>([Lot], MAX_AGE_MS, MAX_ENTRIES);
+  // The text filter matches supplier names and SKUs, so a rename changes a total too.
+  private readonly totals = new WriteInvalidatedCache<number>(
+    [Lot, Product, Supplier],
+    MAX_AGE_MS,
+    MAX_ENTRIES,
+  );
   private readonly pages = new WriteInvalidatedCache<JsonAnswer>(
     [Lot, Product, Supplier, User],
     PAGE_MAX_AGE_MS,
