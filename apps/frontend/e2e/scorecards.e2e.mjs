@@ -53,7 +53,7 @@ test(
     const firstSupplier = table.getByRole('link').first();
     await firstSupplier.waitFor();
     const headers = await table.getByRole('columnheader').allTextContents();
-    for (const h of ['Supplier', 'Lots', 'Accepted', 'Trend', 'Nonconf. ppm', 'Mean area']) {
+    for (const h of ['Supplier', 'Lots', 'Accepted', 'Trend', 'Nonconf. units ppm', 'Mean area']) {
       assert.ok(headers.includes(h), `ranking lacks the ${h} column (has ${headers.join(', ')})`);
     }
     await screenshot(page, 'scorecards-ranking');
