@@ -251,12 +251,12 @@ describe('concessions with terms', () => {
     const byBuyer = await t.http
       .patch(`/api/products/${product.id}`)
       .set(await auth(DEMO.buyer))
-      .send({ concessionNeedsApproval: false });
+      .send({ concessionNeedsApproval: false, version: product.version });
     expect(byBuyer.status).toBe(403);
     const off = await t.http
       .patch(`/api/products/${product.id}`)
       .set(await auth(DEMO.qa))
-      .send({ concessionNeedsApproval: false });
+      .send({ concessionNeedsApproval: false, version: product.version });
     expect(off.status, JSON.stringify(off.body)).toBe(200);
     expect(off.body.concessionNeedsApproval).toBe(false);
     const res = await decide(lot.id, {
