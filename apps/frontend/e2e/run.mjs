@@ -116,6 +116,9 @@ async function main() {
       SEED_DEMO: 'true',
       JWT_SECRET: 'some-test-secret-for-e2e-only',
       SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
+      // Every test signs in from 127.0.0.1; the limits themselves are tested in the API tests.
+      SIGN_IN_TRIES_PER_ACCOUNT: '1000',
+      SIGN_IN_TRIES_PER_ADDRESS: '1000',
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   });

@@ -7,7 +7,7 @@ import { APP_CONFIG } from '../config/config.module';
 import type { AppConfig } from '../config/env';
 import { AuthController } from './auth.controller';
 import { AuthGuard } from './auth.guard';
-import { LOGIN_TRIES_PER_ADDRESS } from './login-throttler.guard';
+import { LOGIN_TRIES_PER_ACCOUNT, LOGIN_TRIES_PER_ADDRESS } from './login-throttler.guard';
 import { AuthService } from './auth.service';
 import { SignedInUsers } from './signed-in-users';
 
@@ -26,7 +26,7 @@ import { SignedInUsers } from './signed-in-users';
     // counts one address's tries at one account; `address` all its tries, whatever the
     // account, so guesses spread over many accounts are slowed too (limits: our choice).
     ThrottlerModule.forRoot([
-      { name: 'default', ttl: 60_000, limit: 5 },
+      { name: 'default', ttl: 60_000, limit: LOGIN_TRIES_PER_ACCOUNT },
       {
         name: 'address',
         ttl: 60_000,
