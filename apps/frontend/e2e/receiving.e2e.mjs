@@ -55,7 +55,7 @@ test('a clerk receives a spool lot, records a mass reading and uploads a photo',
     .getByRole('option', { name: new RegExp(escape(product.sku)) })
     .first()
     .click();
-  await page.getByLabel('PO number').fill(PO);
+  await page.getByRole('textbox', { name: 'PO number' }).fill(PO);
   await page.getByLabel('Packing-slip number').fill('PS-77');
   // Client validation as the clerk types: 1 is not a lot.
   await page.getByLabel('Quantity received').fill('1');
