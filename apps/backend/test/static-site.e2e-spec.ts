@@ -1,4 +1,4 @@
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -12,6 +12,10 @@ let site: string;
 beforeAll(async () => {
   site = mkdtempSync(join(tmpdir(), 'gp-site-'));
   writeFileSync(join(site, 'index.html'), '<!doctype html><title>Gaugeproof test client</title>');
+  writeFileSync(join(site, 'sw.js'), 'self.addEventListener("fetch", () => {});');
+  mkdirSync(join(site, 'assets'));
+  writeFileSync(join(site, 'assets', 'lot-DF2BGZlf.js'), 'export const lot = 1;');
+  writeFileSync(join(site, 'assets', 'notes.js'), 'export const notes = 1;');
   t = await startTestApp({}, { frontendDist: site });
 });
 afterAll(async () => {
@@ -29,6 +33,21 @@ describe('the built client beside the API', () => {
     const missing = await t.http.get('/api/no-such-thing');
     expect(missing.status).toBe(404);
     expect(missing.body).toMatchObject({ statusCode: 404, path: '/api/no-such-thing' });
+  });
+
+  it('lets the browser keep content-hashed built files for good and checks the rest each time', async () => {
+    // A hashed name changes whenever the content does, so a kept copy is never stale; the
+    // page, the service worker and any unhashed file must be asked again (RFC 9111 5.2.2).
+    const hashed = await t.http.get('/assets/lot-DF2BGZlf.js');
+    expect(hashed.status).toBe(200);
+    expect(hashed.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+    for (const path of ['/assets/notes.js', '/sw.js', '/index.html']) {
+      const res = await t.http.get(path);
+      expect(res.status, path).toBe(200);
+      expect(res.headers['cache-control'], path).toBe('no-cache');
+    }
+    const screen = await t.http.get('/lots/12');
+    expect(screen.headers['cache-control'] ?? '').not.toContain('immutable');
   });
 
   it('answers 400 with the usual error body for a body that is not JSON, saving nothing', async () => {
