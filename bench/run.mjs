@@ -13,7 +13,7 @@ import { imageBombFigures } from './lib/image-bomb.mjs';
 import { backupPhase, pngPhase } from './lib/phase-faults.mjs';
 import { importPhase } from './lib/phase-import.mjs';
 import { lotListPhase, scorecardsPhase } from './lib/phase-reads.mjs';
-import { exportsPhase, openSample, readingsPhase } from './lib/phase-writes.mjs';
+import { exportsPhase, openSamples, readingsPhase } from './lib/phase-writes.mjs';
 import { judge } from './lib/budgets.mjs';
 import { Report } from './lib/report.mjs';
 import { signIn, startServer } from './lib/server.mjs';
@@ -152,6 +152,7 @@ try {
   m.faults = {};
   try {
     const clerk = await signIn(faultServer.base, BENCH_USERS.clerk, BENCH_PASSWORD);
+    const qa = await signIn(faultServer.base, BENCH_USERS.qa, BENCH_PASSWORD);
     m.faults.png = await phase('fault: inflating png', () =>
       pngPhase({
         base: faultServer.base,
@@ -165,19 +166,24 @@ try {
       imageBombFigures({ inflateMb: bombMb }),
     );
     m.faults.import = await phase('fault: readings import', () =>
-      importPhase({ base: faultServer.base, token: clerk, dbPath }),
+      importPhase({
+        base: faultServer.base,
+        token: clerk,
+        qaToken: qa,
+        dbPath,
+      }),
     );
     m.faults.backup = await phase('fault: backup under readings', async () => {
-      // The readings phase's samples, or (when it failed) one taken from the file.
-      const target = m.readings?.samples?.[0]
-        ? { sample: m.readings.samples[0], instruments: m.readings.instruments }
-        : openSample(dbPath);
+      // The readings phase's samples, or (when it failed) those with room taken from the file.
+      const target = m.readings?.samples?.length
+        ? { samples: m.readings.samples, instruments: m.readings.instruments }
+        : openSamples(dbPath);
       return backupPhase({
         base: faultServer.base,
         token: clerk,
         dbPath,
         uploadDir: join(scratch, 'uploads'),
-        sample: target.sample,
+        samples: target.samples,
         instruments: target.instruments,
         out: join(scratch, 'backup.sqlite'),
         limitS: quick ? 60 : 180,

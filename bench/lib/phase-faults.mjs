@@ -7,7 +7,7 @@ import { spawn } from 'node:child_process';
 import { request } from 'node:http';
 import { join } from 'node:path';
 import { bombPng } from './image-bomb.mjs';
-import { readingBody } from './phase-writes.mjs';
+import { readingBody, sampleWithRoom } from './phase-writes.mjs';
 import { peakRssMb } from './server.mjs';
 
 const ROOT = join(import.meta.dirname, '..', '..');
@@ -23,7 +23,7 @@ export async function backupPhase({
   token,
   dbPath,
   uploadDir,
-  sample,
+  samples,
   instruments,
   out,
   limitS,
@@ -31,13 +31,17 @@ export async function backupPhase({
   let posting = true;
   let answered = 0;
   const failures = [];
+  const turn = { i: 0 };
   const poster = (async () => {
     while (posting) {
       const t = performance.now();
+      // Each sample holds at most 20 readings: the next one with room takes it.
+      const sample = sampleWithRoom(samples, turn);
       const res = await fetch(`${base}/api/samples/${sample.id}/readings`, {
         method: 'POST',
         headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' },
-        body: readingBody(sample, answered, instruments),
+        // A mass that fits the sample's conductor, as the readings phase posts.
+        body: readingBody(sample, turn.i, instruments),
       });
       if (res.status === 201) answered++;
       else failures.push(`${res.status} ${(await res.text()).slice(0, 200)}`);

@@ -14,14 +14,18 @@ function openLots(dbPath, limit) {
                  order by id desc limit ${Number(limit)}`;
   const conductors = db
     .prepare(
-      `select l.id as lot_id, cs.id as conductor_id, cs.nominal_area_mm2, cs.claimed_material from lots l
+      `select l.id as lot_id, cs.id as conductor_id, cs.nominal_area_mm2, cs.claimed_material,
+              json_extract(l.sampling_plan, '$.sampleSize') as units from lots l
          join conductor_specs cs on cs.product_id = l.product_id and cs.active = 1
         where l.id in (${open}) and not exists (select 1 from samples s where s.lot_id = l.id)`,
     )
     .all();
   const samples = db
     .prepare(
-      `select s.id, cs.nominal_area_mm2 as areaMm2, cs.claimed_material as material from samples s
+      `select s.id, cs.nominal_area_mm2 as areaMm2, cs.claimed_material as material,
+              ${PER_SAMPLE} - (select count(*) from readings r
+                                where r.sample_id = s.id and r.voided = 0) as room
+         from samples s
          join conductor_specs cs on cs.id = s.conductor_id where s.lot_id in (${open})`,
     )
     .all();
@@ -36,36 +40,59 @@ function openLots(dbPath, limit) {
   return { conductors, samples, instruments };
 }
 
-/** A sample already cut on an open lot and a usable balance and rule (the backup's readings). */
-export function openSample(dbPath) {
+/** Live readings one sample may hold (apps/backend reading-writer.ts, issue 17 item 10). */
+export const PER_SAMPLE = 20;
+
+/** Samples already cut on open lots with room for readings, and a usable balance and rule. */
+export function openSamples(dbPath) {
   const { samples, instruments } = openLots(dbPath, 300);
-  if (samples.length === 0) throw new Error('the data set has no sample on an open lot');
-  return { sample: samples[0], instruments };
+  const withRoom = samples.filter((s) => s.room > 0);
+  if (withRoom.length === 0) throw new Error('the data set has no sample with room on an open lot');
+  return { samples: withRoom, instruments };
 }
 
 /**
- * The samples the load writes to: a new sample (unit 1) per conductor of the open lots not
- * cut yet, created through the API, and the samples already cut on open lots.
+ * The samples the load writes to: the samples already cut on open lots, and new ones (every
+ * planned unit of each conductor of the open lots not cut yet) created through the API
+ * until the samples have room for `needed` readings under the per-sample cap.
  */
-async function prepareSamples(base, token, dbPath) {
-  const { conductors, samples, instruments } = openLots(dbPath, 300);
-  for (const c of conductors.slice(0, 100)) {
-    const res = await fetch(`${base}/api/lots/${c.lot_id}/samples`, {
-      method: 'POST',
-      headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' },
-      body: JSON.stringify({ conductorId: c.conductor_id, unitRef: 'Bench unit' }),
-    });
-    if (res.status !== 201) {
-      throw new Error(`POST /api/lots/${c.lot_id}/samples: ${res.status} ${await res.text()}`);
+async function prepareSamples(base, token, dbPath, needed) {
+  const { conductors, samples: cut, instruments } = openLots(dbPath, 300);
+  const samples = cut.filter((s) => s.room > 0);
+  let room = samples.reduce((sum, s) => sum + s.room, 0);
+  for (const c of conductors) {
+    for (let seq = 1; seq <= c.units && room < needed; seq++) {
+      const res = await fetch(`${base}/api/lots/${c.lot_id}/samples`, {
+        method: 'POST',
+        headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' },
+        body: JSON.stringify({ conductorId: c.conductor_id, seq, unitRef: 'Bench unit' }),
+      });
+      if (res.status !== 201) {
+        throw new Error(`POST /api/lots/${c.lot_id}/samples: ${res.status} ${await res.text()}`);
+      }
+      samples.push({
+        id: (await res.json()).id,
+        areaMm2: c.nominal_area_mm2,
+        material: c.claimed_material,
+        room: PER_SAMPLE,
+      });
+      room += PER_SAMPLE;
     }
-    samples.push({
-      id: (await res.json()).id,
-      areaMm2: c.nominal_area_mm2,
-      material: c.claimed_material,
-    });
   }
   if (samples.length === 0) throw new Error('readings: the data set has no open lot');
   return { samples, instruments };
+}
+
+/** The next sample of `list` (round robin) with room for a reading, its room taken. */
+export function sampleWithRoom(list, state = { i: 0 }) {
+  for (let n = 0; n < list.length; n++) {
+    const s = list[state.i++ % list.length];
+    if (s.room > 0) {
+      s.room--;
+      return s;
+    }
+  }
+  throw new Error(`readings: every prepared sample holds ${PER_SAMPLE} readings`);
 }
 
 /**
@@ -100,12 +127,15 @@ export async function readingsPhase({
   clerkId,
   apiOnly,
 }) {
-  const { samples, instruments } = await prepareSamples(base, token, dbPath);
+  // Room for a generous 2 000 readings a second on each half, plus the backup's one a second.
+  const needed = 2 * 2000 * seconds + 600;
+  const { samples, instruments } = await prepareSamples(base, token, dbPath, needed);
   const half = (odd) => samples.filter((_, k) => k % 2 === (odd ? 1 : 0) || samples.length === 1);
   const requests = (list, prefix) => {
-    let i = 0;
+    const state = { i: 0 };
     return () => {
-      const s = list[i++ % list.length];
+      const s = sampleWithRoom(list, state);
+      const i = state.i;
       return {
         method: 'POST',
         path: `${prefix}/samples/${s.id}/readings`,

@@ -1,8 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { MikroORM } from '@mikro-orm/core';
 import { AuditEvent } from '../src/audit/entities/audit-event.entity';
 import { MAX_IMPORT_ROWS } from '../src/inspection/readings-import.service';
 import { Reading } from '../src/inspection/entities/reading.entity';
+import { ReadingWriter } from '../src/inspection/reading-writer';
 import { Sample } from '../src/inspection/entities/sample.entity';
 import {
   as,
@@ -245,5 +246,104 @@ describe('readings CSV import, one write per file', () => {
     });
     expect(hex.body.errors.every((e: { column: string }) => e.column === 'massG')).toBe(true);
     expect(await count(Reading)).toBe(before);
+  });
+});
+
+describe('an import and the rest of the server', () => {
+  const massRow = (u: number) => `${u},power,mass,195,1000,,,,,,${bench.balance.serial},`;
+  // The one write path is watched, not replaced: each wrapper calls the real method.
+  const watch = () => {
+    const writer = t.app.get(ReadingWriter);
+    const prepare = writer.prepare.bind(writer);
+    const commit = writer.commit.bind(writer);
+    return { writer, prepare, commit };
+  };
+
+  it('answers /api/health asked while 2 000 rows are computed before the import starts writing', async () => {
+    // Level II at 1 200 kits: 80 units × 2 conductors (ISO 2859-1 Table I, II-A: letter J),
+    // room for 2 000 readings at most 20 a sample.
+    const big = await createProduct(
+      t,
+      [
+        { purpose: 'power', gauge: '4 AWG' },
+        { purpose: 'ground', gauge: '4 AWG' },
+      ],
+      { level: 'II', aql: '1.0' },
+    );
+    const lotId = await createLot(t, big, 1200);
+    const rows = Array.from({ length: 2000 }, (_, i) => {
+      const unit = (i % 80) + 1;
+      const conductor = (Math.floor(i / 80) % 2) + 1;
+      const massG = (195 + (i % 7) / 10).toFixed(1);
+      return `${unit},${conductor},mass,${massG},1000,,,,,,${bench.balance.serial};${bench.rule.serial},`;
+    });
+    const { writer, prepare, commit } = watch();
+    const order: string[] = [];
+    let health: Promise<void> | undefined;
+    const spies = [
+      vi.spyOn(writer, 'prepare').mockImplementation((...args) => {
+        health = t.http.get('/api/health').then((r) => {
+          order.push(`health ${r.status}`);
+        });
+        return prepare(...args);
+      }),
+      vi.spyOn(writer, 'commit').mockImplementation((...args) => {
+        order.push('write transaction');
+        return commit(...args);
+      }),
+    ];
+    try {
+      const res = await send(lotId, [HEADER, ...rows].join('\n'));
+      order.push(`import ${res.status}`);
+      expect(res.body.imported, JSON.stringify(res.body).slice(0, 500)).toBe(2000);
+      await health;
+    } finally {
+      for (const spy of spies) spy.mockRestore();
+    }
+    expect(order).toEqual(['health 200', 'write transaction', 'import 201']);
+    expect(
+      await t.app
+        .get(MikroORM)
+        .em.fork()
+        .count(Reading, { sample: { lot: lotId } }),
+    ).toBe(2000);
+  }, 120_000);
+
+  it('computes again in its transaction when a reading arrived after the file was computed', async () => {
+    const lotId = await createLot(t, kit);
+    const sample = await as(t, DEMO.clerk, 'post', `/api/lots/${lotId}/samples`, {
+      conductorId: kit.conductorIds[0],
+      seq: 1,
+    });
+    expect(sample.status).toBe(201);
+    const { writer, prepare } = watch();
+    let between: { status: number; body: { id: number } } | undefined;
+    const spy = vi.spyOn(writer, 'prepare').mockImplementation(async (...args) => {
+      const prepared = await prepare(...args);
+      // Another clerk's resistance reading of unit 1, power, lands before the import writes.
+      between = await as(t, DEMO.clerk, 'post', `/api/samples/${sample.body.id}/readings`, {
+        method: 'resistance',
+        lengthMm: 1000,
+        resistanceOhm: 0.000805,
+        temperatureC: 20.5,
+        instrumentIds: [bench.meter.id, bench.thermometer.id],
+      });
+      return prepared;
+    });
+    let res;
+    try {
+      res = await send(lotId, [HEADER, massRow(1)].join('\n'));
+    } finally {
+      spy.mockRestore();
+    }
+    expect(between?.status, JSON.stringify(between?.body)).toBe(201);
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    // The imported mass was computed with the resistance that came first: copper found.
+    expect(res.body.readings[0]).toMatchObject({
+      sampleId: sample.body.id,
+      identifiedMaterial: 'copper',
+    });
+    const detail = await as(t, DEMO.qa, 'get', `/api/lots/${lotId}`);
+    expect(detail.body.samples[0].readings).toHaveLength(2);
   });
 });

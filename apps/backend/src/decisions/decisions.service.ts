@@ -13,6 +13,7 @@ import { isCalendarDate, isoDate } from '../common/calendar';
 import { DomainError } from '../common/domain-error';
 import { retryOnUniqueConflict } from '../common/numbering';
 import { LotEvaluationService, type Evaluation } from '../inspection/lot-evaluation';
+import { assertEvidenceNotSent } from '../inspection/evidence-freeze';
 import { Lot, type LotStatus } from '../lots/entities/lot.entity';
 import { lotSummary } from '../lots/lot-summary';
 import { NoticesService } from '../notices/notices.service';
@@ -88,6 +89,8 @@ export class DecisionsService {
     const lot = await tx.findOne(Lot, lotId, { populate: ['product', 'supplier', 'receivedBy'] });
     if (!lot) throw new NotFoundException(`There is no lot ${lotId}`);
     if (dto.version !== lot.version) throw await this.stale(lotId, tx);
+    // A later decision would supersede the one the supplier was sent (issue 17 item 10).
+    await assertEvidenceNotSent(tx, lot, 'its decision cannot be superseded');
     if (!DECIDABLE.includes(lot.status)) {
       throw new UnprocessableEntityException(
         lot.status === 'returned'

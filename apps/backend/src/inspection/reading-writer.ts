@@ -24,6 +24,7 @@ import { readingFactsView } from './views';
 import { keepClientKey } from './client-id';
 import { GroupCommit } from '../common/group-commit';
 import { plainSql } from '../common/plain-sql';
+import { assertEvidenceNotSent } from './evidence-freeze';
 
 /** One reading to record: on a sample, by a method, with the register's instruments used. */
 export interface NewReading {
@@ -60,9 +61,46 @@ export class ReadingsRefused extends Error {
   }
 }
 
+/** A sample the caller creates in its transaction, named until then by `id` (negative). */
+export interface NewSamplePlan {
+  id: number;
+  lotId: number;
+  conductorId: number;
+  seq: number;
+}
+
+/** What `prepare` read and computed, for `commit`. */
+export interface PreparedReadings {
+  entries: readonly NewReading[];
+  read: ReadState;
+  computed: Computed;
+  at: Date;
+}
+
+/** What a computation reads, and the versions of lots and instruments it read. */
+interface ReadState {
+  samples: Map<number, SampleRow>;
+  register: (InstrumentRecord & { version: number })[];
+  live: Map<number, LiveReading[]>;
+  lotVersions: Map<number, number>;
+  instrumentVersions: Map<number, number>;
+}
+
+interface Computed {
+  added: LiveReading[];
+  touched: SampleRow[];
+}
+
+/** Entries computed between two turns given to other requests (prepare only). */
+const YIELD_EVERY = 25;
+const nextTurn = () => new Promise<void>((resolve) => setImmediate(resolve));
+
 /** Row of the sample with what its readings need of lot, product and conductor. */
 interface SampleRow {
   id: number;
+  /** The unit's number in the plan, and the conductor's purpose: how a clerk names a sample. */
+  seq: number;
+  purpose: string;
   lotId: number;
   status: LotStatus;
   poNumber: string;
@@ -124,7 +162,7 @@ const computedOf = (r: ComputedReading): ComputedReading => ({
   result: r.result,
 });
 
-const SAMPLE_SELECT = `select s.id, s.lot_id as "lotId", l.status, l.po_number as "poNumber",
+const SAMPLE_SELECT = `select s.id, s.seq, c.purpose, s.lot_id as "lotId", l.status, l.po_number as "poNumber",
        l.product_id as "productId", l.sampling_plan as "samplingPlan",
        p.min_area_ratio as "minAreaRatio", c.gauge_label as "gaugeLabel",
        c.claimed_material as "claimedMaterial", c.conductor_class as "conductorClass",
@@ -137,6 +175,13 @@ const READING_SELECT = `select id, sample_id as "sampleId", method, inputs, inst
        identified_material as "identifiedMaterial", material_mismatch as "materialMismatch",
        verdict, result, four_wire as "fourWire", confirmed_unusual as "confirmedUnusual"
   from readings`;
+/**
+ * Live (not voided) readings one sample may hold: a cut end is weighed, counted and measured
+ * a few times, and a thousand readings made one lot page 2.4 MB (issue 17). Common practice,
+ * no source; voiding a wrong one makes room.
+ */
+export const MAX_LIVE_READINGS_PER_SAMPLE = 20;
+
 /** Values bound in one `in (…)` list at the most: well under SQLite's and PostgreSQL's limits. */
 const CHUNK = 500;
 
@@ -202,6 +247,11 @@ export class ReadingWriter {
     }
     const reading = liveOf(row);
     const [sample] = await this.samples(em, [reading.sampleId]);
+    await assertEvidenceNotSent(
+      em,
+      { id: sample.lotId, poNumber: sample.poNumber },
+      'this reading cannot be voided',
+    );
     await plainSql(
       em,
       'update readings set voided = ?, void_reason = ?, voided_by_id = ?, voided_at = ? where id = ?',
@@ -238,28 +288,148 @@ export class ReadingWriter {
     actor: RequestUser,
     at: Date,
   ) {
+    const read = await this.read(em, entries, []);
+    const computed = await this.compute(read, entries, at, false);
+    return this.store(em, read, entries, computed, actor, at);
+  }
+
+  /**
+   * The first half of a large write (the CSV import), outside any transaction: reads what
+   * the entries need and computes them, yielding to other requests as it goes, so the one
+   * SQLite connection is not held while it computes (issue 17). Entries may name samples the
+   * caller will create in its transaction by a placeholder id (negative) in `newSamples`.
+   * Throws `ReadingsRefused` like `write`. Hand the result to `commit` inside the transaction.
+   */
+  async prepare(
+    em: EntityManager,
+    entries: readonly NewReading[],
+    newSamples: readonly NewSamplePlan[],
+    at: Date = new Date(),
+  ): Promise<PreparedReadings> {
+    const read = await this.read(em, entries, newSamples);
+    const computed = await this.compute(read, entries, at, true);
+    return { entries, read, computed, at };
+  }
+
+  /**
+   * The second half, in the caller's transaction: `created` maps each placeholder sample id
+   * to the sample made. When nothing the computation read has changed since `prepare` (the
+   * lots' versions, which every reading, void and decision moves, and the instruments'), the
+   * computed readings are written as they are; otherwise all is read and computed again
+   * here, as `write` does.
+   */
+  async commit(
+    em: EntityManager,
+    prepared: PreparedReadings,
+    created: ReadonlyMap<number, number>,
+    actor: RequestUser,
+  ) {
+    const real = (id: number) => (id < 0 ? (created.get(id) as number) : id);
+    const entries = prepared.entries.map((e) => ({ ...e, sampleId: real(e.sampleId) }));
+    if (await this.changedSince(em, prepared.read)) {
+      return this.writeIn(em, entries, actor, prepared.at);
+    }
+    const { read, computed } = prepared;
     const samples = new Map(
-      (
-        await this.samples(
-          em,
-          entries.map((e) => e.sampleId),
-        )
-      ).map((s) => [s.id, s]),
+      [...read.samples.values()].map((s) => [real(s.id), { ...s, id: real(s.id) }]),
     );
+    const live = new Map([...read.live].map(([id, list]) => [real(id), list]));
+    for (const r of computed.added) r.sampleId = real(r.sampleId);
+    const touched = computed.touched.map((s) => samples.get(real(s.id)) as SampleRow);
+    return this.store(
+      em,
+      { ...read, samples, live },
+      entries,
+      { added: computed.added, touched },
+      actor,
+      prepared.at,
+    );
+  }
+
+  /** Whether a lot or instrument the computation read has moved on since. */
+  private async changedSince(em: EntityManager, read: ReadState): Promise<boolean> {
+    const now = async (table: string, ids: readonly number[]) => {
+      const out = new Map<number, number>();
+      for (const chunk of chunks(ids)) {
+        const rows = await plainSql<{ id: number; version: number }[]>(
+          em,
+          `select id, version from ${table} where id in (${marks(chunk)})`,
+          chunk,
+        );
+        for (const r of rows) out.set(Number(r.id), Number(r.version));
+      }
+      return out;
+    };
+    const differs = (seen: ReadonlyMap<number, number>, current: ReadonlyMap<number, number>) =>
+      [...seen].some(([id, v]) => current.get(id) !== v);
+    return (
+      differs(read.lotVersions, await now('lots', [...read.lotVersions.keys()])) ||
+      differs(
+        read.instrumentVersions,
+        await now('instruments', [...read.instrumentVersions.keys()]),
+      )
+    );
+  }
+
+  /** Everything the computation of `entries` reads, with the versions it was read at. */
+  private async read(
+    em: EntityManager,
+    entries: readonly NewReading[],
+    newSamples: readonly NewSamplePlan[],
+  ): Promise<ReadState> {
+    const stored = await this.samples(
+      em,
+      entries.map((e) => e.sampleId).filter((id) => id > 0),
+    );
+    const planned = await this.plannedSamples(em, newSamples);
+    const samples = new Map([...stored, ...planned].map((s) => [s.id, s]));
     const register = await this.register(
       em,
       entries.flatMap((e) => e.instrumentIds),
     );
-    const live = await this.liveReadings(em, [...samples.keys()]);
+    const live = await this.liveReadings(em, [...samples.keys()].filter((id) => id > 0));
+    for (const s of planned) live.set(s.id, []);
+    const lotIds = [...new Set([...samples.values()].map((s) => s.lotId))];
+    const lotVersions = new Map<number, number>();
+    for (const chunk of chunks(lotIds)) {
+      const rows = await plainSql<{ id: number; version: number }[]>(
+        em,
+        `select id, version from lots where id in (${marks(chunk)})`,
+        chunk,
+      );
+      for (const r of rows) lotVersions.set(Number(r.id), Number(r.version));
+    }
+    const instrumentVersions = new Map(register.map((i) => [i.id, i.version]));
+    return { samples, register, live, lotVersions, instrumentVersions };
+  }
+
+  /**
+   * Checks and computes every entry against what was read (CPU only). With `yielding`,
+   * gives other requests a turn of the event loop every few entries.
+   */
+  private async compute(
+    read: ReadState,
+    entries: readonly NewReading[],
+    at: Date,
+    yielding: boolean,
+  ): Promise<Computed> {
+    const { samples, register, live } = read;
     const refusals: { index: number; error: unknown }[] = [];
     const added: LiveReading[] = [];
-    entries.forEach((entry, index) => {
+    for (const [index, entry] of entries.entries()) {
+      if (yielding && index % YIELD_EVERY === YIELD_EVERY - 1) await nextTurn();
       try {
         const sample = samples.get(entry.sampleId);
         if (!sample) throw DomainError.notFound(`Sample ${entry.sampleId} not found`);
         assertLotOpen(sample);
         const instruments = usableInstruments(entry.instrumentIds, register, at);
         const siblings = live.get(sample.id) ?? [];
+        if (siblings.length >= MAX_LIVE_READINGS_PER_SAMPLE) {
+          throw DomainError.refused(
+            `Unit ${sample.seq}, ${sample.purpose} conductor already holds ${MAX_LIVE_READINGS_PER_SAMPLE} readings that stand, the most one sample may hold: void a wrong one before recording another.`,
+            'sampleId',
+          );
+        }
         const fourWire = fourWireOf({ method: entry.method, fourWire: entry.fourWire });
         const computed = computeReading({
           ...context(sample),
@@ -286,21 +456,35 @@ export class ReadingWriter {
       } catch (error) {
         refusals.push({ index, error });
       }
-    });
+    }
     if (refusals.length) throw new ReadingsRefused(refusals);
 
     const touched = [...new Set(added.map((r) => r.sampleId))].map(
       (id) => samples.get(id) as SampleRow,
     );
-    const events: AuditEntry[] = [];
     // The entries' final results: computed with every reading of their sample that stands.
-    for (const sample of touched) {
+    for (const [n, sample] of touched.entries()) {
+      if (yielding && n % YIELD_EVERY === YIELD_EVERY - 1) await nextTurn();
       const all = live.get(sample.id) as LiveReading[];
       all.forEach((r, i) => {
         if (r.entry === undefined || i === 0) return; // the newest already saw all the others
         Object.assign(r, recomputed(sample, r, all));
       });
     }
+    return { added, touched };
+  }
+
+  /** Writes computed readings, the recompute of stored siblings, the audit and lot status. */
+  private async store(
+    em: EntityManager,
+    read: Pick<ReadState, 'samples' | 'live'>,
+    entries: readonly NewReading[],
+    { added, touched }: Computed,
+    actor: RequestUser,
+    at: Date,
+  ) {
+    const { samples, live } = read;
+    const events: AuditEntry[] = [];
     for (const r of added) {
       const [{ id }] = await plainSql<{ id: number }[]>(
         em,
@@ -403,6 +587,37 @@ export class ReadingWriter {
     return rows;
   }
 
+  /** What the readings of samples not made yet need: their lot's and conductor's facts. */
+  private async plannedSamples(
+    em: EntityManager,
+    plans: readonly NewSamplePlan[],
+  ): Promise<SampleRow[]> {
+    if (!plans.length) return [];
+    const conductorIds = [...new Set(plans.map((p) => p.conductorId))];
+    const facts = new Map<string, Omit<SampleRow, 'id' | 'seq'>>();
+    for (const lotId of new Set(plans.map((p) => p.lotId))) {
+      for (const chunk of chunks(conductorIds)) {
+        const rows = await plainSql<(Omit<SampleRow, 'id' | 'seq'> & { conductorId: number })[]>(
+          em,
+          `select c.id as "conductorId", c.purpose, l.id as "lotId", l.status,
+                  l.po_number as "poNumber", l.product_id as "productId",
+                  l.sampling_plan as "samplingPlan", p.min_area_ratio as "minAreaRatio",
+                  c.gauge_label as "gaugeLabel", c.claimed_material as "claimedMaterial",
+                  c.conductor_class as "conductorClass", c.claimed_strands as "claimedStrands"
+             from lots l join products p on p.id = l.product_id
+             join conductor_specs c on c.product_id = p.id
+            where l.id = ? and c.id in (${marks(chunk)})`,
+          [lotId, ...chunk],
+        );
+        for (const { conductorId, ...row } of rows) facts.set(`${lotId}:${conductorId}`, row);
+      }
+    }
+    return plans.flatMap((p) => {
+      const row = facts.get(`${p.lotId}:${p.conductorId}`);
+      return row ? [{ ...row, id: p.id, seq: p.seq }] : [];
+    });
+  }
+
   /** The live readings of each sample, newest first (the order identification picks from). */
   private async liveReadings(em: EntityManager, sampleIds: readonly number[]) {
     const live = new Map<number, LiveReading[]>(sampleIds.map((id) => [id, []]));
@@ -420,19 +635,23 @@ export class ReadingWriter {
 
   /** The register rows of the instruments named (the usability rule reads them). */
   private async register(em: EntityManager, ids: readonly number[]) {
-    const rows: InstrumentRecord[] = [];
+    const rows: (InstrumentRecord & { version: number })[] = [];
     for (const chunk of chunks([...new Set(ids)])) {
-      const found = await plainSql<(InstrumentRecord & { active: number | boolean })[]>(
+      const found = await plainSql<
+        (InstrumentRecord & { active: number | boolean; version: number | string })[]
+      >(
         em,
         `select id, kind, name, serial, resolution, resolution_unit as "resolutionUnit",
                 calibration_due_on as "calibrationDueOn", active,
                 accuracy_percent_of_reading as "accuracyPercentOfReading",
                 accuracy_absolute as "accuracyAbsolute",
-                calibration_uncertainty as "calibrationUncertainty"
+                calibration_uncertainty as "calibrationUncertainty", version
            from instruments where id in (${marks(chunk)})`,
         chunk,
       );
-      rows.push(...found.map((r) => ({ ...r, active: Boolean(r.active) })));
+      rows.push(
+        ...found.map((r) => ({ ...r, active: Boolean(r.active), version: Number(r.version) })),
+      );
     }
     return rows;
   }

@@ -14,13 +14,18 @@ import { DomainError } from '../common/domain-error';
 import { announceSqlWrite } from '../common/sql-writes';
 import { Instrument } from '../instruments/entities/instrument.entity';
 import { Lot } from '../lots/entities/lot.entity';
-import type { ConductorSpec } from '../products/entities/conductor-spec.entity';
+import { ConductorSpec } from '../products/entities/conductor-spec.entity';
 import { User } from '../users/entities/user.entity';
 import { CreateReadingDto, INPUT_FIELDS } from './dto/create-reading.dto';
 import { ReadingImport } from './entities/reading-import.entity';
 import { Sample } from './entities/sample.entity';
 import { assertLotOpen } from './lot-status';
-import { ReadingsRefused, ReadingWriter, type NewReading } from './reading-writer';
+import {
+  ReadingsRefused,
+  ReadingWriter,
+  type NewReading,
+  type PreparedReadings,
+} from './reading-writer';
 import { methodInputs } from './readings.service';
 import { SamplesService, unitFor } from './samples.service';
 import type { ReadingView } from './views';
@@ -61,7 +66,11 @@ const messageOf = (e: unknown): string => {
 };
 
 /** The CSV column of a request field a rule names (the form's instrumentIds, seq …). */
-const COLUMN_OF_FIELD: Record<string, string> = { instrumentIds: 'instruments', seq: 'unit' };
+const COLUMN_OF_FIELD: Record<string, string> = {
+  instrumentIds: 'instruments',
+  seq: 'unit',
+  sampleId: 'unit',
+};
 
 /**
  * Readings from a bench logger's CSV, all or nothing: every row is checked, then all are
@@ -93,15 +102,17 @@ export class ReadingsImportService {
     const fileSha256 = createHash('sha256').update(file.buffer).digest('hex');
     const key = idempotencyKey ?? `sha256:${fileSha256}`;
     const rows = parse(file.buffer);
+    // A retry of an import that went through is answered at once, computing nothing.
+    const earlier = await this.em.fork().findOne(ReadingImport, { lot: lotId, key });
+    if (earlier) return { ...replay(earlier, fileSha256), replayed: true };
+    // Checked and computed before the write transaction, so the one SQLite connection is
+    // free meanwhile and other requests (health included) are answered (issue 17).
+    const plan = await this.plan(this.em.fork(), lotId, rows);
     try {
       const answer = await this.em.transactional(async (tx) => {
         const first = await tx.findOne(ReadingImport, { lot: lotId, key });
         if (first) return { ...replay(first, fileSha256), replayed: true };
-        const lot = await tx.findOneOrFail(
-          Lot,
-          { id: lotId },
-          { populate: ['product.conductors'] },
-        );
+        const lot = await tx.findOneOrFail(Lot, { id: lotId });
         assertLotOpen(lot);
         // Taken first: a retry sent while this import runs waits for it, then replays it.
         const record = tx.create(ReadingImport, {
@@ -111,7 +122,7 @@ export class ReadingsImportService {
           importedBy: tx.getReference(User, actor.id),
         });
         await tx.flush();
-        const answer = await this.record(tx, lot, rows, actor);
+        const answer = await this.record(tx, lot, plan, actor);
         record.answer = answer as unknown as Record<string, unknown>;
         await tx.flush();
         return { ...answer, replayed: false };
@@ -127,13 +138,13 @@ export class ReadingsImportService {
     }
   }
 
-  /** Checks every row, creates the samples they need and records their readings. */
-  private async record(
-    em: EntityManager,
-    lot: Lot,
-    rows: Row[],
-    actor: RequestUser,
-  ): Promise<ImportAnswer> {
+  /**
+   * Checks every row, finds or plans the sample each needs and computes every reading,
+   * reading the database outside any transaction; 422 with every problem by row and column.
+   */
+  private async plan(em: EntityManager, lotId: number, rows: Row[]): Promise<ImportPlan> {
+    const lot = await em.findOneOrFail(Lot, { id: lotId }, { populate: ['product.conductors'] });
+    assertLotOpen(lot);
     const errors: RowError[] = [];
     const checked = rows.map((row, i) => checkRow(lot, row, i + 2, errors));
     const serials = [...new Set(checked.flatMap((c) => c.serials))];
@@ -153,8 +164,8 @@ export class ReadingsImportService {
     const valid = checked.filter(
       (c): c is CheckedRow => c.ok && c.serials.every((s) => idOf.has(s)),
     );
-    const sampleIds = await this.samplesFor(em, lot, valid, errors, actor);
-    const entries: { rowNo: number; entry: NewReading; columns: Record<string, string> }[] = [];
+    const { sampleIds, newSamples } = await this.samplesFor(em, lot, valid, errors);
+    const entries: ImportEntry[] = [];
     for (const c of valid) {
       const sampleId = sampleIds.get(c);
       if (sampleId === undefined) continue;
@@ -171,69 +182,135 @@ export class ReadingsImportService {
         },
       });
     }
-    let readings: ReadingView[] = [];
+    let prepared: PreparedReadings | null = null;
     try {
-      readings = await this.writer.write(
+      prepared = await this.writer.prepare(
+        em,
         entries.map((e) => e.entry),
-        actor,
-        { em },
+        newSamples.map((n) => ({
+          id: n.id,
+          lotId: lot.id,
+          conductorId: n.conductorId,
+          seq: n.seq,
+        })),
       );
     } catch (e) {
       if (!(e instanceof ReadingsRefused)) throw e;
-      for (const { index, error } of e.refusals) {
-        const { rowNo, columns } = entries[index];
-        // One problem per field the rule names (a questioned reading may name several), each
-        // on the column of this row it came from.
-        if (error instanceof DomainError) {
-          for (const f of error.errors) {
-            errors.push({ row: rowNo, column: columnOf(f.field, columns), message: f.message });
-          }
-        } else {
-          errors.push({ row: rowNo, column: null, message: messageOf(error) });
-        }
-      }
+      errors.push(...rowErrors(e, entries));
     }
-    if (errors.length) throw refusal(errors);
-    return { imported: readings.length, readings };
+    if (errors.length || !prepared) throw refusal(errors);
+    return { prepared, newSamples, entries };
   }
 
-  /** The sample of each row: the lot's existing one of that conductor and unit, or a new one. */
+  /** Creates the planned samples and writes the computed readings, in the transaction. */
+  private async record(
+    em: EntityManager,
+    lot: Lot,
+    plan: ImportPlan,
+    actor: RequestUser,
+  ): Promise<ImportAnswer> {
+    const created = await this.samples.add(
+      em,
+      lot,
+      plan.newSamples.map((n) => ({
+        conductor: em.getReference(ConductorSpec, n.conductorId),
+        seq: n.seq,
+        unitRef: n.unitRef,
+      })),
+      actor,
+    );
+    const ids = new Map(plan.newSamples.map((n, i) => [n.id, created[i].id]));
+    try {
+      const readings = await this.writer.commit(em, plan.prepared, ids, actor);
+      return { imported: readings.length, readings };
+    } catch (e) {
+      // Only when something changed since the plan and the readings were computed again.
+      if (!(e instanceof ReadingsRefused)) throw e;
+      throw refusal(rowErrors(e, plan.entries));
+    }
+  }
+
+  /**
+   * The sample of each row: the lot's existing one of that conductor and unit, or one to
+   * make (named by a negative placeholder id until the transaction makes it).
+   */
   private async samplesFor(
     em: EntityManager,
     lot: Lot,
     rows: readonly CheckedRow[],
     errors: RowError[],
-    actor: RequestUser,
-  ): Promise<Map<CheckedRow, number>> {
+  ): Promise<{ sampleIds: Map<CheckedRow, number>; newSamples: PlannedSample[] }> {
     const keyOf = (conductorId: number, seq: number) => `${conductorId}:${seq}`;
     const existing = await em.find(Sample, { lot }, { fields: ['id', 'seq', 'conductor'] });
     const ids = new Map(existing.map((s) => [keyOf(s.conductor.id, s.seq), s.id]));
-    const wanted = new Map<
-      string,
-      { conductor: ConductorSpec; seq: number; unitRef: string | null }
-    >();
+    const newSamples: PlannedSample[] = [];
     const refused = new Map<string, string>();
     for (const c of rows) {
       const key = keyOf(c.conductor.id, c.unit);
-      if (ids.has(key) || wanted.has(key) || refused.has(key)) continue;
+      if (ids.has(key) || refused.has(key)) continue;
       try {
         unitFor(lot, c.conductor, c.unit, new Set());
-        wanted.set(key, { conductor: c.conductor, seq: c.unit, unitRef: c.unitRef || null });
+        const planned = {
+          id: -(newSamples.length + 1),
+          conductorId: c.conductor.id,
+          seq: c.unit,
+          unitRef: c.unitRef || null,
+        };
+        newSamples.push(planned);
+        ids.set(key, planned.id);
       } catch (e) {
         refused.set(key, messageOf(e));
       }
     }
-    const created = await this.samples.add(em, lot, [...wanted.values()], actor);
-    for (const s of created) ids.set(keyOf(s.conductor.id, s.seq), s.id);
-    const out = new Map<CheckedRow, number>();
+    const sampleIds = new Map<CheckedRow, number>();
     for (const c of rows) {
       const key = keyOf(c.conductor.id, c.unit);
       const id = ids.get(key);
-      if (id !== undefined) out.set(c, id);
+      if (id !== undefined) sampleIds.set(c, id);
       else errors.push({ row: c.rowNo, column: 'unit', message: refused.get(key) as string });
     }
-    return out;
+    return { sampleIds, newSamples };
   }
+}
+
+/** A sample an import makes, named by a negative id until its transaction makes it. */
+interface PlannedSample {
+  id: number;
+  conductorId: number;
+  seq: number;
+  unitRef: string | null;
+}
+
+/** An import checked and computed, waiting for its write transaction. */
+interface ImportPlan {
+  prepared: PreparedReadings;
+  newSamples: PlannedSample[];
+  entries: ImportEntry[];
+}
+
+/** An import's reading with the row it came from and the columns its fields were read from. */
+interface ImportEntry {
+  rowNo: number;
+  entry: NewReading;
+  columns: Record<string, string>;
+}
+
+/**
+ * The refused entries of a write, as rows and columns of the file: one problem per field
+ * the rule names (a questioned reading may name several), each on the column of its row.
+ */
+function rowErrors(e: ReadingsRefused, entries: readonly ImportEntry[]): RowError[] {
+  return e.refusals.flatMap(({ index, error }) => {
+    const { rowNo, columns } = entries[index];
+    if (error instanceof DomainError) {
+      return error.errors.map((f) => ({
+        row: rowNo,
+        column: columnOf(f.field, columns),
+        message: f.message,
+      }));
+    }
+    return [{ row: rowNo, column: null, message: messageOf(error) }];
+  });
 }
 
 /** A row checked on its own: its serials, and when `ok` what its reading is. */

@@ -13,6 +13,7 @@ import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
 import { Sample } from '../inspection/entities/sample.entity';
 import { Lot } from '../lots/entities/lot.entity';
+import { assertEvidenceNotSent } from '../inspection/evidence-freeze';
 import { StorageService } from '../storage/storage.service';
 import { User } from '../users/entities/user.entity';
 import { UploadPhotoDto } from './dto/upload-photo.dto';
@@ -55,6 +56,7 @@ export class PhotosService {
       throw new BadRequestException(['file is required: attach a JPEG, PNG or WebP photo']);
     }
     const lot = await this.em.findOneOrFail(Lot, { id: lotId });
+    await assertEvidenceNotSent(this.em, lot, 'no photo can be added to it', 'file');
     if (dto.sampleId !== undefined) {
       const sample = await this.em.findOne(Sample, { id: dto.sampleId, lot });
       if (!sample) {
