@@ -387,7 +387,10 @@ export class ReadingWriter {
       em,
       entries.flatMap((e) => e.instrumentIds),
     );
-    const live = await this.liveReadings(em, [...samples.keys()].filter((id) => id > 0));
+    const live = await this.liveReadings(
+      em,
+      [...samples.keys()].filter((id) => id > 0),
+    );
     for (const s of planned) live.set(s.id, []);
     const lotIds = [...new Set([...samples.values()].map((s) => s.lotId))];
     const lotVersions = new Map<number, number>();
