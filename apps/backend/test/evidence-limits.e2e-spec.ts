@@ -5,6 +5,7 @@ import { Reading } from '../src/inspection/entities/reading.entity';
 import { MAX_LIVE_READINGS_PER_SAMPLE } from '../src/inspection/reading-writer';
 import { Photo } from '../src/photos/entities/photo.entity';
 import { Fixtures, rejectedLot } from './helpers/decision-fixtures';
+import { startMailDev, type MailDev } from './helpers/maildev';
 import {
   as,
   createBench,
@@ -19,8 +20,9 @@ import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
 // Issue 17 item 10: at most 20 live readings per sample (a clear 422 through the one
 // reading write path, form and import alike), and a lot's evidence frozen once a return of
 // it went to the supplier (no void, no superseding decision, no new photo; a draft or a
-// cancelled return freezes nothing). Runs on both drivers.
+// cancelled return freezes nothing). Runs on both drivers, e-mail through a real MailDev.
 
+let mail: MailDev;
 let t: TestApp;
 let bench: Bench;
 let spool: Catalog;
@@ -28,13 +30,17 @@ let fx: Fixtures;
 let png: Buffer;
 
 beforeAll(async () => {
-  t = await startTestApp();
+  mail = await startMailDev();
+  t = await startTestApp({ SMTP_URL: mail.smtpUrl });
   bench = await createBench(t);
   spool = await createProduct(t, [{ purpose: 'power', gauge: '4 AWG' }]);
   fx = new Fixtures(t);
   png = await new Jimp({ width: 8, height: 8, color: 0xb87333ff }).getBuffer('image/png');
 });
-afterAll(async () => t.close());
+afterAll(async () => {
+  await t.close();
+  await mail.stop();
+});
 
 const em = () => t.app.get(MikroORM).em.fork();
 const massBody = (massG = 195) => ({
@@ -172,14 +178,54 @@ describe('a lot whose return went to the supplier', () => {
     expect(await em().count(Photo, { lot: lot.id })).toBe(photoCount);
   });
 
+  it('keeps the photos the supplier was e-mailed: no void once the notice went (422 saying why)', async () => {
+    const { lot, ret } = await lotOnReturn();
+    const taken = await photo(lot.id);
+    expect(taken.status, JSON.stringify(taken.body)).toBe(201);
+    const spare = await photo(lot.id);
+    expect(spare.status, JSON.stringify(spare.body)).toBe(201);
+    // While the return is a draft nothing was sent: a wrong photo may still be voided.
+    const early = await as(t, DEMO.qa, 'post', `/api/photos/${spare.body.id}/void`, {
+      reason: 'Photo of the neighbouring spool',
+    });
+    expect(early.status, JSON.stringify(early.body)).toBe(200);
+
+    const emailed = await as(t, DEMO.buyer, 'post', `/api/returns/${ret.id}/email`, {});
+    expect(emailed.status, JSON.stringify(emailed.body)).toBe(201);
+    expect(emailed.body.status).toBe('sent');
+    const now = await as(t, DEMO.buyer, 'get', `/api/returns/${ret.id}`);
+    expect(now.body.status).toBe('emailed');
+
+    for (const who of [DEMO.qa, DEMO.admin]) {
+      const late = await as(t, who, 'post', `/api/photos/${taken.body.id}/void`, {
+        reason: 'Blurred, retake it',
+      });
+      expect(late.status).toBe(422);
+      expect(late.body.message).toBe(
+        `Lot ${lot.poNumber} went back to the supplier on return ${ret.number} (e-mailed to the supplier); its evidence is frozen as the supplier received it, so this photo cannot be voided.`,
+      );
+    }
+    const kept = await em().findOneOrFail(Photo, taken.body.id);
+    expect(kept.voided).toBe(false);
+    expect(kept.voidReason ?? null).toBeNull();
+    // The photo voided before the notice stays voided: a void is not undone by the freeze.
+    expect((await em().findOneOrFail(Photo, spare.body.id)).voided).toBe(true);
+  });
+
   it('is not frozen by a return cancelled as a draft', async () => {
     const { lot, ret, readings } = await lotOnReturn();
+    const before = await photo(lot.id);
+    expect(before.status, JSON.stringify(before.body)).toBe(201);
     const cancelled = await step(ret.id, 'cancel', { reason: 'Raised for the wrong lot' });
     expect(cancelled.status, JSON.stringify(cancelled.body)).toBe(200);
     const voided = await as(t, DEMO.qa, 'post', `/api/readings/${readings[0].id}/void`, {
       reason: 'Cut from the wrong unit',
     });
     expect(voided.status, JSON.stringify(voided.body)).toBe(200);
+    const photoVoided = await as(t, DEMO.qa, 'post', `/api/photos/${before.body.id}/void`, {
+      reason: 'Photo of the neighbouring spool',
+    });
+    expect(photoVoided.status, JSON.stringify(photoVoided.body)).toBe(200);
     expect((await photo(lot.id)).status).toBe(201);
   });
 });

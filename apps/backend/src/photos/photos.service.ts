@@ -138,6 +138,8 @@ export class PhotosService {
           `This photo was already voided on ${p.voidedAt?.toISOString().slice(0, 10)}: ${p.voidReason}`,
         );
       }
+      // The supplier's notice and evidence pack show the photo: it stays as they were sent.
+      await assertEvidenceNotSent(tx, p.lot, 'this photo cannot be voided');
       const at = new Date();
       p.voided = true;
       p.voidReason = reason;
