@@ -87,8 +87,9 @@ export function scorecardsRaw(db, { start, end, today }) {
     .all(today, start, end);
   const chargebacks = db
     .prepare(
-      `select supplier_id, sum(chargeback_total) as total from vendor_returns
-        where created_at >= ? and created_at < ? group by supplier_id`,
+      `select supplier_id, currency, sum(chargeback_total) as total from vendor_returns
+        where status <> 'cancelled' and created_at >= ? and created_at < ?
+        group by supplier_id, currency`,
     )
     .all(start, end);
   return { suppliers, lots, readings, units, samples, cars, chargebacks };

@@ -46,8 +46,19 @@ export interface ScorecardRow {
   openCorrectiveActions: number;
   overdueCorrectiveActions: number;
   meanResponseDays: number | null;
-  chargebacks: number;
+  /**
+   * Chargebacks of the returns raised in the range, one total per ISO 4217 currency (by
+   * code, only currencies with a return): amounts are never converted nor summed across
+   * currencies. Empty when nothing was charged back.
+   */
+  chargebacks: MoneyTotal[];
   trend: TrendPoint[];
+}
+
+/** An amount in one ISO 4217 currency, to the cent. */
+export interface MoneyTotal {
+  currency: string;
+  amount: number;
 }
 
 export interface MethodAreaRatio {

@@ -86,6 +86,10 @@ async function seed(f: ScorecardFixtures) {
   await f.vendorReturn(a.id, '2025-02-15T00:00:00Z', 120.5);
   await f.vendorReturn(a.id, '2025-03-31T23:00:00Z', 79.5);
   await f.vendorReturn(a.id, '2025-04-01T00:00:00Z', 1000);
+  // Two currencies: USD is never added to EUR; a cancelled return counts in neither.
+  await f.vendorReturn(a.id, '2025-01-20T00:00:00Z', 10.1, 'USD', 'shipped');
+  await f.vendorReturn(a.id, '2025-03-02T00:00:00Z', 25.15, 'USD', 'credited');
+  await f.vendorReturn(a.id, '2025-03-03T00:00:00Z', 500, 'USD', 'cancelled');
   return { a: a.id, b: b.id, c: c.id, lots };
 }
 
@@ -129,7 +133,12 @@ describe('GET /api/scorecards', () => {
       worstSizesShort: 4, // label 4 AWG measured as 8 AWG: 8 − 4
       openCorrectiveActions: 3, // CA1 open, CA2 responded, CA4 reopened (CA3, CA5 closed)
       overdueCorrectiveActions: 1, // CA1: open, due 2025-02-01 < today
-      chargebacks: 200, // 120.5 + 79.5 (the 1000 is raised on 2025-04-01)
+      // EUR 120.5 + 79.5 (the 1000 is raised on 2025-04-01); USD 10.1 + 25.15, the cancelled
+      // 500 left out; never one sum of both currencies, never converted.
+      chargebacks: [
+        { currency: 'EUR', amount: 200 },
+        { currency: 'USD', amount: 35.25 },
+      ],
     });
     expect(a.acceptanceRate).toBeCloseTo(0.25, 12); // 1 accepted ÷ 4 decided
     // (1.00 + 0.99 + 0.40 + 0.42 + 0.60 + 0.97 + 1.02 + 0.62 + 0.90) / 9 = 6.92 / 9
@@ -179,7 +188,7 @@ describe('GET /api/scorecards', () => {
       worstSizesShort: null,
       openCorrectiveActions: 0,
       meanResponseDays: null,
-      chargebacks: 0,
+      chargebacks: [],
     });
     expect(rowOf(rows, ids.c).trend.map((p) => p.lots)).toEqual([0, 0, 0]);
     // Worst first: A (25 %) before B (50 %); C, with nothing decided, after both.
@@ -327,7 +336,15 @@ describe('CSV export', () => {
     expect(cell('Mean area by mass (% of nominal)')).toBe('78.8'); // 6.30 / 8
     expect(cell('Mean area by resistance (% of nominal)')).toBe('62.0');
     expect(cell('Mean SCAR response (days)')).toBe('2.2'); // 6.5 / 3
-    expect(cell('Chargebacks')).toBe('200.00');
+    // One column per currency, the server's own (USD here) included; never a mixed sum.
+    expect(header.filter((h) => h.startsWith('Chargebacks'))).toEqual([
+      'Chargebacks (EUR)',
+      'Chargebacks (USD)',
+    ]);
+    expect(cell('Chargebacks (EUR)')).toBe('200.00');
+    expect(cell('Chargebacks (USD)')).toBe('35.25');
+    const idle = lines.find((l) => l.includes(',SC-C,'))!.split(',');
+    expect(idle[header.indexOf('Chargebacks (EUR)')]).toBe('0.00');
     expect(res.text).toContain(`,'=Scorecard Test Gamma Idle,`); // formula guard
     const em = t.app.get(MikroORM).em.fork();
     expect(await em.count(AuditEvent, { action: 'scorecard.export' })).toBeGreaterThan(0);
@@ -341,6 +358,8 @@ describe('CSV export', () => {
     expect(lines[0]).toBe('Section,Item,Field,Value');
     expect(lines).toContain('Summary,SC-A,Lots received,5');
     expect(lines).toContain('Summary,SC-A,Nonconforming units (%),57.1');
+    expect(lines).toContain('Summary,SC-A,Chargebacks (EUR),200.00');
+    expect(lines).toContain('Summary,SC-A,Chargebacks (USD),35.25');
     expect(lines).toContain('Trend,2025-01,Lots received,2');
     expect(lines).toContain('Trend,2025-01,Mean area (% of nominal),68.2'); // 3.41 / 5
     expect(lines).toContain(`Worst lot,${ids.lots.L2},Measures as,8 AWG`);

@@ -1,5 +1,5 @@
 import type { MonthBucket } from './scorecard-range';
-import type { MethodAreaRatio, ScorecardRow, TrendPoint } from '@gaugeproof/api-types';
+import type { MethodAreaRatio, MoneyTotal, ScorecardRow, TrendPoint } from '@gaugeproof/api-types';
 import type {
   CorrectiveActionRow,
   LotMonthRow,
@@ -22,7 +22,8 @@ export interface SupplierAggregates {
   samples: SamplePurposeRow[];
   units: UnitRow | undefined;
   correctiveActions: CorrectiveActionRow | undefined;
-  chargebacks: number;
+  /** One total per ISO 4217 currency, by code. */
+  chargebacks: MoneyTotal[];
 }
 
 const DAY_MS = 86_400_000;

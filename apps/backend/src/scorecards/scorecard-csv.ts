@@ -14,11 +14,32 @@ const pct = (ratio: number | null | undefined): string =>
 const days = (d: number | null): string => (d === null ? '' : d.toFixed(1));
 const money = (amount: number): string => amount.toFixed(2);
 
+/**
+ * The currencies a chargeback column is written for: the server's own (`CURRENCY`) and every
+ * other one a row was charged in, by code. One column per currency: amounts in different
+ * currencies are never converted nor added together.
+ */
+export function chargebackCurrencies(
+  rows: readonly ScorecardRow[],
+  defaultCurrency: string,
+): string[] {
+  const codes = new Set([
+    defaultCurrency,
+    ...rows.flatMap((r) => r.chargebacks.map((c) => c.currency)),
+  ]);
+  return [...codes].sort();
+}
+
+const chargebackIn = (r: ScorecardRow, currency: string): string =>
+  money(r.chargebacks.find((c) => c.currency === currency)?.amount ?? 0);
+
 const METHODS: MethodAreaRatio['method'][] = ['mass', 'strands', 'resistance', 'diameter'];
 const method = (r: ScorecardRow, m: string) => r.areaRatioByMethod.find((x) => x.method === m);
 
+type Column = [string, (r: ScorecardRow) => CsvCell];
+
 /** The ranking's columns: header in words with its unit, and the cell of a row. */
-export const LIST_COLUMNS: readonly [string, (r: ScorecardRow) => CsvCell][] = [
+export const listColumns = (currencies: readonly string[]): readonly Column[] => [
   ['Supplier id', (r) => r.supplierId],
   ['Supplier', (r) => r.name],
   ['Code', (r) => r.code],
@@ -48,13 +69,19 @@ export const LIST_COLUMNS: readonly [string, (r: ScorecardRow) => CsvCell][] = [
   ['Open SCARs', (r) => r.openCorrectiveActions],
   ['Overdue SCARs', (r) => r.overdueCorrectiveActions],
   ['Mean SCAR response (days)', (r) => days(r.meanResponseDays)],
-  ['Chargebacks', (r) => money(r.chargebacks)],
+  ...currencies.map((c): Column => [`Chargebacks (${c})`, (r) => chargebackIn(r, c)]),
 ];
 
-export function listCsv(from: string, to: string, rows: readonly ScorecardRow[]): string {
+export function listCsv(
+  from: string,
+  to: string,
+  rows: readonly ScorecardRow[],
+  defaultCurrency: string,
+): string {
+  const columns = listColumns(chargebackCurrencies(rows, defaultCurrency));
   return withBom([
-    ['From', 'To', ...LIST_COLUMNS.map(([h]) => h)],
-    ...rows.map((r) => [from, to, ...LIST_COLUMNS.map(([, cell]) => cell(r))]),
+    ['From', 'To', ...columns.map(([h]) => h)],
+    ...rows.map((r) => [from, to, ...columns.map(([, cell]) => cell(r))]),
   ]);
 }
 
@@ -89,7 +116,7 @@ const FIELD_WORDS: Record<string, [string, (v: unknown) => CsvCell]> = {
  * One supplier's scorecard in long form (section, item, field, value), so the summary,
  * the monthly trend, the histogram, purposes, products and worst lots share one table.
  */
-export function supplierCsv(card: SupplierScorecard): string {
+export function supplierCsv(card: SupplierScorecard, defaultCurrency: string): string {
   const rows: CsvCell[][] = [['Section', 'Item', 'Field', 'Value']];
   const add = (section: string, item: string, record: object, skip?: string) => {
     for (const [field, value] of Object.entries(record)) {
@@ -104,7 +131,9 @@ export function supplierCsv(card: SupplierScorecard): string {
     }
   };
   rows.push(['Range', '', 'From', card.from], ['Range', '', 'To', card.to]);
-  for (const [header, cell] of LIST_COLUMNS) rows.push(['Summary', card.code, header, cell(card)]);
+  for (const [header, cell] of listColumns(chargebackCurrencies([card], defaultCurrency))) {
+    rows.push(['Summary', card.code, header, cell(card)]);
+  }
   for (const t of card.trend) add('Trend', t.month, t, 'month');
   for (const b of card.histogram) {
     rows.push([

@@ -1,7 +1,9 @@
-import { Injectable } from '@nestjs/common';
+import { Inject, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
+import { APP_CONFIG } from '../config/config.module';
+import type { AppConfig } from '../config/env';
 import { listCsv, supplierCsv } from './scorecard-csv';
 import type { ScorecardRange } from './scorecard-range';
 import { ScorecardsService } from './scorecards.service';
@@ -13,6 +15,7 @@ export class ScorecardExportService {
     private readonly em: EntityManager,
     private readonly audit: AuditService,
     private readonly scorecards: ScorecardsService,
+    @Inject(APP_CONFIG) private readonly config: Pick<AppConfig, 'currency'>,
   ) {}
 
   async list(range: ScorecardRange, actor: RequestUser): Promise<string> {
@@ -23,7 +26,7 @@ export class ScorecardExportService {
       after: { from: range.from, to: range.to, rows: items.length },
     });
     await this.em.flush();
-    return listCsv(range.from, range.to, items);
+    return listCsv(range.from, range.to, items, this.config.currency);
   }
 
   async supplier(supplierId: number, range: ScorecardRange, actor: RequestUser): Promise<string> {
@@ -35,6 +38,6 @@ export class ScorecardExportService {
       after: { from: range.from, to: range.to },
     });
     await this.em.flush();
-    return supplierCsv(card);
+    return supplierCsv(card, this.config.currency);
   }
 }

@@ -41,7 +41,7 @@ export class ScorecardsService {
         samples: samples.filter((r) => r.supplierId === s.id),
         units: units.find((r) => r.supplierId === s.id),
         correctiveActions: cars.find((r) => r.supplierId === s.id),
-        chargebacks: chargebacks.get(s.id) ?? 0,
+        chargebacks: chargebacks.get(s.id) ?? [],
       }),
     );
   }

@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import type { Knex, SqlEntityManager } from '@mikro-orm/knex';
+import type { MoneyTotal } from '@gaugeproof/api-types';
 import type { ScorecardRange } from './scorecard-range';
 import { dateParam, millisBetween, monthIndex, num, numOrNull, sizesShort } from './scorecard-sql';
 
@@ -268,20 +269,35 @@ export class SupplierMetricsQuery {
     }));
   }
 
-  /** Chargebacks of the returns raised (created) in the range, by supplier. */
-  async chargebacks(range: ScorecardRange, supplierId?: number): Promise<Map<number, number>> {
+  /**
+   * Chargebacks of the returns raised (created) in the range, by supplier and ISO 4217
+   * currency: amounts in different currencies are never added together (nor converted).
+   */
+  async chargebacks(
+    range: ScorecardRange,
+    supplierId?: number,
+  ): Promise<Map<number, MoneyTotal[]>> {
     const k = this.knex;
     const q = this.inRange(
       k('vendor_returns as vr')
-        .select('vr.supplier_id')
+        .select('vr.supplier_id', 'vr.currency')
         .select(k.raw('sum(vr.chargeback_total) as total'))
         .whereNot('vr.status', 'cancelled')
-        .groupBy('vr.supplier_id'),
+        .groupBy('vr.supplier_id', 'vr.currency')
+        .orderBy('vr.currency'),
       'vr.created_at',
       range,
     );
     if (supplierId !== undefined) q.andWhere('vr.supplier_id', supplierId);
     const rows: Record<string, unknown>[] = await q;
-    return new Map(rows.map((r) => [num(r.supplier_id), num(r.total)]));
+    const bySupplier = new Map<number, MoneyTotal[]>();
+    for (const r of rows) {
+      const id = num(r.supplier_id);
+      const totals = bySupplier.get(id) ?? [];
+      // Each return's total is to the cent; their float sum is put back on the cent.
+      totals.push({ currency: String(r.currency), amount: Math.round(num(r.total) * 100) / 100 });
+      bySupplier.set(id, totals);
+    }
+    return bySupplier;
   }
 }

@@ -1,6 +1,7 @@
 import { Nonconformance } from '../decisions/entities/nonconformance.entity';
 import { Lot } from '../lots/entities/lot.entity';
 import { OutboundMessage } from '../mail/entities/outbound-message.entity';
+import { money } from '../returns/return-money';
 import { VendorReturn, type ReturnCosts } from '../returns/entities/vendor-return.entity';
 import type { ScenarioContext } from './seed-scenario-context';
 
@@ -16,6 +17,8 @@ interface ReturnStory {
   rmaNumber: string;
   costs: ReturnCosts;
   notes: string;
+  /** ISO 4217 code; the server's CURRENCY when not given. */
+  currency?: string;
   /** Days ago of each step: raised, then e-mailed (shipped, acknowledged, credited, closed when given). */
   steps: number[];
   mail: 'sent' | 'logged';
@@ -26,13 +29,19 @@ async function returnLot(ctx: ScenarioContext, r: ReturnStory): Promise<void> {
   const [raised, ...later] = r.steps;
   ctx.clock.set(daysAgo(ctx, raised, 14));
   const view = await ctx.returns.create(
-    { lotIds: [r.lot.id], rmaNumber: r.rmaNumber, notes: r.notes, costs: r.costs },
+    {
+      lotIds: [r.lot.id],
+      rmaNumber: r.rmaNumber,
+      notes: r.notes,
+      costs: r.costs,
+      currency: r.currency,
+    },
     ctx.users.buyer,
   );
   const steps: ((at: Date) => Promise<unknown>)[] = [
     async () => {
       await ctx.returns.markEmailed(view.id, ctx.users.buyer);
-      mailReturn(ctx, r, view.id, view.number, view.chargebackTotal);
+      mailReturn(ctx, r, view.id, view.number, money(view.chargebackTotal, view.currency));
     },
     (at) =>
       ctx.returns.ship(
@@ -73,7 +82,7 @@ function mailReturn(
   r: ReturnStory,
   id: number,
   number: string,
-  total: number,
+  total: string,
 ) {
   const supplier = r.lot.supplier;
   const message = ctx.em.create(OutboundMessage, {
@@ -82,7 +91,7 @@ function mailReturn(
     body: [
       `Return to vendor ${number}, your RMA ${r.rmaNumber}.`,
       `We rejected lot ${r.lot.id} (PO ${r.lot.poNumber}) at receiving inspection: the attached evidence pack shows the sampling plan, every reading with its uncertainty and the decision; the CSV holds the readings.`,
-      `Chargeback: ${total.toFixed(2)}.`,
+      `Chargeback: ${total}.`,
       'Please confirm the return and send us your corrective action.',
     ].join('\n\n'),
     attachments: [
@@ -125,6 +134,8 @@ export async function seedReturns(ctx: ScenarioContext, lot: LotByKey) {
     rmaNumber: 'QAS-RMA-5870',
     costs: { inspectionHours: 4, hourlyRate: 48, freight: 95, other: 30 },
     notes: 'Second delivery of copper-clad aluminium sold as copper; see SCAR.',
+    // Invoiced from the supplier's European warehouse: its scorecard shows two currencies.
+    currency: 'EUR',
     steps: [48, 47, 46],
     mail: 'logged',
   });

@@ -201,13 +201,16 @@ export class ScorecardFixtures {
     supplierId: number,
     createdAt: string,
     chargebackTotal: number,
+    currency = 'EUR',
+    status: VendorReturn['status'] = 'draft',
   ): Promise<void> {
     const em = this.em();
     em.create(VendorReturn, {
       number: `RTV-T-${Math.random().toString(36).slice(2, 8)}`,
       supplier: em.getReference(Supplier, supplierId),
       chargebackTotal,
-      currency: 'EUR',
+      currency,
+      status,
       createdAt: new Date(createdAt),
       createdBy: await this.clerk(em),
     });

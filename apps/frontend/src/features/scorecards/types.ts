@@ -2,6 +2,7 @@
 export type {
   TrendPoint,
   ScorecardRow,
+  MoneyTotal,
   ScorecardList,
   HistogramBin,
   PurposeCount,

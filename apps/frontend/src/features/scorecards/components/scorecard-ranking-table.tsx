@@ -11,7 +11,12 @@ import { paths } from '@/config/paths';
 import { useScorecards } from '@/features/scorecards/api/get-scorecards';
 import { SupplierStatusChip } from '@/features/scorecards/components/supplier-status-chip';
 import TrendSparkline from '@/features/scorecards/components/trend-sparkline';
-import { formatMoney, formatPercent, formatWhole, NONE } from '@/features/scorecards/lib/format';
+import {
+  formatMoneyTotals,
+  formatPercent,
+  formatWhole,
+  NONE,
+} from '@/features/scorecards/lib/format';
 import { rankRows } from '@/features/scorecards/lib/rank-rows';
 import type { DateRange, ScorecardRow } from '@/features/scorecards/types';
 
@@ -109,7 +114,18 @@ const columnsFor = (range: DateRange): DataTableColumns<ScorecardRow> =>
     col.accessor('chargebacks', {
       header: 'Chargebacks',
       ...sortable,
-      cell: ({ getValue }) => formatMoney(getValue()),
+      // One line per currency: amounts in different currencies are never added together.
+      cell: ({ getValue }) => {
+        const lines = formatMoneyTotals(getValue());
+        if (lines.length === 0) return NONE;
+        return (
+          <Stack component="span" sx={{ whiteSpace: 'nowrap' }}>
+            {lines.map((line) => (
+              <span key={line}>{line}</span>
+            ))}
+          </Stack>
+        );
+      },
     }),
   ]);
 

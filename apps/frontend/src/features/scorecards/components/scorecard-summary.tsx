@@ -1,7 +1,7 @@
 import { Grid, Paper, Typography } from '@mui/material';
 import {
   formatDays,
-  formatMoney,
+  formatMoneyTotals,
   formatPercent,
   formatWhole,
   NONE,
@@ -62,8 +62,11 @@ function tiles(s: ScorecardRow): Tile[] {
     },
     {
       label: 'Chargebacks',
-      value: formatMoney(s.chargebacks),
-      detail: 'raised on returns in the range',
+      value: s.chargebacks.length ? formatMoneyTotals(s.chargebacks).join(' · ') : NONE,
+      detail:
+        s.chargebacks.length > 1
+          ? 'raised on returns in the range; one total per currency, never converted or added together'
+          : 'raised on returns in the range',
     },
   ];
 }

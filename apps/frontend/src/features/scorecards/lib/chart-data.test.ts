@@ -70,4 +70,20 @@ describe('rankRows', () => {
     expect(names('asc')).toEqual(['c', 'b', 'a']);
     expect(names('desc')).toEqual(['b', 'c', 'a']);
   });
+
+  it('sorts chargebacks by currency, then by amount within it, never across currencies', () => {
+    const charged = (name: string, chargebacks: ScorecardRow['chargebacks']) =>
+      ({ name, chargebacks }) as ScorecardRow;
+    const mixed = [
+      charged('usd-small', [{ currency: 'USD', amount: 5 }]),
+      charged('none', []),
+      charged('eur-big', [{ currency: 'EUR', amount: 900 }]),
+      charged('usd-big', [{ currency: 'USD', amount: 700 }]),
+      charged('eur-small', [{ currency: 'EUR', amount: 1 }]),
+    ];
+    const names = (dir: 'asc' | 'desc') =>
+      rankRows(mixed, { field: 'chargebacks', direction: dir }, 1, 10).items.map((r) => r.name);
+    expect(names('desc')).toEqual(['eur-big', 'eur-small', 'usd-big', 'usd-small', 'none']);
+    expect(names('asc')).toEqual(['eur-small', 'eur-big', 'usd-small', 'usd-big', 'none']);
+  });
 });
