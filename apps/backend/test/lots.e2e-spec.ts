@@ -100,11 +100,11 @@ describe('POST /api/lots', () => {
     expect((await t.http.post('/api/lots').send(lotBody(spoolId))).status).toBe(401);
   });
 
-  it('names the bad fields; a quantity below 2 has its own sentence', async () => {
+  it('names the bad fields; a quantity below 1 has its own sentence', async () => {
     const res = await call(t, DEMO.clerk, 'post', '/api/lots', {
       productId: 'abc',
       poNumber: '',
-      quantity: 1,
+      quantity: 0,
       unit: '',
       colour: 'red',
     });
@@ -114,17 +114,46 @@ describe('POST /api/lots', () => {
         'property colour should not exist',
         'productId must be the id of a product',
         'poNumber is required',
-        'quantity must be a whole number of at least 2',
+        'quantity must be a whole number of at least 1',
         'unit is required',
       ]),
     );
     for (const quantity of [2.5, '40', -3]) {
       const bad = await call(t, DEMO.clerk, 'post', '/api/lots', lotBody(spoolId, { quantity }));
-      expect(bad.body.message).toEqual(['quantity must be a whole number of at least 2']);
+      expect(bad.body.message).toEqual(['quantity must be a whole number of at least 1']);
     }
     const unknown = await call(t, DEMO.clerk, 'post', '/api/lots', lotBody(99999));
     expect(unknown.status).toBe(400);
     expect(unknown.body.message).toEqual(['productId must be the id of a product']);
+  });
+
+  it('receives a lot of one (a single drum): one sample, every unit, the rule cited', async () => {
+    const res = await call(
+      t,
+      DEMO.clerk,
+      'post',
+      '/api/lots',
+      lotBody(spoolId, { quantity: 1, poNumber: 'PO-SINGLE-1' }),
+    );
+    expect(res.status).toBe(201);
+    expect(res.body.samplingPlan).toMatchObject({
+      sampleSize: 1,
+      inspectAll: true,
+      accept: 0,
+      reject: 1,
+    });
+    const plan = await call(
+      t,
+      DEMO.clerk,
+      'get',
+      `/api/products/${spoolId}/sampling-plan?quantity=1`,
+    );
+    expect(plan.status).toBe(200);
+    expect(plan.body.samplingPlan).toMatchObject({ sampleSize: 1, inspectAll: true });
+    expect(plan.body.message).toMatch(/inspect the one unit of the lot/);
+    expect(plan.body.message).toContain(
+      'ANSI/ASQ Z1.4 / ISO 2859-1: when the sample size equals or exceeds the lot size, inspect every unit (100 % inspection).',
+    );
   });
 
   it('receives a suspended supplier’s delivery, with a warning', async () => {

@@ -57,11 +57,20 @@ test('a clerk receives a spool lot, records a mass reading and uploads a photo',
     .click();
   await page.getByRole('textbox', { name: 'PO number' }).fill(PO);
   await page.getByLabel('Packing-slip number').fill('PS-77');
-  // Client validation as the clerk types: 1 is not a lot.
+  // Client validation as the clerk types: 0 is not a lot.
+  await page.getByLabel('Quantity received').fill('0');
+  await page.getByText('Enter a whole number of at least 1.').waitFor();
+  // A lot of one (a single drum) is that one unit, inspected whole, with the rule beside it.
   await page.getByLabel('Quantity received').fill('1');
-  await page.getByText('Enter a whole number of at least 2.').waitFor();
-  await page.getByLabel('Quantity received').fill('40');
   const plan = page.getByLabel('Sampling plan');
+  await plan.getByText('Inspect the one unit (spool): the lot is a single unit').waitFor();
+  await plan
+    .getByText(
+      /ISO 2859-1: when the sample size equals or exceeds the lot size, inspect every unit/,
+    )
+    .waitFor();
+  await screenshot(page, 'receiving-lot-of-one');
+  await page.getByLabel('Quantity received').fill('40');
   await plan.getByText(/Cut \d+ spools|Inspect all \d+ spools/).waitFor();
   await page.getByText(/^Sampling plan for 40 spools\s*$/).waitFor(); // the server confirmed it
   const planText = await plan.textContent();

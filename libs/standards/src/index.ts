@@ -137,6 +137,7 @@ export {
   acceptedAtTighterAql,
   aqlKey,
   codeLetterFor,
+  INSPECT_ALL_RULE,
   lotOutcome,
   MAX_AQL_NONCONFORMING_UNITS,
   requireAqlForNonconformingUnits,

@@ -161,8 +161,8 @@ describe('every function refuses bad input with StandardsInputError and the fiel
     ).toBe('identifiedMaterial');
   });
 
-  it('refuses lot sizes below 2, unknown levels, AQLs and severities', () => {
-    for (const lotSize of [1, 0, -5, 2.5, NaN, Infinity]) {
+  it('refuses lot sizes below 1, unknown levels, AQLs and severities', () => {
+    for (const lotSize of [0, -5, 2.5, NaN, Infinity]) {
       expect(fieldOf(() => samplingPlan({ lotSize }))).toBe('lotSize');
     }
     expect(fieldOf(() => samplingPlan({ lotSize: 800, aql: '0.3' as '1.0' }))).toBe('aql');

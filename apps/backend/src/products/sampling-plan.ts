@@ -1,4 +1,5 @@
 import {
+  INSPECT_ALL_RULE,
   SAMPLING_PLAN_NAME,
   samplingPlan,
   type Aql,
@@ -69,11 +70,14 @@ export function planForLot(
     reject: plan.reject,
     inspectAll: plan.inspectAll,
   };
-  const cut = plan.inspectAll
-    ? `inspect every one of the ${quantity} units`
-    : `cut ${plan.sampleSize} of the ${quantity} units`;
+  const cut = !plan.inspectAll
+    ? `cut ${plan.sampleSize} of the ${quantity} units`
+    : quantity === 1
+      ? 'inspect the one unit of the lot'
+      : `inspect every one of the ${quantity} units`;
+  const rule = plan.inspectAll ? ` ${INSPECT_ALL_RULE}` : '';
   const message =
     `${SEVERITY_WORDS[plan.severity]}: ${cut} (code letter ${plan.codeLetter}, level ${plan.level}, AQL ${plan.aql}); ` +
-    `${acceptWords(plan.accept)}, reject at ${plan.reject}. ${SAMPLING_PLAN_NAME}.`;
+    `${acceptWords(plan.accept)}, reject at ${plan.reject}. ${SAMPLING_PLAN_NAME}.${rule}`;
   return { samplingPlan: stored, severity, discontinued: false, message };
 }

@@ -5,6 +5,7 @@ import {
   acceptedAtTighterAql,
   aqlKey,
   codeLetterFor,
+  INSPECT_ALL_RULE,
   lotOutcome,
   MAX_AQL_NONCONFORMING_UNITS,
   requireAqlForNonconformingUnits,
@@ -77,6 +78,80 @@ describe('samplingPlan (MIL-STD-105E Tables I, II-A/B/C; ANSI/ASQ Z1.4)', () => 
     });
   });
 
+  it('a lot of one: one sample, every unit inspected, one nonconforming unit rejects it', () => {
+    // Table I starts at 2: a lot of 1 takes the 2–8 row (level II → A, AQL 1.0 → n 13, Ac 0 Re 1)
+    const single = samplingPlan({ lotSize: 1 });
+    expect(single).toMatchObject({
+      lotSize: 1,
+      codeLetter: 'A',
+      sampleSize: 1,
+      planSampleSize: 13,
+      inspectAll: true,
+      accept: 0,
+      reject: 1,
+    });
+    expect(lotOutcome(single, 0)).toBe('accept');
+    expect(lotOutcome(single, 1)).toBe('reject');
+    expect(sampleProgress(single, 0, 0)).toBe('in_progress');
+    expect(sampleProgress(single, 1, 0)).toBe('accept');
+    expect(INSPECT_ALL_RULE).toMatch(
+      /ANSI\/ASQ Z1\.4 \/ ISO 2859-1: when the sample size equals or exceeds the lot size, inspect every unit/,
+    );
+    // Level III, AQL 10 → B, n 5, Ac 1 Re 2 in the table (Table II-A arrow): a reject number of
+    // 2 could never be reached with one unit, so the unit alone decides (Ac 0, Re 1).
+    expect(samplingPlan({ lotSize: 2, level: 'III', aql: '10' })).toMatchObject({
+      sampleSize: 2,
+      accept: 1,
+      reject: 2,
+    });
+    expect(samplingPlan({ lotSize: 1, level: 'III', aql: '10' })).toMatchObject({
+      codeLetter: 'B',
+      sampleSize: 1,
+      inspectAll: true,
+      accept: 0,
+      reject: 1,
+    });
+    // Reduced 2/0/2 cell: one unit can only reach 1.
+    expect(samplingPlan({ lotSize: 1, severity: 'reduced', aql: '10' })).toMatchObject({
+      sampleSize: 1,
+      accept: 0,
+      reject: 1,
+    });
+    expect(codeLetterFor(1, 'III')).toBe('B');
+  });
+
+  it('every lot of one, at any level, AQL up to 10 and severity, is one unit inspected: Ac 0, Re 1', () => {
+    for (const level of INSPECTION_LEVELS) {
+      for (const aql of AQLS.filter((a) => Number(a) <= MAX_AQL_NONCONFORMING_UNITS)) {
+        for (const severity of SEVERITIES) {
+          expect(samplingPlan({ lotSize: 1, level, aql, severity })).toMatchObject({
+            sampleSize: 1,
+            inspectAll: true,
+            accept: 0,
+            reject: 1,
+          });
+        }
+      }
+    }
+  });
+
+  it('from a lot of 2 up, plans counting units are the table cells unchanged (property)', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 2, max: 1_000_000 }),
+        fc.constantFrom(...INSPECTION_LEVELS),
+        fc.constantFrom(...AQLS.filter((a) => Number(a) <= MAX_AQL_NONCONFORMING_UNITS)),
+        fc.constantFrom(...SEVERITIES),
+        (lotSize, level, aql, severity) => {
+          const p = samplingPlan({ lotSize, level, aql, severity });
+          const [n, ac, re] = PLAN_TABLE[severity][p.codeLetter][AQLS.indexOf(aql)];
+          expect([p.planSampleSize, p.accept, p.reject]).toEqual([n, ac, re]);
+        },
+      ),
+      { numRuns: 2000 },
+    );
+  });
+
   it('gives Table I letters for the special levels and the range ends', () => {
     expect(codeLetterFor(2, 'S-1')).toBe('A'); // Table I, 2–8
     expect(codeLetterFor(8, 'III')).toBe('B'); // Table I, 2–8
@@ -105,7 +180,7 @@ describe('samplingPlan (MIL-STD-105E Tables I, II-A/B/C; ANSI/ASQ Z1.4)', () => 
   it('every plan has reject > accept and a sample no larger than the lot (property)', () => {
     fc.assert(
       fc.property(
-        fc.integer({ min: 2, max: 1_000_000 }),
+        fc.integer({ min: 1, max: 1_000_000 }),
         fc.constantFrom(...INSPECTION_LEVELS),
         fc.constantFrom(...AQLS),
         fc.constantFrom(...SEVERITIES),

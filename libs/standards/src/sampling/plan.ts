@@ -13,7 +13,7 @@ import {
 } from './tables.js';
 
 export interface SamplingPlanInput {
-  /** Units in the lot; at least 2 (Table I starts at 2). */
+  /** Units in the lot; at least 1 (a lot of one takes Table I's first row, see codeLetterFor). */
   lotSize: number;
   level?: InspectionLevel;
   /** AQL in percent, as written in the tables ('1.0') or as a number (1). */
@@ -36,9 +36,23 @@ export interface SamplingPlan {
   accept: number;
   /** Reject the lot when the nonconforming count is at least this (Re). */
   reject: number;
-  /** True when the plan's sample reaches the lot size: inspect every unit. */
+  /** True when the plan's sample reaches the lot size: inspect every unit (INSPECT_ALL_RULE). */
   inspectAll: boolean;
 }
+
+/**
+ * The rule applied when a plan's sample size equals or exceeds the lot size (ANSI/ASQ Z1.4;
+ * ISO 2859-1; the note of the tables' JSON): printed beside every plan that inspects all.
+ */
+export const INSPECT_ALL_RULE =
+  'ANSI/ASQ Z1.4 / ISO 2859-1: when the sample size equals or exceeds the lot size, inspect every unit (100 % inspection).';
+
+/**
+ * A lot of one unit (a single drum): Table I starts at 2, so it takes the first row (2 to 8);
+ * every plan of that row has n ≥ 2, so INSPECT_ALL_RULE applies and the one unit is the sample.
+ * (Our reading of the tables: Table I has no row below 2; the rule above decides the sample.)
+ */
+export const SMALLEST_TABLE_I_LOT = 2;
 
 /** The AQL key of the tables for '1.0', '1', 1 or 0.65; StandardsInputError('aql') if none. */
 export function aqlKey(aql: unknown): Aql {
@@ -55,7 +69,7 @@ export function aqlKey(aql: unknown): Aql {
 
 /** Sample-size code letter from lot size and inspection level (Table I, MIL-STD-105E). */
 export function codeLetterFor(lotSize: number, level: InspectionLevel = 'II'): CodeLetter {
-  const n = requireInteger('lotSize', lotSize, 2);
+  const n = Math.max(requireInteger('lotSize', lotSize, 1), SMALLEST_TABLE_I_LOT);
   const levelIndex = INSPECTION_LEVELS.indexOf(requireOneOf('level', level, INSPECTION_LEVELS));
   const row = CODE_LETTER_TABLE.find(([min, max]) => n >= min && (max === null || n <= max));
   if (row === undefined)
@@ -66,23 +80,32 @@ export function codeLetterFor(lotSize: number, level: InspectionLevel = 'II'): C
 /**
  * The single sampling plan for a lot (MIL-STD-105E Tables I, II-A/B/C; ANSI/ASQ Z1.4):
  * code letter from Table I, then the plan at the AQL with the table's arrows followed.
- * When the plan's n reaches the lot size every unit is inspected (`inspectAll`), judged
- * with the same Ac and Re.
+ * When the plan's n reaches the lot size every unit is inspected (`inspectAll`,
+ * INSPECT_ALL_RULE), judged with the same Ac and Re. Counting nonconforming units (AQL 10 or
+ * below), a reject number beyond the units inspected could never be reached, so it is brought
+ * down to the sample, and Ac below it: only a lot of one meets this (checked over every lot
+ * from 2 to 3 300 and every level, AQL and severity: no other plan changes), and its one unit,
+ * found nonconforming, rejects it (MIL-STD-105E 6.4, the right to reject any nonconforming unit
+ * found; from memory).
  */
 export function samplingPlan(input: SamplingPlanInput): SamplingPlan {
-  const lotSize = requireInteger('lotSize', input.lotSize, 2);
+  const lotSize = requireInteger('lotSize', input.lotSize, 1);
   const level = requireOneOf('level', input.level ?? 'II', INSPECTION_LEVELS);
   const aql = aqlKey(input.aql ?? '1.0');
   const severity = requireOneOf('severity', input.severity ?? 'normal', SEVERITIES);
   const codeLetter = codeLetterFor(lotSize, level);
-  const [n, accept, reject] = PLAN_TABLE[severity][codeLetter][AQLS.indexOf(aql)];
+  const [n, ac, re] = PLAN_TABLE[severity][codeLetter][AQLS.indexOf(aql)];
+  const sampleSize = Math.min(n, lotSize);
+  const countsUnits = Number(aql) <= MAX_AQL_NONCONFORMING_UNITS;
+  const reject = countsUnits ? Math.min(re, sampleSize) : re;
+  const accept = countsUnits ? Math.min(ac, reject - 1) : ac;
   return {
     lotSize,
     level,
     aql,
     severity,
     codeLetter,
-    sampleSize: Math.min(n, lotSize),
+    sampleSize,
     planSampleSize: n,
     accept,
     reject,

@@ -28,9 +28,9 @@ export class CreateLotDto {
   @MaxLength(64, { message: 'supplierLotCode must be at most 64 characters' })
   readonly supplierLotCode?: string | null;
 
-  /** Units in the lot; the sampling tables start at 2 (MIL-STD-105E Table I). */
-  @ApiProperty({ minimum: 2, example: 40 })
-  @IsWholeNumber(2, LOT_QUANTITY_MAX, { message: lotQuantityMessage })
+  /** Units in the lot; a lot of one is inspected whole (ANSI/ASQ Z1.4 / ISO 2859-1). */
+  @ApiProperty({ minimum: 1, example: 40 })
+  @IsWholeNumber(1, LOT_QUANTITY_MAX, { message: lotQuantityMessage })
   readonly quantity: number;
 
   @ApiProperty({ example: 'spools', description: 'spools, kits … as on the packing slip' })

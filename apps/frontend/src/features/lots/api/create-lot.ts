@@ -9,12 +9,12 @@ export const LOT_UNITS = ['spools', 'reels', 'coils', 'kits', 'boxes', 'metres',
 
 const optionalCode = z.string().trim().max(64, 'At most 64 characters.');
 
-/** Whole number of at least 2 (ISO 2859-1 Table I starts at a lot of 2), or null. */
+/** Whole number of at least 1 (a lot of one is inspected whole, ISO 2859-1), or null. */
 export function parseLotQuantity(text: string): number | null {
   const trimmed = text.trim();
   if (!/^\d+$/.test(trimmed)) return null;
   const value = Number(trimmed);
-  return Number.isSafeInteger(value) && value >= 2 ? value : null;
+  return Number.isSafeInteger(value) && value >= 1 ? value : null;
 }
 
 export const createLotSchema = z.object({
@@ -29,7 +29,7 @@ export const createLotSchema = z.object({
   supplierLotCode: optionalCode,
   quantity: z
     .string()
-    .refine((text) => parseLotQuantity(text) !== null, 'Enter a whole number of at least 2.'),
+    .refine((text) => parseLotQuantity(text) !== null, 'Enter a whole number of at least 1.'),
   unit: z.string().trim().min(1, 'Choose the unit.').max(16, 'At most 16 characters.'),
   notes: z.string().trim().max(2000, 'At most 2000 characters.'),
 });

@@ -20,7 +20,7 @@ export const samplingPlanQueryOptions = (productId: number, quantity: number) =>
 /** The server's plan for a lot size; off until there is a product and a whole quantity ≥ 2. */
 export function useSamplingPlan(productId: number | null, quantity: number | null) {
   const enabled =
-    productId !== null && quantity !== null && Number.isInteger(quantity) && quantity >= 2;
+    productId !== null && quantity !== null && Number.isInteger(quantity) && quantity >= 1;
   return useQuery({
     ...samplingPlanQueryOptions(productId ?? 0, quantity ?? 0),
     enabled,

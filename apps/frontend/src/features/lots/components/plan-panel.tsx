@@ -2,7 +2,7 @@ import { Alert, Card, CardContent, LinearProgress, Typography } from '@mui/mater
 import { useSamplingPlan } from '@/features/lots/api/get-sampling-plan';
 import { parseLotQuantity } from '@/features/lots/api/create-lot';
 import { SamplingPlanSummary } from '@/features/lots/components/sampling-plan-summary';
-import { previewPlan } from '@/features/lots/lib/plan-preview';
+import { countOf, previewPlan } from '@/features/lots/lib/plan-preview';
 import { useDebouncedValue } from '@/lib/use-debounced-value';
 import type { ProductOption } from '@/features/lots/types';
 import { errorMessage } from '@/lib/query-client';
@@ -32,7 +32,7 @@ export function PlanPanel({ product, quantityText, unit }: PlanPanelProps) {
   if (quantity === null) {
     return (
       <Alert severity="info">
-        Type the quantity received (a whole number of at least 2) to see how many units to cut.
+        Type the quantity received (a whole number of at least 1) to see how many units to cut.
       </Alert>
     );
   }
@@ -53,7 +53,7 @@ export function PlanPanel({ product, quantityText, unit }: PlanPanelProps) {
       )}
       <CardContent>
         <Typography variant="overline" component="h2">
-          Sampling plan for {quantity} {unit || 'units'}{' '}
+          Sampling plan for {countOf(quantity, unit)}{' '}
           {answer ? '' : '(preview, checking with the server…)'}
         </Typography>
         {discontinued && (

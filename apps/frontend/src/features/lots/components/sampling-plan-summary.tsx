@@ -1,4 +1,5 @@
 import { Alert, Chip, Stack, Typography } from '@mui/material';
+import { INSPECT_ALL_RULE } from '@gaugeproof/standards';
 import { cutInstruction } from '@/features/lots/lib/plan-preview';
 import type { SamplingPlan } from '@/features/lots/types';
 import { inspectionSeverityLabels } from '@/lib/labels';
@@ -44,7 +45,8 @@ export function SamplingPlanSummary({ plan, unit }: SamplingPlanSummaryProps) {
       )}
       {plan.inspectAll && (
         <Alert severity="info">
-          Every unit of this lot is inspected: the plan's sample is as large as the lot.
+          Every unit of this lot is inspected: the plan's sample is as large as the lot.{' '}
+          {INSPECT_ALL_RULE}
         </Alert>
       )}
     </Stack>

@@ -36,6 +36,16 @@ describe('previewPlan', () => {
     );
   });
 
+  it('plans a lot of one as that one unit, inspected whole', () => {
+    const preview = previewPlan({ ...policy, quantity: 1 });
+    expect(preview.kind).toBe('plan');
+    if (preview.kind !== 'plan') return;
+    expect(preview.plan).toMatchObject({ sampleSize: 1, inspectAll: true, accept: 0, reject: 1 });
+    expect(cutInstruction(preview.plan, 'reels')).toBe(
+      'Inspect the one unit (reel): the lot is a single unit (100 % inspection)',
+    );
+  });
+
   it('uses the tightened table when the product is on tightened inspection', () => {
     const normal = previewPlan({ ...policy, quantity: 500, inspectionLevel: 'II' });
     const tightened = previewPlan({
@@ -66,10 +76,11 @@ describe('previewPlan', () => {
 });
 
 describe('parseLotQuantity', () => {
-  it('takes whole numbers of at least 2 only', () => {
+  it('takes whole numbers of at least 1 only (a lot of one is a single drum)', () => {
     expect(parseLotQuantity('40')).toBe(40);
     expect(parseLotQuantity(' 2 ')).toBe(2);
-    expect(parseLotQuantity('1')).toBeNull();
+    expect(parseLotQuantity('1')).toBe(1);
+    expect(parseLotQuantity('0')).toBeNull();
     expect(parseLotQuantity('2.5')).toBeNull();
     expect(parseLotQuantity('-4')).toBeNull();
     expect(parseLotQuantity('')).toBeNull();

@@ -53,9 +53,25 @@ export function previewPlan(input: PlanPreviewInput): PlanPreview {
   }
 }
 
+/** 'spools' → 'spool', 'boxes' → 'box', 'feet' → 'foot'; other words as given. */
+export function singular(noun: string): string {
+  if (noun === 'feet') return 'foot';
+  if (noun.endsWith('xes')) return noun.slice(0, -2);
+  return noun.endsWith('s') ? noun.slice(0, -1) : noun;
+}
+
+/** "40 spools", "1 spool": a count with its unit as packing slips write it. */
+export function countOf(quantity: number, unit: string): string {
+  const noun = unit.trim() || 'units';
+  return `${quantity} ${quantity === 1 ? singular(noun) : noun}`;
+}
+
 /** What to cut: "Cut 5 spools, one sample from each", or every unit when n reaches the lot size. */
 export function cutInstruction(plan: SamplingPlan, unit: string): string {
   const noun = unit.trim() || 'units';
+  if (plan.inspectAll && plan.sampleSize === 1) {
+    return `Inspect the one unit (${singular(noun)}): the lot is a single unit (100 % inspection)`;
+  }
   if (plan.inspectAll) {
     return `Inspect all ${plan.sampleSize} ${noun}: the sample reaches the lot size (100 % inspection)`;
   }
