@@ -14,6 +14,7 @@ import { BootQuietLogger } from './common/boot-quiet.logger';
 import type { AppConfig } from './config/env';
 import { StorageService } from './storage/storage.service';
 import { FieldValidationPipe } from './common/field-validation.pipe';
+import { checkCountedTables } from './database/change-counters';
 
 /**
  * Builds the whole application: used by main.ts, by the API tests and the benchmark,
@@ -61,6 +62,7 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
 
   const orm = app.get(MikroORM);
   await orm.getMigrator().up();
+  await checkCountedTables(orm.em.fork(), Boolean(config.dbUrl));
   if (config.storage.kind === 'local') {
     const { sweepUploads } = await import('./storage/upload-sweep.js');
     const swept = await sweepUploads(orm.em.fork(), config.uploadDir);

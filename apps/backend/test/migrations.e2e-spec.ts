@@ -8,13 +8,16 @@ import { sqliteOptions } from '../src/database/sqlite.config';
 const dir = mkdtempSync(join(tmpdir(), 'gp-mig-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
-/** Tables and indexes as SQLite stores them, without the migrator's own table. */
+/**
+ * Tables and indexes as SQLite stores them, without the migrator's own table. Triggers (the
+ * change counters') are not described by entities; the server checks them at start.
+ */
 async function schemaOf(orm: MikroORM) {
   const rows = await orm.em
     .fork()
     .getConnection()
     .execute<{ type: string; name: string; sql: string }[]>(
-      "select type, name, sql from sqlite_master where name not like 'sqlite_%' and name not like 'mikro_orm_migrations%' order by type, name",
+      "select type, name, sql from sqlite_master where type in ('table', 'index') and name not like 'sqlite_%' and name not like 'mikro_orm_migrations%' order by type, name",
     );
   return rows.map((r: { type: string; name: string; sql: string }) => ({
     ...r,

@@ -23,6 +23,7 @@ import { ScarAttachment } from '../supplier-portal/entities/scar-attachment.enti
 import { ReturnLink } from '../supplier-portal/entities/return-link.entity';
 import { SupplierLink } from '../supplier-portal/entities/supplier-link.entity';
 import { User } from '../users/entities/user.entity';
+import { ChangeCounter } from './change-counter.entity';
 
 /** Every entity, in one list, so the migrator and every test see the same schema. */
 export const ENTITIES = [
@@ -51,4 +52,5 @@ export const ENTITIES = [
   NoticeSettings,
   Notice,
   ClientKey,
+  ChangeCounter,
 ];

@@ -6,7 +6,6 @@ import { AuditService, type AuditEntry } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
 import { usableInstruments, type InstrumentRecord } from '../instruments/instruments.service';
 import type { InstrumentKind } from '../instruments/entities/instrument.entity';
-import { announceSqlWrite } from '../common/sql-writes';
 import { instantOf, jsonOf } from '../common/sql-values';
 import { isoDate } from '../common/calendar';
 import type { LotStatus } from '../lots/entities/lot.entity';
@@ -44,7 +43,7 @@ export interface NewReading {
 export interface WriteOptions {
   /**
    * Write inside this transaction (the import's, the seed's) instead of one of the writer's
-   * own; the caller then commits, and announces the write to the caches after its commit.
+   * own; the caller then commits.
    */
   em?: EntityManager;
   /** When the readings are taken and audited (default: now); the seed's story time. */
@@ -213,18 +212,14 @@ export class ReadingWriter {
     const at = options.at ?? new Date();
     if (options.em) return this.writeIn(options.em, entries, actor, at);
     // Readings posted at the same moment share one commit (common/group-commit.ts).
-    const views = await this.commits.run((em) => this.writeIn(em, entries, actor, at));
-    announceSqlWrite(['Reading', 'Lot', 'AuditEvent']);
-    return views;
+    return this.commits.run((em) => this.writeIn(em, entries, actor, at));
   }
 
   /** Voids a reading with a reason; its sample's other live readings are computed again. */
   async void(id: number, reason: string, actor: RequestUser, options: WriteOptions = {}) {
     const at = options.at ?? new Date();
     if (options.em) return this.voidIn(options.em, id, reason, actor, at);
-    const view = await this.commits.run((em) => this.voidIn(em, id, reason, actor, at));
-    announceSqlWrite(['Reading', 'Lot', 'AuditEvent']);
-    return view;
+    return this.commits.run((em) => this.voidIn(em, id, reason, actor, at));
   }
 
   private async voidIn(

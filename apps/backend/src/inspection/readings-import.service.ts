@@ -11,7 +11,6 @@ import { createHash } from 'node:crypto';
 import Papa from 'papaparse';
 import type { RequestUser } from '../auth/request-user';
 import { DomainError } from '../common/domain-error';
-import { announceSqlWrite } from '../common/sql-writes';
 import { Instrument } from '../instruments/entities/instrument.entity';
 import { Lot } from '../lots/entities/lot.entity';
 import { ConductorSpec } from '../products/entities/conductor-spec.entity';
@@ -127,7 +126,6 @@ export class ReadingsImportService {
         await tx.flush();
         return { ...answer, replayed: false };
       });
-      if (!answer.replayed) announceSqlWrite(['Reading', 'Sample', 'Lot', 'AuditEvent']);
       return answer;
     } catch (e) {
       if (!(e instanceof UniqueConstraintViolationException)) throw e;

@@ -1,11 +1,12 @@
 import { Module } from '@nestjs/common';
+import { ChangeCounters } from '../database/change-counters';
 import { LotListCache } from './lot-list-cache';
 import { LotsController } from './lots.controller';
 import { LotsService } from './lots.service';
 
 @Module({
   controllers: [LotsController],
-  providers: [LotsService, LotListCache],
+  providers: [LotsService, LotListCache, ChangeCounters],
   exports: [LotsService],
 })
 export class LotsModule {}

@@ -1,9 +1,4 @@
-import {
-  BadRequestException,
-  Injectable,
-  Optional,
-  UnprocessableEntityException,
-} from '@nestjs/common';
+import { BadRequestException, Injectable, UnprocessableEntityException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
@@ -17,6 +12,7 @@ import { CreateLotDto } from './dto/create-lot.dto';
 import { LotFiltersDto } from './dto/list-lots.dto';
 import { Lot } from './entities/lot.entity';
 import { LotListCache } from './lot-list-cache';
+import { ChangeCounters, type Counters } from '../database/change-counters';
 import {
   lotCountSql,
   lotFilterSql,
@@ -48,8 +44,8 @@ export class LotsService {
   constructor(
     private readonly em: EntityManager,
     private readonly audit: AuditService,
-    /** Optional so scripts that build the service by hand (the demo seed) count directly. */
-    @Optional() private readonly cache?: LotListCache,
+    private readonly cache: LotListCache,
+    private readonly changes: ChangeCounters,
   ) {}
 
   async create(dto: CreateLotDto, actor: RequestUser) {
@@ -98,23 +94,24 @@ export class LotsService {
 
   /**
    * A page of the lot list as its JSON answer; the same query is answered from
-   * LotListCache until a write could change it.
+   * LotListCache until the database's change counters show a write it reads from.
    */
   async listAnswer(q: LotFiltersDto): Promise<JsonAnswer> {
-    if (!this.cache) return jsonAnswer(await this.list(q));
-    return this.cache.page(JSON.stringify(q), async () => jsonAnswer(await this.list(q)));
+    const counters = await this.changes.read();
+    return this.cache.page(counters, JSON.stringify(q), async () =>
+      jsonAnswer(await this.list(q, counters)),
+    );
   }
 
-  /** A page of the lot list, read from the database. */
-  async list(q: LotFiltersDto): Promise<Page<LotSummary>> {
+  /** A page of the lot list, read from the database (its totals kept under `counters`). */
+  private async list(q: LotFiltersDto, counters: Counters): Promise<Page<LotSummary>> {
     const { page, pageSize, offset } = paging(q);
     const sort = lotSort(q);
-    const filter = lotFilterSql(q, await this.walkInReceivedOrder(q, sort));
+    const filter = lotFilterSql(q, await this.walkInReceivedOrder(q, sort, counters));
     const { page: _p, pageSize: _s, sort: _o, ...filters } = q;
-    const count = () => this.count(this.em, filter);
-    const total = this.cache
-      ? await this.cache.total(JSON.stringify(filters), count)
-      : await count();
+    const total = await this.cache.total(counters, JSON.stringify(filters), () =>
+      this.count(this.em, filter),
+    );
     const items = await this.summaries(this.em, filter, sort, pageSize, offset);
     return { items, total, page, pageSize };
   }
@@ -155,7 +152,10 @@ export class LotsService {
     // Its own EntityManager: the pages are read after the handler has returned, while the
     // response streams, outside the request's context.
     const em = this.em.fork();
-    const filter = lotFilterSql(q, await this.walkInReceivedOrder(q, sort));
+    const filter = lotFilterSql(
+      q,
+      await this.walkInReceivedOrder(q, sort, await this.changes.read()),
+    );
     const total = await this.count(em, filter);
     if (total > LOT_EXPORT_MAX_ROWS) {
       throw new UnprocessableEntityException(
@@ -197,11 +197,13 @@ export class LotsService {
   private async walkInReceivedOrder(
     q: LotFiltersDto,
     [field]: [LotSort, 'asc' | 'desc'],
+    counters: Counters,
   ): Promise<boolean> {
-    if (!this.cache || !q.status?.length || field !== 'receivedAt') return false;
+    if (!q.status?.length || field !== 'receivedAt') return false;
     const count = (filters: LotFiltersDto) => () => this.count(this.em, lotFilterSql(filters));
-    const all = await this.cache.total(JSON.stringify({}), count({}));
+    const all = await this.cache.total(counters, JSON.stringify({}), count({}));
     const some = await this.cache.total(
+      counters,
       JSON.stringify({ status: q.status }),
       count({ status: q.status }),
     );

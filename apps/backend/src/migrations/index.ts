@@ -27,6 +27,8 @@ import { Migration20261203152700 } from './sqlite/Migration20261203152700';
 import { Migration20261203152710 } from './postgresql/Migration20261203152710';
 import { Migration20261203153113 } from './postgresql/Migration20261203153113';
 import { Migration20261203153110 } from './sqlite/Migration20261203153110';
+import { Migration20261203180000 } from './sqlite/Migration20261203180000';
+import { Migration20261203180005 } from './postgresql/Migration20261203180005';
 
 /**
  * Migrations per driver, in order, each driver in its own folder; listed in code so the
@@ -48,6 +50,7 @@ export const SQLITE_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203143250', class: Migration20261203143250 },
   { name: 'Migration20261203152700', class: Migration20261203152700 },
   { name: 'Migration20261203153110', class: Migration20261203153110 },
+  { name: 'Migration20261203180000', class: Migration20261203180000 },
 ];
 
 export const POSTGRES_MIGRATIONS: MigrationObject[] = [
@@ -65,4 +68,5 @@ export const POSTGRES_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203143251', class: Migration20261203143251 },
   { name: 'Migration20261203152710', class: Migration20261203152710 },
   { name: 'Migration20261203153113', class: Migration20261203153113 },
+  { name: 'Migration20261203180005', class: Migration20261203180005 },
 ];

@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { ChangeCounters } from '../database/change-counters';
 import { ScorecardCache } from './scorecard-cache';
 import { ScorecardExportService } from './scorecard-export.service';
 import { ScorecardsController } from './scorecards.controller';
@@ -11,6 +12,7 @@ import { SupplierMetricsQuery } from './supplier-metrics.query';
   controllers: [ScorecardsController],
   providers: [
     ScorecardCache,
+    ChangeCounters,
     ScorecardsService,
     ScorecardExportService,
     SupplierMetricsQuery,

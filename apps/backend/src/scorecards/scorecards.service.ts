@@ -5,6 +5,7 @@ import { CONDUCTOR_PURPOSES } from '../products/entities/conductor-spec.entity';
 import { Supplier } from '../suppliers/entities/supplier.entity';
 import { assembleRow, compareWorstFirst, type SupplierIdentity } from './scorecard-assemble';
 import { ScorecardCache } from './scorecard-cache';
+import { ChangeCounters } from '../database/change-counters';
 import type { ScorecardRange } from './scorecard-range';
 import type { ScorecardList, ScorecardRow, SupplierScorecard } from '@gaugeproof/api-types';
 import { SupplierDetailQuery } from './supplier-detail.query';
@@ -22,6 +23,7 @@ export class ScorecardsService {
     private readonly metrics: SupplierMetricsQuery,
     private readonly detail: SupplierDetailQuery,
     private readonly cache: ScorecardCache,
+    private readonly changes: ChangeCounters,
   ) {}
 
   private async rows(range: ScorecardRange, suppliers: SupplierIdentity[], supplierId?: number) {
@@ -47,12 +49,13 @@ export class ScorecardsService {
   }
 
   /**
-   * One row per supplier, suppliers without lots included; worst first. Kept until the next
-   * write to what it counts (ScorecardCache); the day is part of the key (overdue SCARs).
+   * One row per supplier, suppliers without lots included; worst first. Kept until the
+   * database's change counters show a write to what it counts (ScorecardCache); the day is
+   * part of the key (overdue SCARs).
    */
-  list(range: ScorecardRange): Promise<ScorecardList> {
+  async list(range: ScorecardRange): Promise<ScorecardList> {
     const key = `${range.start.toISOString()}|${range.end.toISOString()}|${isoDate(new Date())}`;
-    return this.cache.list(key, () => this.computeList(range));
+    return this.cache.list(await this.changes.read(), key, () => this.computeList(range));
   }
 
   private async computeList(range: ScorecardRange): Promise<ScorecardList> {

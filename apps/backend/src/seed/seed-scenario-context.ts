@@ -8,6 +8,8 @@ import { LotEvaluationService } from '../inspection/lot-evaluation';
 import { ReadingWriter } from '../inspection/reading-writer';
 import { SamplesService } from '../inspection/samples.service';
 import { LotsService } from '../lots/lots.service';
+import { LotListCache } from '../lots/lot-list-cache';
+import { ChangeCounters } from '../database/change-counters';
 import { PhotosService } from '../photos/photos.service';
 import { ReturnsService } from '../returns/returns.service';
 import type { StorageService } from '../storage/storage.service';
@@ -89,7 +91,7 @@ export async function scenarioContext(
     catalog,
     users,
     audit,
-    lots: new LotsService(em, audit),
+    lots: new LotsService(em, audit, new LotListCache(), new ChangeCounters(em)),
     samples: new SamplesService(em, audit),
     writer: new ReadingWriter(new GroupCommit(em), audit),
     evaluations,
