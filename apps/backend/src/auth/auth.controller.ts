@@ -1,11 +1,10 @@
 import { Body, Controller, Get, HttpCode, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { Throttle } from '@nestjs/throttler';
 import type { Request, Response } from 'express';
 import { AuthService } from './auth.service';
 import { CurrentUser, Public, Roles } from './decorators';
 import { LoginDto } from './dto/login.dto';
-import { LOGIN_TRIES_PER_ACCOUNT, LoginThrottlerGuard } from './login-throttler.guard';
+import { LoginThrottlerGuard } from './login-throttler.guard';
 import { SESSION_COOKIE, SESSION_IDLE_MINUTES, type RequestUser } from './request-user';
 import { ALL_ROLES } from './roles';
 
@@ -18,7 +17,6 @@ export class AuthController {
   @Post('login')
   @HttpCode(200)
   @UseGuards(LoginThrottlerGuard)
-  @Throttle({ default: { limit: LOGIN_TRIES_PER_ACCOUNT, ttl: 60_000 } })
   async login(
     @Body() dto: LoginDto,
     @Req() req: Request,

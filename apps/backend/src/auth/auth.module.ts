@@ -7,7 +7,6 @@ import { APP_CONFIG } from '../config/config.module';
 import type { AppConfig } from '../config/env';
 import { AuthController } from './auth.controller';
 import { AuthGuard } from './auth.guard';
-import { LOGIN_TRIES_PER_ACCOUNT, LOGIN_TRIES_PER_ADDRESS } from './login-throttler.guard';
 import { AuthService } from './auth.service';
 import { SignedInUsers } from './signed-in-users';
 
@@ -24,16 +23,19 @@ import { SignedInUsers } from './signed-in-users';
     }),
     // Only the sign-in route uses it (LoginThrottlerGuard); in memory, per server. `default`
     // counts one address's tries at one account; `address` all its tries, whatever the
-    // account, so guesses spread over many accounts are slowed too (limits: our choice).
-    ThrottlerModule.forRoot([
-      { name: 'default', ttl: 60_000, limit: LOGIN_TRIES_PER_ACCOUNT },
-      {
-        name: 'address',
-        ttl: 60_000,
-        limit: LOGIN_TRIES_PER_ADDRESS,
-        getTracker: (req: Record<string, unknown>) => String(req.ip),
-      },
-    ]),
+    // account, so guesses spread over many accounts are slowed too (limits from AppConfig).
+    ThrottlerModule.forRootAsync({
+      inject: [APP_CONFIG],
+      useFactory: (config: AppConfig) => [
+        { name: 'default', ttl: 60_000, limit: config.signInTries.perAccount },
+        {
+          name: 'address',
+          ttl: 60_000,
+          limit: config.signInTries.perAddress,
+          getTracker: (req: Record<string, unknown>) => String(req.ip),
+        },
+      ],
+    }),
   ],
   controllers: [AuthController],
   providers: [AuthService, SignedInUsers, { provide: APP_GUARD, useClass: AuthGuard }],

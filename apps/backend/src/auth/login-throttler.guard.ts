@@ -2,27 +2,20 @@ import { Injectable } from '@nestjs/common';
 import { ThrottlerException, ThrottlerGuard } from '@nestjs/throttler';
 
 /**
- * Sign-in tries one address may make in a minute over all accounts (our choice: a shop's
- * shared terminal signing in a shift's staff stays well below it).
+ * Sign-in tries one address may make in a minute over all accounts, unless
+ * SIGN_IN_TRIES_PER_ADDRESS says otherwise (our choice: a shop's shared terminal signing
+ * in a shift's staff stays well below it).
  */
-export const LOGIN_TRIES_PER_ADDRESS = triesFromEnv('SIGN_IN_TRIES_PER_ADDRESS', 30);
+export const LOGIN_TRIES_PER_ADDRESS = 30;
 
 /**
- * Sign-in tries one address may make in a minute at one account (our choice). Both limits
- * can be raised for a shop whose staff all sign in from one address behind a router, and
- * the browser-test runner raises them because every test signs in from 127.0.0.1.
+ * Sign-in tries one address may make in a minute at one account, unless
+ * SIGN_IN_TRIES_PER_ACCOUNT says otherwise (our choice). Both limits can be raised for a
+ * shop whose staff all sign in from one address behind a router, and the browser-test
+ * runner raises them because every test signs in from 127.0.0.1. They come to the
+ * throttler through AppConfig (auth.module.ts).
  */
-export const LOGIN_TRIES_PER_ACCOUNT = triesFromEnv('SIGN_IN_TRIES_PER_ACCOUNT', 5);
-
-function triesFromEnv(name: string, fallback: number): number {
-  const raw = process.env[name];
-  if (raw === undefined || raw.trim() === '') return fallback;
-  const value = Number(raw);
-  if (!Number.isInteger(value) || value < 1 || value > 100_000) {
-    throw new Error(`${name} must be a whole number from 1 to 100000 (got "${raw}")`);
-  }
-  return value;
-}
+export const LOGIN_TRIES_PER_ACCOUNT = 5;
 
 /**
  * Sign-in attempts are counted per client address and e-mail together (the `default`

@@ -2,6 +2,7 @@ import { randomBytes } from 'node:crypto';
 import { chmodSync, existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { isIP } from 'node:net';
 import { dirname, join, resolve } from 'node:path';
+import { LOGIN_TRIES_PER_ACCOUNT, LOGIN_TRIES_PER_ADDRESS } from '../auth/login-throttler.guard';
 
 /** Everything the server reads from its environment, checked once at start-up. */
 export interface AppConfig {
@@ -42,6 +43,11 @@ export interface AppConfig {
    * front of the server: `loopback`, addresses or subnets (comma-separated), or a hop count.
    */
   trustProxy: boolean | number | string;
+  /**
+   * Sign-in tries a minute from one address: at one account (SIGN_IN_TRIES_PER_ACCOUNT) and
+   * over all accounts (SIGN_IN_TRIES_PER_ADDRESS); auth/login-throttler.guard.ts.
+   */
+  signInTries: { perAccount: number; perAddress: number };
 }
 
 export type StorageConfig =
@@ -146,6 +152,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     pollMs: whole('NOTICE_POLL_MS', 60_000, 0, 3_600_000),
     digestHourUtc: whole('DIGEST_HOUR_UTC', 6, 0, 23),
   };
+  const signInTries = {
+    perAccount: whole('SIGN_IN_TRIES_PER_ACCOUNT', LOGIN_TRIES_PER_ACCOUNT, 1, 100_000),
+    perAddress: whole('SIGN_IN_TRIES_PER_ADDRESS', LOGIN_TRIES_PER_ADDRESS, 1, 100_000),
+  };
   const currency = (env.CURRENCY || 'USD').trim().toUpperCase();
   if (!isCurrencyCode(currency)) {
     problems.push(`CURRENCY must be an ISO 4217 code such as EUR or USD (got "${env.CURRENCY}")`);
@@ -197,5 +207,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     frontendDist: fromRepo('apps/frontend/dist'),
     storage,
     trustProxy,
+    signInTries,
   };
 }
