@@ -27,9 +27,11 @@ beforeAll(async () => {
 });
 afterAll(async () => t.close());
 
+// Each delivery its own PO: one PO and packing slip received twice is asked about (409).
+let poCounter = 1000;
 const lotBody = (productId: number, extra: object = {}) => ({
   productId,
-  poNumber: 'PO-1001',
+  poNumber: `PO-${(poCounter += 1)}`,
   packingSlip: 'PS-77',
   supplierLotCode: 'SLC-A',
   quantity: 40,
@@ -125,6 +127,119 @@ describe('POST /api/lots', () => {
     const unknown = await call(t, DEMO.clerk, 'post', '/api/lots', lotBody(99999));
     expect(unknown.status).toBe(400);
     expect(unknown.body.message).toEqual(['productId must be the id of a product']);
+  });
+
+  it('asks before receiving a PO and packing slip already received; another slip on the PO is a delivery like any', async () => {
+    const first = await call(
+      t,
+      DEMO.clerk,
+      'post',
+      '/api/lots',
+      lotBody(spoolId, { poNumber: 'PO-TWICE-9', packingSlip: 'PS-TWICE-1' }),
+    );
+    expect(first.status).toBe(201);
+    const id = first.body.id as number;
+
+    // The form's look-up while the clerk types: case and outer spaces do not hide it.
+    const before = await call(
+      t,
+      DEMO.clerk,
+      'get',
+      '/api/lots/received-before?poNumber=po-twice-9&packingSlip=%20ps-twice-1%20',
+    );
+    expect(before.status).toBe(200);
+    expect(before.body.lots.map((l: { id: number }) => l.id)).toEqual([id]);
+    expect(before.body.lots[0]).toMatchObject({
+      poNumber: 'PO-TWICE-9',
+      packingSlip: 'PS-TWICE-1',
+    });
+    const none = await call(
+      t,
+      DEMO.clerk,
+      'get',
+      '/api/lots/received-before?poNumber=PO-TWICE-9&packingSlip=PS-TWICE-2',
+    );
+    expect(none.body.lots).toEqual([]);
+    const missing = await call(t, DEMO.clerk, 'get', '/api/lots/received-before?poNumber=PO-1');
+    expect(missing.status).toBe(400);
+    expect(missing.body.message).toEqual(expect.arrayContaining(['packingSlip is required']));
+
+    // Saving the same slip again: 409 on the packing slip, naming the lot, nothing saved.
+    const count = async () =>
+      await t.app.get(MikroORM).em.fork().count(Lot, { poNumber: 'PO-TWICE-9' });
+    const again = await call(
+      t,
+      DEMO.clerk,
+      'post',
+      '/api/lots',
+      lotBody(spoolId, { poNumber: ' PO-TWICE-9 ', packingSlip: 'ps-twice-1', quantity: 12 }),
+    );
+    expect(again.status).toBe(409);
+    expect(again.body.errors).toEqual([
+      {
+        field: 'packingSlip',
+        message: expect.stringMatching(
+          new RegExp(
+            `^PO PO-TWICE-9 with packing slip ps-twice-1 was already received as lot ${id} \\(received \\d{4}-\\d{2}-\\d{2}, 40 spools of LOT-GOOD LS-4\\)\\. If this is another delivery under the same slip, confirm to receive it again`,
+          ),
+        ),
+      },
+    ]);
+    expect(again.body.alreadyReceived).toEqual([
+      expect.objectContaining({ id, status: 'on_hold', quantity: 40, unit: 'spools' }),
+    ]);
+    expect(await count()).toBe(1);
+
+    // Another slip on the same PO (a second delivery) needs no confirmation.
+    const second = await call(
+      t,
+      DEMO.clerk,
+      'post',
+      '/api/lots',
+      lotBody(spoolId, { poNumber: 'PO-TWICE-9', packingSlip: 'PS-TWICE-2' }),
+    );
+    expect(second.status).toBe(201);
+    // Nor does a delivery without a slip.
+    const noSlip = await call(
+      t,
+      DEMO.clerk,
+      'post',
+      '/api/lots',
+      lotBody(spoolId, { poNumber: 'PO-TWICE-9', packingSlip: null }),
+    );
+    expect(noSlip.status).toBe(201);
+
+    // Confirmed: received again, the audit naming the lot it repeats.
+    const confirmed = await call(
+      t,
+      DEMO.clerk,
+      'post',
+      '/api/lots',
+      lotBody(spoolId, { poNumber: 'PO-TWICE-9', packingSlip: 'PS-TWICE-1', receiveAgain: true }),
+    );
+    expect(confirmed.status).toBe(201);
+    expect(await count()).toBe(4);
+    const audit = await t.app
+      .get(MikroORM)
+      .em.fork()
+      .findOneOrFail(AuditEvent, { action: 'lot.create', entityId: confirmed.body.id });
+    expect(audit.after).toMatchObject({ receivedAgainOf: [id] });
+    // The look-up now names both receipts of the slip, oldest first.
+    const both = await call(
+      t,
+      DEMO.clerk,
+      'get',
+      '/api/lots/received-before?poNumber=PO-TWICE-9&packingSlip=PS-TWICE-1',
+    );
+    expect(both.body.lots.map((l: { id: number }) => l.id)).toEqual([id, confirmed.body.id]);
+    const bad = await call(
+      t,
+      DEMO.clerk,
+      'post',
+      '/api/lots',
+      lotBody(spoolId, { receiveAgain: 'yes' }),
+    );
+    expect(bad.body.message).toEqual(['receiveAgain must be true or false']);
   });
 
   it('receives a lot of one (a single drum): one sample, every unit, the rule cited', async () => {

@@ -9,6 +9,8 @@ const escape = (text) => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 
 let browser;
 let page;
+/** The lot the first test receives (PO with packing slip PS-77). */
+let firstLotId;
 before(async () => {
   browser = await launchBrowser();
   page = await browser.context.newPage();
@@ -82,6 +84,7 @@ test('a clerk receives a spool lot, records a mass reading and uploads a photo',
   await page.waitForURL((u) => /^\/lots\/\d+$/.test(u.pathname));
   await page.getByText('On hold.', { exact: false }).first().waitFor();
   await page.getByText(PO).waitFor();
+  firstLotId = Number(new URL(page.url()).pathname.split('/').pop());
 
   // Cut the first unit and weigh it: half the label's copper area over one metre
   // (A = m / (ρ L (1 + k)), copper 8.89 g/cm³, k = 2 %: IEC 60028, ASTM B496).
@@ -130,4 +133,76 @@ test('a clerk receives a spool lot, records a mass reading and uploads a photo',
   await page.waitForURL((u) => u.pathname === '/lots');
   await page.getByRole('table', { name: 'Lots' }).getByText(PO).waitFor();
   await screenshot(page, 'lots-list');
+});
+
+/** Supplier and product of the seeded spool chosen on the Receiving form. */
+async function chooseSpool(product) {
+  await page.getByRole('combobox', { name: 'Supplier' }).fill(product.supplier.name);
+  await page
+    .getByRole('option', { name: new RegExp(escape(product.supplier.code)) })
+    .first()
+    .click();
+  await page.getByRole('combobox', { name: 'Product' }).fill(product.sku);
+  await page
+    .getByRole('option', { name: new RegExp(escape(product.sku)) })
+    .first()
+    .click();
+}
+
+test('a PO and packing slip already received are named before saving; a second delivery is one tick', async () => {
+  assert.ok(firstLotId, 'the first test received a lot');
+  const product = await seededSpool();
+  for (const size of [
+    { width: 390, height: 844, name: 'phone' },
+    { width: 1366, height: 768, name: 'desk' },
+  ]) {
+    await page.setViewportSize(size);
+    await page.goto(url('/receiving'));
+    await chooseSpool(product);
+    // Typed as a clerk might: other letter case, spaces around.
+    await page.getByRole('textbox', { name: 'PO number' }).fill(PO.toLowerCase());
+    await page.getByLabel('Packing-slip number').fill(' ps-77 ');
+    await page.getByLabel('Quantity received').fill('1');
+    const warning = page.getByRole('alert', { name: 'Already received' });
+    await warning.waitFor();
+    const link = warning.getByRole('link', { name: `Lot ${firstLotId}` });
+    assert.equal(await link.getAttribute('href'), `/lots/${firstLotId}`);
+    assert.match(await warning.textContent(), /received .* by Rosa Okafor · 40 spools of/);
+    await warning.scrollIntoViewIfNeeded();
+    await screenshot(page, `receiving-already-received-${size.name}`);
+    // The page does not scroll sideways for it.
+    assert.ok(
+      await page.evaluate(() => document.documentElement.scrollWidth <= globalThis.innerWidth),
+    );
+    // Another slip on the same PO is an ordinary delivery: the warning goes.
+    await page.getByLabel('Packing-slip number').fill('PS-78');
+    await warning.waitFor({ state: 'detached' });
+    await page.getByLabel('Packing-slip number').fill('PS-77');
+    await warning.waitFor();
+  }
+
+  // Saving without the tick is stopped on the form, naming the lot; nothing is sent.
+  await page.getByRole('button', { name: 'Receive and hold the lot' }).click();
+  await page.getByText(`Already received as lot ${firstLotId}: open it`).waitFor();
+  assert.equal(new URL(page.url()).pathname, '/receiving');
+
+  // The tick receives it again as a new lot, on hold.
+  await page.getByLabel('This is another delivery under the same slip: receive it again').check();
+  await page.getByRole('button', { name: 'Receive again and hold the new lot' }).click();
+  await page.waitForURL((u) => /^\/lots\/\d+$/.test(u.pathname));
+  const secondId = Number(new URL(page.url()).pathname.split('/').pop());
+  assert.notEqual(secondId, firstLotId);
+  await page.getByText('On hold.', { exact: false }).first().waitFor();
+  // A lot of one: one unit, inspected whole.
+  await page
+    .getByText(/Inspect the one unit/)
+    .first()
+    .waitFor();
+  const again = await page.request.get(
+    url(`/api/lots/received-before?poNumber=${encodeURIComponent(PO)}&packingSlip=PS-77`),
+  );
+  assert.deepEqual(
+    (await again.json()).lots.map((l) => l.id),
+    [firstLotId, secondId],
+  );
 });

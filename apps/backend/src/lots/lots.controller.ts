@@ -6,7 +6,7 @@ import { sendJson } from '../common/json-answer';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
 import { ALL_ROLES } from '../auth/roles';
-import { CreateLotDto } from './dto/create-lot.dto';
+import { CreateLotDto, ReceivedBeforeQueryDto } from './dto/create-lot.dto';
 import { LotFiltersDto } from './dto/list-lots.dto';
 import { LOT_CSV_COLUMNS } from './lots-csv';
 import { LotsService } from './lots.service';
@@ -21,6 +21,13 @@ export class LotsController {
   @Roles('clerk', 'qa_lead', 'admin')
   create(@Body() dto: CreateLotDto, @CurrentUser() actor: RequestUser) {
     return this.lots.create(dto, actor);
+  }
+
+  /** Receiving warns before saving: the lots already received under this PO and slip. */
+  @Get('received-before')
+  @Roles('clerk', 'qa_lead', 'admin')
+  receivedBefore(@Query() query: ReceivedBeforeQueryDto) {
+    return this.lots.receivedBefore(query.poNumber, query.packingSlip);
   }
 
   @Get()

@@ -8,6 +8,7 @@ import { InspectionState } from '../products/entities/inspection-state.entity';
 import { Product } from '../products/entities/product.entity';
 import { planForLot } from '../products/sampling-plan';
 import { User } from '../users/entities/user.entity';
+import { alreadyReceivedError, lotsReceivedAs } from './already-received';
 import { CreateLotDto } from './dto/create-lot.dto';
 import { LotFiltersDto } from './dto/list-lots.dto';
 import { Lot } from './entities/lot.entity';
@@ -65,6 +66,11 @@ export class LotsService {
     if (!plan.samplingPlan) throw new UnprocessableEntityException(plan.message);
     const samplingPlan = plan.samplingPlan;
     return this.em.transactional(async (em) => {
+      // Inside the write transaction: on SQLite two receipts of one slip at once queue here.
+      const earlier = await lotsReceivedAs(em, dto.poNumber, dto.packingSlip);
+      if (earlier.length > 0 && dto.receiveAgain !== true) {
+        throw alreadyReceivedError(dto.poNumber, dto.packingSlip ?? '', earlier);
+      }
       const lot = em.create(Lot, {
         product,
         supplier: product.supplier,
@@ -86,10 +92,20 @@ export class LotsService {
         entityType: 'lot',
         entityId: lot.id,
         lotId: lot.id,
-        after: { ...summary, notes: lot.notes },
+        after: {
+          ...summary,
+          notes: lot.notes,
+          // A confirmed second receipt of a slip names the lots it repeats.
+          ...(earlier.length > 0 ? { receivedAgainOf: earlier.map((l) => l.id) } : {}),
+        },
       });
       return { ...summary, notes: lot.notes, supplierWarning: supplierWarning(product.supplier) };
     });
+  }
+
+  /** The lots already received under this PO and packing slip, oldest first. */
+  async receivedBefore(poNumber: string, packingSlip: string) {
+    return { lots: await lotsReceivedAs(this.em, poNumber, packingSlip) };
   }
 
   /**

@@ -30,6 +30,9 @@ export const queryKeys = {
     ...lots,
     timeline: (lotId: number) => [...lots.all, 'timeline', lotId] as const,
     concessions: (lotId: number) => [...lots.all, 'concessions', lotId] as const,
+    /** Lots already received under a PO and packing slip (Receiving's warning). */
+    receivedBefore: (poNumber: string, packingSlip: string) =>
+      [...lots.all, 'received-before', poNumber, packingSlip] as const,
   },
   products: {
     ...products,

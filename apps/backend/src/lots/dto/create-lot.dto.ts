@@ -1,5 +1,5 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { IsOptional, IsString, MaxLength, MinLength, ValidateIf } from 'class-validator';
+import { IsBoolean, IsOptional, IsString, MaxLength, MinLength, ValidateIf } from 'class-validator';
 import { IsId, IsWholeNumber } from '../../common/validators';
 import { LOT_QUANTITY_MAX, lotQuantityMessage } from '../../products/dto/sampling-plan-query.dto';
 
@@ -45,4 +45,31 @@ export class CreateLotDto {
   @IsString()
   @MaxLength(4000, { message: 'notes must be at most 4000 characters' })
   readonly notes?: string | null;
+
+  /**
+   * The clerk confirms a second delivery under a PO and packing slip already received
+   * (without it the server answers 409 naming the lots already received).
+   */
+  @ApiPropertyOptional({
+    description:
+      'true to receive a PO and packing slip already received again (a back order under the same slip)',
+  })
+  @IsOptional()
+  @IsBoolean({ message: 'receiveAgain must be true or false' })
+  readonly receiveAgain?: boolean;
+}
+
+/** GET /api/lots/received-before: the lots already received under a PO and packing slip. */
+export class ReceivedBeforeQueryDto {
+  @ApiProperty({ example: 'PO-2026-0412' })
+  @IsString({ message: 'poNumber is required' })
+  @MinLength(1, { message: 'poNumber is required' })
+  @MaxLength(64, { message: 'poNumber must be at most 64 characters' })
+  readonly poNumber: string;
+
+  @ApiProperty({ example: 'PS-77' })
+  @IsString({ message: 'packingSlip is required' })
+  @MinLength(1, { message: 'packingSlip is required' })
+  @MaxLength(64, { message: 'packingSlip must be at most 64 characters' })
+  readonly packingSlip: string;
 }

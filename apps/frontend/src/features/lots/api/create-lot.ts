@@ -53,10 +53,12 @@ export interface CreateLotRequest {
   quantity: number;
   unit: string;
   notes?: string;
+  /** The clerk confirmed a second delivery under a PO and packing slip already received. */
+  receiveAgain?: true;
 }
 
 /** The POST body: empty optional fields are left out, the quantity becomes a number. */
-export function toCreateLotRequest(form: CreateLotForm): CreateLotRequest {
+export function toCreateLotRequest(form: CreateLotForm, receiveAgain = false): CreateLotRequest {
   const request: CreateLotRequest = {
     productId: form.productId,
     poNumber: form.poNumber.trim(),
@@ -66,6 +68,7 @@ export function toCreateLotRequest(form: CreateLotForm): CreateLotRequest {
   if (form.packingSlip.trim()) request.packingSlip = form.packingSlip.trim();
   if (form.supplierLotCode.trim()) request.supplierLotCode = form.supplierLotCode.trim();
   if (form.notes.trim()) request.notes = form.notes.trim();
+  if (receiveAgain) request.receiveAgain = true;
   return request;
 }
 

@@ -17,7 +17,7 @@ export const samplingPlanQueryOptions = (productId: number, quantity: number) =>
     meta: { inlineErrors: true },
   });
 
-/** The server's plan for a lot size; off until there is a product and a whole quantity ≥ 2. */
+/** The server's plan for a lot size; off until there is a product and a whole quantity ≥ 1. */
 export function useSamplingPlan(productId: number | null, quantity: number | null) {
   const enabled =
     productId !== null && quantity !== null && Number.isInteger(quantity) && quantity >= 1;

@@ -1,6 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Alert, Button, Grid, InputAdornment, MenuItem, Stack, TextField } from '@mui/material';
-import { useState } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
+import { useEffect, useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import { useNavigate } from 'react-router';
 import { ScanButton } from '@/components/scanner/scan-button';
@@ -19,12 +20,16 @@ import {
   useCreateLot,
   type CreateLotForm,
 } from '@/features/lots/api/create-lot';
+import { useReceivedBefore } from '@/features/lots/api/get-received-before';
+import { AlreadyReceivedAlert } from '@/features/lots/components/already-received-alert';
 import { PlanPanel } from '@/features/lots/components/plan-panel';
 import { ProductAutocomplete } from '@/features/lots/components/product-autocomplete';
 import { ProductDetails } from '@/features/lots/components/product-details';
 import { SupplierAutocomplete } from '@/features/lots/components/supplier-autocomplete';
 import { SupplierStatusAlert } from '@/features/lots/components/supplier-status-alert';
 import type { LotSummary, ProductOption, SupplierOption } from '@/features/lots/types';
+import { isApiError } from '@/lib/api-client';
+import { queryKeys } from '@/lib/query-keys';
 import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 
@@ -56,6 +61,14 @@ export function ReceiveLotForm({ onReceived }: { onReceived: (lot: LotSummary) =
   const { errors, isSubmitting } = form.formState;
   const quantityText = form.watch('quantity');
   const unit = form.watch('unit');
+  const poNumber = form.watch('poNumber');
+  const packingSlip = form.watch('packingSlip');
+  const queryClient = useQueryClient();
+  const earlier = useReceivedBefore(poNumber, packingSlip);
+  const [receiveAgain, setReceiveAgain] = useState(false);
+  const earlierIds = earlier.map((l) => l.id).join(',');
+  // A tick is for the lots it was given on: other codes, other lots, ask again.
+  useEffect(() => setReceiveAgain(false), [earlierIds]);
   const formErrors = create.isError
     ? splitServerErrors(create.error, CREATE_LOT_FIELDS).formErrors
     : [];
@@ -74,9 +87,25 @@ export function ReceiveLotForm({ onReceived }: { onReceived: (lot: LotSummary) =
   };
 
   const onSubmit = form.handleSubmit(async (values) => {
+    if (earlier.length > 0 && !receiveAgain) {
+      form.setError('packingSlip', {
+        type: 'already-received',
+        message: `Already received as lot ${earlierIds.replace(/,/g, ', ')}: open it, or tick "receive it again" below.`,
+      });
+      return;
+    }
     try {
-      onReceived(await create.mutateAsync(toCreateLotRequest(values)));
+      onReceived(await create.mutateAsync(toCreateLotRequest(values, receiveAgain)));
     } catch (error) {
+      // Received meanwhile (or typed faster than the look-up): show the lots it names.
+      if (isApiError(error) && error.status === 409) {
+        void queryClient.invalidateQueries({
+          queryKey: queryKeys.lots.receivedBefore(
+            values.poNumber.trim(),
+            values.packingSlip.trim(),
+          ),
+        });
+      }
       const { fieldErrors } = splitServerErrors(error, CREATE_LOT_FIELDS);
       for (const field of CREATE_LOT_FIELDS) {
         const message = fieldErrors[field];
@@ -146,6 +175,18 @@ export function ReceiveLotForm({ onReceived }: { onReceived: (lot: LotSummary) =
               {text('packingSlip', 'Packing-slip number', 'Scan the packing slip')}
               {text('supplierLotCode', 'Supplier lot code', 'Scan the supplier lot label')}
             </Stack>
+            {earlier.length > 0 && (
+              <AlreadyReceivedAlert
+                poNumber={poNumber}
+                packingSlip={packingSlip}
+                lots={earlier}
+                receiveAgain={receiveAgain}
+                onReceiveAgainChange={(next) => {
+                  setReceiveAgain(next);
+                  if (next) form.clearErrors('packingSlip');
+                }}
+              />
+            )}
             <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
               <TextField
                 label="Quantity received"
@@ -191,7 +232,9 @@ export function ReceiveLotForm({ onReceived }: { onReceived: (lot: LotSummary) =
             />
             <div>
               <Button type="submit" variant="contained" size="large" loading={isSubmitting}>
-                Receive and hold the lot
+                {earlier.length > 0 && receiveAgain
+                  ? 'Receive again and hold the new lot'
+                  : 'Receive and hold the lot'}
               </Button>
             </div>
           </Stack>
