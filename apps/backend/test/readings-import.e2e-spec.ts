@@ -204,6 +204,64 @@ describe('readings CSV import, one write per file', () => {
     expect(await count(Reading)).toBe(before);
   });
 
+  it('writes a long file in statements of many rows, each answered reading being its own row', async () => {
+    // Level II at 1 200 kits: 80 units × 2 conductors (ISO 2859-1 Table I, II-A: letter J).
+    const big = await createProduct(
+      t,
+      [
+        { purpose: 'power', gauge: '4 AWG' },
+        { purpose: 'ground', gauge: '4 AWG' },
+      ],
+      { level: 'II', aql: '1.0' },
+    );
+    const lotId = await createLot(t, big, 1200);
+    // 130 rows: two statements of 50 and 30 rows one by one; every mass its own.
+    const rows = Array.from({ length: 130 }, (_, i) => ({
+      unit: (i % 80) + 1,
+      conductor: i < 80 ? 'power' : 'ground',
+      massG: Number((193 + i / 50).toFixed(2)),
+    }));
+    const csv = [
+      HEADER,
+      ...rows.map(
+        (r) =>
+          `${r.unit},${r.conductor},mass,${r.massG},1000,,,,,,${bench.balance.serial};${bench.rule.serial},`,
+      ),
+    ].join('\n');
+    const res = await send(lotId, csv);
+    expect(res.status, JSON.stringify(res.body).slice(0, 500)).toBe(201);
+    const answered = res.body.readings as { id: number; inputs: { massG: number } }[];
+    expect(answered.map((r) => r.inputs.massG)).toEqual(rows.map((r) => r.massG));
+    const em = t.app.get(MikroORM).em.fork();
+    const stored = await em.find(
+      Reading,
+      { id: { $in: answered.map((r) => r.id) } },
+      { populate: ['sample.conductor'] },
+    );
+    const byId = new Map(stored.map((r) => [r.id, r]));
+    for (const [i, row] of rows.entries()) {
+      const reading = byId.get(answered[i].id);
+      expect(reading, `row ${i + 2}`).toBeDefined();
+      expect(reading!.inputs.massG, `row ${i + 2}`).toBe(row.massG);
+      expect(reading!.sample.seq, `row ${i + 2}`).toBe(row.unit);
+      expect(reading!.sample.conductor.purpose, `row ${i + 2}`).toBe(row.conductor);
+    }
+    // The audit names each reading with what it stored.
+    const created = await em.find(AuditEvent, { lotId, action: 'reading.create' });
+    expect(created).toHaveLength(130);
+    for (const event of created) {
+      const reading = byId.get(event.entityId as number);
+      expect((event.after as { inputs: { massG: number } }).inputs.massG).toBe(
+        reading!.inputs.massG,
+      );
+    }
+    expect(await audits(lotId, 'sample.create')).toBe(130);
+    // The answer kept for a retry is the one given.
+    const again = await send(lotId, csv);
+    expect(again.headers['idempotent-replayed']).toBe('true');
+    expect(again.body).toEqual(res.body);
+  });
+
   it('records two retries sent at the same moment once', async () => {
     const lotId = await createLot(t, kit);
     const csv = [HEADER, massRow(1), massRow(2), massRow(3)].join('\n');

@@ -149,6 +149,17 @@ const computedValues = (c: ComputedReading) => [
   c.verdict,
   JSON.stringify(c.result),
 ];
+/** Readings written by one INSERT statement when many are written at once (an import). */
+const INSERT_BATCH = 50;
+const READING_COLUMNS = `sample_id, method, inputs, instruments, ${COMPUTED_COLUMNS.join(', ')},
+           taken_by_id, taken_at, voided, four_wire, confirmed_unusual`;
+const READING_MARKS = `(?, ?, ?, ?, ${COMPUTED_COLUMNS.map(() => '?').join(', ')}, ?, ?, ?, ?, ?)`;
+const INSERT_ONE = `insert into readings (${READING_COLUMNS}) values ${READING_MARKS} returning id`;
+const INSERT_BATCH_SQL = `insert into readings (${READING_COLUMNS}) values ${Array.from(
+  { length: INSERT_BATCH },
+  () => READING_MARKS,
+).join(', ')} returning id`;
+
 const computedOf = (r: ComputedReading): ComputedReading => ({
   areaMm2: r.areaMm2,
   uMm2: r.uMm2,
@@ -483,37 +494,46 @@ export class ReadingWriter {
   ) {
     const { samples, live } = read;
     const events: AuditEntry[] = [];
-    for (const r of added) {
-      const [{ id }] = await plainSql<{ id: number }[]>(
+    // Many readings (an import) go in statements of INSERT_BATCH rows: one statement a
+    // reading held the connection, and with it every other request, for seconds (issue 17).
+    const values = (r: LiveReading) => [
+      r.sampleId,
+      r.method,
+      JSON.stringify(r.inputs),
+      JSON.stringify(r.instruments),
+      ...computedValues(r),
+      actor.id,
+      at,
+      false,
+      r.fourWire,
+      r.confirmedUnusual,
+    ];
+    for (let i = 0; i < added.length;) {
+      const batch =
+        added.length - i >= INSERT_BATCH ? added.slice(i, i + INSERT_BATCH) : [added[i]];
+      i += batch.length;
+      const rows = await plainSql<{ id: number }[]>(
         em,
-        `insert into readings (sample_id, method, inputs, instruments, ${COMPUTED_COLUMNS.join(', ')},
-           taken_by_id, taken_at, voided, four_wire, confirmed_unusual)
-         values (?, ?, ?, ?, ${COMPUTED_COLUMNS.map(() => '?').join(', ')}, ?, ?, ?, ?, ?)
-         returning id`,
-        [
-          r.sampleId,
-          r.method,
-          JSON.stringify(r.inputs),
-          JSON.stringify(r.instruments),
-          ...computedValues(r),
-          actor.id,
-          at,
-          false,
-          r.fourWire,
-          r.confirmedUnusual,
-        ],
+        batch.length === 1 ? INSERT_ONE : INSERT_BATCH_SQL,
+        batch.flatMap(values),
         'all',
       );
-      r.id = id;
-      const clientId = r.entry === undefined ? null : entries[r.entry]?.clientId;
-      if (clientId) await keepClientKey(em, clientId, 'reading', id, at);
-      events.push({
-        action: 'reading.create',
-        entityType: 'reading',
-        entityId: id,
-        lotId: (samples.get(r.sampleId) as SampleRow).lotId,
-        after: auditShape({ ...r, inputs: r.inputs as Record<string, number>, ...NOT_VOIDED }),
-      });
+      // Ids are given in the order of the VALUES rows (SQLite's rowid, a PostgreSQL
+      // sequence), whatever order RETURNING lists them in.
+      const ids = rows.map((row) => Number(row.id)).sort((a, b) => a - b);
+      for (const [k, r] of batch.entries()) {
+        const id = ids[k];
+        r.id = id;
+        const clientId = r.entry === undefined ? null : entries[r.entry]?.clientId;
+        if (clientId) await keepClientKey(em, clientId, 'reading', id, at);
+        events.push({
+          action: 'reading.create',
+          entityType: 'reading',
+          entityId: id,
+          lotId: (samples.get(r.sampleId) as SampleRow).lotId,
+          after: auditShape({ ...r, inputs: r.inputs as Record<string, number>, ...NOT_VOIDED }),
+        });
+      }
     }
     await this.settle(em, touched, live, events, at);
     await this.audit.append(em, actor, events, at);

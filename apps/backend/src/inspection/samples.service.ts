@@ -139,15 +139,19 @@ export class SamplesService {
       }),
     );
     await em.flush();
-    for (const sample of samples) {
-      this.audit.record(em, actor, {
+    // Audited with SQL in the caller's transaction: an import makes a hundred samples and
+    // more, and audit entities would be compared at every later flush of it.
+    await this.audit.append(
+      em,
+      actor,
+      samples.map((sample) => ({
         action: 'sample.create',
         entityType: 'sample',
         entityId: sample.id,
         lotId: lot.id,
         after: { seq: sample.seq, conductorId: sample.conductor.id, unitRef: sample.unitRef },
-      });
-    }
+      })),
+    );
     return samples;
   }
 }
