@@ -58,6 +58,28 @@ test(
     }
     await screenshot(page, 'scorecards-ranking');
 
+    // The whole ranking fits a 1366 × 768 screen: no sideways scroll of the page nor of the
+    // table's own box, every column header in view (issue 15).
+    await page.setViewportSize({ width: 1366, height: 768 });
+    await page.waitForFunction(() => globalThis.innerWidth === 1366);
+    const fit = await table.evaluate((el) => {
+      const box = el.parentElement;
+      const right = Math.max(
+        ...[...el.querySelectorAll('th')].map((th) => th.getBoundingClientRect().right),
+      );
+      return {
+        page: document.documentElement.scrollWidth,
+        table: el.scrollWidth,
+        box: box.clientWidth,
+        right,
+      };
+    });
+    assert.ok(fit.page <= 1366, `the page scrolls sideways (${fit.page} px wide)`);
+    assert.ok(fit.table <= fit.box, `the table is ${fit.table} px in a ${fit.box} px box`);
+    assert.ok(fit.right <= 1366, `the last column ends at ${fit.right} px`);
+    await screenshot(page, 'scorecards-ranking-1366');
+    await page.setViewportSize({ width: 1280, height: 800 });
+
     // A preset, then a typed start date: both land in the address and the figures reload.
     await page.getByRole('button', { name: 'Last 3 months' }).click();
     await page.waitForURL((u) => u.searchParams.has('from'));

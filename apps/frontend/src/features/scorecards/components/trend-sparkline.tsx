@@ -21,7 +21,7 @@ export default function TrendSparkline({ trend, name }: { trend: TrendPoint[]; n
       yAxis={{ min: 0, max: 100 }}
       valueFormatter={(v) => (v === null ? '' : `${v} % accepted`)}
       height={32}
-      width={120}
+      width={88}
       showTooltip
       showHighlight
       aria-label={`Acceptance trend of ${name}`}
