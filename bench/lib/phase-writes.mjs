@@ -7,7 +7,12 @@ import { startRaw } from './phase-reads.mjs';
 import { rawExports } from './raw-exports.mjs';
 import { freePort, peakRssMb } from './server.mjs';
 
-/** Open lots (with their conductors and samples) and a usable balance and rule. */
+/**
+ * Open lots (with their conductors and samples) and a usable balance and rule. Samples
+ * with a live resistance reading are left out: the bench posts the claimed metal's mass,
+ * and on a sample whose resistance found another metal (CCA sold as copper) the server
+ * questions the pair (weight × resistance fits no conductor metal, issue 13) with a 422.
+ */
 function openLots(dbPath, limit) {
   const db = new Database(dbPath, { readonly: true });
   const open = `select id from lots where status in ('on_hold', 'inspecting', 'awaiting_decision')
@@ -26,7 +31,9 @@ function openLots(dbPath, limit) {
               ${PER_SAMPLE} - (select count(*) from readings r
                                 where r.sample_id = s.id and r.voided = 0) as room
          from samples s
-         join conductor_specs cs on cs.id = s.conductor_id where s.lot_id in (${open})`,
+         join conductor_specs cs on cs.id = s.conductor_id where s.lot_id in (${open})
+          and not exists (select 1 from readings r where r.sample_id = s.id and r.voided = 0
+                            and r.method = 'resistance')`,
     )
     .all();
   const instrument = (kind) =>
