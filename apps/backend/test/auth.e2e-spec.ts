@@ -143,7 +143,7 @@ describe('users (admin)', () => {
     const off = await t.http
       .patch(`/api/users/${created.body.id}`)
       .set('Authorization', `Bearer ${admin}`)
-      .send({ active: false });
+      .send({ active: false, version: created.body.version });
     expect(off.status).toBe(200);
     expect(off.body.active).toBe(false);
     const me = await t.http.get('/api/auth/me').set('Authorization', `Bearer ${tempToken}`);
@@ -177,7 +177,7 @@ describe('users (admin)', () => {
     const res = await t.http
       .patch(`/api/users/${me.body.id}`)
       .set('Authorization', `Bearer ${admin}`)
-      .send({ active: false });
+      .send({ active: false, version: 1 });
     expect(res.status).toBe(422);
   });
 });

@@ -65,7 +65,7 @@ describe('demo data only when asked', () => {
         await fetch(`${s.url}/api/users`, {
           headers: { Authorization: `Bearer ${token.accessToken}` },
         })
-      ).json()) as { id: number; email: string }[];
+      ).json()) as { id: number; email: string; version: number }[];
       const others = users.filter((u) => u.email !== 'admin@demo.example');
       for (const u of others) {
         const res = await fetch(`${s.url}/api/users/${u.id}`, {
@@ -74,7 +74,7 @@ describe('demo data only when asked', () => {
             Authorization: `Bearer ${token.accessToken}`,
             'content-type': 'application/json',
           },
-          body: JSON.stringify({ password: `a-new-password-${u.id}` }),
+          body: JSON.stringify({ password: `a-new-password-${u.id}`, version: u.version }),
         });
         expect(res.status).toBe(200);
       }
@@ -85,7 +85,7 @@ describe('demo data only when asked', () => {
           Authorization: `Bearer ${token.accessToken}`,
           'content-type': 'application/json',
         },
-        body: JSON.stringify({ password: 'the-admins-own-password' }),
+        body: JSON.stringify({ password: 'the-admins-own-password', version: self.version }),
       });
       expect(res.status).toBe(200);
     } finally {

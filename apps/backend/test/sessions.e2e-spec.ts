@@ -61,11 +61,15 @@ async function newAccount(role: string) {
 
 const me = (t: TestApp, token: string) => t.http.get('/api/auth/me').set(bearer(token));
 
+/** An admin's edit of the account as it is now (the version it was loaded at). */
 async function adminPatch(id: number, body: Record<string, unknown>) {
+  const admin = bearer(await a.token(DEMO.admin));
+  const users = await a.http.get('/api/users').set(admin);
+  const { version } = (users.body as { id: number; version: number }[]).find((u) => u.id === id)!;
   const res = await a.http
     .patch(`/api/users/${id}`)
-    .set(bearer(await a.token(DEMO.admin)))
-    .send(body);
+    .set(admin)
+    .send({ ...body, version });
   expect(res.status, JSON.stringify(res.body)).toBe(200);
 }
 

@@ -29,6 +29,8 @@ import { Migration20261203153113 } from './postgresql/Migration20261203153113';
 import { Migration20261203153110 } from './sqlite/Migration20261203153110';
 import { Migration20261203180000 } from './sqlite/Migration20261203180000';
 import { Migration20261203180005 } from './postgresql/Migration20261203180005';
+import { Migration20261203181500 } from './sqlite/Migration20261203181500';
+import { Migration20261203181510 } from './postgresql/Migration20261203181510';
 
 /**
  * Migrations per driver, in order, each driver in its own folder; listed in code so the
@@ -51,6 +53,7 @@ export const SQLITE_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203152700', class: Migration20261203152700 },
   { name: 'Migration20261203153110', class: Migration20261203153110 },
   { name: 'Migration20261203180000', class: Migration20261203180000 },
+  { name: 'Migration20261203181500', class: Migration20261203181500 },
 ];
 
 export const POSTGRES_MIGRATIONS: MigrationObject[] = [
@@ -69,4 +72,5 @@ export const POSTGRES_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203152710', class: Migration20261203152710 },
   { name: 'Migration20261203153113', class: Migration20261203153113 },
   { name: 'Migration20261203180005', class: Migration20261203180005 },
+  { name: 'Migration20261203181510', class: Migration20261203181510 },
 ];

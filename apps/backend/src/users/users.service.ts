@@ -6,6 +6,7 @@ import type { RequestUser } from '../auth/request-user';
 import { CreateUserDto } from './dto/create-user.dto';
 import { UpdateUserDto } from './dto/update-user.dto';
 import { User } from './entities/user.entity';
+import { versionedEdit } from '../common/versioned-edit';
 
 export function publicUser(u: User) {
   return {
@@ -15,6 +16,7 @@ export function publicUser(u: User) {
     role: u.role,
     active: u.active,
     createdAt: u.createdAt,
+    version: u.version,
   };
 }
 
@@ -55,29 +57,45 @@ export class UsersService {
   }
 
   async update(id: number, dto: UpdateUserDto, actor: RequestUser) {
-    const user = await this.em.findOneOrFail(User, { id });
-    if (user.id === actor.id && (dto.active === false || (dto.role && dto.role !== 'admin'))) {
+    if (id === actor.id && (dto.active === false || (dto.role && dto.role !== 'admin'))) {
       throw new UnprocessableEntityException(
         'You cannot deactivate your own account or take away your own admin role',
       );
     }
-    const before = publicUser(user);
-    if (dto.name !== undefined) user.name = dto.name.trim();
-    if (dto.role !== undefined) user.role = dto.role;
-    if (dto.active !== undefined) user.active = dto.active;
-    if (dto.password !== undefined) user.passwordHash = await bcrypt.hash(dto.password, 10);
-    // A new password, another role or a deactivation ends the account's sessions everywhere.
-    if (dto.password !== undefined || user.role !== before.role || user.active !== before.active) {
-      user.sessionVersion += 1;
-    }
-    this.audit.record(this.em, actor, {
-      action: dto.password !== undefined ? 'user.update+password' : 'user.update',
-      entityType: 'user',
-      entityId: user.id,
-      before,
-      after: publicUser(user),
+    // Hashed before the transaction: bcrypt takes a while and needs nothing from it.
+    const passwordHash =
+      dto.password === undefined ? undefined : await bcrypt.hash(dto.password, 10);
+    return versionedEdit(this.em, {
+      version: dto.version,
+      load: (em) => em.findOneOrFail(User, { id }),
+      view: (_em, user) => publicUser(user),
+      name: (user) => `the account of ${user.email}`,
+      change: async (em, user) => {
+        const before = publicUser(user);
+        if (dto.name !== undefined) user.name = dto.name.trim();
+        if (dto.role !== undefined) user.role = dto.role;
+        if (dto.active !== undefined) user.active = dto.active;
+        if (passwordHash !== undefined) user.passwordHash = passwordHash;
+        // A new password, another role or a deactivation ends the account's sessions everywhere.
+        if (
+          passwordHash !== undefined ||
+          user.role !== before.role ||
+          user.active !== before.active
+        ) {
+          user.sessionVersion += 1;
+        }
+        await em.flush();
+        const after = publicUser(user);
+        this.audit.record(em, actor, {
+          action: passwordHash !== undefined ? 'user.update+password' : 'user.update',
+          entityType: 'user',
+          entityId: user.id,
+          before,
+          after,
+        });
+        await em.flush();
+        return after;
+      },
     });
-    await this.em.flush();
-    return publicUser(user);
   }
 }

@@ -1,9 +1,11 @@
 import { IsAcceptablePassword } from '../password-rules';
 import { ApiPropertyOptional } from '@nestjs/swagger';
+import { EditVersionDto } from '../../common/versioned-edit';
 import { IsBoolean, IsIn, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
 import { ROLES, type Role } from '../../auth/roles';
 
-export class UpdateUserDto {
+/** Changed fields of an account, made on the version the admin loaded (a stale one: 409). */
+export class UpdateUserDto extends EditVersionDto {
   @ApiPropertyOptional()
   @IsOptional()
   @IsString()

@@ -36,4 +36,12 @@ export class User {
    */
   @Property({ type: 'integer', default: 1 })
   sessionVersion: Opt<number> = 1;
+
+  /**
+   * The account's edit version: an admin's edit names the one they loaded and a stale one
+   * gets 409 (issue 17 item 7). Moves only with the admin's edits (sign-out raises the
+   * session version with plain SQL, not this).
+   */
+  @Property({ type: 'integer', version: true })
+  version!: Opt<number>;
 }

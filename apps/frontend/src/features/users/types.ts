@@ -8,4 +8,6 @@ export interface User {
   active: boolean;
   /** ISO date-time. */
   createdAt: string;
+  /** The edit version: an edit names it, and a stale one is answered 409. */
+  version: number;
 }

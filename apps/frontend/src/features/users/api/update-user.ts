@@ -23,8 +23,16 @@ export interface UserPatch {
   password?: string;
 }
 
-export const updateUser = ({ id, patch }: { id: number; patch: UserPatch }) =>
-  api.patch<User>(`/users/${id}`, patch);
+/** An edit of the account as loaded at `version`; a stale version is answered 409. */
+export const updateUser = ({
+  id,
+  version,
+  patch,
+}: {
+  id: number;
+  version: number;
+  patch: UserPatch;
+}) => api.patch<User>(`/users/${id}`, { version, ...patch });
 
 /** Turns the edit form into a patch that sends only what changed. */
 export function editToPatch(user: User, input: EditUserInput): UserPatch {

@@ -1,6 +1,8 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, Dialog, DialogActions, DialogContent, DialogTitle } from '@mui/material';
+import { useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { StaleEditAlert, staleCurrent } from '@/components/stale-edit-alert';
 import { FormTextField } from '@/components/form/form-text-field';
 import { ServerErrorAlert, submitWithServerErrors } from '@/components/form/server-errors';
 import {
@@ -24,20 +26,54 @@ export function EditUserDialog({ user, onClose }: { user: User; onClose: () => v
   });
   const { control } = form;
 
-  const onSubmit = submitWithServerErrors(form, FIELDS, async (input) => {
-    const patch = editToPatch(user, input);
-    if (Object.keys(patch).length === 0) return onClose();
-    await update.mutateAsync({ id: user.id, patch });
-    toasts.success(`Saved changes to ${user.name}.`);
-    onClose();
-  });
+  // The copy the edit is made on: its fields tell what the admin changed, its version goes along.
+  const [loaded, setLoaded] = useState(user);
+  // The account as another admin saved it after this form was opened (a 409), until resolved.
+  const [theirs, setTheirs] = useState<User | null>(null);
+
+  const save = (version?: number) =>
+    submitWithServerErrors(form, FIELDS, async (input) => {
+      const patch = editToPatch(loaded, input);
+      if (Object.keys(patch).length === 0) return onClose();
+      try {
+        await update.mutateAsync({ id: loaded.id, version: version ?? loaded.version, patch });
+      } catch (error) {
+        const current = staleCurrent<User>(error);
+        if (!current) throw error;
+        setTheirs(current);
+        return;
+      }
+      toasts.success(`Saved changes to ${input.name}.`);
+      onClose();
+    });
+  const onSubmit = save();
+  const onSaveMine = () => {
+    const version = theirs?.version;
+    setTheirs(null);
+    void save(version)();
+  };
+  const onLoadTheirs = () => {
+    if (!theirs) return;
+    form.reset({ name: theirs.name, role: theirs.role, password: '' });
+    setLoaded(theirs);
+    setTheirs(null);
+    update.reset();
+  };
 
   return (
     <Dialog open onClose={onClose} fullWidth maxWidth="sm">
       <form noValidate onSubmit={onSubmit} aria-label="Edit user">
         <DialogTitle>Edit {user.email}</DialogTitle>
         <DialogContent>
-          <ServerErrorAlert error={update.error} fields={FIELDS} />
+          {theirs && (
+            <StaleEditAlert
+              what="this account"
+              onLoadTheirs={onLoadTheirs}
+              onSaveMine={onSaveMine}
+              saving={form.formState.isSubmitting}
+            />
+          )}
+          <ServerErrorAlert error={theirs ? null : update.error} fields={FIELDS} />
           <FormTextField control={control} name="name" label="Name" />
           <FormTextField control={control} name="role" label="Role" select>
             {roleOptions}

@@ -20,6 +20,7 @@ const people: User[] = [
     role: 'admin',
     active: true,
     createdAt: '2026-01-05T08:00:00Z',
+    version: 1,
   },
   {
     id: 2,
@@ -28,6 +29,7 @@ const people: User[] = [
     role: 'clerk',
     active: false,
     createdAt: '2026-01-06T08:00:00Z',
+    version: 4,
   },
 ];
 
@@ -78,7 +80,7 @@ describe('UsersPanel', () => {
     expect(screen.getByRole('button', { name: 'Try again' })).toBeInTheDocument();
   });
 
-  it('activates a user with a PATCH of active only', async () => {
+  it('activates a user with a PATCH of active only, on the version it was listed at', async () => {
     fetchMock.mockResolvedValueOnce(json(200, people));
     const user = renderPanel();
     const clerkRow = (await screen.findByRole('cell', { name: 'clerk@demo.example' })).closest(
@@ -89,7 +91,45 @@ describe('UsersPanel', () => {
     await user.click(within(clerkRow).getByRole('button', { name: 'Activate' }));
     const [url, init] = fetchMock.mock.calls[1]!;
     expect(url).toBe('/api/users/2');
-    expect(init).toMatchObject({ method: 'PATCH', body: '{"active":true}' });
+    expect(init).toMatchObject({ method: 'PATCH', body: '{"version":4,"active":true}' });
+  });
+
+  it('keeps the edit when another admin saved first, and loads their version on request', async () => {
+    fetchMock.mockResolvedValueOnce(json(200, people));
+    const user = renderPanel();
+    const clerkRow = (await screen.findByRole('cell', { name: 'clerk@demo.example' })).closest(
+      'tr',
+    )!;
+    await user.click(within(clerkRow).getByRole('button', { name: 'Edit' }));
+    const dialog = screen.getByRole('dialog');
+    const name = within(dialog).getByLabelText('Name');
+    await user.clear(name);
+    await user.type(name, 'Clerk Renamed Here');
+    const theirs = { ...people[1], name: 'Clerk Renamed There', role: 'qa_lead', version: 5 };
+    fetchMock.mockResolvedValueOnce(
+      json(409, {
+        statusCode: 409,
+        error: 'Conflict',
+        message: 'Someone else saved the account of clerk@demo.example after you opened it',
+        current: theirs,
+        path: '/api/users/2',
+        requestId: 'r',
+      }),
+    );
+    await user.click(within(dialog).getByRole('button', { name: 'Save' }));
+    expect(
+      await within(dialog).findByText('Someone else saved this account while you were editing'),
+    ).toBeInTheDocument();
+    const [, init] = fetchMock.mock.calls[1]!;
+    expect(init).toMatchObject({
+      method: 'PATCH',
+      body: '{"version":4,"name":"Clerk Renamed Here"}',
+    });
+    // The admin's typing is still there until they choose.
+    expect(name).toHaveValue('Clerk Renamed Here');
+    await user.click(within(dialog).getByRole('button', { name: 'Load their version' }));
+    expect(name).toHaveValue('Clerk Renamed There');
+    expect(within(dialog).queryByText(/Someone else saved/)).not.toBeInTheDocument();
   });
 
   it('validates the new-user form as you type and shows server field errors', async () => {

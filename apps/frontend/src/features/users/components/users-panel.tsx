@@ -20,7 +20,7 @@ export function UsersPanel({ currentUserId }: { currentUserId: number }) {
   const onToggleActive = useCallback(
     (user: User) =>
       updateUser(
-        { id: user.id, patch: { active: !user.active } },
+        { id: user.id, version: user.version, patch: { active: !user.active } },
         {
           onSuccess: () =>
             toasts.success(`${user.name} is now ${user.active ? 'inactive' : 'active'}.`),
