@@ -172,7 +172,9 @@ test('a PO and packing slip already received are named before saving; a second d
     await screenshot(page, `receiving-already-received-${size.name}`);
     // The page does not scroll sideways for it.
     assert.ok(
-      await page.evaluate(() => document.documentElement.scrollWidth <= globalThis.innerWidth),
+      await page.evaluate(
+        () => globalThis.document.documentElement.scrollWidth <= globalThis.innerWidth,
+      ),
     );
     // Another slip on the same PO is an ordinary delivery: the warning goes.
     await page.getByLabel('Packing-slip number').fill('PS-78');
