@@ -68,7 +68,7 @@ test(
         ...[...el.querySelectorAll('th')].map((th) => th.getBoundingClientRect().right),
       );
       return {
-        page: document.documentElement.scrollWidth,
+        page: globalThis.document.documentElement.scrollWidth,
         table: el.scrollWidth,
         box: box.clientWidth,
         right,
