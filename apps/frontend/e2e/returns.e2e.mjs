@@ -201,3 +201,32 @@ test('purchasing raises a corrective action request for the supplier and records
     .waitFor();
   await screenshot(page, 'corrective-actions-list');
 });
+
+test("a QA lead finds a returned lot's evidence as the supplier received it: nothing to void or add", async () => {
+  const found = await page.request.get(url('/api/lots?status=returned&q=PO-E2E-&pageSize=1'));
+  const [lot] = (await found.json()).items;
+  assert.ok(lot, 'the lot the first test returned');
+  const qa = await launchBrowser();
+  try {
+    const qaPage = await qa.context.newPage();
+    await qaPage.goto(url('/sign-in'));
+    await signIn(qaPage, 'qa@demo.example');
+    await qaPage.waitForURL((u) => u.pathname !== '/sign-in');
+    await qaPage.goto(url(`/lots/${lot.id}`));
+    await qaPage
+      .getByRole('note', { name: 'Evidence as sent' })
+      .getByText(/went back to the supplier/)
+      .waitFor();
+    await qaPage.getByRole('heading', { name: /^Photos/ }).waitFor();
+    // The readings are shown (a QA lead could void any of them before), none with a Void;
+    // photos can be neither taken nor chosen.
+    await qaPage.getByRole('table', { name: 'Readings' }).first().waitFor();
+    assert.equal(await qaPage.getByRole('button', { name: 'Void', exact: true }).count(), 0);
+    assert.equal(await qaPage.getByRole('button', { name: 'Take photos' }).count(), 0);
+    assert.equal(await qaPage.getByRole('button', { name: 'Choose photos' }).count(), 0);
+    await qaPage.getByText('This lot has gone back to the supplier').first().waitFor();
+    await screenshot(qaPage, 'lot-returned-evidence-frozen');
+  } finally {
+    await qa.close();
+  }
+});

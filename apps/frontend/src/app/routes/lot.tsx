@@ -54,6 +54,9 @@ export function LotRoute() {
   const data = lot.data;
   const open = OPEN_STATUSES.includes(data.status);
   const canRecord = open && RECORDERS.includes(user.role);
+  // A lot goes to `returned` when its return is e-mailed or shipped: the supplier holds its
+  // evidence, which stays as sent (the server refuses a void or a new photo, issue 17).
+  const frozen = data.status === 'returned';
   // On a laptop screen the decision sits below the readings and photos: a QA lead gets a
   // way straight to it from the recommendation.
   const toDecision =
@@ -84,6 +87,12 @@ export function LotRoute() {
           ) : undefined
         }
       />
+      {frozen && (
+        <Alert severity="info" role="note" aria-label="Evidence as sent">
+          This lot went back to the supplier. Its readings and photos stay exactly as the supplier
+          received them: nothing can be voided or added.
+        </Alert>
+      )}
       <Grid container spacing={3}>
         <Grid size={{ xs: 12, xl: 8 }}>
           <Stack spacing={3}>
@@ -95,9 +104,10 @@ export function LotRoute() {
                 lot={data}
                 canRecord={canRecord}
                 canVoid={(r) =>
-                  VOIDERS.includes(user.role) ||
-                  // A clerk corrects their own slip until the lot is decided.
-                  (user.role === 'clerk' && open && r.takenBy.id === user.id)
+                  !frozen &&
+                  (VOIDERS.includes(user.role) ||
+                    // A clerk corrects their own slip until the lot is decided.
+                    (user.role === 'clerk' && open && r.takenBy.id === user.id))
                 }
               />
             </SectionBoundary>
@@ -111,11 +121,12 @@ export function LotRoute() {
                 lotId={data.id}
                 photos={data.photos}
                 samples={sampleOptions}
-                canUpload={RECORDERS.includes(user.role)}
+                canUpload={!frozen && RECORDERS.includes(user.role)}
                 canVoid={(p) =>
-                  VOIDERS.includes(user.role) ||
-                  // A clerk voids their own photo until the lot is decided.
-                  (user.role === 'clerk' && open && p.uploadedBy.id === user.id)
+                  !frozen &&
+                  (VOIDERS.includes(user.role) ||
+                    // A clerk voids their own photo until the lot is decided.
+                    (user.role === 'clerk' && open && p.uploadedBy.id === user.id))
                 }
               />
             </SectionBoundary>
