@@ -287,6 +287,20 @@ describe('PATCH /api/products/:id', () => {
       version = back.body.version;
     }
     expect(await em().count(AuditEvent, { entityId: made.id, action: 'product.criteria' })).toBe(4);
+    // Each names who changed the criteria, with them before and after.
+    const events = await em().find(
+      AuditEvent,
+      { entityId: made.id, action: 'product.criteria' },
+      { orderBy: { id: 'asc' } },
+    );
+    expect(events.map((e) => e.actorEmail)).toEqual([DEMO.qa, DEMO.qa, DEMO.admin, DEMO.admin]);
+    expect(events.map((e) => [e.before?.aql, e.after?.aql])).toEqual([
+      ['1.0', '0.65'],
+      ['0.65', '1.0'],
+      ['1.0', '0.65'],
+      ['0.65', '1.0'],
+    ]);
+    expect(events[0].before).toMatchObject({ inspectionLevel: 'S-3', minAreaRatio: 0.98 });
   });
 
   it('validates like create, refuses fixed fields and deactivates', async () => {
