@@ -14,7 +14,7 @@ const accounts = [
 // for it here; screens not built yet are simply absent. Clerks read Instruments.
 const ALL = ['clerk', 'qa_lead', 'purchasing', 'admin'];
 const screenRoles = {
-  Today: ['clerk', 'qa_lead', 'purchasing', 'admin'], // purchasing until Scorecards exists
+  Today: ['clerk', 'qa_lead', 'purchasing', 'admin'],
   Receiving: ['clerk', 'qa_lead', 'admin'],
   Lots: ALL,
   Suppliers: ALL,
@@ -84,16 +84,12 @@ describe('sign-in by role', () => {
       const here = new URL(page.url());
       assert.equal(`${here.pathname}${here.search}`, deepLink, 'a reload keeps the deep link');
 
-      // Home screen for the role: Today, and Scorecards for purchasing once it exists.
-      const home =
-        account.role === 'purchasing' && labels.includes('Scorecards') ? '/scorecards' : '/today';
+      // Home screen for every role, purchasing included: Today, its queue of work.
       await page.goto(url('/'));
-      await page.waitForURL((u) => u.pathname === home);
+      await page.waitForURL((u) => u.pathname === '/today');
       await page.getByRole('heading', { level: 1 }).first().waitFor();
-      if (home === '/today') {
-        await page.getByText(`You are signed in as ${account.label}.`, { exact: false }).waitFor();
-        await page.getByText('Safety caution').waitFor();
-      }
+      await page.getByText(`You are signed in as ${account.label}.`, { exact: false }).waitFor();
+      await page.getByText('Safety caution').waitFor();
       await page.waitForLoadState('networkidle');
       await screenshot(page, `home-${account.role}`);
 

@@ -40,11 +40,19 @@ const CHARTS = [
 ];
 
 test(
-  'a buyer lands on scorecards, changes the range and opens a supplier',
+  'a buyer opens scorecards from Today, changes the range and opens a supplier',
   { timeout: 180_000 },
   async () => {
     await page.goto(url('/'));
     await signInPatiently(page, 'buyer@demo.example');
+    // A buyer lands on Today (its rejected lots without a return); Scorecards are one click on.
+    await page.waitForURL((u) => u.pathname === '/today');
+    await page.getByRole('region', { name: 'Rejected, not yet returned' }).waitFor();
+    await page
+      .getByTestId('side-nav')
+      .filter({ visible: true })
+      .getByRole('link', { name: 'Scorecards' })
+      .click();
     await page.waitForURL((u) => u.pathname === '/scorecards');
     await page.getByRole('heading', { level: 1, name: 'Scorecards' }).waitFor();
 
@@ -56,6 +64,10 @@ test(
     for (const h of ['Supplier', 'Lots', 'Accepted', 'Trend', 'Nonconf. units ppm', 'Mean area']) {
       assert.ok(headers.includes(h), `ranking lacks the ${h} column (has ${headers.join(', ')})`);
     }
+    // The demo supplier charged back in two currencies: one line each, never one sum.
+    await table.getByText('EUR 317.00', { exact: true }).waitFor();
+    await table.getByText('USD 253.00', { exact: true }).waitFor();
+    assert.equal(await table.getByText('570.00').count(), 0, 'EUR and USD added together');
     await screenshot(page, 'scorecards-ranking');
 
     // The whole ranking fits a 1366 × 768 screen: no sideways scroll of the page nor of the
