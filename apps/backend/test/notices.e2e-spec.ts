@@ -61,9 +61,10 @@ describe('e-mail notices', () => {
         lotRejected: false,
         scarOverdue: false,
         scarAnswered: false,
+        concessionAwaitsApproval: true,
         digest: false,
       },
-      offered: ['lotAwaitsDecision', 'lotRejectNumber'],
+      offered: ['lotAwaitsDecision', 'lotRejectNumber', 'concessionAwaitsApproval'],
       digestHourUtc: 6,
     });
     const buyer = await t.http.get('/api/me/notices').set(await auth(DEMO.buyer));
@@ -76,8 +77,11 @@ describe('e-mail notices', () => {
     const clerk = await t.http.get('/api/me/notices').set(await auth(DEMO.clerk));
     expect(clerk.body.offered).toEqual([]);
     const admin = await t.http.get('/api/me/notices').set(await auth(DEMO.admin));
-    expect(admin.body.offered).toHaveLength(5);
-    expect(Object.values(admin.body.choices).every((v) => v === false)).toBe(true);
+    expect(admin.body.offered).toHaveLength(6);
+    // An admin may approve a concession: that notice is on; the others wait to be switched on.
+    const { concessionAwaitsApproval, ...rest } = admin.body.choices;
+    expect(concessionAwaitsApproval).toBe(true);
+    expect(Object.values(rest).every((v) => v === false)).toBe(true);
 
     const bad = await t.http
       .patch('/api/me/notices')
@@ -198,6 +202,122 @@ describe('e-mail notices', () => {
     expect(answer.text).toContain('Root cause: A strand pack of 8 AWG');
   });
 
+  it('tells whoever may approve a concession that waits for its second approval, once each, never its requester; their Today lists it', async () => {
+    // Two more QA leads: one who wants the notice, one who switched it off.
+    const made: Record<string, Record<string, string>> = {};
+    for (const [email, name] of [
+      ['second.qa@notice.example', 'Ottilie Brannagh'],
+      ['quiet.qa@notice.example', 'Piers Halloran'],
+    ]) {
+      const res = await t.http
+        .post('/api/users')
+        .set(await auth(DEMO.admin))
+        .send({ email, name, role: 'qa_lead', password: 'a-long-enough-passphrase' });
+      expect(res.status, JSON.stringify(res.body)).toBe(201);
+      const login = await t.http
+        .post('/api/auth/login')
+        .send({ email, password: 'a-long-enough-passphrase' });
+      made[email] = { Authorization: `Bearer ${login.body.accessToken}` };
+    }
+    const second = made['second.qa@notice.example'];
+    const quiet = made['quiet.qa@notice.example'];
+    const off = await t.http
+      .patch('/api/me/notices')
+      .set(quiet)
+      .send({ concessionAwaitsApproval: false });
+    expect(off.status).toBe(200);
+
+    const supplier = await fx.supplier('Kestrel Moor Wire');
+    const product = await fx.product(supplier.id);
+    const { lot } = await fx.lot(product.id, { nonconforming: 2 });
+    const asked = await t.http
+      .post(`/api/lots/${lot.id}/decisions`)
+      .set(await auth(DEMO.qa))
+      .send({
+        outcome: 'accept_on_concession',
+        reason: 'The ground conductor carries no load current; the power side is refused.',
+        version: lot.version,
+        concession: {
+          scope: 'Ground runs of 1 m or less in the bench kits',
+          quantity: 40,
+          expiresOn: new Date(Date.now() + 30 * 86_400_000).toISOString().slice(0, 10),
+        },
+      });
+    expect(asked.status, JSON.stringify(asked.body)).toBe(202);
+    const concession = asked.body.concession;
+
+    // Through the mail queue to the second QA lead and the admin (both may approve).
+    const subject = new RegExp(`^Lot ${lot.id}: a concession awaits your approval`);
+    const [toSecond] = await mailsTo('second.qa@notice.example', subject);
+    expect(toSecond.text).toContain('Ground runs of 1 m or less in the bench kits');
+    expect(toSecond.text).toContain('40 kits');
+    expect(toSecond.text).toContain(`${t.config.publicUrl}/lots/${lot.id}`);
+    expect(toSecond.text).toContain(`${t.config.publicUrl}/profile`);
+    expect(await mailsTo(DEMO.admin, subject)).toHaveLength(1);
+    // Never the requester, nobody who switched it off, nobody who may not approve.
+    await new Promise((r) => setTimeout(r, 300));
+    for (const nobody of [DEMO.qa, 'quiet.qa@notice.example', DEMO.buyer, DEMO.clerk]) {
+      expect(await mailsTo(nobody, subject, 0), nobody).toHaveLength(0);
+    }
+    const stored = await em().find(
+      Notice,
+      { key: `concession_awaits:${concession.id}` },
+      { populate: ['user'] },
+    );
+    expect(stored.map((n) => n.user.email).sort()).toEqual(
+      [DEMO.admin, 'second.qa@notice.example'].sort(),
+    );
+    const messages = await em().find(OutboundMessage, {
+      id: { $in: stored.map((n) => n.messageId!) },
+    });
+    expect(messages.map((m) => [m.relatedType, m.status])).toEqual([
+      ['notice', 'sent'],
+      ['notice', 'sent'],
+    ]);
+
+    // Once per user per event: the job's rounds and a second raise of the same event add none.
+    await notices().tick(new Date());
+    await em().transactional((tx) =>
+      notices().raise(tx, {
+        kind: 'concession_awaits_approval',
+        key: `concession_awaits:${concession.id}`,
+        subject: 'again',
+        body: 'again',
+        exceptUserIds: [concession.requestedBy.id],
+      }),
+    );
+    expect(await em().count(Notice, { key: `concession_awaits:${concession.id}` })).toBe(2);
+    await new Promise((r) => setTimeout(r, 300));
+    expect(await mailsTo('second.qa@notice.example', subject, 2)).toHaveLength(1);
+
+    // Today: the approvers' list holds it; the requester's and the quiet one's lists follow
+    // who may approve, not the e-mail switch; purchasing may not look.
+    const awaiting = async (headers: Record<string, string>) =>
+      t.http.get('/api/concessions/awaiting-approval').set(headers);
+    const mine = await awaiting(second);
+    expect(mine.status).toBe(200);
+    expect(mine.body.items.find((c: { id: number }) => c.id === concession.id)).toMatchObject({
+      status: 'pending',
+      scope: 'Ground runs of 1 m or less in the bench kits',
+      lot: { id: lot.id, poNumber: lot.poNumber, supplier: { name: 'Kestrel Moor Wire' } },
+      requestedBy: { name: asked.body.concession.requestedBy.name },
+    });
+    expect((await awaiting(quiet)).body.items.map((c: { id: number }) => c.id)).toContain(
+      concession.id,
+    );
+    expect(
+      (await awaiting(await auth(DEMO.qa))).body.items.map((c: { id: number }) => c.id),
+    ).not.toContain(concession.id);
+    expect((await awaiting(await auth(DEMO.buyer))).status).toBe(403);
+
+    const approved = await t.http
+      .post(`/api/concessions/${concession.id}/approve`)
+      .set(second)
+      .send({ version: concession.version });
+    expect(approved.status, JSON.stringify(approved.body)).toBe(200);
+    expect((await awaiting(await auth(DEMO.admin))).body.items).toEqual([]);
+  });
+
   it('sends one daily digest instead: not before its hour, once a day, neither doubled nor lost by a restart', async () => {
     await setChoices(DEMO.buyer, { digest: true });
     const supplier = await fx.supplier('Ivybridge Wire');
@@ -221,13 +341,10 @@ describe('e-mail notices', () => {
     await app.init();
     t.app = app;
     t.http = request(app.getHttpServer());
-    // A second server on the same database, after the first sent it, sends nothing more.
-    const other = await createApp(config);
-    await other.init();
+    // (Two servers running the job at the same time: notices-two-servers.e2e-spec.ts.)
     const at = new Date(`${day}T06:00:05Z`);
     expect(await notices(app).sendDigests(at)).toBe(1);
-    expect(await notices(other).sendDigests(at)).toBe(0);
-    await other.close();
+    expect(await notices(app).sendDigests(at)).toBe(0);
     const subject = new RegExp(`^Gaugeproof daily digest, ${day}: 2 notices`);
     const [digest] = await mailsTo(DEMO.buyer, subject);
     expect(digest.text).toContain(`Lot ${first.lot.id} was rejected`);

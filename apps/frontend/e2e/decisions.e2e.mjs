@@ -21,6 +21,28 @@ async function lotAwaitingDecision() {
   return detail;
 }
 
+const MAILDEV_URL = process.env.MAILDEV_URL;
+
+/** The e-mails MailDev holds for `to` whose subject starts with `subject`. */
+async function mailsTo(to, subject) {
+  const all = await (await fetch(`${MAILDEV_URL}/api/email`)).json();
+  return all.filter((e) => e.subject.startsWith(subject) && e.to.some((a) => a.address === to))
+    .length;
+}
+
+/** The one such e-mail, waiting a little for it. */
+async function mailTo(to, subject) {
+  for (let i = 0; i < 100; i++) {
+    const all = await (await fetch(`${MAILDEV_URL}/api/email`)).json();
+    const found = all.filter(
+      (e) => e.subject.startsWith(subject) && e.to.some((a) => a.address === to),
+    );
+    if (found.length) return found[0];
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`no e-mail "${subject}…" to ${to} in MailDev`);
+}
+
 let browser;
 let page;
 before(async () => {
@@ -137,9 +159,21 @@ test('a concession against a reject: terms with the safety caution, a second app
   await waiting.getByText(/You asked for it: another QA lead or an admin approves it/).waitFor();
   assert.equal(await waiting.getByRole('button', { name: 'Approve the concession' }).count(), 0);
 
+  // The admin, who may approve, is told by e-mail (through MailDev) and on Today.
+  const subject = `Lot ${lot.id}: a concession awaits your approval (asked by `;
+  const notice = await mailTo('admin@demo.example', subject);
+  assert.match(notice.text, /Ground straps of 0\.5 m or less on the demo bench only/);
+  assert.ok(notice.text.includes(`/lots/${lot.id}`), 'the e-mail links the lot');
+  assert.equal(await mailsTo('qa@demo.example', subject), 0, 'not to its requester');
   const admin = await adminBrowser.context.newPage();
-  await admin.goto(url(`/sign-in?redirectTo=${encodeURIComponent(`/lots/${lot.id}`)}`));
+  await admin.goto(url('/'));
   await signIn(admin, 'admin@demo.example');
+  await admin.waitForURL((u) => u.pathname === '/today');
+  const awaiting = admin.getByRole('region', { name: 'Concessions awaiting your approval' });
+  const item = awaiting.getByRole('link', { name: new RegExp(`^Lot ${lot.id} `) });
+  await item.getByText(/Ground straps of 0\.5 m or less/).waitFor();
+  await screenshot(admin, 'today-concession-awaiting');
+  await item.click();
   await admin.waitForURL((u) => u.pathname === `/lots/${lot.id}`);
   const adminPanel = admin.locator('[aria-label="Decision panel"]');
   await adminPanel.getByRole('button', { name: 'Approve the concession' }).click();

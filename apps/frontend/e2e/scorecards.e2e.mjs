@@ -65,8 +65,8 @@ test(
       assert.ok(headers.includes(h), `ranking lacks the ${h} column (has ${headers.join(', ')})`);
     }
     // The demo supplier charged back in two currencies: one line each, never one sum.
-    await table.getByText('EUR 317.00', { exact: true }).waitFor();
-    await table.getByText('USD 253.00', { exact: true }).waitFor();
+    await table.getByText('EUR 253.00', { exact: true }).waitFor();
+    await table.getByText('USD 317.00', { exact: true }).waitFor();
     assert.equal(await table.getByText('570.00').count(), 0, 'EUR and USD added together');
     await screenshot(page, 'scorecards-ranking');
 

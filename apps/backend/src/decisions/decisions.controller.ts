@@ -38,6 +38,15 @@ export class DecisionsController {
     return this.decisions.concessionsOf(id);
   }
 
+  /**
+   * Concessions waiting for a second approval that the caller may give (their own left
+   * out), oldest first: the QA lead's and admin's Today list.
+   */
+  @Get('concessions/awaiting-approval')
+  awaitingApproval(@CurrentUser() actor: RequestUser) {
+    return this.decisions.awaitingApproval(actor);
+  }
+
   /** A second QA lead or an admin puts a pending concession in force (not its requester). */
   @Post('concessions/:id/approve')
   @HttpCode(200)

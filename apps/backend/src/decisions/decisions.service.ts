@@ -60,7 +60,7 @@ export class DecisionsService {
       const result = await retryOnUniqueConflict(() =>
         this.em.transactional((tx) => this.decideIn(tx, lotId, dto, actor)),
       );
-      if (result.decision?.outcome === 'reject') this.notices?.deliver();
+      if (result.decision?.outcome === 'reject' || result.pendingApproval) this.notices?.deliver();
       return result;
     } catch (e) {
       if (e instanceof OptimisticLockError) throw await this.stale(lotId);
@@ -160,6 +160,7 @@ export class DecisionsService {
     if (needsSecondApproval) {
       await tx.flush();
       await tx.populate(concession, ['requestedBy', 'lot']);
+      await this.askForApproval(tx, concession, lot, evaluation, actor);
       return {
         pendingApproval: true,
         concession: concessionView(concession),
@@ -188,6 +189,56 @@ export class DecisionsService {
     await tx.flush();
     await tx.populate(concession, ['requestedBy', 'reviewedBy', 'lot']);
     return { ...result, pendingApproval: false, concession: concessionView(concession) };
+  }
+
+  /**
+   * Tells whoever may approve a pending concession (QA leads and admins who want it, never
+   * its requester), once each, in the unit of work that asked for it.
+   */
+  private async askForApproval(
+    tx: EntityManager,
+    concession: Concession,
+    lot: Lot,
+    evaluation: Evaluation,
+    actor: RequestUser,
+  ) {
+    if (!this.notices) return;
+    const url = this.notices.link('');
+    await this.notices.raise(tx, {
+      kind: 'concession_awaits_approval',
+      key: `concession_awaits:${concession.id}`,
+      subject: `Lot ${lot.id}: a concession awaits your approval (asked by ${actor.name})`,
+      body: [
+        `${actor.name} asks to accept lot ${lot.id} on concession against a reject recommendation: PO ${lot.poNumber}, ${lot.supplier.name}, ${lot.product.sku}, ${lot.quantity} ${lot.unit}; ${evaluation.nonconforming} nonconforming of ${evaluation.samplesTested} tested.`,
+        `Terms asked for: may be used only for ${concession.scope}; ${concession.quantity} ${lot.unit}; until ${concession.expiresOn}.`,
+        `Their reason: ${concession.reason}`,
+        `The product's policy wants a second QA lead or an admin to approve it; nothing is decided until then. Approve or refuse it here: ${url}/lots/${lot.id}`,
+      ].join('\n\n'),
+      exceptUserIds: [actor.id],
+    });
+  }
+
+  /** Concessions waiting for a second approval that `actor` may give (not their own), oldest first. */
+  async awaitingApproval(actor: RequestUser) {
+    const rows = await this.em.fork().find(
+      Concession,
+      { status: 'pending', needsSecondApproval: true, requestedBy: { $ne: actor.id } },
+      {
+        populate: ['requestedBy', 'reviewedBy', 'lot', 'lot.supplier', 'lot.product'],
+        orderBy: { requestedAt: 'asc', id: 'asc' },
+      },
+    );
+    return {
+      items: rows.map((c) => ({
+        ...concessionView(c),
+        lot: {
+          id: c.lot.id,
+          poNumber: c.lot.poNumber,
+          supplier: { id: c.lot.supplier.id, name: c.lot.supplier.name },
+          product: { id: c.lot.product.id, sku: c.lot.product.sku },
+        },
+      })),
+    };
   }
 
   /** Writes a decision: the lot's status, its NCR on a reject, the switching state, audit. */

@@ -31,6 +31,8 @@ import { Migration20261203180000 } from './sqlite/Migration20261203180000';
 import { Migration20261203180005 } from './postgresql/Migration20261203180005';
 import { Migration20261203181500 } from './sqlite/Migration20261203181500';
 import { Migration20261203181510 } from './postgresql/Migration20261203181510';
+import { Migration20261203182000 } from './sqlite/Migration20261203182000';
+import { Migration20261203182010 } from './postgresql/Migration20261203182010';
 
 /**
  * Migrations per driver, in order, each driver in its own folder; listed in code so the
@@ -54,6 +56,7 @@ export const SQLITE_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203153110', class: Migration20261203153110 },
   { name: 'Migration20261203180000', class: Migration20261203180000 },
   { name: 'Migration20261203181500', class: Migration20261203181500 },
+  { name: 'Migration20261203182000', class: Migration20261203182000 },
 ];
 
 export const POSTGRES_MIGRATIONS: MigrationObject[] = [
@@ -73,4 +76,5 @@ export const POSTGRES_MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261203153113', class: Migration20261203153113 },
   { name: 'Migration20261203180005', class: Migration20261203180005 },
   { name: 'Migration20261203181510', class: Migration20261203181510 },
+  { name: 'Migration20261203182010', class: Migration20261203182010 },
 ];

@@ -8,6 +8,7 @@ export const NOTICE_SWITCHES = [
   'lotRejected',
   'scarOverdue',
   'scarAnswered',
+  'concessionAwaitsApproval',
 ] as const;
 export type NoticeSwitch = (typeof NOTICE_SWITCHES)[number];
 
@@ -20,6 +21,8 @@ export const AUDIENCE: Record<NoticeSwitch, readonly Role[]> = {
   lotRejected: ['purchasing'],
   scarOverdue: ['purchasing'],
   scarAnswered: ['purchasing'],
+  // Whoever may approve it: another QA lead or an admin (never its requester).
+  concessionAwaitsApproval: ['qa_lead', 'admin'],
 };
 
 export const SWITCH_OF: Record<NoticeKind, NoticeSwitch> = {
@@ -28,6 +31,7 @@ export const SWITCH_OF: Record<NoticeKind, NoticeSwitch> = {
   lot_rejected: 'lotRejected',
   scar_overdue: 'scarOverdue',
   scar_answered: 'scarAnswered',
+  concession_awaits_approval: 'concessionAwaitsApproval',
 };
 
 /** The notices a role is offered on its profile page. */

@@ -39,6 +39,8 @@ export interface NoticeEvent {
   body: string;
   /** Whether a user's choices want it (default: the kind's own switch). */
   wants?: (c: NoticeChoices) => boolean;
+  /** Users it is never for (the requester of a concession, who may not approve it). */
+  exceptUserIds?: readonly number[];
 }
 
 const RELATED = 'notice';
@@ -48,6 +50,7 @@ const LABELS: Record<NoticeKind, string> = {
   lot_rejected: 'A lot is rejected',
   scar_overdue: 'A corrective action falls overdue',
   scar_answered: 'A supplier answers a corrective action',
+  concession_awaits_approval: 'A concession awaits my approval',
 };
 
 /**
@@ -163,8 +166,9 @@ export class NoticesService implements OnApplicationBootstrap, OnModuleDestroy {
       (await em.find(Notice, { key: event.key }, { fields: ['user'] })).map((n) => n.user.id),
     );
     let stored = 0;
+    const except = new Set(event.exceptUserIds ?? []);
     for (const user of users) {
-      if (known.has(user.id)) continue;
+      if (known.has(user.id) || except.has(user.id)) continue;
       const choices = byUser.get(user.id) ?? defaultChoices(user.role);
       const wants = event.wants ? event.wants(choices) : choices[sw];
       if (!wants) continue;
@@ -338,6 +342,7 @@ function pick(row: NoticeSettings): NoticeChoices {
     lotRejected: row.lotRejected,
     scarOverdue: row.scarOverdue,
     scarAnswered: row.scarAnswered,
+    concessionAwaitsApproval: row.concessionAwaitsApproval,
     digest: row.digest,
   };
 }

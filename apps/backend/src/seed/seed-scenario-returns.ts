@@ -134,8 +134,9 @@ export async function seedReturns(ctx: ScenarioContext, lot: LotByKey) {
     rmaNumber: 'QAS-RMA-5870',
     costs: { inspectionHours: 4, hourlyRate: 48, freight: 95, other: 30 },
     notes: 'Second delivery of copper-clad aluminium sold as copper; see SCAR.',
-    // Invoiced from the supplier's European warehouse: its scorecard shows two currencies.
-    currency: 'EUR',
+    // Invoiced by the supplier's export office in US dollars: its scorecard shows two
+    // currencies (the shop's EUR and this USD), never added together.
+    currency: 'USD',
     steps: [48, 47, 46],
     mail: 'logged',
   });

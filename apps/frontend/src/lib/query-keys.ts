@@ -33,6 +33,8 @@ export const queryKeys = {
     /** Lots already received under a PO and packing slip (Receiving's warning). */
     receivedBefore: (poNumber: string, packingSlip: string) =>
       [...lots.all, 'received-before', poNumber, packingSlip] as const,
+    /** Concessions waiting for a second approval the signed-in user may give (Today). */
+    awaitingApproval: () => [...lots.all, 'concessions', 'awaiting-approval'] as const,
   },
   products: {
     ...products,

@@ -32,6 +32,13 @@ export class UpdateNoticeSettingsDto {
   @IsBoolean(flag('scarAnswered'))
   readonly scarAnswered?: boolean;
 
+  @ApiPropertyOptional({
+    description: 'QA lead, admin: a concession waits for a second approval (never its requester)',
+  })
+  @ValidateIf(present)
+  @IsBoolean(flag('concessionAwaitsApproval'))
+  readonly concessionAwaitsApproval?: boolean;
+
   @ApiPropertyOptional({ description: 'One daily digest instead of one e-mail each' })
   @ValidateIf(present)
   @IsBoolean(flag('digest'))

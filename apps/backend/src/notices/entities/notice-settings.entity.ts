@@ -27,6 +27,10 @@ export class NoticeSettings {
   @Property({ type: 'boolean' })
   scarAnswered!: boolean;
 
+  /** QA lead, admin: a concession against a reject waits for a second approval. */
+  @Property({ type: 'boolean' })
+  concessionAwaitsApproval!: boolean;
+
   /** One e-mail a day with every notice instead of one e-mail each. */
   @Property({ type: 'boolean' })
   digest!: boolean;

@@ -7,6 +7,7 @@ export const NOTICE_KINDS = [
   'lot_rejected',
   'scar_overdue',
   'scar_answered',
+  'concession_awaits_approval',
 ] as const;
 export type NoticeKind = (typeof NOTICE_KINDS)[number];
 

@@ -5,6 +5,7 @@ import { SafetyCaution } from '@/components/safety-caution';
 import { SectionBoundary } from '@/components/section-boundary';
 import { paths } from '@/config/paths';
 import { useSessionUser } from '@/features/auth/auth-context';
+import { ConcessionsAwaitingSection } from '@/features/decisions/components/concessions-awaiting-section';
 import { OverdueCorrectiveActionsSection } from '@/features/corrective-actions/components/overdue-corrective-actions-section';
 import { InstrumentsDueSection } from '@/features/inspection/components/instruments-due-section';
 import { RejectReachedSection } from '@/features/lots/components/reject-reached-section';
@@ -48,9 +49,16 @@ export function TodayRoute() {
       </Stack>
       <Grid container spacing={2}>
         {DECIDES.includes(user.role) && (
-          <Grid size={{ xs: 12 }}>
+          <Grid size={{ xs: 12, lg: 6 }}>
             <SectionBoundary name="lots at the reject number">
               <RejectReachedSection />
+            </SectionBoundary>
+          </Grid>
+        )}
+        {DECIDES.includes(user.role) && (
+          <Grid size={{ xs: 12, lg: 6 }}>
+            <SectionBoundary name="concessions awaiting approval">
+              <ConcessionsAwaitingSection />
             </SectionBoundary>
           </Grid>
         )}

@@ -24,6 +24,23 @@ export interface Concession {
   version: number;
 }
 
+/** GET /api/concessions/awaiting-approval: pending concessions the caller may approve. */
+export interface AwaitingConcession extends Concession {
+  lot: {
+    id: number;
+    poNumber: string;
+    supplier: { id: number; name: string };
+    product: { id: number; sku: string };
+  };
+}
+
+export const useConcessionsAwaitingApproval = () =>
+  useQuery({
+    queryKey: queryKeys.lots.awaitingApproval(),
+    queryFn: ({ signal }) =>
+      api.get<{ items: AwaitingConcession[] }>('/concessions/awaiting-approval', signal),
+  });
+
 export const lotConcessionsQueryOptions = (lotId: number) =>
   queryOptions({
     queryKey: queryKeys.lots.concessions(lotId),

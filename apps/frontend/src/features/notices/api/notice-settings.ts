@@ -8,6 +8,7 @@ export const NOTICE_SWITCHES = [
   'lotRejected',
   'scarOverdue',
   'scarAnswered',
+  'concessionAwaitsApproval',
 ] as const;
 export type NoticeSwitch = (typeof NOTICE_SWITCHES)[number];
 export type NoticeChoices = Record<NoticeSwitch, boolean> & { digest: boolean };

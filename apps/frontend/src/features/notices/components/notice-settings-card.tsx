@@ -40,6 +40,10 @@ const LABELS: Record<NoticeSwitch, { label: string; help: string }> = {
     label: 'A supplier answers a corrective action',
     help: 'Their containment, root cause and fix arrived through their link.',
   },
+  concessionAwaitsApproval: {
+    label: 'A concession awaits my approval',
+    help: 'Another QA lead asks to accept a lot against a reject; it needs a second approver.',
+  },
 };
 
 /** The profile page's e-mail notices: one switch each, single e-mails or a daily digest. */
