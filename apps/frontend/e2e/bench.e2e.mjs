@@ -38,6 +38,7 @@ let page;
 let lot;
 let serialLot;
 let offlineLot;
+let handoverLot;
 let admin;
 before(async () => {
   // S-3 at AQL 4.0 on 50 spools is code letter B: 3 units, accept 0, reject 1
@@ -73,6 +74,12 @@ before(async () => {
   offlineLot = await admin('POST', '/lots', {
     productId: product.id,
     poNumber: `PO-OFFLINE-${STAMP}`,
+    quantity: 50,
+    unit: 'spools',
+  });
+  handoverLot = await admin('POST', '/lots', {
+    productId: product.id,
+    poNumber: `PO-HANDOVER-${STAMP}`,
     quantity: 50,
     unit: 'spools',
   });
@@ -307,4 +314,59 @@ test('a clerk voids their own slip on the Lot page, not another’s reading, and
   const one = stored.samples.find((s) => s.seq === 1).readings[0];
   assert.equal(one.voided, true);
   assert.equal(stored.samples.find((s) => s.seq === 2).readings[0].voided, false);
+});
+
+test('a reading kept offline waits for the one who took it, never sent under another name', async () => {
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.goto(url(`/lots/${handoverLot.id}/bench`));
+  await page.getByRole('heading', { name: 'Unit 1' }).waitFor();
+  await page.waitForFunction(() => navigator.serviceWorker?.controller != null, null, {
+    timeout: 60_000,
+  });
+  // The clerk weighs unit 1 with the network down.
+  await browser.context.setOffline(true);
+  const mass = page.getByRole('textbox', { name: 'Mass of the strands' });
+  await mass.tap();
+  await page.keyboard.type('195');
+  await page.keyboard.press('Enter');
+  await page.getByRole('status', { name: 'Unit 1: waiting to send' }).waitFor();
+  await page.getByText('1 reading waiting to send').waitFor();
+  // The clerk walks away; their session ends; the network comes back with nobody signed in.
+  await page.close();
+  await browser.context.clearCookies();
+  await browser.context.setOffline(false);
+
+  // The QA lead signs in on the same phone and opens the same lot.
+  page = await browser.context.newPage();
+  await signIn(page, 'qa@demo.example');
+  await page.waitForURL((u) => u.pathname !== '/sign-in');
+  await page.goto(url(`/lots/${handoverLot.id}/bench`));
+  const held = page.getByRole('alert', { name: 'Waiting for their recorder' });
+  await held.getByText('1 reading taken by Rosa Okafor waits for their recorder').waitFor();
+  await held.getByText('Not sent under your name').waitFor();
+  await page.getByText('0 of 3 pieces recorded · 1 waiting to send').waitFor();
+  assert.equal(await page.getByRole('alert', { name: 'Waiting to send' }).count(), 0);
+  await screenshot(page, 'bench-phone-held-for-recorder');
+  // The network is back and the page retries: still nothing under the QA lead's name.
+  await page.evaluate(() => globalThis.dispatchEvent(new Event('online')));
+  await page.waitForTimeout(2000);
+  let stored = await admin('GET', `/lots/${handoverLot.id}`);
+  assert.equal(stored.samples.length, 0, 'nothing sent while the QA lead is signed in');
+
+  // The QA lead signs out; the clerk signs in: told, and the reading goes under their name.
+  await page.locator('header button[aria-haspopup="menu"]').click();
+  await page.getByRole('menuitem', { name: 'Sign out' }).click();
+  await page.waitForURL((u) => u.pathname === '/sign-in');
+  await page.goto(url('/sign-in')); // a fresh sign-in: the clerk's home, not the QA lead's page
+  await signIn(page, 'clerk@demo.example');
+  await page.waitForURL((u) => u.pathname === '/today');
+  await page.getByText('1 reading you took while offline was sent.').waitFor({ timeout: 30_000 });
+  stored = await admin('GET', `/lots/${handoverLot.id}`);
+  assert.deepEqual(
+    stored.samples.flatMap((s) => s.readings.map((r) => [s.seq, r.inputs.massG, r.takenBy.name])),
+    [[1, 195, 'Rosa Okafor']],
+  );
+  await page.goto(url(`/lots/${handoverLot.id}/bench`));
+  await page.getByText('1 of 3 pieces recorded').waitFor();
+  assert.equal(await page.getByRole('alert', { name: 'Waiting for their recorder' }).count(), 0);
 });

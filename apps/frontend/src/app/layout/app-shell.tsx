@@ -1,14 +1,21 @@
 import MenuIcon from '@mui/icons-material/Menu';
 import { AppBar, Box, Drawer, IconButton, Toolbar, Typography } from '@mui/material';
-import { useState } from 'react';
+import { lazy, Suspense, useState } from 'react';
 import { Outlet } from 'react-router';
 import { ScanTagButton } from '@/app/layout/scan-tag-button';
 import { SideNav } from '@/app/layout/side-nav';
 import { UserMenu } from '@/app/layout/user-menu';
+import { useAuth } from '@/features/auth/auth-context';
+
+// Readings this user took offline on this device: the IndexedDB queue's code loads apart.
+const YourWaitingReadings = lazy(
+  () => import('@/features/inspection/components/bench/your-waiting-readings'),
+);
 
 const drawerWidth = 232;
 
 export function AppShell() {
+  const { user } = useAuth();
   const [mobileOpen, setMobileOpen] = useState(false);
 
   return (
@@ -82,6 +89,9 @@ export function AppShell() {
 
       <Box component="main" sx={{ flexGrow: 1, minWidth: 0, p: { xs: 2, md: 3 } }}>
         <Toolbar />
+        <Suspense fallback={null}>
+          <YourWaitingReadings user={user} />
+        </Suspense>
         <Outlet />
       </Box>
     </Box>

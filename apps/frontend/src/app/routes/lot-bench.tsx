@@ -84,6 +84,7 @@ export function LotBenchRoute() {
             lot={data}
             instruments={instruments.data?.items ?? []}
             canRecord={canRecord}
+            user={user}
           />
         </SectionBoundary>
         {RECORDERS.includes(user.role) && (

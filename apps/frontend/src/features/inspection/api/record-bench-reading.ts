@@ -2,11 +2,13 @@ import { createReading } from '@/features/inspection/api/create-reading';
 import { createSample } from '@/features/inspection/api/create-sample';
 import {
   enqueue,
+  isTakenBy,
   newClientId,
   queuedFor,
   remove,
   update,
   type QueuedReading,
+  type Recorder,
 } from '@/features/inspection/lib/offline-queue';
 import type { ReadingRequest } from '@/features/inspection/lib/reading-form';
 import type { Reading } from '@/features/inspection/types';
@@ -29,6 +31,13 @@ export function isNetworkFailure(error: unknown): boolean {
   return error instanceof TypeError;
 }
 
+/**
+ * Not sent and worth sending later: no network, or no session (it ended while the reading
+ * waited; the recorder signs in again). Never a refusal of the reading itself.
+ */
+const notSentYet = (error: unknown) =>
+  isNetworkFailure(error) || (isApiError(error) && error.status === 401);
+
 /** Sends one reading, cutting its sample first when needed; both carry their client ids. */
 async function send(entry: QueuedReading): Promise<Reading> {
   if (entry.sampleId === null) {
@@ -45,14 +54,16 @@ async function send(entry: QueuedReading): Promise<Reading> {
 const online = () => typeof navigator === 'undefined' || navigator.onLine !== false;
 
 /**
- * Records a bench reading: sent at once when the network answers, else kept on the device
- * and null returned. Readings already waiting go first, so the order is kept.
+ * Records a bench reading taken by `recorder` (the signed-in user): sent at once when the
+ * network answers, else kept on the device, bound to the recorder, and null returned. The
+ * recorder's readings already waiting go first, so the order is kept.
  */
 export async function recordBenchReading(
   piece: BenchPiece,
   request: ReadingRequest,
+  recorder: Recorder,
 ): Promise<Reading | null> {
-  const waiting = await queuedFor(piece.lotId);
+  const waiting = (await queuedFor(piece.lotId)).filter((q) => isTakenBy(q, recorder.id));
   const samePiece = waiting.find((q) => q.conductorId === piece.conductorId && q.seq === piece.seq);
   const entry: QueuedReading = {
     clientId: newClientId(),
@@ -66,16 +77,17 @@ export async function recordBenchReading(
     label: piece.label,
     queuedAt: Date.now(),
     refused: null,
+    recordedBy: { id: recorder.id, name: recorder.name },
   };
   if (!online() || waiting.some((q) => q.refused === null)) {
     await enqueue(entry);
-    void flushQueue(piece.lotId);
+    void flushQueue(piece.lotId, recorder.id);
     return null;
   }
   try {
     return await send(entry);
   } catch (error) {
-    if (!isNetworkFailure(error)) throw error;
+    if (!notSentYet(error)) throw error;
     await enqueue(entry);
     return null;
   }
@@ -87,25 +99,33 @@ export interface FlushResult {
   waiting: number;
 }
 
-let flushing: Promise<FlushResult> | null = null;
+/** One flush at a time per lot and recorder; a second call joins the one under way. */
+const flushing = new Map<string, Promise<FlushResult>>();
 
 /**
- * Sends the lot's waiting readings in the order they were taken, one at a time; stops at the
- * first network failure. A reading the server refuses stays on the device, marked with the
+ * Sends the lot's readings taken by `userId` (the signed-in user) in the order they were
+ * taken, one at a time; stops at the first network failure or ended session. Readings taken
+ * by someone else stay on the device for them: the server would file them under the
+ * signed-in user's name. A reading the server refuses stays on the device, marked with the
  * server's reason, and the next ones go on.
  */
-export function flushQueue(lotId: number): Promise<FlushResult> {
-  flushing ??= (async () => {
+export function flushQueue(lotId: number, userId: number): Promise<FlushResult> {
+  const key = `${lotId}:${userId}`;
+  const running = flushing.get(key);
+  if (running) return running;
+  const run = (async () => {
     let sent = 0;
     try {
-      const entries = (await queuedFor(lotId)).filter((q) => q.refused === null);
+      const entries = (await queuedFor(lotId)).filter(
+        (q) => q.refused === null && isTakenBy(q, userId),
+      );
       for (const [i, entry] of entries.entries()) {
         try {
           await send(entry);
           await remove(entry.clientId);
           sent += 1;
         } catch (error) {
-          if (isNetworkFailure(error)) return { sent, waiting: entries.length - i };
+          if (notSentYet(error)) return { sent, waiting: entries.length - i };
           await update({
             ...entry,
             refused: error instanceof Error ? error.message : String(error),
@@ -114,8 +134,9 @@ export function flushQueue(lotId: number): Promise<FlushResult> {
       }
       return { sent, waiting: 0 };
     } finally {
-      flushing = null;
+      flushing.delete(key);
     }
   })();
-  return flushing;
+  flushing.set(key, run);
+  return run;
 }

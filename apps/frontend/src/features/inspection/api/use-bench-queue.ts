@@ -1,7 +1,14 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useEffect, useState } from 'react';
 import { flushQueue } from '@/features/inspection/api/record-bench-reading';
-import { queuedFor, remove, type QueuedReading } from '@/features/inspection/lib/offline-queue';
+import {
+  isTakenBy,
+  queuedFor,
+  remove,
+  update,
+  type QueuedReading,
+  type Recorder,
+} from '@/features/inspection/lib/offline-queue';
 import { queryKeys } from '@/lib/query-keys';
 
 /** Try again this often while readings wait and the device says it is online (common practice, no source). */
@@ -10,27 +17,27 @@ const RETRY_MS = 10_000;
 /**
  * The lot's readings waiting on this device, sent when the network comes back (the
  * browser's `online` event), when the bench opens, every few seconds while some wait, and
- * on "Send now".
+ * on "Send now" — only those `user` took: `held` are someone else's, kept for them.
  */
-export function useBenchQueue(lotId: number) {
+export function useBenchQueue(lotId: number, user: Recorder) {
   const queryClient = useQueryClient();
-  const [entries, setEntries] = useState<QueuedReading[]>([]);
+  const [all, setAll] = useState<QueuedReading[]>([]);
   const [sending, setSending] = useState(false);
 
   const refresh = useCallback(async () => {
-    setEntries(await queuedFor(lotId));
+    setAll(await queuedFor(lotId));
   }, [lotId]);
 
   const send = useCallback(async () => {
     setSending(true);
     try {
-      const { sent } = await flushQueue(lotId);
+      const { sent } = await flushQueue(lotId, user.id);
       if (sent > 0) await queryClient.invalidateQueries({ queryKey: queryKeys.lots.all });
     } finally {
       setSending(false);
       await refresh();
     }
-  }, [lotId, queryClient, refresh]);
+  }, [lotId, user.id, queryClient, refresh]);
 
   useEffect(() => {
     void send();
@@ -39,6 +46,8 @@ export function useBenchQueue(lotId: number) {
     return () => globalThis.removeEventListener('online', onOnline);
   }, [send]);
 
+  const entries = all.filter((e) => isTakenBy(e, user.id));
+  const held = all.filter((e) => !isTakenBy(e, user.id));
   const waiting = entries.filter((e) => e.refused === null).length;
   useEffect(() => {
     if (waiting === 0) return undefined;
@@ -56,5 +65,16 @@ export function useBenchQueue(lotId: number) {
     [refresh],
   );
 
-  return { entries, sending, send, refresh, discard };
+  /** A reading kept before the device knew who took it: the user says it is theirs, it goes. */
+  const claim = useCallback(
+    async (clientId: string) => {
+      const entry = all.find((e) => e.clientId === clientId && !e.recordedBy);
+      if (!entry) return;
+      await update({ ...entry, recordedBy: { id: user.id, name: user.name } });
+      await send();
+    },
+    [all, user.id, user.name, send],
+  );
+
+  return { entries, held, all, sending, send, refresh, discard, claim };
 }

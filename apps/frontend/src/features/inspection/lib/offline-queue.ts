@@ -1,6 +1,12 @@
 import { openDB, type DBSchema, type IDBPDatabase } from 'idb';
 import type { ReadingRequest } from '@/features/inspection/lib/reading-form';
 
+/** Who took a queued reading: it is sent only while they are the one signed in. */
+export interface Recorder {
+  id: number;
+  name: string;
+}
+
 /**
  * Readings a bench could not send yet, kept on the device in IndexedDB (through `idb`) and
  * sent in the order they were taken. Each carries the client ids of its reading and, while
@@ -21,7 +27,16 @@ export interface QueuedReading {
   queuedAt: number;
   /** The server refused it (not a network failure): kept, shown, not retried by itself. */
   refused: string | null;
+  /**
+   * The user signed in when it was taken. A reading goes to the server under the session's
+   * user, so it waits while someone else is signed in on the device. Missing on readings
+   * queued before the device kept it: those wait until someone says they took them.
+   */
+  recordedBy?: Recorder | null;
 }
+
+/** Taken by this user (and so theirs to send). */
+export const isTakenBy = (entry: QueuedReading, userId: number) => entry.recordedBy?.id === userId;
 
 interface QueueSchema extends DBSchema {
   readings: { key: string; value: QueuedReading; indexes: { byLot: number } };
@@ -43,6 +58,12 @@ export async function enqueue(entry: QueuedReading): Promise<void> {
 /** The lot's waiting readings, oldest first. */
 export async function queuedFor(lotId: number): Promise<QueuedReading[]> {
   const all = await (await db()).getAllFromIndex('readings', 'byLot', lotId);
+  return all.sort((a, b) => a.queuedAt - b.queuedAt);
+}
+
+/** Every reading waiting on this device, any lot, oldest first. */
+export async function allQueued(): Promise<QueuedReading[]> {
+  const all = await (await db()).getAll('readings');
   return all.sort((a, b) => a.queuedAt - b.queuedAt);
 }
 

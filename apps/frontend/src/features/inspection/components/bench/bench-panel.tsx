@@ -14,6 +14,7 @@ import { lazy, Suspense, useMemo, useState, type ReactNode } from 'react';
 import { recordBenchReading } from '@/features/inspection/api/record-bench-reading';
 import { useBenchQueue } from '@/features/inspection/api/use-bench-queue';
 import { BenchVerdict } from '@/features/inspection/components/bench/bench-verdict';
+import { HeldReadings } from '@/features/inspection/components/bench/held-readings';
 import { WaitingReadings } from '@/features/inspection/components/bench/waiting-readings';
 import { ReadingForm } from '@/features/inspection/components/reading-form';
 import {
@@ -34,6 +35,7 @@ import { conductorLabel, verdictLabels } from '@/features/inspection/lib/labels'
 import type { InputField, MethodDefinition } from '@/features/inspection/lib/reading-methods';
 import type { ReadingFormValues, ReadingRequest } from '@/features/inspection/lib/reading-form';
 import type { Instrument, LotDetail, Reading, ReadingMethod } from '@/features/inspection/types';
+import type { Recorder } from '@/features/inspection/lib/offline-queue';
 import { queryKeys } from '@/lib/query-keys';
 
 // The serial code loads only where the browser has serial ports, on first use of bench mode.
@@ -54,6 +56,8 @@ interface BenchPanelProps {
   lot: LotDetail;
   instruments: readonly Instrument[];
   canRecord: boolean;
+  /** The signed-in user: readings kept offline are bound to them (and sent only by them). */
+  user: Recorder;
 }
 
 const pieceLabel = (
@@ -66,19 +70,20 @@ const pieceLabel = (
  * large, then the next piece. The instruments and the cut length stay from piece to piece
  * on this device.
  */
-export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
+export function BenchPanel({ lot, instruments, canRecord, user }: BenchPanelProps) {
   const queryClient = useQueryClient();
   const targets = useMemo(() => benchTargets(lot), [lot]);
   const oneConductor = lot.product.conductors.length === 1;
   const [recorded, setRecorded] = useState<ReadonlyMap<string, number>>(new Map());
-  const queue = useBenchQueue(lot.id);
+  const queue = useBenchQueue(lot.id, user);
+  // Readings waiting on this device, whoever took them, are taken: the plan moves past them.
   const recordedKeys = useMemo(
     () =>
       new Set([
         ...recorded.keys(),
-        ...queue.entries.map((e) => targetKey({ seq: e.seq, conductor: { id: e.conductorId } })),
+        ...queue.all.map((e) => targetKey({ seq: e.seq, conductor: { id: e.conductorId } })),
       ]),
-    [recorded, queue.entries],
+    [recorded, queue.all],
   );
   const [chosenKey, setChosenKey] = useState<string | undefined>(undefined);
   const [last, setLast] = useState<{ key: string; reading: Reading | null } | null>(null);
@@ -97,11 +102,11 @@ export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
   const waitingKeys = useMemo(
     () =>
       new Set(
-        queue.entries
+        queue.all
           .filter((e) => e.refused === null)
           .map((e) => targetKey({ seq: e.seq, conductor: { id: e.conductorId } })),
       ),
-    [queue.entries],
+    [queue.all],
   );
   const isRecorded = (t: BenchTarget) => isDone(t) || sent.has(targetKey(t));
   const doneCount = targets.filter(isRecorded).length;
@@ -134,6 +139,7 @@ export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
         label,
       },
       request,
+      user,
     );
     if (reading) void queryClient.invalidateQueries({ queryKey: queryKeys.lots.all });
     else void queue.refresh();
@@ -235,6 +241,7 @@ export function BenchPanel({ lot, instruments, canRecord }: BenchPanelProps) {
         onSend={() => void queue.send()}
         onDiscard={(id) => void queue.discard(id)}
       />
+      <HeldReadings entries={queue.held} onClaim={(id) => void queue.claim(id)} />
 
       {remembered.refused.map((reason) => (
         <Alert key={reason} severity="warning">
