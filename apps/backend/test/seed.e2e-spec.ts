@@ -1,7 +1,9 @@
 import { MikroORM, type EntityManager } from '@mikro-orm/core';
 import { areaFromMass, areaFromResistance, identifyMaterial } from '@gaugeproof/standards';
+import { execFileSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { existsSync, readFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Jimp } from 'jimp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -208,6 +210,35 @@ describe('demo scenario seeded on an empty database', () => {
     const overdue = await em.find(CorrectiveAction, { status: 'open', dueOn: { $lt: today } });
     expect(overdue.length).toBe(1);
     expect(await em.count(CorrectiveAction, { status: 'responded' })).toBeGreaterThan(0);
+  });
+
+  it("tells the installer one size per conductor in the CCA return's evidence pack: the smaller its readings give", async () => {
+    const shipped = await em.findOneOrFail(VendorReturn, { status: 'shipped' });
+    const res = await t.http
+      .get(`/api/returns/${shipped.id}/evidence.pdf`)
+      .set('Authorization', `Bearer ${await t.token(DEMO.buyer)}`)
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (d: Buffer) => chunks.push(d));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
+    expect(res.status).toBe(200);
+    const dir = mkdtempSync(join(tmpdir(), 'gp-seed-pack-'));
+    try {
+      writeFileSync(join(dir, 'pack.pdf'), res.body as Buffer);
+      const text = execFileSync('pdftotext', ['-layout', join(dir, 'pack.pdf'), '-'])
+        .toString()
+        .replace(/\s+/g, ' ');
+      // Its power conductor is CCA sold as copper: by mass (copper's density) it measures as
+      // 9 AWG, by four-wire resistance as 6 AWG. The installer is told the smaller, once.
+      expect(text).toContain('Measures as 9 AWG');
+      expect(text.match(/power 4 AWG: Treat as/g)).toHaveLength(1);
+      expect(text).toContain('power 4 AWG: Treat as 9 AWG for fusing and voltage drop');
+      expect(text).not.toContain('Treat as 6 AWG');
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 
   it('keeps each product’s switching state equal to its decisions replayed in order', async () => {

@@ -171,16 +171,24 @@ function disagreements(e: LotEvidence): string[] {
   return out;
 }
 
-/** The installer's consequence of each conductor's worst nonconforming reading, once each. */
-function consequences(e: LotEvidence): string[] {
-  const out = new Set<string>();
+/**
+ * The installer's consequence of each conductor (purpose and label), from its worst live
+ * nonconforming reading: one that meets no standard size, else the one with the smallest
+ * area (the safe side for fusing and voltage drop). One line per conductor: two methods, or
+ * two units, never tell the installer two different sizes for one conductor.
+ */
+export function consequences(e: Pick<LotEvidence, 'readings'>): string[] {
+  const worst = new Map<string, { rank: number; text: string }>();
   for (const r of e.readings) {
     if (r.voided || r.verdict !== 'nonconforming') continue;
     const c = (r.result as { consequence?: InstallerConsequence | null }).consequence;
-    if (c?.text)
-      out.add(`${r.sample.conductor.purpose} ${r.sample.conductor.gaugeLabel}: ${c.text}`);
+    if (!c?.text) continue;
+    const conductor = `${r.sample.conductor.purpose} ${r.sample.conductor.gaugeLabel}`;
+    const rank = c.treatAs === null ? -Infinity : r.areaRatio;
+    const known = worst.get(conductor);
+    if (!known || rank < known.rank) worst.set(conductor, { rank, text: c.text });
   }
-  return [...out];
+  return [...worst].map(([conductor, w]) => `${conductor}: ${w.text}`);
 }
 
 /** The return's CSV and evidence pack, from the same evidence. */
