@@ -5,7 +5,7 @@ import { join } from 'node:path';
 import { after, before, test } from 'node:test';
 import { apiAs } from './api-fixtures.mjs';
 import { launchBrowser, screenshot, signIn, url, BASE_URL } from './browser.mjs';
-import { blankFrame, fakeCameraArgs, qrFrame, writeY4m } from './fake-camera.mjs';
+import { blankFrame, fakeCameraArgs, qrFrame, symbolFrame, writeY4m } from './fake-camera.mjs';
 
 // Scanning (issue 15): the camera is a y4m file Chromium plays in a loop. Debian's
 // Chromium has no BarcodeDetector of its own, so these runs read through the polyfill
@@ -30,11 +30,10 @@ after(async () => {
  * A browser whose camera shows nothing for about two seconds, then `text` as a QR code;
  * every request it makes is listed (to show none leaves our origin).
  */
-async function browserFilming(name, text, options) {
+async function browserFilming(name, text, options, code = qrFrame(text)) {
   const file = join(dir, `${name}.y4m`);
   // 5 frames a second: 10 blank (the dialog can be seen looking), then 5 with the code.
   const blank = blankFrame();
-  const code = qrFrame(text);
   await writeY4m(file, [...Array(10).fill(blank), ...Array(5).fill(code)]);
   const browser = await launchBrowser({ ...options, args: fakeCameraArgs(file) });
   await browser.context.grantPermissions(['camera'], { origin: ORIGIN });
@@ -127,3 +126,66 @@ test('at a desk, scanning a held lot tag opens the lot in bench mode', async () 
     await browser.close();
   }
 });
+
+// The other symbologies the dock reads, each filmed on its own (ZXing's writer draws them):
+// a packing slip's Code 128, a supplier label's Data Matrix and EAN-13, a PO's EAN-8
+// (GS1 check digits: 4006381333931 and 96385074 are valid).
+const SYMBOLS = [
+  {
+    format: 'Code128',
+    text: `PS-${STAMP}`.slice(0, 12),
+    button: 'Scan the packing slip',
+    field: 'Packing-slip number',
+    label: 'Code 128',
+  },
+  {
+    format: 'DataMatrix',
+    text: `SL-DM-${STAMP}`,
+    button: 'Scan the supplier lot label',
+    field: 'Supplier lot code',
+    label: 'Data Matrix',
+  },
+  {
+    format: 'EAN13',
+    text: '4006381333931',
+    button: 'Scan the supplier lot label',
+    field: 'Supplier lot code',
+    label: 'EAN-13',
+  },
+  {
+    format: 'EAN8',
+    text: '96385074',
+    button: 'Scan the PO number',
+    field: 'PO number',
+    label: 'EAN-8',
+  },
+];
+
+for (const symbol of SYMBOLS) {
+  test(`on a phone, the camera reads ${symbol.label} into “${symbol.field}”`, async () => {
+    const { browser, page, requests } = await browserFilming(
+      symbol.format,
+      symbol.text,
+      PHONE,
+      await symbolFrame(symbol.format, symbol.text),
+    );
+    try {
+      await signIn(page, 'clerk@demo.example');
+      await page.waitForURL((u) => u.pathname === '/today');
+      await page.goto(url('/receiving'));
+      await page.getByRole('button', { name: symbol.button }).tap();
+      const dialog = page.getByRole('dialog', { name: symbol.button });
+      await dialog.getByText('Hold the code inside the frame').waitFor();
+      await dialog.waitFor({ state: 'detached', timeout: 20_000 });
+      assert.equal(
+        await page.getByRole('textbox', { name: symbol.field }).inputValue(),
+        symbol.text,
+      );
+      await page.getByText(`${symbol.field} read from the ${symbol.label}`).waitFor();
+      if (symbol.format === 'Code128') await screenshot(page, 'scanner-phone-code128');
+      assertOwnOrigin(requests);
+    } finally {
+      await browser.close();
+    }
+  });
+}
