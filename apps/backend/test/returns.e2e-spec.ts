@@ -237,6 +237,30 @@ describe('GET and PATCH /api/returns', () => {
     expect(card.body.chargebacks).toEqual([{ currency: 'USD', amount: 7 }]);
   });
 
+  it('sorts the list by chargeback within each currency, never one amount against another currency', async () => {
+    const { supplier, lots } = await supplierWithRejects('Saltmarsh Conductors', 4);
+    const raised: [number, string][] = [
+      [100, 'USD'],
+      [50, 'EUR'],
+      [200, 'EUR'],
+      [20, 'USD'],
+    ];
+    for (const [i, [other, currency]] of raised.entries()) {
+      const res = await createReturn([lots[i].id], { costs: { other }, currency });
+      expect(res.status, JSON.stringify(res.body)).toBe(201);
+    }
+    const order = async (dir: string) =>
+      (
+        await t.http
+          .get(`/api/returns?supplierId=${supplier.id}&sort=chargebackTotal:${dir}`)
+          .set(auth(buyer))
+      ).body.items.map((r: { currency: string; chargebackTotal: number }) =>
+        [r.currency, r.chargebackTotal].join(' '),
+      );
+    expect(await order('desc')).toEqual(['EUR 200', 'EUR 50', 'USD 100', 'USD 20']);
+    expect(await order('asc')).toEqual(['EUR 50', 'EUR 200', 'USD 20', 'USD 100']);
+  });
+
   it('answers a stale edit and a stale step with 409 and the return as it is now', async () => {
     const { lots } = await supplierWithRejects('Oakridge Conductor Co');
     const ret = (await createReturn([lots[0].id])).body;

@@ -267,9 +267,15 @@ export class ReturnsService {
       ['createdAt', 'number', 'status', 'chargebackTotal'] as const,
       ['createdAt', 'desc'],
     );
+    // Amounts in different currencies are not comparable without a rate, and none is
+    // applied: the chargeback sort groups by ISO 4217 code, then orders within each.
+    const orderBy =
+      field === 'chargebackTotal'
+        ? { currency: 'asc' as const, chargebackTotal: dir, id: dir }
+        : { [field]: dir, id: dir };
     const [items, total] = await this.em.findAndCount(VendorReturn, this.where(q), {
       populate: POPULATE,
-      orderBy: { [field]: dir, id: dir },
+      orderBy,
       limit: pageSize,
       offset,
     });
