@@ -2,6 +2,7 @@ import { Alert, AlertTitle, Checkbox, FormControlLabel, Link, Stack } from '@mui
 import { Link as RouterLink } from 'react-router';
 import { paths } from '@/config/paths';
 import type { LotSummary } from '@/features/lots/types';
+import { countOf } from '@/features/lots/lib/plan-preview';
 import { formatDate } from '@/lib/dates';
 import { inSentence, lotStatusLabels } from '@/lib/labels';
 
@@ -31,8 +32,8 @@ export function AlreadyReceivedAlert(props: AlreadyReceivedAlertProps) {
             <Link component={RouterLink} to={paths.lot.getHref(lot.id)} sx={{ fontWeight: 600 }}>
               Lot {lot.id}
             </Link>{' '}
-            · received {formatDate(lot.receivedAt)} by {lot.receivedBy.name} · {lot.quantity}{' '}
-            {lot.unit} of {lot.supplier.code} {lot.product.sku} ·{' '}
+            · received {formatDate(lot.receivedAt)} by {lot.receivedBy.name} ·{' '}
+            {countOf(lot.quantity, lot.unit)} of {lot.supplier.code} {lot.product.sku} ·{' '}
             {inSentence(lotStatusLabels[lot.status])}
           </span>
         ))}

@@ -4,6 +4,7 @@ import type { ReactNode } from 'react';
 import { LotStatusChip } from '@/features/lots/components/lot-status-chip';
 import { SamplingPlanSummary } from '@/features/lots/components/sampling-plan-summary';
 import { SupplierStatusAlert } from '@/features/lots/components/supplier-status-alert';
+import { countOf } from '@/features/lots/lib/plan-preview';
 import type { LotSummary } from '@/features/lots/types';
 import { formatDateTime } from '@/lib/dates';
 
@@ -59,7 +60,7 @@ export function LotHeader({ lot, actions }: LotHeaderProps) {
                   <Fact label="Product" value={`${lot.product.sku} — ${lot.product.description}`} />
                 </Grid>
                 <Grid size={6}>
-                  <Fact label="Quantity" value={`${lot.quantity} ${lot.unit}`} />
+                  <Fact label="Quantity" value={countOf(lot.quantity, lot.unit)} />
                 </Grid>
                 <Grid size={6}>
                   <Fact

@@ -16,6 +16,7 @@ import { paths } from '@/config/paths';
 import { useLots } from '@/features/lots/api/get-lots';
 import type { LotStatus } from '@/features/lots/types';
 import { errorMessage } from '@/lib/query-client';
+import { countOf } from '@/features/lots/lib/plan-preview';
 import { formatDate } from '@/lib/dates';
 
 interface TodayLotsSectionProps {
@@ -74,7 +75,7 @@ export function TodayLotsSection({ title, status, emptyText }: TodayLotsSectionP
                 <ListItemButton key={lot.id} component={RouterLink} to={paths.lot.getHref(lot.id)}>
                   <ListItemText
                     primary={`Lot ${lot.id} · ${lot.product.sku} · PO ${lot.poNumber}`}
-                    secondary={`${lot.supplier.name} · ${lot.quantity} ${lot.unit} · received ${formatDate(lot.receivedAt)}${age >= 1 ? ` (${age} d ago)` : ''}`}
+                    secondary={`${lot.supplier.name} · ${countOf(lot.quantity, lot.unit)} · received ${formatDate(lot.receivedAt)}${age >= 1 ? ` (${age} d ago)` : ''}`}
                   />
                 </ListItemButton>
               );

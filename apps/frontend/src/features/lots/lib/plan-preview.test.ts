@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { parseLotQuantity } from '@/features/lots/api/create-lot';
-import { cutInstruction, previewPlan } from '@/features/lots/lib/plan-preview';
+import { countOf, cutInstruction, previewPlan } from '@/features/lots/lib/plan-preview';
 
 const policy = { inspectionLevel: 'S-3', aql: '1.0', severity: 'normal' as const };
 
@@ -72,6 +72,16 @@ describe('previewPlan', () => {
   it('reports an AQL the tables do not hold instead of crashing', () => {
     const preview = previewPlan({ ...policy, aql: '3.3', quantity: 40 });
     expect(preview.kind).toBe('error');
+  });
+});
+
+describe('countOf', () => {
+  it('names one unit in the singular, the rest as packing slips write them', () => {
+    expect(countOf(1, 'reels')).toBe('1 reel');
+    expect(countOf(1, 'boxes')).toBe('1 box');
+    expect(countOf(1, 'feet')).toBe('1 foot');
+    expect(countOf(40, 'spools')).toBe('40 spools');
+    expect(countOf(1, '')).toBe('1 unit');
   });
 });
 
