@@ -12,9 +12,9 @@ export type SignedInUser = Pick<
  * The account behind a session, as the sign-in check needs it on every request: read from
  * the database each time, not kept. A kept copy let a deactivated or demoted admin act
  * for up to 5 s on another server sharing the database (long enough to create a new
- * admin), and kept ended sessions alive. One primary-key read per request; a cache here
- * must be exact across servers (checked against a change counter in the database), never
- * one that expires by time.
+ * admin), and kept ended sessions alive. One primary-key read per request: a cache keyed
+ * by the database's change counters (common/counted-cache.ts) would be exact across
+ * servers, but reading the counters is a query of the same cost.
  */
 @Injectable()
 export class SignedInUsers {
