@@ -1,7 +1,9 @@
 // The comparison server: node:http + better-sqlite3 answering the lot list query on the
 // same file, with the LotSummary shape. Run as a child process: node raw-lots-server.mjs DB.
-// Like the API it keeps the total and the status share per filter set (nothing writes
-// during the phase), so the two differ by framework and ORM, not by what they compute.
+// Like the API it keeps the total and the status share per filter set, keyed by the
+// database's change counters of the tables they are read from (read once per request, as
+// the API's lots/lot-list-cache.ts does), so the two differ by framework and ORM, not by
+// what they compute.
 import { createServer } from 'node:http';
 import Database from 'better-sqlite3';
 import { lotListQuery } from './raw-sql.mjs';
@@ -9,6 +11,11 @@ import { lotListQuery } from './raw-sql.mjs';
 const db = new Database(process.argv[2], { readonly: true, fileMustExist: true });
 const cache = new Map();
 const totals = new Map();
+// The sum of the counters of lots, products and suppliers (apps/backend database/change-counters.ts).
+const counted = db.prepare(
+  "select sum(version) as v from change_counters where table_name in ('lots', 'products', 'suppliers')",
+);
+let generation = -1;
 const remembered = (key, compute) => {
   if (!totals.has(key)) totals.set(key, compute());
   return totals.get(key);
@@ -24,6 +31,11 @@ const server = createServer((req, res) => {
   const pageSize = Number(url.searchParams.get('pageSize') ?? 25);
   const statuses = (url.searchParams.get('status') ?? '').split(',').filter(Boolean);
   const q = url.searchParams.get('q') ?? '';
+  const now = Number(counted.get().v);
+  if (now !== generation) {
+    generation = now;
+    totals.clear();
+  }
   const probe = lotListQuery({ statuses, q, page, pageSize, walk: false });
   const share = remembered(
     `share ${statuses}`,
