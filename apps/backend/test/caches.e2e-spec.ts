@@ -143,6 +143,7 @@ describe('two servers on one database', () => {
     expect((await lotList(b)).items[0].receivedBy.name).toBe('Cachefixture Clerk');
 
     const patched = await call(a, DEMO.admin, 'patch', `/api/users/${created.body.id}`, {
+      version: created.body.version,
       name: 'Cachefixture Receiving Clerk',
       active: false,
     });
