@@ -1,4 +1,4 @@
-// Development: standards and server rebuilt on change, Vite with hot reload on :5173.
+// Development: the libraries and the server rebuilt on change, Vite with hot reload on :5173.
 import { spawn } from 'node:child_process';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -6,13 +6,14 @@ import { fileURLToPath } from 'node:url';
 const root = join(dirname(fileURLToPath(import.meta.url)), '..');
 const env = { ...process.env, APP_ORIGINS: process.env.APP_ORIGINS || 'http://localhost:5173' };
 const procs = [
-  ['npx', ['tsc', '-b', 'libs/standards', '-w', '--preserveWatchOutput']],
+  ['npx', ['tsc', '-b', 'libs/standards', 'libs/api-types', '-w', '--preserveWatchOutput']],
   ['npx', ['tsc', '-b', 'apps/backend/tsconfig.build.json', '-w', '--preserveWatchOutput']],
   [
     process.execPath,
     [
       '--watch-path=apps/backend/dist',
       '--watch-path=libs/standards/dist',
+      '--watch-path=libs/api-types/dist',
       'apps/backend/dist/main.js',
     ],
   ],

@@ -18,6 +18,13 @@ export const PARTS = [
     after: [],
   },
   {
+    name: 'api-types',
+    inputs: ['libs/api-types/src', 'libs/api-types/package.json', 'libs/api-types/tsconfig.json'],
+    marker: 'libs/api-types/tsconfig.tsbuildinfo',
+    command: ['npm', 'run', 'build', '-w', 'libs/api-types'],
+    after: [],
+  },
+  {
     name: 'client',
     inputs: [
       'apps/frontend/src',
@@ -27,12 +34,12 @@ export const PARTS = [
       'apps/frontend/tsconfig.json',
       'apps/frontend/vite.config.ts',
       'libs/standards/src',
-      'libs/api-types/index.d.ts',
+      'libs/api-types/src',
       'package-lock.json',
     ],
     marker: 'apps/frontend/dist/index.html',
     command: ['npm', 'run', 'build', '-w', 'apps/frontend'],
-    after: ['standards'],
+    after: ['standards', 'api-types'],
   },
   {
     name: 'server',
@@ -43,12 +50,13 @@ export const PARTS = [
       'apps/backend/tsconfig.build.json',
       'libs/standards/src',
       'libs/standards/package.json',
-      'libs/api-types/index.d.ts',
+      'libs/api-types/src',
+      'libs/api-types/package.json',
       'package-lock.json',
     ],
     marker: 'apps/backend/dist/.tsbuildinfo',
     command: ['npm', 'run', 'build', '-w', 'apps/backend'],
-    after: ['standards'],
+    after: ['standards', 'api-types'],
   },
 ];
 

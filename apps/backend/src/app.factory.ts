@@ -2,7 +2,8 @@ import type { INestApplication } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { MikroORM } from '@mikro-orm/core';
-import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import { SwaggerModule } from '@nestjs/swagger';
+import { buildOpenApiDocument } from './common/answers';
 import cookieParser from 'cookie-parser';
 import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
@@ -52,13 +53,17 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
   app.useGlobalFilters(new AllExceptionsFilter());
   app.enableShutdownHooks();
 
-  const doc = new DocumentBuilder()
-    .setTitle('Gaugeproof API')
-    .setDescription('Receiving inspection and supplier quality for power and ground cable')
-    .addBearerAuth()
-    .addCookieAuth('gp_session')
-    .build();
-  SwaggerModule.setup('api/docs', app, () => SwaggerModule.createDocument(app, doc));
+  // The response schemas (zod, some megabytes) are loaded by the first request for the
+  // document, before Swagger's own handler builds it.
+  let components: Record<string, object> | null = null;
+  app.use((req: { url: string }, _res: unknown, next: (e?: unknown) => void) => {
+    if (components || !req.url.startsWith('/api/docs')) return next();
+    import('@gaugeproof/api-types/schemas').then((m) => {
+      components = m.openApiComponents();
+      next();
+    }, next);
+  });
+  SwaggerModule.setup('api/docs', app, () => buildOpenApiDocument(app, components ?? {}));
 
   const orm = app.get(MikroORM);
   await orm.getMigrator().up();

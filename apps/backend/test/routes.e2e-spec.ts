@@ -25,6 +25,24 @@ describe('route declarations', () => {
     );
   });
 
+  it('has every route name its answer, and the document describe it', async () => {
+    const unnamed = listRoutes(t.app).filter((r) => !r.answer);
+    expect(unnamed.map((r) => `${r.method} ${r.path} (${r.controller}.${r.handler})`)).toEqual([]);
+    const doc = (await t.http.get('/api/docs-json')).body as {
+      paths: Record<string, Record<string, { responses: Record<string, unknown> }>>;
+      components: { schemas: Record<string, unknown> };
+    };
+    const described = listRoutes(t.app).filter((r) => {
+      const path = r.path.replace(/:(\w+)/g, '{$1}');
+      const op = doc.paths[path]?.[r.method.toLowerCase()];
+      return op && Object.keys(op.responses).some((status) => status.startsWith('2'));
+    });
+    expect(described.length).toBe(listRoutes(t.app).length);
+    expect(Object.keys(doc.components.schemas)).toEqual(
+      expect.arrayContaining(['LotDetail', 'LotSummaryPage', 'SupplierScorecard']),
+    );
+  });
+
   it("keeps public routes to sign-in, health and the supplier's token-checked page", () => {
     const open = listRoutes(t.app)
       .filter((r) => r.isPublic)

@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Controller, Get, Param, Query, StreamableFile } from '@nestjs/common';
 import { ApiProduces, ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
@@ -15,12 +16,14 @@ export class AuditController {
   constructor(private readonly audit: AuditQueryService) {}
 
   @Get('lots/:id/timeline')
+  @Answers('TimelineEventList')
   @Roles(...ALL_ROLES)
   timeline(@Param('id', IdPipe) id: number) {
     return this.audit.timeline(id);
   }
 
   @Get('audit')
+  @Answers('TimelineEventPage')
   @Roles('admin')
   list(@Query() q: ListAuditDto) {
     return this.audit.list(q);

@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Body, Controller, Get, HttpCode, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
@@ -15,6 +16,7 @@ export class AuthController {
 
   @Public()
   @Post('login')
+  @Answers('LoginAnswer')
   @HttpCode(200)
   @UseGuards(LoginThrottlerGuard)
   async login(
@@ -35,12 +37,14 @@ export class AuthController {
 
   @Roles(...ALL_ROLES)
   @Get('me')
+  @Answers('SessionUser')
   me(@CurrentUser() user: RequestUser) {
     return user;
   }
 
   @Roles(...ALL_ROLES)
   @Post('logout')
+  @Answers.empty()
   @HttpCode(204)
   async logout(@CurrentUser() user: RequestUser, @Res({ passthrough: true }) res: Response) {
     await this.auth.logout(user.id);

@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import {
   Body,
   Controller,
@@ -34,16 +35,19 @@ export class CorrectiveActionsController {
   ) {}
 
   @Post()
+  @Answers('CorrectiveAction')
   create(@Body() dto: CreateCorrectiveActionDto, @CurrentUser() actor: RequestUser) {
     return this.cars.create(dto, actor);
   }
 
   @Get()
+  @Answers('CorrectiveActionPage')
   list(@Query() q: ListCorrectiveActionsDto) {
     return this.cars.list(q);
   }
 
   @Get('export.csv')
+  @Answers.file('text/csv')
   @ApiProduces('text/csv')
   export(@Query() q: ListCorrectiveActionsDto) {
     return new StreamableFile(
@@ -56,6 +60,7 @@ export class CorrectiveActionsController {
   }
 
   @Get(':id')
+  @Answers('CorrectiveAction')
   get(@Param('id', IdPipe) id: number) {
     return this.cars.get(id);
   }
@@ -65,6 +70,7 @@ export class CorrectiveActionsController {
    * (no address) the reopen stands and `mail` says why.
    */
   @Patch(':id')
+  @Answers('CorrectiveActionUpdate')
   async update(
     @Param('id', IdPipe) id: number,
     @Body() dto: UpdateCorrectiveActionDto,
@@ -88,6 +94,7 @@ export class CorrectiveActionsController {
 
   /** E-mails the supplier a signed link (30 days) to a page where it answers. */
   @Post(':id/send')
+  @Answers('SupplierLinkSent')
   send(
     @Param('id', IdPipe) id: number,
     @Body() dto: SendCorrectiveActionDto,
@@ -98,17 +105,20 @@ export class CorrectiveActionsController {
 
   /** Withdraws every link sent for the request. */
   @Post(':id/revoke-links')
+  @Answers('LinksRevoked')
   @HttpCode(200)
   revoke(@Param('id', IdPipe) id: number, @CurrentUser() actor: RequestUser) {
     return this.portal.revoke(id, actor);
   }
 
   @Get(':id/attachments')
+  @Answers('ScarAttachmentList')
   attachments(@Param('id', IdPipe) id: number) {
     return this.portal.attachments(id);
   }
 
   @Get(':id/attachments/:fileId')
+  @Answers.file('application/octet-stream')
   async attachment(
     @Param('id', IdPipe) id: number,
     @Param('fileId', IdPipe) fileId: number,

@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Body, Controller, Get, HttpCode, Param, Post, Res } from '@nestjs/common';
 import type { Response } from 'express';
 import { ALL_ROLES } from '../auth/roles';
@@ -21,6 +22,7 @@ export class DecisionsController {
    * that waits for a second QA lead's or an admin's approval (nothing decided yet).
    */
   @Post('lots/:id/decisions')
+  @Answers('DecisionResult')
   async decide(
     @Param('id', IdPipe) id: number,
     @Body() dto: CreateDecisionDto,
@@ -70,6 +72,7 @@ export class DecisionsController {
 
   /** Brings a discontinued stream back on tightened inspection (ISO 2859-1). */
   @Post('products/:id/inspection-state/restore')
+  @Answers('RestoreAnswer')
   restore(
     @Param('id', IdPipe) id: number,
     @Body() dto: RestoreInspectionStateDto,

@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Controller, Get, Header, Param, StreamableFile } from '@nestjs/common';
 import { ApiProduces, ApiTags } from '@nestjs/swagger';
 import { Roles } from '../auth/decorators';
@@ -12,6 +13,7 @@ export class DocumentsController {
 
   /** The hold / reject / accept tag to print and fix to the lot. */
   @Get('lots/:id/tag.pdf')
+  @Answers.file('application/pdf')
   @Roles(...ALL_ROLES)
   @ApiProduces('application/pdf')
   @Header('Cache-Control', 'no-store')

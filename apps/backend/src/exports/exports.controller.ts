@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Logger, Controller, Get, Param, Query, Res } from '@nestjs/common';
 import { ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
@@ -19,6 +20,7 @@ export class ExportsController {
    * after it, the connection is cut so a truncated file cannot pass for a whole one.
    */
   @Get('suppliers/:id/readings/export.csv')
+  @Answers.file('text/csv')
   @Roles('purchasing', 'qa_lead', 'admin')
   @ApiProduces('text/csv')
   async supplierReadings(

@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Controller, Get, ServiceUnavailableException } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { EntityManager } from '@mikro-orm/core';
@@ -10,6 +11,7 @@ export class HealthController {
 
   @Public()
   @Get()
+  @Answers('Health')
   async check() {
     try {
       await this.em.getConnection().execute('select 1 as ok');

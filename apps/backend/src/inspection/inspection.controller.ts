@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Body, Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import { ApiTags } from '@nestjs/swagger';
@@ -28,6 +29,7 @@ export class InspectionController {
   }
 
   @Post('lots/:id/samples')
+  @Answers('Sample')
   @Roles('clerk', 'qa_lead', 'admin')
   createSample(
     @Param('id', IdPipe) lotId: number,
@@ -38,6 +40,7 @@ export class InspectionController {
   }
 
   @Post('samples/:id/readings')
+  @Answers('Reading')
   @Roles('clerk', 'qa_lead', 'admin')
   createReading(
     @Param('id', IdPipe) sampleId: number,
@@ -48,6 +51,7 @@ export class InspectionController {
   }
 
   @Post('readings/:id/void')
+  @Answers('Reading')
   @HttpCode(200)
   // A clerk only their own reading, before the lot is decided (ReadingsService.void).
   @Roles('clerk', 'qa_lead', 'admin')

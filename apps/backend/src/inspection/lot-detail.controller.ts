@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Controller, Get, Param } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { Roles } from '../auth/decorators';
@@ -11,6 +12,7 @@ export class LotDetailController {
   constructor(private readonly lots: LotDetailService) {}
 
   @Get(':id')
+  @Answers('LotDetail')
   @Roles(...ALL_ROLES)
   detail(@Param('id', IdPipe) id: number) {
     return this.lots.detail(id);

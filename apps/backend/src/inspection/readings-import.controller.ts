@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import {
   Controller,
   Headers,
@@ -27,6 +28,7 @@ export class ReadingsImportController {
   constructor(private readonly imports: ReadingsImportService) {}
 
   @Post(':id/readings/import')
+  @Answers('ImportAnswer')
   @Roles('clerk', 'qa_lead', 'admin')
   @UseInterceptors(CsvUpload)
   @ApiConsumes('multipart/form-data')

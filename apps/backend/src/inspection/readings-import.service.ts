@@ -1,3 +1,4 @@
+import { MAX_IMPORT_ROWS, parseDecimal, parseDecimalList } from '@gaugeproof/api-types';
 import {
   BadRequestException,
   HttpException,
@@ -38,11 +39,7 @@ export interface RowError {
 }
 type Row = Record<string, string | undefined>;
 
-/**
- * Reading rows one import takes at the most (our choice, stated in the README): a full
- * day's bench log of a large lot. An import answers in time proportional to its rows.
- */
-export const MAX_IMPORT_ROWS = 5000;
+export { MAX_IMPORT_ROWS };
 /** Rows checked between two turns given to other requests. */
 const CHECKS_BETWEEN_TURNS = 100;
 const nextTurn = () => new Promise<void>((resolve) => setImmediate(resolve));
@@ -53,8 +50,6 @@ export interface ImportAnswer {
 }
 
 const REQUIRED = ['unit', 'conductor', 'method', 'instruments'] as const;
-/** A decimal number as a person writes it (a decimal comma allowed); not 0x10 nor 1e3. */
-const DECIMAL = /^[-+]?(\d+(\.\d*)?|\.\d+)$/;
 const KEY = /^[\x21-\x7e]{1,200}$/;
 
 /** The sentence of a refusal from a rule (a DomainError) or from the upload's own checks. */
@@ -390,8 +385,8 @@ function checkRow(lot: Lot, row: Row, rowNo: number, errors: RowError[]): RowChe
 
   const body: Record<string, unknown> = { method: cell('method'), instrumentIds: [0] };
   const numberIn = (column: string): number | undefined => {
-    const text = cell(column).replace(',', '.');
-    if (DECIMAL.test(text)) return Number(text);
+    const n = parseDecimal(cell(column));
+    if (n !== null) return n;
     fail(column, `${column} must be a number (got "${cell(column)}")`);
     return undefined;
   };
@@ -402,10 +397,8 @@ function checkRow(lot: Lot, row: Row, rowNo: number, errors: RowError[]): RowChe
   }
   if (cell('strandDiametersMm') !== '') {
     // Several strands in one cell, separated by ; (a comma may be a decimal comma).
-    const parts = cell('strandDiametersMm')
-      .split(';')
-      .map((p) => p.trim().replace(',', '.'));
-    if (parts.every((p) => DECIMAL.test(p))) body.strandDiametersMm = parts.map(Number);
+    const diameters = parseDecimalList(cell('strandDiametersMm'));
+    if (diameters) body.strandDiametersMm = diameters;
     else fail('strandDiametersMm', `strandDiametersMm must be numbers of mm separated by ;`);
   }
   // The resistance names its unit in the header (issue 13): Ω or mΩ, never guessed.

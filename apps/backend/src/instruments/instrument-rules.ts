@@ -1,18 +1,9 @@
 import { daysBetween, isCalendarDate, isoDate } from '../common/calendar';
 import type { Instrument, InstrumentKind } from './entities/instrument.entity';
+import { RESOLUTION_UNITS, UNITS_BY_KIND, type ResolutionUnit } from '@gaugeproof/api-types';
 
-export const RESOLUTION_UNITS = ['g', 'mm', 'ohm', 'mohm', 'degC'] as const;
-export type ResolutionUnit = (typeof RESOLUTION_UNITS)[number];
-
-/** What each kind of instrument can read in (common practice, no source). */
-export const UNITS_BY_KIND: Record<InstrumentKind, readonly ResolutionUnit[]> = {
-  balance: ['g'],
-  micrometer: ['mm'],
-  caliper: ['mm'],
-  length_rule: ['mm'],
-  milliohm_meter: ['ohm', 'mohm'],
-  thermometer: ['degC'],
-};
+// The values are the contract's (libs/api-types), used here and re-exported for this module.
+export { RESOLUTION_UNITS, UNITS_BY_KIND, type ResolutionUnit };
 
 /** "Due soon" means due within 14 days (docs/api-conventions.md; common practice, no source). */
 export const DUE_SOON_DAYS = 14;

@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Body, Controller, Get, Param, Patch, Post, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
@@ -15,24 +16,28 @@ export class InstrumentsController {
   constructor(private readonly instruments: InstrumentsService) {}
 
   @Get()
+  @Answers('InstrumentPage')
   @Roles(...ALL_ROLES)
   list(@Query() query: ListInstrumentsDto) {
     return this.instruments.list(query);
   }
 
   @Get(':id')
+  @Answers('Instrument')
   @Roles(...ALL_ROLES)
   get(@Param('id', IdPipe) id: number) {
     return this.instruments.get(id);
   }
 
   @Post()
+  @Answers('Instrument')
   @Roles('qa_lead', 'admin')
   create(@Body() dto: CreateInstrumentDto, @CurrentUser() actor: RequestUser) {
     return this.instruments.create(dto, actor);
   }
 
   @Patch(':id')
+  @Answers('Instrument')
   @Roles('qa_lead', 'admin')
   update(
     @Param('id', IdPipe) id: number,

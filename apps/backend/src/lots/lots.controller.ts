@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Body, Controller, Get, Post, Query, Res, StreamableFile } from '@nestjs/common';
 import { ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
@@ -18,6 +19,7 @@ export class LotsController {
   constructor(private readonly lots: LotsService) {}
 
   @Post()
+  @Answers('ReceivedLot')
   @Roles('clerk', 'qa_lead', 'admin')
   create(@Body() dto: CreateLotDto, @CurrentUser() actor: RequestUser) {
     return this.lots.create(dto, actor);
@@ -31,6 +33,7 @@ export class LotsController {
   }
 
   @Get()
+  @Answers('LotSummaryPage')
   @Roles(...ALL_ROLES)
   async list(@Query() query: LotFiltersDto, @Res() res: Response) {
     // Sent as the cached JSON answer: the page of LotSummary (docs/api-conventions.md).
@@ -38,6 +41,7 @@ export class LotsController {
   }
 
   @Get('export.csv')
+  @Answers.file('text/csv')
   @Roles(...ALL_ROLES)
   @ApiProduces('text/csv')
   async exportCsv(@Query() query: LotFiltersDto, @CurrentUser() actor: RequestUser) {

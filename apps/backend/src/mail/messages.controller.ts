@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Controller, Get, HttpCode, Param, Post, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
@@ -13,12 +14,14 @@ export class MessagesController {
   constructor(private readonly mail: MailService) {}
 
   @Get()
+  @Answers('OutboundMessagePage')
   list(@Query() q: ListMessagesDto) {
     return this.mail.list(q);
   }
 
   /** Sends a failed (or only logged) message again, its attachments rebuilt. */
   @Post(':id/retry')
+  @Answers('OutboundMessage')
   @HttpCode(200)
   retry(@Param('id', IdPipe) id: number, @CurrentUser() actor: RequestUser) {
     return this.mail.retry(id, actor);

@@ -1,7 +1,7 @@
+import { MAX_PHOTO_BYTES } from '@gaugeproof/api-types';
 import { singleFileInterceptor } from '../storage/single-file.interceptor';
 
-/** 15 MB: a phone photo is 2–8 MB (issue 4; common practice, no source). */
-export const MAX_PHOTO_BYTES = 15 * 1024 * 1024;
+export { MAX_PHOTO_BYTES };
 
 export const PhotoUploadInterceptor = singleFileInterceptor(
   MAX_PHOTO_BYTES,

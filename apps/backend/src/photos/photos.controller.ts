@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import {
   Body,
   Controller,
@@ -27,6 +28,7 @@ export class PhotosController {
   constructor(private readonly photos: PhotosService) {}
 
   @Post('lots/:id/photos')
+  @Answers('Photo')
   @Roles('clerk', 'qa_lead', 'admin')
   @UseInterceptors(PhotoUploadInterceptor)
   @ApiConsumes('multipart/form-data')
@@ -63,12 +65,14 @@ export class PhotosController {
   }
 
   @Get('photos/:id/original')
+  @Answers.file('image/jpeg')
   @Roles(...ALL_ROLES)
   original(@Param('id', IdPipe) id: number, @Res({ passthrough: true }) res: Response) {
     return this.serve(id, 'original', res);
   }
 
   @Get('photos/:id/thumbnail')
+  @Answers.file('image/jpeg')
   @Roles(...ALL_ROLES)
   thumbnail(@Param('id', IdPipe) id: number, @Res({ passthrough: true }) res: Response) {
     return this.serve(id, 'thumbnail', res);

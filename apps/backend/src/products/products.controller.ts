@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Body, Controller, Get, Param, Patch, Post, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
@@ -16,12 +17,14 @@ export class ProductsController {
   constructor(private readonly products: ProductsService) {}
 
   @Get()
+  @Answers('ProductPage')
   @Roles(...ALL_ROLES)
   list(@Query() query: ListProductsDto) {
     return this.products.list(query);
   }
 
   @Get(':id')
+  @Answers('Product')
   @Roles(...ALL_ROLES)
   get(@Param('id', IdPipe) id: number) {
     return this.products.get(id);
@@ -29,18 +32,21 @@ export class ProductsController {
 
   /** The plan a lot of `quantity` units would get now (the receiving form shows it). */
   @Get(':id/sampling-plan')
+  @Answers('SamplingPlanAnswer')
   @Roles(...ALL_ROLES)
   samplingPlan(@Param('id', IdPipe) id: number, @Query() query: SamplingPlanQueryDto) {
     return this.products.samplingPlan(id, query.quantity);
   }
 
   @Post()
+  @Answers('Product')
   @Roles('qa_lead', 'purchasing', 'admin')
   create(@Body() dto: CreateProductDto, @CurrentUser() actor: RequestUser) {
     return this.products.create(dto, actor);
   }
 
   @Patch(':id')
+  @Answers('Product')
   @Roles('qa_lead', 'purchasing', 'admin')
   update(
     @Param('id', IdPipe) id: number,

@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import {
   Body,
   Controller,
@@ -42,16 +43,19 @@ export class ReturnsController {
   ) {}
 
   @Post()
+  @Answers('VendorReturn')
   create(@Body() dto: CreateReturnDto, @CurrentUser() actor: RequestUser) {
     return this.returns.create(dto, actor);
   }
 
   @Get()
+  @Answers('VendorReturnPage')
   list(@Query() q: ListReturnsDto) {
     return this.returns.list(q);
   }
 
   @Get('export.csv')
+  @Answers.file('text/csv')
   @ApiProduces('text/csv')
   exportList(@Query() q: ListReturnsDto) {
     return new StreamableFile(
@@ -70,11 +74,13 @@ export class ReturnsController {
   }
 
   @Get(':id')
+  @Answers('VendorReturn')
   get(@Param('id', IdPipe) id: number) {
     return this.returns.get(id);
   }
 
   @Patch(':id')
+  @Answers('VendorReturn')
   update(
     @Param('id', IdPipe) id: number,
     @Body() dto: UpdateReturnDto,
@@ -85,6 +91,7 @@ export class ReturnsController {
 
   /** A draft that should not go: its lots are freed for another return. */
   @Post(':id/cancel')
+  @Answers('VendorReturn')
   @HttpCode(200)
   cancel(
     @Param('id', IdPipe) id: number,
@@ -96,6 +103,7 @@ export class ReturnsController {
 
   /** The goods left, with carrier, tracking number, date and quantity. */
   @Post(':id/ship')
+  @Answers('VendorReturn')
   @HttpCode(200)
   ship(
     @Param('id', IdPipe) id: number,
@@ -106,6 +114,7 @@ export class ReturnsController {
   }
 
   @Post(':id/acknowledge')
+  @Answers('VendorReturn')
   @HttpCode(200)
   acknowledge(
     @Param('id', IdPipe) id: number,
@@ -117,6 +126,7 @@ export class ReturnsController {
 
   /** The supplier's credit note for the chargeback. */
   @Post(':id/credit')
+  @Answers('VendorReturn')
   @HttpCode(200)
   credit(
     @Param('id', IdPipe) id: number,
@@ -127,6 +137,7 @@ export class ReturnsController {
   }
 
   @Post(':id/close')
+  @Answers('VendorReturn')
   @HttpCode(200)
   close(
     @Param('id', IdPipe) id: number,
@@ -138,6 +149,7 @@ export class ReturnsController {
 
   /** One row per reading of every lot on the return. */
   @Get(':id/export.csv')
+  @Answers.file('text/csv')
   @ApiProduces('text/csv')
   async exportReadings(@Param('id', IdPipe) id: number, @CurrentUser() actor: RequestUser) {
     const ret = await this.returns.ref(id);
@@ -149,6 +161,7 @@ export class ReturnsController {
   }
 
   @Get(':id/evidence.pdf')
+  @Answers.file('application/pdf')
   @ApiProduces('application/pdf')
   async evidence(
     @Param('id', IdPipe) id: number,
@@ -165,6 +178,7 @@ export class ReturnsController {
   }
 
   @Post(':id/email')
+  @Answers('OutboundMessage')
   email(
     @Param('id', IdPipe) id: number,
     @Body() dto: EmailReturnDto,

@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Controller, Get, Header, Param, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
@@ -21,11 +22,13 @@ export class ScorecardsController {
   ) {}
 
   @Get('scorecards')
+  @Answers('ScorecardList')
   list(@Query() q: ScorecardQueryDto) {
     return this.scorecards.list(resolveRange(q.from, q.to));
   }
 
   @Get('scorecards/export.csv')
+  @Answers.file('text/csv')
   @Header('Content-Type', CSV)
   @Header('Content-Disposition', 'attachment; filename="scorecards.csv"')
   exportList(@Query() q: ScorecardQueryDto, @CurrentUser() actor: RequestUser) {
@@ -33,11 +36,13 @@ export class ScorecardsController {
   }
 
   @Get('suppliers/:id/scorecard')
+  @Answers('SupplierScorecard')
   forSupplier(@Param('id', IdPipe) id: number, @Query() q: ScorecardQueryDto) {
     return this.scorecards.forSupplier(id, resolveRange(q.from, q.to));
   }
 
   @Get('suppliers/:id/scorecard/export.csv')
+  @Answers.file('text/csv')
   @Header('Content-Type', CSV)
   @Header('Content-Disposition', 'attachment; filename="supplier-scorecard.csv"')
   exportSupplier(

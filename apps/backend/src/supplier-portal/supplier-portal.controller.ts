@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import {
   Body,
   Controller,
@@ -36,6 +37,7 @@ export class SupplierPortalController {
   constructor(private readonly portal: SupplierPortalService) {}
 
   @Get()
+  @Answers('PortalView')
   @Public()
   view(@Param('token') token: string, @Res({ passthrough: true }) res: Response) {
     res.setHeader('Cache-Control', 'no-store');
@@ -44,6 +46,7 @@ export class SupplierPortalController {
   }
 
   @Post('response')
+  @Answers('PortalView')
   @Public()
   @HttpCode(200)
   respond(@Param('token') token: string, @Body() dto: SupplierResponseDto) {
@@ -51,6 +54,7 @@ export class SupplierPortalController {
   }
 
   @Post('attachments')
+  @Answers('PortalAttachment')
   @Public()
   @UseInterceptors(AttachmentUpload)
   @ApiConsumes('multipart/form-data')
@@ -68,6 +72,7 @@ export class SupplierPortalController {
   }
 
   @Get('evidence.pdf')
+  @Answers.file('application/pdf')
   @Public()
   @ApiProduces('application/pdf')
   async evidence(@Param('token') token: string, @Res({ passthrough: true }) res: Response) {

@@ -1,3 +1,4 @@
+import { MAX_ATTACHMENT_BYTES } from '@gaugeproof/api-types';
 import { randomUUID } from 'node:crypto';
 import {
   GoneException,
@@ -34,8 +35,7 @@ export { LINK_DAYS } from './portal-token';
 
 type Resolved = { kind: 'scar'; link: SupplierLink } | { kind: 'return'; link: ReturnLink };
 
-/** 10 MB: a scanned 8D report or a few phone photos (common practice, no source). */
-export const MAX_ATTACHMENT_BYTES = 10 * 1024 * 1024;
+export { MAX_ATTACHMENT_BYTES };
 /** At most this many files on one request. */
 const MAX_ATTACHMENTS = 20;
 const NOT_VALID =

@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Body, Controller, Get, Param, Patch, Post, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
@@ -15,24 +16,28 @@ export class SuppliersController {
   constructor(private readonly suppliers: SuppliersService) {}
 
   @Get()
+  @Answers('SupplierPage')
   @Roles(...ALL_ROLES)
   list(@Query() query: ListSuppliersDto) {
     return this.suppliers.list(query);
   }
 
   @Get(':id')
+  @Answers('Supplier')
   @Roles(...ALL_ROLES)
   get(@Param('id', IdPipe) id: number) {
     return this.suppliers.get(id);
   }
 
   @Post()
+  @Answers('Supplier')
   @Roles('purchasing', 'admin')
   create(@Body() dto: CreateSupplierDto, @CurrentUser() actor: RequestUser) {
     return this.suppliers.create(dto, actor);
   }
 
   @Patch(':id')
+  @Answers('Supplier')
   @Roles('purchasing', 'admin')
   update(
     @Param('id', IdPipe) id: number,

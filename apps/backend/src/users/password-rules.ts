@@ -1,9 +1,10 @@
+import { PASSWORD } from '@gaugeproof/api-types';
 import { ValidateBy, type ValidationOptions } from 'class-validator';
 
-/** At least this many characters once leading and trailing spaces are gone (NIST SP 800-63B 5.1.1.2 asks 8; ours is 10). */
-export const MIN_PASSWORD_CHARS = 10;
-/** bcrypt reads only the first 72 bytes of a password (the bcrypt algorithm, Provos & Mazières 1999). */
-export const MAX_PASSWORD_BYTES = 72;
+/** At least this many characters once leading and trailing spaces are gone (the contract's PASSWORD). */
+export const MIN_PASSWORD_CHARS = PASSWORD.minLength;
+/** bcrypt reads only the first 72 bytes of a password (the contract's PASSWORD). */
+export const MAX_PASSWORD_BYTES = PASSWORD.maxBytes;
 
 /**
  * Passwords too common to allow (NIST SP 800-63B 5.1.1.2: refuse values from lists of

@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Body, Controller, Get, Param, Patch, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
@@ -14,16 +15,19 @@ export class UsersController {
   constructor(private readonly users: UsersService) {}
 
   @Get()
+  @Answers('UserList')
   list() {
     return this.users.list();
   }
 
   @Post()
+  @Answers('User')
   create(@Body() dto: CreateUserDto, @CurrentUser() actor: RequestUser) {
     return this.users.create(dto, actor);
   }
 
   @Patch(':id')
+  @Answers('User')
   update(
     @Param('id', IdPipe) id: number,
     @Body() dto: UpdateUserDto,

@@ -3,6 +3,7 @@ import { RequestMethod } from '@nestjs/common';
 import { METHOD_METADATA, PATH_METADATA } from '@nestjs/common/constants';
 import { DiscoveryService, MetadataScanner, Reflector } from '@nestjs/core';
 import { IS_PUBLIC, ROLES_KEY } from '../../src/auth/decorators';
+import { answerOf, type Answer } from '../../src/common/answers';
 import type { Role } from '../../src/auth/roles';
 
 export interface RouteInfo {
@@ -12,6 +13,8 @@ export interface RouteInfo {
   handler: string;
   isPublic: boolean;
   roles: Role[] | undefined;
+  /** What the route answers (`@Answers`), if it names it. */
+  answer: Answer | undefined;
 }
 
 /** Every route the Nest router knows, with what it declares about access. */
@@ -42,6 +45,7 @@ export function listRoutes(app: INestApplication): RouteInfo[] {
         handler: name,
         isPublic: reflector.getAllAndOverride<boolean>(IS_PUBLIC, [fn, cls]) === true,
         roles: reflector.getAllAndOverride<Role[] | undefined>(ROLES_KEY, [fn, cls]),
+        answer: answerOf(fn),
       });
     }
   }

@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
 import { createApp } from '../../src/app.factory';
+import { contractCheck } from './contract-check';
 import { createScratchDatabase } from '../../src/database/pg-scratch';
 import { loadConfig, type AppConfig } from '../../src/config/env';
 import { DEMO_PASSWORD } from '../../src/seed/seed-users';
@@ -45,6 +46,8 @@ export async function startTestApp(
   });
   const config = { ...loaded, ...overrides };
   const app = await createApp(config);
+  const contract = contractCheck(app);
+  app.use(contract.middleware);
   await app.init();
   const http = request(app.getHttpServer());
   const tokens = new Map<string, string>();
@@ -65,6 +68,11 @@ export async function startTestApp(
       await app.close();
       await pg?.drop();
       rmSync(dir, { recursive: true, force: true });
+      if (contract.problems.length) {
+        throw new Error(
+          `Answers the OpenAPI document does not describe:\n${[...new Set(contract.problems)].join('\n')}`,
+        );
+      }
     },
   };
 }

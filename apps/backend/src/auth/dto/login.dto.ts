@@ -1,10 +1,11 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty } from '@nestjs/swagger';
 import { IsEmail, IsString, MaxLength, MinLength } from 'class-validator';
 
 export class LoginDto {
   @ApiProperty({ example: 'clerk@demo.example' })
   @IsEmail({}, { message: 'email must be an e-mail address' })
-  @MaxLength(254)
+  @MaxLength(TEXT_MAX.email)
   readonly email: string;
 
   @ApiProperty({ example: 'gaugeproof-demo' })

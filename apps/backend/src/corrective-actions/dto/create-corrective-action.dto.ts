@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty } from '@nestjs/swagger';
 import {
   ArrayMaxSize,
@@ -28,7 +29,7 @@ export class CreateCorrectiveActionDto {
   @ApiProperty({ description: 'What was found, at least 10 characters' })
   @IsString({ message: 'problem must be text' })
   @MinLength(10, { message: 'problem must be at least 10 characters' })
-  @MaxLength(4000, { message: 'problem must be at most 4000 characters' })
+  @MaxLength(TEXT_MAX.long, { message: `problem must be at most ${TEXT_MAX.long} characters` })
   readonly problem: string;
 
   @ApiProperty({

@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   IsIn,
@@ -29,7 +30,7 @@ export class UpdateCorrectiveActionDto {
   @IsOptional()
   @IsString()
   @MinLength(10, { message: 'problem must be at least 10 characters' })
-  @MaxLength(4000, { message: 'problem must be at most 4000 characters' })
+  @MaxLength(TEXT_MAX.long, { message: `problem must be at most ${TEXT_MAX.long} characters` })
   readonly problem?: string;
 
   @ApiPropertyOptional({ example: '2026-12-31' })
@@ -41,14 +42,16 @@ export class UpdateCorrectiveActionDto {
   @IsOptional()
   @IsString()
   @MinLength(10, { message: 'comment must be at least 10 characters' })
-  @MaxLength(4000, { message: 'comment must be at most 4000 characters' })
+  @MaxLength(TEXT_MAX.long, { message: `comment must be at most ${TEXT_MAX.long} characters` })
   readonly comment?: string;
 
   @ApiPropertyOptional({ description: 'Verify: the evidence the fix works' })
   @IsOptional()
   @IsString()
   @MinLength(10, { message: 'verificationNote must be at least 10 characters' })
-  @MaxLength(4000, { message: 'verificationNote must be at most 4000 characters' })
+  @MaxLength(TEXT_MAX.long, {
+    message: `verificationNote must be at most ${TEXT_MAX.long} characters`,
+  })
   readonly verificationNote?: string;
 
   @ApiPropertyOptional({ description: 'Verify: a later lot of the supplier that passed' })
@@ -60,18 +63,20 @@ export class UpdateCorrectiveActionDto {
   @ApiPropertyOptional({ description: "The supplier's containment of suspect stock" })
   @IsOptional()
   @IsString()
-  @MaxLength(4000, { message: 'containment must be at most 4000 characters' })
+  @MaxLength(TEXT_MAX.long, { message: `containment must be at most ${TEXT_MAX.long} characters` })
   readonly containment?: string;
 
   @ApiPropertyOptional()
   @IsOptional()
   @IsString()
-  @MaxLength(4000, { message: 'rootCause must be at most 4000 characters' })
+  @MaxLength(TEXT_MAX.long, { message: `rootCause must be at most ${TEXT_MAX.long} characters` })
   readonly rootCause?: string;
 
   @ApiPropertyOptional()
   @IsOptional()
   @IsString()
-  @MaxLength(4000, { message: 'correctiveAction must be at most 4000 characters' })
+  @MaxLength(TEXT_MAX.long, {
+    message: `correctiveAction must be at most ${TEXT_MAX.long} characters`,
+  })
   readonly correctiveAction?: string;
 }

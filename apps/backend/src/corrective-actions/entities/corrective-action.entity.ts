@@ -12,9 +12,10 @@ import {
 import { Lot } from '../../lots/entities/lot.entity';
 import { Supplier } from '../../suppliers/entities/supplier.entity';
 import { User } from '../../users/entities/user.entity';
+import { CAR_STATUSES, type CorrectiveActionStatus } from '@gaugeproof/api-types';
 
-export const CAR_STATUSES = ['open', 'responded', 'verified', 'reopened', 'closed'] as const;
-export type CorrectiveActionStatus = (typeof CAR_STATUSES)[number];
+// The values are the contract's (libs/api-types), used here and re-exported for this module.
+export { CAR_STATUSES, type CorrectiveActionStatus };
 
 /** Supplier corrective action request (SCAR). */
 @Entity({ tableName: 'corrective_actions' })

@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
@@ -22,7 +23,7 @@ export class CreateDecisionDto {
     description: 'Why; at least 20 characters when against the recommendation or on concession.',
   })
   @IsString({ message: 'reason must be text' })
-  @MaxLength(4000, { message: 'reason must be at most 4000 characters' })
+  @MaxLength(TEXT_MAX.long, { message: `reason must be at most ${TEXT_MAX.long} characters` })
   readonly reason: string;
 
   @ApiProperty({ description: 'The lot version the decision was taken on (optimistic lock).' })

@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty } from '@nestjs/swagger';
 import { IsString, MaxLength, MinLength } from 'class-validator';
 
@@ -7,6 +8,6 @@ export class RestoreInspectionStateDto {
   })
   @IsString({ message: 'reason must be text' })
   @MinLength(20, { message: 'reason must be at least 20 characters' })
-  @MaxLength(4000, { message: 'reason must be at most 4000 characters' })
+  @MaxLength(TEXT_MAX.long, { message: `reason must be at most ${TEXT_MAX.long} characters` })
   readonly reason: string;
 }

@@ -1,9 +1,10 @@
 import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
 import { Lot } from '../../lots/entities/lot.entity';
 import { User } from '../../users/entities/user.entity';
+import { DECISION_OUTCOMES, type DecisionOutcome } from '@gaugeproof/api-types';
 
-export const DECISION_OUTCOMES = ['accept', 'accept_on_concession', 'reject'] as const;
-export type DecisionOutcome = (typeof DECISION_OUTCOMES)[number];
+// The values are the contract's (libs/api-types), used here and re-exported for this module.
+export { DECISION_OUTCOMES, type DecisionOutcome };
 
 /** Append-only: a later decision supersedes an earlier one, never edits it. */
 @Entity({ tableName: 'decisions' })

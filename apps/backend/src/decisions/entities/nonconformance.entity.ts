@@ -1,8 +1,10 @@
 import { Entity, ManyToOne, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
 import { Lot } from '../../lots/entities/lot.entity';
 import { Decision } from './decision.entity';
+import { NCR_STATUSES } from '@gaugeproof/api-types';
 
-export const NCR_STATUSES = ['open', 'closed'] as const;
+// The values are the contract's (libs/api-types), used here and re-exported for this module.
+export { NCR_STATUSES };
 
 /** Nonconformance report opened by a reject, numbered NCR-YYYY-NNNN. */
 @Entity({ tableName: 'nonconformances' })

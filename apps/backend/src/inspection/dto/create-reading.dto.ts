@@ -14,9 +14,11 @@ import {
   Min,
   ValidateIf,
 } from 'class-validator';
+import { READING_LIMITS as L } from '@gaugeproof/api-types';
 import { READING_METHODS, type ReadingMethod } from '../entities/reading.entity';
 
 const NUMBER = { allowNaN: false, allowInfinity: false } as const;
+const STRAND_LIST = `strandDiametersMm must hold ${L.strandDiameters.min} to ${L.strandDiameters.max} strand diameters`;
 const uses =
   (...methods: ReadingMethod[]) =>
   (o: { method?: unknown }) =>
@@ -59,15 +61,17 @@ export class CreateReadingDto {
   @ApiPropertyOptional({ description: 'mass and resistance: specimen length, mm', example: 1000 })
   @ValidateIf(uses('mass', 'resistance'))
   @IsNumber(NUMBER, { message: 'lengthMm must be a number of millimetres' })
-  @Min(10, { message: 'lengthMm must be at least 10 mm' })
-  @Max(100_000, { message: 'lengthMm must be at most 100000 mm (100 m)' })
+  @Min(L.lengthMm.min, { message: `lengthMm must be at least ${L.lengthMm.min} mm` })
+  @Max(L.lengthMm.max, {
+    message: `lengthMm must be at most ${L.lengthMm.max} mm (${L.lengthMm.max / 1000} m)`,
+  })
   readonly lengthMm?: number;
 
   @ApiPropertyOptional({ description: 'strands: number of strands counted', example: 420 })
   @ValidateIf(uses('strands'))
   @IsInt({ message: 'count must be a whole number of strands' })
-  @Min(1, { message: 'count must be at least 1 strand' })
-  @Max(100_000, { message: 'count must be at most 100000 strands' })
+  @Min(L.count.min, { message: `count must be at least ${L.count.min} strand` })
+  @Max(L.count.max, { message: `count must be at most ${L.count.max} strands` })
   readonly count?: number;
 
   @ApiPropertyOptional({
@@ -77,7 +81,9 @@ export class CreateReadingDto {
   @ValidateIf((o: CreateReadingDto) => o.method === 'strands' && o.strandDiametersMm === undefined)
   @IsNumber(NUMBER, { message: 'strandDiameterMm must be a number of millimetres' })
   @IsPositive({ message: 'strandDiameterMm must be greater than 0 mm' })
-  @Max(20, { message: 'strandDiameterMm must be at most 20 mm' })
+  @Max(L.strandDiameterMm.max, {
+    message: `strandDiameterMm must be at most ${L.strandDiameterMm.max} mm`,
+  })
   readonly strandDiameterMm?: number;
 
   @ApiPropertyOptional({
@@ -88,11 +94,14 @@ export class CreateReadingDto {
   })
   @ValidateIf((o: CreateReadingDto) => o.strandDiametersMm !== undefined)
   @IsArray({ message: 'strandDiametersMm must be a list of strand diameters in mm' })
-  @ArrayMinSize(1, { message: 'strandDiametersMm must hold 1 to 10 strand diameters' })
-  @ArrayMaxSize(10, { message: 'strandDiametersMm must hold 1 to 10 strand diameters' })
+  @ArrayMinSize(L.strandDiameters.min, { message: STRAND_LIST })
+  @ArrayMaxSize(L.strandDiameters.max, { message: STRAND_LIST })
   @IsNumber(NUMBER, { each: true, message: 'strandDiametersMm must hold numbers of millimetres' })
   @IsPositive({ each: true, message: 'each of strandDiametersMm must be greater than 0 mm' })
-  @Max(20, { each: true, message: 'each of strandDiametersMm must be at most 20 mm' })
+  @Max(L.strandDiameterMm.max, {
+    each: true,
+    message: `each of strandDiametersMm must be at most ${L.strandDiameterMm.max} mm`,
+  })
   readonly strandDiametersMm?: number[];
 
   @ApiPropertyOptional({
@@ -107,8 +116,8 @@ export class CreateReadingDto {
   @ApiPropertyOptional({ description: 'resistance: conductor temperature, °C', example: 21.5 })
   @ValidateIf(uses('resistance'))
   @IsNumber(NUMBER, { message: 'temperatureC must be a number of degrees Celsius' })
-  @Min(-40, { message: 'temperatureC must be at least -40 °C' })
-  @Max(100, { message: 'temperatureC must be at most 100 °C' })
+  @Min(L.temperatureC.min, { message: `temperatureC must be at least ${L.temperatureC.min} °C` })
+  @Max(L.temperatureC.max, { message: `temperatureC must be at most ${L.temperatureC.max} °C` })
   readonly temperatureC?: number;
 
   @ApiPropertyOptional({
@@ -118,7 +127,7 @@ export class CreateReadingDto {
   @ValidateIf(uses('diameter'))
   @IsNumber(NUMBER, { message: 'diameterMm must be a number of millimetres' })
   @IsPositive({ message: 'diameterMm must be greater than 0 mm' })
-  @Max(100, { message: 'diameterMm must be at most 100 mm' })
+  @Max(L.diameterMm.max, { message: `diameterMm must be at most ${L.diameterMm.max} mm` })
   readonly diameterMm?: number;
 
   @ApiPropertyOptional({
@@ -127,8 +136,12 @@ export class CreateReadingDto {
   })
   @IsOptional()
   @IsNumber(NUMBER, { message: 'strandingIncrement must be a number such as 0.02' })
-  @Min(0, { message: 'strandingIncrement must be at least 0 (0 for a solid conductor)' })
-  @Max(0.5, { message: 'strandingIncrement must be at most 0.5 (it is a fraction: 0.02 = 2 %)' })
+  @Min(L.strandingIncrement.min, {
+    message: `strandingIncrement must be at least ${L.strandingIncrement.min} (0 for a solid conductor)`,
+  })
+  @Max(L.strandingIncrement.max, {
+    message: `strandingIncrement must be at most ${L.strandingIncrement.max} (it is a fraction: 0.02 = 2 %)`,
+  })
   readonly strandingIncrement?: number;
 
   @ApiPropertyOptional({
@@ -151,8 +164,12 @@ export class CreateReadingDto {
 
   @ApiProperty({ type: [Number], description: 'Registered instruments used', example: [1, 3] })
   @IsArray({ message: 'instrumentIds must be a list of instrument ids' })
-  @ArrayMinSize(1, { message: 'instrumentIds must name at least the main instrument used' })
-  @ArrayMaxSize(6, { message: 'instrumentIds must name at most 6 instruments' })
+  @ArrayMinSize(L.instruments.min, {
+    message: 'instrumentIds must name at least the main instrument used',
+  })
+  @ArrayMaxSize(L.instruments.max, {
+    message: `instrumentIds must name at most ${L.instruments.max} instruments`,
+  })
   @IsInt({ each: true, message: 'instrumentIds must hold whole-number instrument ids' })
   readonly instrumentIds: number[];
 

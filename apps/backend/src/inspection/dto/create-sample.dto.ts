@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsInt, IsOptional, IsString, IsUUID, Max, MaxLength, Min } from 'class-validator';
 
@@ -9,7 +10,9 @@ export class CreateSampleDto {
   @ApiPropertyOptional({ description: 'Spool number, kit serial … the unit it was cut from' })
   @IsOptional()
   @IsString({ message: 'unitRef must be text' })
-  @MaxLength(64, { message: 'unitRef must be at most 64 characters' })
+  @MaxLength(TEXT_MAX.reference, {
+    message: `unitRef must be at most ${TEXT_MAX.reference} characters`,
+  })
   readonly unitRef?: string;
 
   @ApiPropertyOptional({ description: 'Unit number 1..n of the plan; next free unit if omitted' })

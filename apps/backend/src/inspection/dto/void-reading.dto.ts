@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
 import { IsString, MaxLength, MinLength } from 'class-validator';
@@ -7,6 +8,6 @@ export class VoidReadingDto {
   @Transform(({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value))
   @IsString({ message: 'reason must be text' })
   @MinLength(10, { message: 'reason must be at least 10 characters: say why the reading is wrong' })
-  @MaxLength(2000, { message: 'reason must be at most 2000 characters' })
+  @MaxLength(TEXT_MAX.reason, { message: `reason must be at most ${TEXT_MAX.reason} characters` })
   readonly reason: string;
 }

@@ -1,11 +1,10 @@
 import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
 import { User } from '../../users/entities/user.entity';
 import { Sample } from './sample.entity';
+import { READING_METHODS, VERDICTS, type ReadingMethod, type Verdict } from '@gaugeproof/api-types';
 
-export const READING_METHODS = ['mass', 'strands', 'resistance', 'diameter'] as const;
-export type ReadingMethod = (typeof READING_METHODS)[number];
-export const VERDICTS = ['conforms', 'nonconforming', 'inconclusive'] as const;
-export type Verdict = (typeof VERDICTS)[number];
+// The values are the contract's (libs/api-types), used here and re-exported for this module.
+export { READING_METHODS, VERDICTS, type ReadingMethod, type Verdict };
 
 /** What an instrument was when the reading was taken, kept as evidence. */
 export interface InstrumentSnapshot {

@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   IsIn,
@@ -26,13 +27,13 @@ export class CreateInstrumentDto {
   @ApiProperty({ example: 'Bench balance B-2' })
   @IsString()
   @MinLength(1, { message: 'name is required' })
-  @MaxLength(120)
+  @MaxLength(TEXT_MAX.name)
   readonly name: string;
 
   @ApiProperty({ example: 'B-2' })
   @IsString()
   @MinLength(1, { message: 'serial is required' })
-  @MaxLength(64)
+  @MaxLength(TEXT_MAX.reference)
   readonly serial: string;
 
   @ApiProperty({ example: 0.01, description: 'Smallest step shown, in resolutionUnit' })

@@ -1,14 +1,8 @@
 import { Entity, Enum, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
+import { INSTRUMENT_KINDS, type InstrumentKind } from '@gaugeproof/api-types';
 
-export const INSTRUMENT_KINDS = [
-  'balance',
-  'micrometer',
-  'caliper',
-  'length_rule',
-  'milliohm_meter',
-  'thermometer',
-] as const;
-export type InstrumentKind = (typeof INSTRUMENT_KINDS)[number];
+// The values are the contract's (libs/api-types), used here and re-exported for this module.
+export { INSTRUMENT_KINDS, type InstrumentKind };
 
 /** A registered measuring instrument with its calibration status (ISO 9001 7.1.5). */
 @Entity({ tableName: 'instruments' })

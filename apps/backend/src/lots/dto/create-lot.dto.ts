@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsBoolean, IsOptional, IsString, MaxLength, MinLength, ValidateIf } from 'class-validator';
 import { IsId, IsWholeNumber } from '../../common/validators';
@@ -11,21 +12,27 @@ export class CreateLotDto {
   @ApiProperty({ example: 'PO-2026-0412' })
   @IsString({ message: 'poNumber is required' })
   @MinLength(1, { message: 'poNumber is required' })
-  @MaxLength(64, { message: 'poNumber must be at most 64 characters' })
+  @MaxLength(TEXT_MAX.reference, {
+    message: `poNumber must be at most ${TEXT_MAX.reference} characters`,
+  })
   readonly poNumber: string;
 
   @ApiPropertyOptional({ nullable: true })
   @IsOptional()
   @ValidateIf((_o, v) => v !== null)
   @IsString()
-  @MaxLength(64, { message: 'packingSlip must be at most 64 characters' })
+  @MaxLength(TEXT_MAX.reference, {
+    message: `packingSlip must be at most ${TEXT_MAX.reference} characters`,
+  })
   readonly packingSlip?: string | null;
 
   @ApiPropertyOptional({ nullable: true })
   @IsOptional()
   @ValidateIf((_o, v) => v !== null)
   @IsString()
-  @MaxLength(64, { message: 'supplierLotCode must be at most 64 characters' })
+  @MaxLength(TEXT_MAX.reference, {
+    message: `supplierLotCode must be at most ${TEXT_MAX.reference} characters`,
+  })
   readonly supplierLotCode?: string | null;
 
   /** Units in the lot; a lot of one is inspected whole (ANSI/ASQ Z1.4 / ISO 2859-1). */
@@ -36,14 +43,14 @@ export class CreateLotDto {
   @ApiProperty({ example: 'spools', description: 'spools, kits … as on the packing slip' })
   @IsString({ message: 'unit is required' })
   @MinLength(1, { message: 'unit is required' })
-  @MaxLength(16, { message: 'unit must be at most 16 characters' })
+  @MaxLength(TEXT_MAX.unit, { message: `unit must be at most ${TEXT_MAX.unit} characters` })
   readonly unit: string;
 
   @ApiPropertyOptional({ nullable: true })
   @IsOptional()
   @ValidateIf((_o, v) => v !== null)
   @IsString()
-  @MaxLength(4000, { message: 'notes must be at most 4000 characters' })
+  @MaxLength(TEXT_MAX.long, { message: `notes must be at most ${TEXT_MAX.long} characters` })
   readonly notes?: string | null;
 
   /**

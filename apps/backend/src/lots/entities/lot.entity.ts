@@ -13,17 +13,10 @@ import { Product } from '../../products/entities/product.entity';
 import { Supplier } from '../../suppliers/entities/supplier.entity';
 import { User } from '../../users/entities/user.entity';
 import { Sample } from '../../inspection/entities/sample.entity';
+import { LOT_STATUSES, type LotStatus } from '@gaugeproof/api-types';
 
-export const LOT_STATUSES = [
-  'on_hold',
-  'inspecting',
-  'awaiting_decision',
-  'accepted',
-  'accepted_on_concession',
-  'rejected',
-  'returned',
-] as const;
-export type LotStatus = (typeof LOT_STATUSES)[number];
+// The values are the contract's (libs/api-types), used here and re-exported for this module.
+export { LOT_STATUSES, type LotStatus };
 
 /** The plan stored with the lot so later policy changes never rewrite history. */
 export interface StoredSamplingPlan {

@@ -1,12 +1,8 @@
 import { Entity, Enum, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { MESSAGE_STATUSES, type MessageStatus } from '@gaugeproof/api-types';
 
-/**
- * `queued`: waiting for its first attempt; `sent`; `failed`: the last attempt failed (with
- * the SMTP answer in `error`), tried again at `nextAttemptAt` or, once that is null, given
- * up until someone retries it; `logged`: no SMTP server is set.
- */
-export const MESSAGE_STATUSES = ['queued', 'sent', 'failed', 'logged'] as const;
-export type MessageStatus = (typeof MESSAGE_STATUSES)[number];
+// The values are the contract's (libs/api-types), used here and re-exported for this module.
+export { MESSAGE_STATUSES, type MessageStatus };
 
 /**
  * Every e-mail the product sends, with its fate. The table is the outbound queue: a message

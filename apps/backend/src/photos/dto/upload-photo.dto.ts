@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { IsInt, IsOptional, IsString, MaxLength } from 'class-validator';
@@ -13,6 +14,8 @@ export class UploadPhotoDto {
   @ApiPropertyOptional({ maxLength: 300 })
   @IsOptional()
   @IsString({ message: 'caption must be text' })
-  @MaxLength(300, { message: 'caption must be at most 300 characters' })
+  @MaxLength(TEXT_MAX.description, {
+    message: `caption must be at most ${TEXT_MAX.description} characters`,
+  })
   readonly caption?: string;
 }

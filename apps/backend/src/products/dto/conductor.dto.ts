@@ -1,3 +1,4 @@
+import { CLAIMED_STRANDS, CONDUCTOR_CLASSES, TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   IsIn,
@@ -17,6 +18,8 @@ import {
   type ConductorPurpose,
 } from '../entities/conductor-spec.entity';
 
+const STRANDS = `claimedStrands must be a whole number from ${CLAIMED_STRANDS.min} to ${CLAIMED_STRANDS.max}`;
+
 export class ConductorDto {
   @ApiProperty({ enum: CONDUCTOR_PURPOSES })
   @IsIn(CONDUCTOR_PURPOSES, { message: `purpose must be one of ${CONDUCTOR_PURPOSES.join(', ')}` })
@@ -25,7 +28,7 @@ export class ConductorDto {
   @ApiProperty({ example: '4 AWG', description: 'Any label parseGauge reads: 4, 1/0, 25 mm²' })
   @IsString({ message: 'gauge must be a label such as "4 AWG"' })
   @MinLength(1, { message: 'gauge is required' })
-  @MaxLength(32, { message: 'gauge must be at most 32 characters' })
+  @MaxLength(TEXT_MAX.gauge, { message: `gauge must be at most ${TEXT_MAX.gauge} characters` })
   readonly gauge: string;
 
   @ApiProperty({ enum: CLAIMED_MATERIALS })
@@ -37,18 +40,20 @@ export class ConductorDto {
   @ApiPropertyOptional({ nullable: true, example: 665 })
   @IsOptional()
   @ValidateIf((_o, v) => v !== null)
-  @IsInt({ message: 'claimedStrands must be a whole number from 1 to 100000' })
-  @Min(1, { message: 'claimedStrands must be a whole number from 1 to 100000' })
-  @Max(100_000, { message: 'claimedStrands must be a whole number from 1 to 100000' })
+  @IsInt({ message: STRANDS })
+  @Min(CLAIMED_STRANDS.min, { message: STRANDS })
+  @Max(CLAIMED_STRANDS.max, { message: STRANDS })
   readonly claimedStrands?: number | null;
 
   @ApiPropertyOptional({
     nullable: true,
-    enum: [1, 2, 5, 6],
+    enum: CONDUCTOR_CLASSES,
     description: 'IEC 60228 class of a metric conductor (default 5); not for AWG sizes',
   })
   @IsOptional()
   @ValidateIf((_o, v) => v !== null)
-  @IsIn([1, 2, 5, 6], { message: 'conductorClass must be 1, 2, 5 or 6 (IEC 60228 classes)' })
+  @IsIn(CONDUCTOR_CLASSES, {
+    message: `conductorClass must be ${CONDUCTOR_CLASSES.slice(0, -1).join(', ')} or ${CONDUCTOR_CLASSES.at(-1)} (IEC 60228 classes)`,
+  })
   readonly conductorClass?: number | null;
 }

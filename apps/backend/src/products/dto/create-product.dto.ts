@@ -1,3 +1,4 @@
+import { PRODUCT_CONDUCTORS, TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
@@ -34,13 +35,17 @@ export class CreateProductDto extends ProductPolicyDto {
   @ApiProperty({ example: '4 AWG power cable, red, 50 m spool' })
   @IsString({ message: 'description is required' })
   @MinLength(1, { message: 'description is required' })
-  @MaxLength(300, { message: 'description must be at most 300 characters' })
+  @MaxLength(TEXT_MAX.description, {
+    message: `description must be at most ${TEXT_MAX.description} characters`,
+  })
   readonly description: string;
 
   @ApiProperty({ type: [ConductorDto] })
   @IsArray({ message: 'conductors must hold at least one conductor' })
-  @ArrayMinSize(1, { message: 'conductors must hold at least one conductor' })
-  @ArrayMaxSize(12, { message: 'conductors can hold at most 12 conductors' })
+  @ArrayMinSize(PRODUCT_CONDUCTORS.min, { message: 'conductors must hold at least one conductor' })
+  @ArrayMaxSize(PRODUCT_CONDUCTORS.max, {
+    message: `conductors can hold at most ${PRODUCT_CONDUCTORS.max} conductors`,
+  })
   @ValidateNested({ each: true })
   @Type(() => ConductorDto)
   readonly conductors: ConductorDto[];

@@ -1,3 +1,4 @@
+import { LENGTH_PER_UNIT_M, MIN_AREA_RATIO } from '@gaugeproof/api-types';
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import {
   AQLS,
@@ -15,6 +16,8 @@ import { IsBoolean, IsIn, IsNumber, IsOptional, Max, Min, ValidateIf } from 'cla
 const UNIT_AQLS = AQLS.filter((a) => Number(a) <= MAX_AQL_NONCONFORMING_UNITS);
 
 /** The inspection policy and unit length of a product, each with its default. */
+const RATIO = `minAreaRatio must be from ${MIN_AREA_RATIO.min} to ${MIN_AREA_RATIO.max.toFixed(1)}`;
+
 export class ProductPolicyDto {
   @ApiPropertyOptional({ nullable: true, description: 'Metres of cable in one unit' })
   @IsOptional()
@@ -23,8 +26,10 @@ export class ProductPolicyDto {
     { allowNaN: false, allowInfinity: false },
     { message: 'lengthPerUnitM must be a number' },
   )
-  @Min(0.01, { message: 'lengthPerUnitM must be greater than 0' })
-  @Max(100_000, { message: 'lengthPerUnitM must be at most 100000' })
+  @Min(LENGTH_PER_UNIT_M.min, { message: 'lengthPerUnitM must be greater than 0' })
+  @Max(LENGTH_PER_UNIT_M.max, {
+    message: `lengthPerUnitM must be at most ${LENGTH_PER_UNIT_M.max}`,
+  })
   readonly lengthPerUnitM?: number | null;
 
   @ApiPropertyOptional({ enum: INSPECTION_LEVELS, default: 'S-3' })
@@ -46,8 +51,8 @@ export class ProductPolicyDto {
   @ApiPropertyOptional({ minimum: 0.5, maximum: 1, default: 0.98 })
   @IsOptional()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'minAreaRatio must be a number' })
-  @Min(0.5, { message: 'minAreaRatio must be from 0.5 to 1.0' })
-  @Max(1, { message: 'minAreaRatio must be from 0.5 to 1.0' })
+  @Min(MIN_AREA_RATIO.min, { message: RATIO })
+  @Max(MIN_AREA_RATIO.max, { message: RATIO })
   readonly minAreaRatio?: number;
 
   /** A concession against a reject needs a second QA lead or an admin (default on). */

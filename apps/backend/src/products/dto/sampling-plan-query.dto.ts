@@ -1,3 +1,4 @@
+import { LOT_QUANTITY } from '@gaugeproof/api-types';
 import { ApiProperty } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { IsWholeNumber } from '../../common/validators';
@@ -6,9 +7,9 @@ import { IsWholeNumber } from '../../common/validators';
  * A lot has at least one unit: a lot of one (a single drum) is inspected whole
  * (INSPECT_ALL_RULE of the standards library; ANSI/ASQ Z1.4 / ISO 2859-1).
  */
-export const LOT_QUANTITY_MESSAGE = 'quantity must be a whole number of at least 1';
-/** Far above any delivery; keeps the number exact (common practice, no source). */
-export const LOT_QUANTITY_MAX = 10_000_000;
+export const LOT_QUANTITY_MESSAGE = `quantity must be a whole number of at least ${LOT_QUANTITY.min}`;
+/** The contract's bound (libs/api-types LOT_QUANTITY). */
+export const LOT_QUANTITY_MAX = LOT_QUANTITY.max;
 
 export function lotQuantityMessage(args: { value: unknown }): string {
   return typeof args.value === 'number' && args.value > LOT_QUANTITY_MAX
@@ -17,8 +18,8 @@ export function lotQuantityMessage(args: { value: unknown }): string {
 }
 
 export class SamplingPlanQueryDto {
-  @ApiProperty({ minimum: 1, maximum: LOT_QUANTITY_MAX, example: 500 })
+  @ApiProperty({ minimum: LOT_QUANTITY.min, maximum: LOT_QUANTITY_MAX, example: 500 })
   @Type(() => Number)
-  @IsWholeNumber(1, LOT_QUANTITY_MAX, { message: lotQuantityMessage })
+  @IsWholeNumber(LOT_QUANTITY.min, LOT_QUANTITY_MAX, { message: lotQuantityMessage })
   readonly quantity: number;
 }

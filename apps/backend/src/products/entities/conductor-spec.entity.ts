@@ -1,16 +1,14 @@
 import { Entity, Enum, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
 import { Product } from './product.entity';
+import {
+  CONDUCTOR_PURPOSES,
+  CLAIMED_MATERIALS,
+  type ConductorPurpose,
+  type ClaimedMaterial,
+} from '@gaugeproof/api-types';
 
-export const CONDUCTOR_PURPOSES = ['power', 'ground', 'remote', 'speaker', 'other'] as const;
-export type ConductorPurpose = (typeof CONDUCTOR_PURPOSES)[number];
-export const CLAIMED_MATERIALS = [
-  'copper',
-  'tinned_copper',
-  'cca10',
-  'cca15',
-  'aluminium',
-] as const;
-export type ClaimedMaterial = (typeof CLAIMED_MATERIALS)[number];
+// The values are the contract's (libs/api-types), used here and re-exported for this module.
+export { CONDUCTOR_PURPOSES, CLAIMED_MATERIALS, type ConductorPurpose, type ClaimedMaterial };
 
 @Entity({ tableName: 'conductor_specs' })
 export class ConductorSpec {

@@ -11,9 +11,10 @@ import {
 } from '@mikro-orm/core';
 import { Supplier } from '../../suppliers/entities/supplier.entity';
 import { ConductorSpec } from './conductor-spec.entity';
+import { PRODUCT_KINDS, type ProductKind } from '@gaugeproof/api-types';
 
-export const PRODUCT_KINDS = ['spool', 'kit'] as const;
-export type ProductKind = (typeof PRODUCT_KINDS)[number];
+// The values are the contract's (libs/api-types), used here and re-exported for this module.
+export { PRODUCT_KINDS, type ProductKind };
 
 @Entity({ tableName: 'products' })
 @Unique({ properties: ['supplier', 'sku'] })

@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
@@ -28,19 +29,21 @@ export class CreateReturnDto {
   @ApiPropertyOptional({ description: "The supplier's return authorization number" })
   @IsOptional()
   @IsString()
-  @MaxLength(64, { message: 'rmaNumber must be at most 64 characters' })
+  @MaxLength(TEXT_MAX.reference, {
+    message: `rmaNumber must be at most ${TEXT_MAX.reference} characters`,
+  })
   readonly rmaNumber?: string;
 
   @ApiPropertyOptional()
   @IsOptional()
   @IsString()
-  @MaxLength(4000, { message: 'notes must be at most 4000 characters' })
+  @MaxLength(TEXT_MAX.long, { message: `notes must be at most ${TEXT_MAX.long} characters` })
   readonly notes?: string;
 
   @ApiPropertyOptional({ description: 'Why the goods come back, written for the supplier' })
   @IsOptional()
   @IsString()
-  @MaxLength(4000, { message: 'supplierNote must be at most 4000 characters' })
+  @MaxLength(TEXT_MAX.long, { message: `supplierNote must be at most ${TEXT_MAX.long} characters` })
   readonly supplierNote?: string;
 
   @ApiPropertyOptional({ example: 'EUR', description: 'ISO 4217 code; CURRENCY by default' })

@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsEmail, IsOptional, IsString, MaxLength } from 'class-validator';
 
@@ -5,12 +6,12 @@ export class EmailReturnDto {
   @ApiPropertyOptional({ description: "Defaults to the supplier's contact e-mail" })
   @IsOptional()
   @IsEmail({}, { message: 'to must be an e-mail address' })
-  @MaxLength(254)
+  @MaxLength(TEXT_MAX.email)
   readonly to?: string;
 
   @ApiPropertyOptional({ description: 'A note above the standard text' })
   @IsOptional()
   @IsString()
-  @MaxLength(4000, { message: 'message must be at most 4000 characters' })
+  @MaxLength(TEXT_MAX.long, { message: `message must be at most ${TEXT_MAX.long} characters` })
   readonly message?: string;
 }

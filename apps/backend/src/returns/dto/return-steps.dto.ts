@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   IsInt,
@@ -24,7 +25,7 @@ export class CancelReturnDto extends ReturnStepDto {
   @ApiProperty({ description: 'Why the return is cancelled (kept in the audit trail)' })
   @IsString({ message: 'reason must be text' })
   @MinLength(5, { message: 'reason must be at least 5 characters' })
-  @MaxLength(2000, { message: 'reason must be at most 2000 characters' })
+  @MaxLength(TEXT_MAX.reason, { message: `reason must be at most ${TEXT_MAX.reason} characters` })
   readonly reason: string;
 }
 
@@ -32,13 +33,17 @@ export class ShipReturnDto extends ReturnStepDto {
   @ApiProperty({ example: 'Northline Freight' })
   @IsString({ message: 'carrier must be text' })
   @MinLength(2, { message: 'carrier must be at least 2 characters' })
-  @MaxLength(64, { message: 'carrier must be at most 64 characters' })
+  @MaxLength(TEXT_MAX.reference, {
+    message: `carrier must be at most ${TEXT_MAX.reference} characters`,
+  })
   readonly carrier: string;
 
   @ApiPropertyOptional()
   @IsOptional()
   @IsString({ message: 'trackingNumber must be text' })
-  @MaxLength(64, { message: 'trackingNumber must be at most 64 characters' })
+  @MaxLength(TEXT_MAX.reference, {
+    message: `trackingNumber must be at most ${TEXT_MAX.reference} characters`,
+  })
   readonly trackingNumber?: string;
 
   @ApiProperty({ example: '2026-12-03' })
@@ -56,7 +61,9 @@ export class AcknowledgeReturnDto extends ReturnStepDto {
   @ApiPropertyOptional({ description: "The supplier's RMA number, if it came with the answer" })
   @IsOptional()
   @IsString()
-  @MaxLength(64, { message: 'rmaNumber must be at most 64 characters' })
+  @MaxLength(TEXT_MAX.reference, {
+    message: `rmaNumber must be at most ${TEXT_MAX.reference} characters`,
+  })
   readonly rmaNumber?: string;
 }
 
@@ -64,7 +71,9 @@ export class CreditReturnDto extends ReturnStepDto {
   @ApiProperty({ example: 'CN-20931' })
   @IsString({ message: 'creditNoteNumber must be text' })
   @MinLength(1, { message: 'creditNoteNumber must not be empty' })
-  @MaxLength(64, { message: 'creditNoteNumber must be at most 64 characters' })
+  @MaxLength(TEXT_MAX.reference, {
+    message: `creditNoteNumber must be at most ${TEXT_MAX.reference} characters`,
+  })
   readonly creditNoteNumber: string;
 
   @ApiProperty({ description: "Amount credited, in the return's currency" })

@@ -12,22 +12,10 @@ import {
 import { Lot } from '../../lots/entities/lot.entity';
 import { Supplier } from '../../suppliers/entities/supplier.entity';
 import { User } from '../../users/entities/user.entity';
+import { RETURN_STATUSES, type ReturnStatus } from '@gaugeproof/api-types';
 
-/**
- * draft → emailed (the notice went to the supplier) → shipped (the goods left) →
- * acknowledged → credited → closed; a draft may be cancelled instead. A draft may also be
- * shipped before the notice is e-mailed.
- */
-export const RETURN_STATUSES = [
-  'draft',
-  'emailed',
-  'shipped',
-  'acknowledged',
-  'credited',
-  'closed',
-  'cancelled',
-] as const;
-export type ReturnStatus = (typeof RETURN_STATUSES)[number];
+// The values are the contract's (libs/api-types), used here and re-exported for this module.
+export { RETURN_STATUSES, type ReturnStatus };
 
 export interface ReturnCosts {
   inspectionHours?: number;

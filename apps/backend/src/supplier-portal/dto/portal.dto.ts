@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsEmail, IsOptional, IsString, Matches, MaxLength, MinLength } from 'class-validator';
 
@@ -11,19 +12,19 @@ export class SupplierResponseDto {
   @ApiProperty({ description: 'What was done with suspect stock, here and in transit' })
   @IsString({ message: 'containment must be text' })
   @MinLength(10, answer('containment').min)
-  @MaxLength(4000, answer('containment').max)
+  @MaxLength(TEXT_MAX.long, answer('containment').max)
   readonly containment: string;
 
   @ApiProperty()
   @IsString({ message: 'rootCause must be text' })
   @MinLength(10, answer('rootCause').min)
-  @MaxLength(4000, answer('rootCause').max)
+  @MaxLength(TEXT_MAX.long, answer('rootCause').max)
   readonly rootCause: string;
 
   @ApiProperty()
   @IsString({ message: 'correctiveAction must be text' })
   @MinLength(10, answer('correctiveAction').min)
-  @MaxLength(4000, answer('correctiveAction').max)
+  @MaxLength(TEXT_MAX.long, answer('correctiveAction').max)
   readonly correctiveAction: string;
 
   @ApiProperty({ example: '2026-12-31', description: 'When the fix is in place' })
@@ -36,12 +37,12 @@ export class SendCorrectiveActionDto {
   @ApiPropertyOptional({ description: "Defaults to the supplier's contact e-mail" })
   @IsOptional()
   @IsEmail({}, { message: 'to must be an e-mail address' })
-  @MaxLength(254)
+  @MaxLength(TEXT_MAX.email)
   readonly to?: string;
 
   @ApiPropertyOptional({ description: 'A note above the standard text' })
   @IsOptional()
   @IsString()
-  @MaxLength(4000, { message: 'message must be at most 4000 characters' })
+  @MaxLength(TEXT_MAX.long, { message: `message must be at most ${TEXT_MAX.long} characters` })
   readonly message?: string;
 }

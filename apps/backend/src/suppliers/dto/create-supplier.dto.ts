@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   IsEmail,
@@ -15,7 +16,9 @@ export class CreateSupplierDto {
   @ApiProperty({ example: 'Northbank Cable Works' })
   @IsString()
   @MinLength(1, { message: 'name is required' })
-  @MaxLength(160, { message: 'name must be at most 160 characters' })
+  @MaxLength(TEXT_MAX.supplierName, {
+    message: `name must be at most ${TEXT_MAX.supplierName} characters`,
+  })
   readonly name: string;
 
   @ApiProperty({ example: 'NBCW', description: 'Short unique code (letters, digits, - and _)' })
@@ -29,7 +32,7 @@ export class CreateSupplierDto {
   @IsOptional()
   @ValidateIf((_o, v) => v !== null)
   @IsEmail({}, { message: 'contactEmail must be an e-mail address' })
-  @MaxLength(254)
+  @MaxLength(TEXT_MAX.email)
   readonly contactEmail?: string | null;
 
   @ApiPropertyOptional({ enum: SUPPLIER_STATUSES, default: 'approved' })
@@ -41,6 +44,6 @@ export class CreateSupplierDto {
   @IsOptional()
   @ValidateIf((_o, v) => v !== null)
   @IsString()
-  @MaxLength(4000, { message: 'notes must be at most 4000 characters' })
+  @MaxLength(TEXT_MAX.long, { message: `notes must be at most ${TEXT_MAX.long} characters` })
   readonly notes?: string | null;
 }

@@ -1,7 +1,8 @@
 import { Entity, Enum, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
+import { SUPPLIER_STATUSES, type SupplierStatus } from '@gaugeproof/api-types';
 
-export const SUPPLIER_STATUSES = ['approved', 'probation', 'suspended'] as const;
-export type SupplierStatus = (typeof SUPPLIER_STATUSES)[number];
+// The values are the contract's (libs/api-types), used here and re-exported for this module.
+export { SUPPLIER_STATUSES, type SupplierStatus };
 
 @Entity({ tableName: 'suppliers' })
 export class Supplier {

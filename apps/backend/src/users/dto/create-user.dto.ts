@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { IsAcceptablePassword } from '../password-rules';
 import { ApiProperty } from '@nestjs/swagger';
 import { IsEmail, IsIn, IsString, MaxLength, MinLength } from 'class-validator';
@@ -6,13 +7,13 @@ import { ROLES, type Role } from '../../auth/roles';
 export class CreateUserDto {
   @ApiProperty()
   @IsEmail({}, { message: 'email must be an e-mail address' })
-  @MaxLength(254)
+  @MaxLength(TEXT_MAX.email)
   readonly email: string;
 
   @ApiProperty()
   @IsString()
   @MinLength(1, { message: 'name is required' })
-  @MaxLength(120)
+  @MaxLength(TEXT_MAX.name)
   readonly name: string;
 
   @ApiProperty({ enum: ROLES })

@@ -1,3 +1,4 @@
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { IsAcceptablePassword } from '../password-rules';
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { EditVersionDto } from '../../common/versioned-edit';
@@ -10,7 +11,7 @@ export class UpdateUserDto extends EditVersionDto {
   @IsOptional()
   @IsString()
   @MinLength(1, { message: 'name cannot be empty' })
-  @MaxLength(120)
+  @MaxLength(TEXT_MAX.name)
   readonly name?: string;
 
   @ApiPropertyOptional({ enum: ROLES })

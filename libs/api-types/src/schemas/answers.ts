@@ -1,0 +1,89 @@
+import { z } from 'zod';
+import { CAR_STATUSES, INSPECTION_SEVERITIES } from '../enums.js';
+import { sessionUser } from './catalog.js';
+import { calendarDate, id, instant } from './common.js';
+import { reading, switchingNotice } from './lots.js';
+import { correctiveAction, outboundMessage } from './records.js';
+
+/** GET /api/health */
+export const health = z.object({ status: z.string(), database: z.string(), time: instant });
+
+/** POST /api/auth/login: the session also travels as an httpOnly cookie. */
+export const loginAnswer = z.object({ accessToken: z.string(), user: sessionUser });
+
+/** POST /api/lots/:id/readings/import */
+export const importAnswer = z.object({ imported: z.number().int(), readings: z.array(reading) });
+
+/** POST /api/products/:id/inspection-state/restore */
+export const restoreAnswer = z.object({
+  productId: id,
+  severity: z.enum(INSPECTION_SEVERITIES),
+  reason: z.string().nullable(),
+  switching: switchingNotice,
+});
+
+/** PATCH /api/corrective-actions/:id with `send`: the request and what became of its e-mail. */
+export const correctiveActionUpdate = correctiveAction.extend({
+  mail: z
+    .object({ status: z.string(), to: z.string().optional(), error: z.string().optional() })
+    .optional(),
+});
+
+/** POST /api/corrective-actions/:id/send */
+export const supplierLinkSent = z.object({
+  message: outboundMessage,
+  link: z.object({ id, expiresAt: instant }),
+});
+
+/** POST /api/corrective-actions/:id/revoke-links */
+export const linksRevoked = z.object({ revoked: z.number().int() });
+
+/** GET /api/corrective-actions/:id/attachments: what the supplier sent. */
+export const scarAttachment = z.object({
+  id,
+  filename: z.string(),
+  contentType: z.string(),
+  sizeBytes: z.number().int(),
+  addedBy: z.string().nullable(),
+  createdAt: instant,
+});
+
+/** A file as the supplier's page lists it. */
+export const portalAttachment = z.object({
+  filename: z.string(),
+  contentType: z.string(),
+  sizeBytes: z.number().int(),
+  addedAt: instant,
+});
+
+/** GET /api/supplier-portal/:token: one request as its supplier sees it, nothing more. */
+export const portalView = z.object({
+  number: z.string(),
+  status: z.enum(CAR_STATUSES),
+  supplier: z.object({ name: z.string() }),
+  problem: z.string(),
+  dueOn: calendarDate,
+  lots: z.array(
+    z.object({
+      poNumber: z.string(),
+      packingSlip: z.string().nullable(),
+      supplierLotCode: z.string().nullable(),
+      receivedOn: calendarDate,
+      quantity: z.number(),
+      unit: z.string(),
+    }),
+  ),
+  reopenComment: z.string().nullable(),
+  answer: z.object({
+    containment: z.string().nullable(),
+    rootCause: z.string().nullable(),
+    correctiveAction: z.string().nullable(),
+    promisedOn: calendarDate.nullable(),
+    respondedAt: instant.nullable(),
+  }),
+  canAnswer: z.boolean(),
+  attachments: z.array(portalAttachment),
+  evidencePack: z.object({ number: z.string() }).nullable(),
+  linkExpiresAt: instant,
+});
+export type PortalView = z.infer<typeof portalView>;

@@ -1,0 +1,59 @@
+import { z } from 'zod';
+import { PLAN_SEVERITIES, SUPPLIER_STATUSES } from '../enums.js';
+
+/** An instant as JSON carries it: ISO 8601 in UTC (`Date.toJSON`). */
+export const instant = z.iso.datetime();
+/** A calendar date `YYYY-MM-DD`. */
+export const calendarDate = z.iso.date();
+export const id = z.number().int().min(1);
+
+/** One page of a list (docs/api-conventions.md, paging). */
+export function pageOf<T extends z.ZodType>(item: T) {
+  return z.object({
+    items: z.array(item),
+    total: z.number().int().nonnegative(),
+    page: z.number().int().min(1),
+    pageSize: z.number().int().min(1),
+  });
+}
+export interface Page<T> {
+  items: T[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export const personRef = z.object({ id, name: z.string() });
+export type PersonRef = z.infer<typeof personRef>;
+
+export const supplierRef = z.object({
+  id,
+  name: z.string(),
+  code: z.string(),
+  status: z.enum(SUPPLIER_STATUSES),
+});
+export type SupplierRef = z.infer<typeof supplierRef>;
+
+/** The ISO 2859-1 plan stored with a lot, so later policy changes never rewrite history. */
+export const samplingPlan = z.object({
+  severity: z.enum(PLAN_SEVERITIES),
+  level: z.string(),
+  aql: z.string(),
+  codeLetter: z.string(),
+  sampleSize: z.number().int(),
+  accept: z.number().int(),
+  reject: z.number().int(),
+  inspectAll: z.boolean(),
+});
+export type SamplingPlan = z.infer<typeof samplingPlan>;
+
+/** Every error body (docs/api-conventions.md, errors). */
+export const errorBody = z.object({
+  statusCode: z.number().int(),
+  error: z.string(),
+  message: z.union([z.string(), z.array(z.string())]),
+  errors: z.array(z.object({ field: z.string().nullable(), message: z.string() })),
+  path: z.string(),
+  requestId: z.string(),
+});
+export type ErrorBody = z.infer<typeof errorBody>;
