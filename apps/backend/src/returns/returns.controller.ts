@@ -189,6 +189,7 @@ export class ReturnsController {
 
   /** Withdraws the supplier's links to the notice's page (e.g. sent to a wrong address). */
   @Post(':id/revoke-links')
+  @Answers('LinksRevoked')
   @HttpCode(200)
   revokeLinks(@Param('id', IdPipe) id: number, @CurrentUser() actor: RequestUser) {
     return this.mail.revokeLinks(id, actor);

@@ -46,7 +46,7 @@ export class SupplierPortalController {
   }
 
   @Post('response')
-  @Answers('PortalView')
+  @Answers('PortalScarView')
   @Public()
   @HttpCode(200)
   respond(@Param('token') token: string, @Body() dto: SupplierResponseDto) {
@@ -86,6 +86,7 @@ export class SupplierPortalController {
 
   /** A photo of a return notice's lots, by its place on the page (1, 2, …). */
   @Get('photos/:n')
+  @Answers.file('image/jpeg')
   @Public()
   @ApiQuery({ name: 'size', required: false, enum: ['original', 'thumbnail'] })
   @ApiProduces('image/jpeg', 'image/png', 'image/webp')

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { CAR_STATUSES, INSPECTION_SEVERITIES } from '../enums.js';
+import { CAR_STATUSES, INSPECTION_SEVERITIES, RETURN_STATUSES } from '../enums.js';
 import { sessionUser } from './catalog.js';
 import { calendarDate, id, instant } from './common.js';
 import { reading, switchingNotice } from './lots.js';
@@ -56,23 +56,24 @@ export const portalAttachment = z.object({
   addedAt: instant,
 });
 
-/** GET /api/supplier-portal/:token: one request as its supplier sees it, nothing more. */
-export const portalView = z.object({
+const portalLot = z.object({
+  poNumber: z.string(),
+  packingSlip: z.string().nullable(),
+  supplierLotCode: z.string().nullable(),
+  receivedOn: calendarDate,
+  quantity: z.number(),
+  unit: z.string(),
+});
+
+/** The supplier's page of one corrective action request, nothing more. */
+export const portalScarView = z.object({
+  kind: z.literal('corrective_action'),
   number: z.string(),
   status: z.enum(CAR_STATUSES),
   supplier: z.object({ name: z.string() }),
   problem: z.string(),
   dueOn: calendarDate,
-  lots: z.array(
-    z.object({
-      poNumber: z.string(),
-      packingSlip: z.string().nullable(),
-      supplierLotCode: z.string().nullable(),
-      receivedOn: calendarDate,
-      quantity: z.number(),
-      unit: z.string(),
-    }),
-  ),
+  lots: z.array(portalLot),
   reopenComment: z.string().nullable(),
   answer: z.object({
     containment: z.string().nullable(),
@@ -86,4 +87,33 @@ export const portalView = z.object({
   evidencePack: z.object({ number: z.string() }).nullable(),
   linkExpiresAt: instant,
 });
+export type PortalScarView = z.infer<typeof portalScarView>;
+
+/** The supplier's page of one return notice: its lots, note, chargeback and photos by place. */
+export const portalReturnView = z.object({
+  kind: z.literal('return'),
+  number: z.string(),
+  status: z.enum(RETURN_STATUSES),
+  supplier: z.object({ name: z.string() }),
+  note: z.string().nullable(),
+  rmaNumber: z.string().nullable(),
+  chargeback: z.object({ amount: z.number(), currency: z.string() }),
+  emailedOn: calendarDate.nullable(),
+  lots: z.array(portalLot),
+  photos: z.array(
+    z.object({
+      n: z.number().int(),
+      poNumber: z.string(),
+      width: z.number().int(),
+      height: z.number().int(),
+      takenOn: calendarDate,
+    }),
+  ),
+  evidencePack: z.object({ number: z.string() }),
+  linkExpiresAt: instant,
+});
+export type PortalReturnView = z.infer<typeof portalReturnView>;
+
+/** GET /api/supplier-portal/:token: the one request or return notice the link is for. */
+export const portalView = z.discriminatedUnion('kind', [portalScarView, portalReturnView]);
 export type PortalView = z.infer<typeof portalView>;

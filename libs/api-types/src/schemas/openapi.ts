@@ -48,6 +48,7 @@ export const RESPONSE_SCHEMAS = {
   OutboundMessage: records.outboundMessage,
   OutboundMessagePage: pageOf(records.outboundMessage),
   PortalView: answers.portalView,
+  PortalScarView: answers.portalScarView,
   PortalAttachment: answers.portalAttachment,
   ScorecardList: scorecards.scorecardList,
   SupplierScorecard: scorecards.supplierScorecard,
