@@ -72,6 +72,21 @@ export type Recommendation = (typeof RECOMMENDATIONS)[number];
 export const DECISION_OUTCOMES = ['accept', 'accept_on_concession', 'reject'] as const;
 export type DecisionOutcome = (typeof DECISION_OUTCOMES)[number];
 
+/** A concession's review: one against a reject recommendation may wait for a second approver. */
+export const CONCESSION_STATUSES = ['pending', 'approved', 'refused'] as const;
+export type ConcessionStatus = (typeof CONCESSION_STATUSES)[number];
+
+/** E-mail notices a user may switch on (the profile page). */
+export const NOTICE_SWITCHES = [
+  'lotAwaitsDecision',
+  'lotRejectNumber',
+  'lotRejected',
+  'scarOverdue',
+  'scarAnswered',
+  'concessionAwaitsApproval',
+] as const;
+export type NoticeSwitch = (typeof NOTICE_SWITCHES)[number];
+
 export const NCR_STATUSES = ['open', 'closed'] as const;
 export type NcrStatus = (typeof NCR_STATUSES)[number];
 

@@ -8,7 +8,8 @@ import type { ResponseName } from '@gaugeproof/api-types';
 const ANSWERS = 'gaugeproof:answers';
 
 /** What a route answers: a named shape of the contract, a file of a type, or nothing (204). */
-export type Answer = { shape: ResponseName } | { file: string } | { empty: true };
+export type Answer =
+  { shape: ResponseName; alsoStatus?: number } | { file: string } | { empty: true };
 
 /**
  * Names a route's answer for the OpenAPI document: `@Answers('LotDetail')` (a response shape
@@ -16,7 +17,9 @@ export type Answer = { shape: ResponseName } | { file: string } | { empty: true 
  * one (test/routes.e2e-spec.ts), and the API tests check each JSON answer against it.
  */
 export const Answers = Object.assign(
-  (shape: ResponseName) => SetMetadata(ANSWERS, { shape } satisfies Answer),
+  /** `alsoStatus`: a second success status the route may answer with the same shape. */
+  (shape: ResponseName, alsoStatus?: number) =>
+    SetMetadata(ANSWERS, { shape, alsoStatus } satisfies Answer),
   {
     file: (contentType: string) => SetMetadata(ANSWERS, { file: contentType } satisfies Answer),
     empty: () => SetMetadata(ANSWERS, { empty: true } satisfies Answer),
@@ -46,12 +49,14 @@ function describeAnswers(app: INestApplication): void {
         const descriptor = Object.getOwnPropertyDescriptor(proto, key)!;
         const decorate = (d: MethodDecorator) => d(proto, key, descriptor);
         if ('shape' in answer) {
-          decorate(
-            ApiResponse({
-              status,
-              schema: { $ref: `#/components/schemas/${answer.shape}` },
-            }),
-          );
+          for (const code of [status, answer.alsoStatus ?? status]) {
+            decorate(
+              ApiResponse({
+                status: code,
+                schema: { $ref: `#/components/schemas/${answer.shape}` },
+              }),
+            );
+          }
         } else if ('file' in answer) {
           decorate(ApiProduces(answer.file));
           decorate(

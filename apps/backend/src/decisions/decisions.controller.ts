@@ -22,7 +22,7 @@ export class DecisionsController {
    * that waits for a second QA lead's or an admin's approval (nothing decided yet).
    */
   @Post('lots/:id/decisions')
-  @Answers('DecisionResult')
+  @Answers('DecisionResult', 202)
   async decide(
     @Param('id', IdPipe) id: number,
     @Body() dto: CreateDecisionDto,
@@ -35,6 +35,7 @@ export class DecisionsController {
   }
 
   @Get('lots/:id/concessions')
+  @Answers('ConcessionList')
   @Roles(...ALL_ROLES)
   concessions(@Param('id', IdPipe) id: number) {
     return this.decisions.concessionsOf(id);
@@ -51,6 +52,7 @@ export class DecisionsController {
 
   /** A second QA lead or an admin puts a pending concession in force (not its requester). */
   @Post('concessions/:id/approve')
+  @Answers('DecisionResult')
   @HttpCode(200)
   approve(
     @Param('id', IdPipe) id: number,
@@ -61,6 +63,7 @@ export class DecisionsController {
   }
 
   @Post('concessions/:id/refuse')
+  @Answers('Concession')
   @HttpCode(200)
   refuse(
     @Param('id', IdPipe) id: number,

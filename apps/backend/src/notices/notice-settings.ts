@@ -1,16 +1,9 @@
+import { NOTICE_SWITCHES, type NoticeSwitch } from '@gaugeproof/api-types';
 import type { Role } from '../auth/roles';
 import type { NoticeKind } from './entities/notice.entity';
 
 /** The switches of a user's notices, as stored and as the profile page sends them. */
-export const NOTICE_SWITCHES = [
-  'lotAwaitsDecision',
-  'lotRejectNumber',
-  'lotRejected',
-  'scarOverdue',
-  'scarAnswered',
-  'concessionAwaitsApproval',
-] as const;
-export type NoticeSwitch = (typeof NOTICE_SWITCHES)[number];
+export { NOTICE_SWITCHES, type NoticeSwitch };
 
 export type NoticeChoices = Record<NoticeSwitch, boolean> & { digest: boolean };
 

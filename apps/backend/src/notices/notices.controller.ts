@@ -1,3 +1,4 @@
+import { Answers } from '../common/answers';
 import { Body, Controller, Get, Patch } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { ALL_ROLES } from '../auth/roles';
@@ -14,11 +15,13 @@ export class NoticesController {
   constructor(private readonly notices: NoticesService) {}
 
   @Get()
+  @Answers('NoticeSettings')
   mine(@CurrentUser() actor: RequestUser) {
     return this.notices.mine(actor);
   }
 
   @Patch()
+  @Answers('NoticeSettings')
   update(@Body() dto: UpdateNoticeSettingsDto, @CurrentUser() actor: RequestUser) {
     return this.notices.update(actor, dto);
   }

@@ -69,6 +69,7 @@ export class ReturnsController {
 
   /** Rejected lots that are on no return yet, for purchasing's Today. */
   @Get('unreturned-lots')
+  @Answers('UnreturnedLots')
   unreturnedLots() {
     return this.returns.unreturnedLots();
   }

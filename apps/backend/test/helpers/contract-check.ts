@@ -30,7 +30,7 @@ export function contractCheck(app: INestApplication) {
     const doc = buildOpenApiDocument(app, openApiComponents());
     ajv = new Ajv({ allErrors: false, strict: false, verbose: true });
     addFormats(ajv);
-    ajv.addSchema({ components: doc.components }, 'doc');
+    ajv.addSchema({ components: jsonSchemaOf(doc.components) }, 'doc');
     routes = [];
     for (const [path, ops] of Object.entries(doc.paths)) {
       const pattern = new RegExp('^' + path.replace(/\{\w+\}/g, '[^/]+') + '$');
@@ -86,4 +86,18 @@ export function contractCheck(app: INestApplication) {
     next();
   };
   return { middleware, problems };
+}
+
+/**
+ * OpenAPI 3.0's `nullable: true` as JSON Schema: null joins the type (or, beside a $ref or
+ * a composition, an alternative of its own).
+ */
+function jsonSchemaOf(node: unknown): unknown {
+  if (Array.isArray(node)) return node.map(jsonSchemaOf);
+  if (typeof node !== 'object' || node === null) return node;
+  const { nullable, ...rest } = node as Record<string, unknown>;
+  const out = Object.fromEntries(Object.entries(rest).map(([k, v]) => [k, jsonSchemaOf(v)]));
+  if (nullable !== true) return out;
+  if (typeof out.type === 'string') return { ...out, type: [out.type, 'null'] };
+  return { anyOf: [out, { type: 'null' }] };
 }

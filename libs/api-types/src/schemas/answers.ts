@@ -1,5 +1,11 @@
 import { z } from 'zod';
-import { CAR_STATUSES, INSPECTION_SEVERITIES, RETURN_STATUSES } from '../enums.js';
+import {
+  CAR_STATUSES,
+  INSPECTION_SEVERITIES,
+  NOTICE_SWITCHES,
+  RETURN_STATUSES,
+  type NoticeSwitch,
+} from '../enums.js';
 import { sessionUser } from './catalog.js';
 import { calendarDate, id, instant } from './common.js';
 import { reading, switchingNotice } from './lots.js';
@@ -117,3 +123,33 @@ export type PortalReturnView = z.infer<typeof portalReturnView>;
 /** GET /api/supplier-portal/:token: the one request or return notice the link is for. */
 export const portalView = z.discriminatedUnion('kind', [portalScarView, portalReturnView]);
 export type PortalView = z.infer<typeof portalView>;
+
+/** GET /api/me/notices: the signed-in user's e-mail notices. */
+export const noticeSettings = z.object({
+  choices: z.object({
+    ...Object.fromEntries(NOTICE_SWITCHES.map((s) => [s, z.boolean()])),
+    digest: z.boolean(),
+  } as Record<NoticeSwitch | 'digest', z.ZodBoolean>),
+  offered: z.array(z.enum(NOTICE_SWITCHES)),
+  digestHourUtc: z.number().int(),
+});
+export type NoticeSettings = z.infer<typeof noticeSettings>;
+
+/** GET /api/returns/unreturned-lots: rejected lots on no open return, oldest reject first. */
+export const unreturnedLots = z.object({
+  items: z.array(
+    z.object({
+      id,
+      poNumber: z.string(),
+      supplierLotCode: z.string().nullable(),
+      quantity: z.number(),
+      unit: z.string(),
+      receivedAt: instant,
+      rejectedAt: instant.nullable(),
+      supplier: z.object({ id, name: z.string() }),
+      product: z.object({ id, sku: z.string() }),
+    }),
+  ),
+  more: z.boolean(),
+});
+export type UnreturnedLots = z.infer<typeof unreturnedLots>;

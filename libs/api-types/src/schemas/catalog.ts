@@ -58,6 +58,8 @@ export const product = z.object({
   inspectionLevel: z.string(),
   aql: z.string(),
   minAreaRatio: z.number(),
+  /** A concession against a reject recommendation waits for a second approver. */
+  concessionNeedsApproval: z.boolean(),
   active: z.boolean(),
   conductors: z.array(conductor),
   inspectionState,

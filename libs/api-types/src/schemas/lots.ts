@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import {
+  CONCESSION_STATUSES,
   DECISION_OUTCOMES,
   IDENTIFIED_MATERIALS,
   INSPECTION_SEVERITIES,
@@ -205,13 +206,41 @@ export const switchingNotice = z.object({
 });
 export type SwitchingNotice = z.infer<typeof switchingNotice>;
 
-/** POST /api/lots/:id/decisions */
+/** A concession: accepting a lot for a stated use, quantity and time. */
+export const concession = z.object({
+  id,
+  lotId: id,
+  status: z.enum(CONCESSION_STATUSES),
+  scope: z.string(),
+  quantity: z.number(),
+  unit: z.string(),
+  expiresOn: calendarDate,
+  expired: z.boolean(),
+  reason: z.string(),
+  recommendation: z.enum(RECOMMENDATIONS),
+  needsSecondApproval: z.boolean(),
+  requestedBy: personRef,
+  requestedAt: instant,
+  reviewedBy: personRef.nullable(),
+  reviewedAt: instant.nullable(),
+  reviewNote: z.string().nullable(),
+  decisionId: id.nullable(),
+  version: z.number().int(),
+});
+export type Concession = z.infer<typeof concession>;
+
+/**
+ * POST /api/lots/:id/decisions (201), and a concession's approval: the decision written.
+ * A concession that waits for a second approver answers 202 with `decision` null.
+ */
 export const decisionResult = z.object({
-  decision,
+  decision: decision.nullable(),
   lot: lotSummary,
   evaluation,
   ncrNumber: z.string().nullable(),
-  switching: switchingNotice,
+  switching: switchingNotice.nullable(),
+  pendingApproval: z.boolean(),
+  concession: concession.nullable(),
 });
 export type DecisionResult = z.infer<typeof decisionResult>;
 

@@ -1,3 +1,4 @@
+import { CONCESSION_STATUSES, type ConcessionStatus } from '@gaugeproof/api-types';
 import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
 import { Lot } from '../../lots/entities/lot.entity';
 import { User } from '../../users/entities/user.entity';
@@ -8,8 +9,7 @@ import { Decision } from './decision.entity';
  * wants one when the lot's recommendation is reject); `approved`: in force, with its
  * decision; `refused`: turned down, with a note (or withdrawn by its requester).
  */
-export const CONCESSION_STATUSES = ['pending', 'approved', 'refused'] as const;
-export type ConcessionStatus = (typeof CONCESSION_STATUSES)[number];
+export { CONCESSION_STATUSES, type ConcessionStatus };
 
 /**
  * The terms a lot is accepted on against its criteria (issue 14 §7): what the material may
