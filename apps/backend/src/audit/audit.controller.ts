@@ -1,6 +1,6 @@
 import { Answers } from '../common/answers';
 import { Controller, Get, Param, Query, StreamableFile } from '@nestjs/common';
-import { ApiProduces, ApiTags } from '@nestjs/swagger';
+import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
 import { attachmentName, CSV_CONTENT_TYPE, csvStream } from '../common/csv';
@@ -30,6 +30,7 @@ export class AuditController {
   }
 
   @Get('audit/facets')
+  @Answers('AuditFacets')
   @Roles('admin')
   facets() {
     return this.audit.facets();
@@ -37,8 +38,8 @@ export class AuditController {
 
   /** The same filters and sort as the list, every matching event; audited as audit.export. */
   @Get('audit/export.csv')
+  @Answers.file('text/csv')
   @Roles('admin')
-  @ApiProduces('text/csv')
   async exportCsv(@Query() q: ListAuditDto, @CurrentUser() actor: RequestUser) {
     const rows = await this.audit.exportRows(q, actor);
     return new StreamableFile(csvStream(AUDIT_CSV_COLUMNS, rows), {

@@ -23,6 +23,7 @@ export class InspectionController {
 
   /** Lots awaiting a decision that already reached their reject number (Today, QA lead). */
   @Get('inspection/reject-reached')
+  @Answers('RejectReached')
   @Roles('qa_lead', 'admin')
   rejectReached() {
     return lotsAtRejectNumber(this.em);

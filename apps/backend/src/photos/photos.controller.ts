@@ -54,6 +54,7 @@ export class PhotosController {
 
   @Post('photos/:id/void')
   @HttpCode(200)
+  @Answers('Photo')
   @Roles('clerk', 'qa_lead', 'admin')
   // A clerk only their own photo, before the lot is decided (PhotosService.void).
   voidPhoto(

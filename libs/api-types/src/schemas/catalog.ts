@@ -18,6 +18,8 @@ export const supplier = z.object({
   contactEmail: z.string().nullable(),
   status: z.enum(SUPPLIER_STATUSES),
   notes: z.string().nullable(),
+  /** The version an edit names; a stale one gets 409 (docs/api-conventions.md). */
+  version: z.number().int().min(1),
   createdAt: instant,
   updatedAt: instant,
 });
@@ -64,6 +66,8 @@ export const product = z.object({
   conductors: z.array(conductor),
   inspectionState,
   warnings: z.array(z.string()),
+  /** The version an edit names; a stale one gets 409 (docs/api-conventions.md). */
+  version: z.number().int().min(1),
   createdAt: instant,
   updatedAt: instant,
 });

@@ -168,6 +168,11 @@ export const photo = z.object({
   sizeBytes: z.number().int(),
   uploadedBy: personRef.nullable(),
   createdAt: instant,
+  /** Voided photos stay, struck with their reason; they are no evidence. */
+  voided: z.boolean(),
+  voidReason: z.string().nullable(),
+  voidedBy: personRef.nullable(),
+  voidedAt: instant.nullable(),
 });
 export type Photo = z.infer<typeof photo>;
 
@@ -252,3 +257,12 @@ export const samplingPlanAnswer = z.object({
   message: z.string().nullable(),
 });
 export type SamplingPlanAnswer = z.infer<typeof samplingPlanAnswer>;
+
+/** GET /api/inspection/reject-reached: lots awaiting a decision already at their reject number. */
+export const rejectReached = z.object({
+  items: z.array(
+    lotSummary.extend({ nonconformingUnits: z.number().int(), reject: z.number().int() }),
+  ),
+  total: z.number().int().nonnegative(),
+});
+export type RejectReached = z.infer<typeof rejectReached>;

@@ -28,6 +28,8 @@ export const instrument = z.object({
   active: z.boolean(),
   calibrationStatus: z.enum(CALIBRATION_STATUSES),
   daysToDue: z.number().int(),
+  /** The version an edit names; a stale one gets 409 (docs/api-conventions.md). */
+  version: z.number().int().min(1),
   createdAt: instant,
   updatedAt: instant,
 });
@@ -169,3 +171,11 @@ export const timelineEvent = z.object({
   after: z.record(z.string(), z.unknown()).nullable(),
 });
 export type TimelineEvent = z.infer<typeof timelineEvent>;
+
+/** GET /api/audit/facets: what the audit trail's filters offer. */
+export const auditFacets = z.object({
+  actions: z.array(z.string()),
+  entityTypes: z.array(z.string()),
+  people: z.array(z.object({ id, name: z.string(), email: z.string() })),
+});
+export type AuditFacets = z.infer<typeof auditFacets>;
