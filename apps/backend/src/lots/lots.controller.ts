@@ -27,6 +27,7 @@ export class LotsController {
 
   /** Receiving warns before saving: the lots already received under this PO and slip. */
   @Get('received-before')
+  @Answers('ReceivedBefore')
   @Roles('clerk', 'qa_lead', 'admin')
   receivedBefore(@Query() query: ReceivedBeforeQueryDto) {
     return this.lots.receivedBefore(query.poNumber, query.packingSlip);

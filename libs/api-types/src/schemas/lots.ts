@@ -266,3 +266,7 @@ export const rejectReached = z.object({
   total: z.number().int().nonnegative(),
 });
 export type RejectReached = z.infer<typeof rejectReached>;
+
+/** GET /api/lots/received-before: the lots already received under a PO and packing slip. */
+export const receivedBefore = z.object({ lots: z.array(lotSummary) });
+export type ReceivedBefore = z.infer<typeof receivedBefore>;

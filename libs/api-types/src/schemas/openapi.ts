@@ -27,6 +27,7 @@ export const RESPONSE_SCHEMAS = {
   LotSummary: lots.lotSummary,
   LotSummaryPage: pageOf(lots.lotSummary),
   RejectReached: lots.rejectReached,
+  ReceivedBefore: lots.receivedBefore,
   ReceivedLot: lots.receivedLot,
   LotDetail: lots.lotDetail,
   Sample: lots.sample,
