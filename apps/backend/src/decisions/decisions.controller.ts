@@ -46,6 +46,7 @@ export class DecisionsController {
    * out), oldest first: the QA lead's and admin's Today list.
    */
   @Get('concessions/awaiting-approval')
+  @Answers('ConcessionsAwaitingApproval')
   awaitingApproval(@CurrentUser() actor: RequestUser) {
     return this.decisions.awaitingApproval(actor);
   }

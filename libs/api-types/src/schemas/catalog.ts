@@ -80,6 +80,8 @@ export const user = z.object({
   name: z.string(),
   role: z.enum(ROLES),
   active: z.boolean(),
+  /** The version an edit names; a stale one gets 409 (docs/api-conventions.md). */
+  version: z.number().int().min(1),
   createdAt: instant,
 });
 export type User = z.infer<typeof user>;

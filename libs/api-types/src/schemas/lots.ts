@@ -270,3 +270,18 @@ export type RejectReached = z.infer<typeof rejectReached>;
 /** GET /api/lots/received-before: the lots already received under a PO and packing slip. */
 export const receivedBefore = z.object({ lots: z.array(lotSummary) });
 export type ReceivedBefore = z.infer<typeof receivedBefore>;
+
+/** GET /api/concessions/awaiting-approval: pending concessions the caller may approve. */
+export const concessionsAwaitingApproval = z.object({
+  items: z.array(
+    concession.extend({
+      lot: z.object({
+        id,
+        poNumber: z.string(),
+        supplier: z.object({ id, name: z.string() }),
+        product: z.object({ id, sku: z.string() }),
+      }),
+    }),
+  ),
+});
+export type ConcessionsAwaitingApproval = z.infer<typeof concessionsAwaitingApproval>;

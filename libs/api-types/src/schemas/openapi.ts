@@ -37,6 +37,7 @@ export const RESPONSE_SCHEMAS = {
   DecisionResult: lots.decisionResult,
   Concession: lots.concession,
   ConcessionList: z.array(lots.concession),
+  ConcessionsAwaitingApproval: lots.concessionsAwaitingApproval,
   NoticeSettings: answers.noticeSettings,
   UnreturnedLots: answers.unreturnedLots,
   RestoreAnswer: answers.restoreAnswer,
