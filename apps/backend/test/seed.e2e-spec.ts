@@ -27,13 +27,12 @@ import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
 
 let t: TestApp;
 let em: EntityManager;
-let seedMs: number;
 const sha = (b: Buffer) => createHash('sha256').update(b).digest('hex');
 
 beforeAll(async () => {
-  const started = Date.now();
+  // How long the demo takes to seed is a bench figure, not a test's (timings never go
+  // into tests); the limit here only ends a start that hangs.
   t = await startTestApp({ SEED_DEMO: 'true' });
-  seedMs = Date.now() - started;
   em = t.app.get(MikroORM).em.fork();
 }, 120_000);
 afterAll(async () => t?.close());
@@ -42,11 +41,6 @@ const get = async (who: string, path: string) =>
   t.http.get(path).set('Authorization', `Bearer ${await t.token(who)}`);
 
 describe('demo scenario seeded on an empty database', () => {
-  it('boots with the whole history within the time budget', () => {
-    console.info(`app start with the demo scenario: ${seedMs} ms`);
-    expect(seedMs).toBeLessThan(60_000);
-  });
-
   it('has lots in every status, each with a timeline', async () => {
     for (const status of LOT_STATUSES) {
       const res = await get(DEMO.qa, `/api/lots?status=${status}`);
