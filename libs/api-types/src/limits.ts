@@ -88,12 +88,20 @@ export const TEXT_MAX = {
   gauge: 32,
   /** A lot's unit word (spools, kits …). */
   unit: 16,
+  /** What a concession lets the material be used for. */
+  scope: 1000,
 } as const;
 
 /** Shortest reasons, in characters, so a reason says something (common practice, no source). */
 export const TEXT_MIN = {
+  /** Why a reading or a photo is voided. */
   voidReason: 10,
+  /** The problem a corrective action request states. */
   problem: 10,
+  /** A supplier's answer (containment, root cause, corrective action), a reopen comment, a verification note, a concession's scope and a refusal's note. */
+  answer: 10,
+  /** A decision's reason where one is needed: against the recommendation, or on concession (issue 5). */
+  decisionReason: 20,
   cancelReason: 5,
   carrier: 2,
 } as const;

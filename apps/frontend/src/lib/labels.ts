@@ -1,7 +1,17 @@
+import type {
+  ClaimedMaterial,
+  ConductorPurpose,
+  InspectionSeverity,
+  InstrumentKind,
+  LotStatus,
+} from '@gaugeproof/api-types';
+
 /**
- * The one wording of each of the API's enums (docs/api-conventions.md) on screen. A label is
- * written as it stands alone (a chip, a menu item, a column); `inSentence` gives the same
- * word inside a sentence ("Sold as copper"), so no screen keeps a second wording of its own.
+ * The one wording of each of the contract's enums (libs/api-types) on screen. Each map
+ * covers every value of its enum, so a value added to the contract fails the typecheck
+ * until it has its words here. A label is written as it stands alone (a chip, a menu item,
+ * a column); `inSentence` gives the same word inside a sentence ("Sold as copper"), so no
+ * screen keeps a second wording of its own.
  */
 
 export const lotStatusLabels = {
@@ -12,7 +22,7 @@ export const lotStatusLabels = {
   accepted_on_concession: 'Accepted on concession',
   rejected: 'Rejected',
   returned: 'Returned',
-} as const;
+} as const satisfies Record<LotStatus, string>;
 
 /** What the label promises; CCA classes as ASTM B566 names them (copper share by volume). */
 export const claimedMaterialLabels = {
@@ -21,7 +31,7 @@ export const claimedMaterialLabels = {
   cca10: 'CCA class 10A (10 % copper)',
   cca15: 'CCA class 15A (15 % copper)',
   aluminium: 'Aluminium',
-} as const;
+} as const satisfies Record<ClaimedMaterial, string>;
 
 export const conductorPurposeLabels = {
   power: 'Power',
@@ -29,7 +39,7 @@ export const conductorPurposeLabels = {
   remote: 'Remote turn-on',
   speaker: 'Speaker',
   other: 'Other',
-} as const;
+} as const satisfies Record<ConductorPurpose, string>;
 
 /** ISO 2859-1 switching states of a product's inspection. */
 export const inspectionSeverityLabels = {
@@ -37,7 +47,7 @@ export const inspectionSeverityLabels = {
   tightened: 'Tightened inspection',
   reduced: 'Reduced inspection',
   discontinued: 'Inspection discontinued',
-} as const;
+} as const satisfies Record<InspectionSeverity, string>;
 
 export const instrumentKindLabels = {
   balance: 'Balance',
@@ -46,7 +56,7 @@ export const instrumentKindLabels = {
   length_rule: 'Length rule',
   milliohm_meter: 'Milliohm meter',
   thermometer: 'Thermometer',
-} as const;
+} as const satisfies Record<InstrumentKind, string>;
 
 /** A label inside a sentence: its first letter small unless it opens an abbreviation (CCA). */
 export function inSentence(label: string): string {

@@ -1,4 +1,4 @@
-import { TEXT_MAX } from '@gaugeproof/api-types';
+import { TEXT_MAX, TEXT_MIN } from '@gaugeproof/api-types';
 import { ApiProperty } from '@nestjs/swagger';
 import {
   ArrayMaxSize,
@@ -28,7 +28,9 @@ export class CreateCorrectiveActionDto {
 
   @ApiProperty({ description: 'What was found, at least 10 characters' })
   @IsString({ message: 'problem must be text' })
-  @MinLength(10, { message: 'problem must be at least 10 characters' })
+  @MinLength(TEXT_MIN.problem, {
+    message: `problem must be at least ${TEXT_MIN.problem} characters`,
+  })
   @MaxLength(TEXT_MAX.long, { message: `problem must be at most ${TEXT_MAX.long} characters` })
   readonly problem: string;
 

@@ -1,4 +1,4 @@
-import { TEXT_MAX } from '@gaugeproof/api-types';
+import { TEXT_MAX, TEXT_MIN } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   IsIn,
@@ -29,7 +29,9 @@ export class UpdateCorrectiveActionDto {
   @ApiPropertyOptional()
   @IsOptional()
   @IsString()
-  @MinLength(10, { message: 'problem must be at least 10 characters' })
+  @MinLength(TEXT_MIN.problem, {
+    message: `problem must be at least ${TEXT_MIN.problem} characters`,
+  })
   @MaxLength(TEXT_MAX.long, { message: `problem must be at most ${TEXT_MAX.long} characters` })
   readonly problem?: string;
 
@@ -41,14 +43,18 @@ export class UpdateCorrectiveActionDto {
   @ApiPropertyOptional({ description: 'Reopen: what more the supplier must do (e-mailed to it)' })
   @IsOptional()
   @IsString()
-  @MinLength(10, { message: 'comment must be at least 10 characters' })
+  @MinLength(TEXT_MIN.answer, {
+    message: `comment must be at least ${TEXT_MIN.answer} characters`,
+  })
   @MaxLength(TEXT_MAX.long, { message: `comment must be at most ${TEXT_MAX.long} characters` })
   readonly comment?: string;
 
   @ApiPropertyOptional({ description: 'Verify: the evidence the fix works' })
   @IsOptional()
   @IsString()
-  @MinLength(10, { message: 'verificationNote must be at least 10 characters' })
+  @MinLength(TEXT_MIN.answer, {
+    message: `verificationNote must be at least ${TEXT_MIN.answer} characters`,
+  })
   @MaxLength(TEXT_MAX.long, {
     message: `verificationNote must be at most ${TEXT_MAX.long} characters`,
   })

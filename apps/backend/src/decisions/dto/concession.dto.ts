@@ -1,3 +1,4 @@
+import { TEXT_MAX, TEXT_MIN } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   IsInt,
@@ -14,10 +15,10 @@ import {
 export class ConcessionTermsDto {
   @ApiProperty({ description: 'What the material may be used for' })
   @IsString({ message: 'scope must be text' })
-  @MinLength(10, {
-    message: 'scope must say in at least 10 characters what the material may be used for',
+  @MinLength(TEXT_MIN.answer, {
+    message: `scope must say in at least ${TEXT_MIN.answer} characters what the material may be used for`,
   })
-  @MaxLength(1000, { message: 'scope must be at most 1000 characters' })
+  @MaxLength(TEXT_MAX.scope, { message: `scope must be at most ${TEXT_MAX.scope} characters` })
   readonly scope: string;
 
   @ApiProperty({ description: "How much of the lot, in the lot's unit" })
@@ -40,6 +41,6 @@ export class ReviewConcessionDto {
   @ApiPropertyOptional({ description: 'Why (required to refuse: at least 10 characters)' })
   @IsOptional()
   @IsString({ message: 'note must be text' })
-  @MaxLength(2000, { message: 'note must be at most 2000 characters' })
+  @MaxLength(TEXT_MAX.reason, { message: `note must be at most ${TEXT_MAX.reason} characters` })
   readonly note?: string;
 }

@@ -71,12 +71,16 @@ export class ReceivedBeforeQueryDto {
   @ApiProperty({ example: 'PO-2026-0412' })
   @IsString({ message: 'poNumber is required' })
   @MinLength(1, { message: 'poNumber is required' })
-  @MaxLength(64, { message: 'poNumber must be at most 64 characters' })
+  @MaxLength(TEXT_MAX.reference, {
+    message: `poNumber must be at most ${TEXT_MAX.reference} characters`,
+  })
   readonly poNumber: string;
 
   @ApiProperty({ example: 'PS-77' })
   @IsString({ message: 'packingSlip is required' })
   @MinLength(1, { message: 'packingSlip is required' })
-  @MaxLength(64, { message: 'packingSlip must be at most 64 characters' })
+  @MaxLength(TEXT_MAX.reference, {
+    message: `packingSlip must be at most ${TEXT_MAX.reference} characters`,
+  })
   readonly packingSlip: string;
 }

@@ -1,4 +1,4 @@
-import { TEXT_MAX } from '@gaugeproof/api-types';
+import { TEXT_MAX, TEXT_MIN } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   IsInt,
@@ -24,7 +24,9 @@ export class ReturnStepDto {
 export class CancelReturnDto extends ReturnStepDto {
   @ApiProperty({ description: 'Why the return is cancelled (kept in the audit trail)' })
   @IsString({ message: 'reason must be text' })
-  @MinLength(5, { message: 'reason must be at least 5 characters' })
+  @MinLength(TEXT_MIN.cancelReason, {
+    message: `reason must be at least ${TEXT_MIN.cancelReason} characters`,
+  })
   @MaxLength(TEXT_MAX.reason, { message: `reason must be at most ${TEXT_MAX.reason} characters` })
   readonly reason: string;
 }
@@ -32,7 +34,9 @@ export class CancelReturnDto extends ReturnStepDto {
 export class ShipReturnDto extends ReturnStepDto {
   @ApiProperty({ example: 'Northline Freight' })
   @IsString({ message: 'carrier must be text' })
-  @MinLength(2, { message: 'carrier must be at least 2 characters' })
+  @MinLength(TEXT_MIN.carrier, {
+    message: `carrier must be at least ${TEXT_MIN.carrier} characters`,
+  })
   @MaxLength(TEXT_MAX.reference, {
     message: `carrier must be at most ${TEXT_MAX.reference} characters`,
   })

@@ -1,29 +1,29 @@
-import { TEXT_MAX } from '@gaugeproof/api-types';
+import { TEXT_MAX, TEXT_MIN } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsEmail, IsOptional, IsString, Matches, MaxLength, MinLength } from 'class-validator';
 
 const answer = (field: string) => ({
-  min: { message: `${field} must be at least 10 characters` },
-  max: { message: `${field} must be at most 4000 characters` },
+  min: { message: `${field} must be at least ${TEXT_MIN.answer} characters` },
+  max: { message: `${field} must be at most ${TEXT_MAX.long} characters` },
 });
 
 /** The supplier's answer, through its link. */
 export class SupplierResponseDto {
   @ApiProperty({ description: 'What was done with suspect stock, here and in transit' })
   @IsString({ message: 'containment must be text' })
-  @MinLength(10, answer('containment').min)
+  @MinLength(TEXT_MIN.answer, answer('containment').min)
   @MaxLength(TEXT_MAX.long, answer('containment').max)
   readonly containment: string;
 
   @ApiProperty()
   @IsString({ message: 'rootCause must be text' })
-  @MinLength(10, answer('rootCause').min)
+  @MinLength(TEXT_MIN.answer, answer('rootCause').min)
   @MaxLength(TEXT_MAX.long, answer('rootCause').max)
   readonly rootCause: string;
 
   @ApiProperty()
   @IsString({ message: 'correctiveAction must be text' })
-  @MinLength(10, answer('correctiveAction').min)
+  @MinLength(TEXT_MIN.answer, answer('correctiveAction').min)
   @MaxLength(TEXT_MAX.long, answer('correctiveAction').max)
   readonly correctiveAction: string;
 

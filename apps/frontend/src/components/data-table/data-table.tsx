@@ -28,6 +28,7 @@ import {
 } from '@tanstack/react-table';
 import { useMemo, type ReactNode } from 'react';
 import { PAGE_SIZES, type ListSort } from '@/components/data-table/use-list-params';
+import type { Page } from '@gaugeproof/api-types';
 
 /** Paging and sorting happen on the server; the table only renders and reports. */
 export const dataTableFeatures = tableFeatures({ rowSortingFeature, rowPaginationFeature });
@@ -43,16 +44,12 @@ export type DataTableColumns<T extends RowData> = ReturnType<
   ColumnHelper<DataTableFeatures, T>['columns']
 >;
 
-export interface Page<T> {
-  items: T[];
-  total: number;
-}
-
 export interface DataTableProps<T extends RowData> {
   /** Accessible name of the table ("Suppliers"). */
   label: string;
   columns: DataTableColumns<T>;
-  data: Page<T> | undefined;
+  /** One page of a list answer (its page and pageSize are the list state's). */
+  data: Pick<Page<T>, 'items' | 'total'> | undefined;
   /** True while a request for this view is in flight. */
   loading: boolean;
   error: unknown;

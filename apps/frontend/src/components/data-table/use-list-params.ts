@@ -1,7 +1,8 @@
+import { type SortDirection } from '@gaugeproof/api-types';
 import { useCallback, useMemo } from 'react';
 import { useSearchParams } from 'react-router';
 
-export type SortDirection = 'asc' | 'desc';
+export { type SortDirection };
 export interface ListSort {
   field: string;
   direction: SortDirection;

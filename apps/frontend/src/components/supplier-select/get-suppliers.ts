@@ -1,5 +1,5 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import type { Page } from '@/components/data-table/data-table';
+import type { Page } from '@gaugeproof/api-types';
 import { api } from '@/lib/api-client';
 import { queryKeys } from '@/lib/query-keys';
 

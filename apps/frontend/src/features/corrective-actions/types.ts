@@ -1,6 +1,6 @@
+import { CAR_STATUSES, type CorrectiveActionStatus } from '@gaugeproof/api-types';
 /** Supplier corrective action request (SCAR), docs/api-conventions.md CorrectiveAction. */
-export const CAR_STATUSES = ['open', 'responded', 'verified', 'reopened', 'closed'] as const;
-export type CorrectiveActionStatus = (typeof CAR_STATUSES)[number];
+export { CAR_STATUSES, type CorrectiveActionStatus };
 
 export interface CorrectiveAction {
   id: number;
@@ -34,13 +34,6 @@ export interface CorrectiveAction {
   createdBy: { id: number; name: string };
   createdAt: string;
   updatedAt: string;
-}
-
-export interface Page<T> {
-  items: T[];
-  total: number;
-  page: number;
-  pageSize: number;
 }
 
 export const carStatusLabels: Record<CorrectiveActionStatus, string> = {

@@ -1,7 +1,10 @@
+import {
+  type DecisionOutcome,
+  type InspectionSeverity,
+  type Recommendation,
+} from '@gaugeproof/api-types';
 /** Shapes of docs/api-conventions.md the decision panel works with. */
-export type DecisionOutcome = 'accept' | 'accept_on_concession' | 'reject';
-export type Recommendation = 'accept' | 'reject' | 'incomplete';
-export type InspectionSeverity = 'normal' | 'tightened' | 'reduced' | 'discontinued';
+export { type DecisionOutcome, type InspectionSeverity, type Recommendation };
 
 export interface Decision {
   id: number;

@@ -1,12 +1,23 @@
+import {
+  type ClaimedMaterial,
+  type IdentifiedMaterial,
+  type InstrumentKind,
+  type ReadingMethod,
+  type ResolutionUnit,
+  type SampleVerdict,
+  type Verdict as ReadingVerdict,
+  type LotStatus,
+} from '@gaugeproof/api-types';
 /** Shapes of docs/api-conventions.md the Lot page works with. */
-export type ReadingMethod = 'mass' | 'strands' | 'resistance' | 'diameter';
-export type ReadingVerdict = 'conforms' | 'nonconforming' | 'inconclusive';
-export type SampleVerdict = ReadingVerdict | 'untested';
-export type ClaimedMaterial = 'copper' | 'tinned_copper' | 'cca10' | 'cca15' | 'aluminium';
-export type IdentifiedMaterial = 'copper' | 'cca' | 'aluminium' | 'inconsistent' | 'unknown';
-export type InstrumentKind =
-  'balance' | 'micrometer' | 'caliper' | 'length_rule' | 'milliohm_meter' | 'thermometer';
-export type ResolutionUnit = 'g' | 'mm' | 'ohm' | 'mohm' | 'degC';
+export {
+  type ClaimedMaterial,
+  type IdentifiedMaterial,
+  type InstrumentKind,
+  type ReadingMethod,
+  type ResolutionUnit,
+  type SampleVerdict,
+  type ReadingVerdict,
+};
 
 export interface PersonRef {
   id: number;
@@ -141,14 +152,7 @@ export interface Photo {
   voidedAt: string | null;
 }
 
-export type LotStatus =
-  | 'on_hold'
-  | 'inspecting'
-  | 'awaiting_decision'
-  | 'accepted'
-  | 'accepted_on_concession'
-  | 'rejected'
-  | 'returned';
+export { type LotStatus };
 
 export interface LotDetail {
   id: number;

@@ -1,17 +1,18 @@
-export const INSTRUMENT_KINDS = [
-  'balance',
-  'micrometer',
-  'caliper',
-  'length_rule',
-  'milliohm_meter',
-  'thermometer',
-] as const;
-export type InstrumentKind = (typeof INSTRUMENT_KINDS)[number];
-
-export const RESOLUTION_UNITS = ['g', 'mm', 'ohm', 'mohm', 'degC'] as const;
-export type ResolutionUnit = (typeof RESOLUTION_UNITS)[number];
-
-export type CalibrationStatus = 'ok' | 'due_soon' | 'overdue';
+import {
+  INSTRUMENT_KINDS,
+  RESOLUTION_UNITS,
+  type CalibrationStatus,
+  type InstrumentKind,
+  type ResolutionUnit,
+} from '@gaugeproof/api-types';
+// The enums are the contract's (libs/api-types).
+export {
+  INSTRUMENT_KINDS,
+  RESOLUTION_UNITS,
+  type CalibrationStatus,
+  type InstrumentKind,
+  type ResolutionUnit,
+};
 
 export interface Instrument {
   id: number;

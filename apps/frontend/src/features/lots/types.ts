@@ -1,16 +1,13 @@
-export const LOT_STATUSES = [
-  'on_hold',
-  'inspecting',
-  'awaiting_decision',
-  'accepted',
-  'accepted_on_concession',
-  'rejected',
-  'returned',
-] as const;
-export type LotStatus = (typeof LOT_STATUSES)[number];
-
-export type SupplierStatus = 'approved' | 'probation' | 'suspended';
-export type PlanSeverity = 'normal' | 'tightened' | 'reduced';
+import {
+  LOT_STATUSES,
+  type LotStatus,
+  type PlanSeverity,
+  type SupplierStatus,
+  type ClaimedMaterial,
+  type ConductorPurpose,
+  type InspectionSeverity,
+} from '@gaugeproof/api-types';
+export { LOT_STATUSES, type LotStatus, type PlanSeverity, type SupplierStatus };
 
 /** The plan stored with the lot (docs/api-conventions.md SamplingPlan). */
 export interface SamplingPlan {
@@ -53,15 +50,7 @@ export interface LotSummary {
   version: number;
 }
 
-export interface Page<T> {
-  items: T[];
-  total: number;
-  page: number;
-  pageSize: number;
-}
-
-export type ConductorPurpose = 'power' | 'ground' | 'remote' | 'speaker' | 'other';
-export type ClaimedMaterial = 'copper' | 'tinned_copper' | 'cca10' | 'cca15' | 'aluminium';
+export { type ClaimedMaterial, type ConductorPurpose };
 
 export interface ConductorOption {
   id: number;
@@ -73,7 +62,7 @@ export interface ConductorOption {
   claimedStrands: number | null;
 }
 
-export type InspectionSeverity = 'normal' | 'tightened' | 'reduced' | 'discontinued';
+export { type InspectionSeverity };
 
 /** What the receiving form needs of a product (docs/api-conventions.md Product). */
 export interface ProductOption {

@@ -1,5 +1,6 @@
+import { type MessageStatus } from '@gaugeproof/api-types';
 /** OutboundMessage as GET /api/messages shows it. */
-export type MessageStatus = 'queued' | 'sent' | 'failed' | 'logged';
+export { type MessageStatus };
 export const MESSAGE_STATUSES: readonly MessageStatus[] = ['queued', 'sent', 'failed', 'logged'];
 
 export interface OutboundMessage {
@@ -22,11 +23,4 @@ export interface OutboundMessage {
   sentById: number | null;
   createdAt: string;
   sentAt: string | null;
-}
-
-export interface Page<T> {
-  items: T[];
-  total: number;
-  page: number;
-  pageSize: number;
 }

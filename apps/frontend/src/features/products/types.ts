@@ -1,19 +1,22 @@
-export const PRODUCT_KINDS = ['spool', 'kit'] as const;
-export type ProductKind = (typeof PRODUCT_KINDS)[number];
-
-export const CONDUCTOR_PURPOSES = ['power', 'ground', 'remote', 'speaker', 'other'] as const;
-export type ConductorPurpose = (typeof CONDUCTOR_PURPOSES)[number];
-
-export const CLAIMED_MATERIALS = [
-  'copper',
-  'tinned_copper',
-  'cca10',
-  'cca15',
-  'aluminium',
-] as const;
-export type ClaimedMaterial = (typeof CLAIMED_MATERIALS)[number];
-
-export type InspectionSeverity = 'normal' | 'tightened' | 'reduced' | 'discontinued';
+import {
+  CLAIMED_MATERIALS,
+  CONDUCTOR_PURPOSES,
+  PRODUCT_KINDS,
+  type ClaimedMaterial,
+  type ConductorPurpose,
+  type InspectionSeverity,
+  type ProductKind,
+} from '@gaugeproof/api-types';
+// The enums are the contract's (libs/api-types).
+export {
+  CLAIMED_MATERIALS,
+  CONDUCTOR_PURPOSES,
+  PRODUCT_KINDS,
+  type ClaimedMaterial,
+  type ConductorPurpose,
+  type InspectionSeverity,
+  type ProductKind,
+};
 
 export interface Conductor {
   id: number;

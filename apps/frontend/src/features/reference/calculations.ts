@@ -14,6 +14,7 @@ import {
   type VoltageDrop,
 } from '@gaugeproof/standards';
 import { massToG, runLengthToMm, shortLengthToMm, type UnitSystem } from '@/lib/units';
+import { parseDecimal } from '@gaugeproof/api-types';
 
 /**
  * The calculators of the Reference screen: thin wrappers over @gaugeproof/standards that
@@ -28,12 +29,14 @@ export const NOMINAL_SYSTEM_V = 12.6;
 
 export type Calc<T> = { ok: true; value: T } | { ok: false; field: string; message: string };
 
-/** A typed number: '' is missing, anything else must be a finite number ('2,5' reads 2.5). */
+/**
+ * A typed number: '' is missing, anything else must be a plain decimal as the contract's
+ * parseDecimal reads it ('2,5' reads 2.5; '0x10' is no number), as in the reading form.
+ */
 export function readNumber(field: string, text: string): number {
-  const trimmed = text.trim().replace(',', '.');
-  if (trimmed === '') throw new StandardsInputError(field, 'Enter a value.');
-  const n = Number(trimmed);
-  if (!Number.isFinite(n)) throw new StandardsInputError(field, 'Enter a number.');
+  if (text.trim() === '') throw new StandardsInputError(field, 'Enter a value.');
+  const n = parseDecimal(text);
+  if (n === null) throw new StandardsInputError(field, 'Enter a number.');
   return n;
 }
 

@@ -1,14 +1,6 @@
+import { RETURN_STATUSES, type ReturnStatus } from '@gaugeproof/api-types';
 /** VendorReturn as GET /api/returns/:id shows it. */
-export const RETURN_STATUSES = [
-  'draft',
-  'emailed',
-  'shipped',
-  'acknowledged',
-  'credited',
-  'closed',
-  'cancelled',
-] as const;
-export type ReturnStatus = (typeof RETURN_STATUSES)[number];
+export { RETURN_STATUSES, type ReturnStatus };
 
 export interface ReturnCosts {
   inspectionHours?: number;
@@ -57,13 +49,6 @@ export interface VendorReturn {
   createdBy: { id: number; name: string };
   createdAt: string;
   updatedAt: string;
-}
-
-export interface Page<T> {
-  items: T[];
-  total: number;
-  page: number;
-  pageSize: number;
 }
 
 export const returnStatusLabels: Record<ReturnStatus, string> = {

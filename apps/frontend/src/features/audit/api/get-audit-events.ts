@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { toQueryString } from '@/components/data-table/use-list-params';
-import type { Page } from '@/components/data-table/data-table';
+import type { Page } from '@gaugeproof/api-types';
 import { api } from '@/lib/api-client';
 import type { TimelineEvent } from '@/features/audit/types';
 

@@ -4,15 +4,19 @@ import { api } from '@/lib/api-client';
 import { todayIso } from '@/lib/dates';
 import type { CorrectiveAction } from '@/features/corrective-actions/types';
 import { queryKeys } from '@/lib/query-keys';
+import { maxChars } from '@/lib/contract-rules';
+import { LOTS_PER_REQUEST, TEXT_MIN } from '@gaugeproof/api-types';
 
 export const createCorrectiveActionSchema = z.object({
   supplierId: z.number('Choose the supplier.').int().positive('Choose the supplier.'),
-  lotIds: z.array(z.number().int()).max(100, 'At most 100 lots.'),
+  lotIds: z
+    .array(z.number().int())
+    .max(LOTS_PER_REQUEST.max, `At most ${LOTS_PER_REQUEST.max} lots.`),
   problem: z
     .string()
     .trim()
-    .min(10, 'Describe the problem in at least 10 characters.')
-    .max(4000, 'At most 4000 characters.'),
+    .min(TEXT_MIN.problem, `Describe the problem in at least ${TEXT_MIN.problem} characters.`)
+    .max(...maxChars('long')),
   dueOn: z
     .string()
     .regex(/^\d{4}-\d{2}-\d{2}$/, 'Choose the date the response is due.')

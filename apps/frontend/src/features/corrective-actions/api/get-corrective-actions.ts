@@ -1,7 +1,8 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { toQueryString } from '@/components/data-table/use-list-params';
 import { api } from '@/lib/api-client';
-import type { CorrectiveAction, Page } from '@/features/corrective-actions/types';
+import type { Page } from '@gaugeproof/api-types';
+import type { CorrectiveAction } from '@/features/corrective-actions/types';
 import { queryKeys } from '@/lib/query-keys';
 
 /** GET /api/corrective-actions: page, pageSize, sort, status (comma list), supplierId, overdue=true. */

@@ -3,13 +3,15 @@ import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import type { CorrectiveAction, CorrectiveActionStatus } from '@/features/corrective-actions/types';
 import { queryKeys } from '@/lib/query-keys';
+import { maxChars } from '@/lib/contract-rules';
+import { TEXT_MIN } from '@gaugeproof/api-types';
 
 const answer = (what: string) =>
   z
     .string()
     .trim()
-    .min(10, `Give the supplier's ${what} in at least 10 characters.`)
-    .max(4000, 'At most 4000 characters.');
+    .min(TEXT_MIN.answer, `Give the supplier's ${what} in at least ${TEXT_MIN.answer} characters.`)
+    .max(...maxChars('long'));
 
 /** The supplier's response, recorded by purchasing. */
 export const responseSchema = z.object({

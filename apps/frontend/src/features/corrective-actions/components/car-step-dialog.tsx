@@ -13,6 +13,7 @@ import { useUpdateCorrectiveAction } from '@/features/corrective-actions/api/upd
 import type { CorrectiveAction } from '@/features/corrective-actions/types';
 import { errorMessage } from '@/lib/query-client';
 import { toasts } from '@/lib/toast-store';
+import { TEXT_MIN } from '@gaugeproof/api-types';
 
 const texts = {
   reopened: {
@@ -43,7 +44,7 @@ export function CarStepDialog({
   const [text, setText] = useState('');
   const [touched, setTouched] = useState(false);
   const t = texts[step];
-  const short = text.trim().length < 10;
+  const short = text.trim().length < TEXT_MIN.answer;
   const submit = () => {
     setTouched(true);
     if (short) return;
@@ -93,7 +94,7 @@ export function CarStepDialog({
           onChange={(e) => setText(e.target.value)}
           onBlur={() => setTouched(true)}
           error={touched && short}
-          helperText={touched && short ? 'Write at least 10 characters.' : ' '}
+          helperText={touched && short ? `Write at least ${TEXT_MIN.answer} characters.` : ' '}
         />
       </DialogContent>
       <DialogActions>

@@ -4,6 +4,7 @@ import { api } from '@/lib/api-client';
 import { reasonError } from '@/features/decisions/lib/reason-rule';
 import type { DecisionOutcome, DecisionResult, Recommendation } from '@/features/decisions/types';
 import { queryKeys } from '@/lib/query-keys';
+import { parseDecimal, TEXT_MIN } from '@gaugeproof/api-types';
 
 const OUTCOMES = ['accept', 'accept_on_concession', 'reject'] as const;
 
@@ -23,14 +24,14 @@ export const decisionSchema = (recommendation: Recommendation, lotQuantity = Inf
       const message = reasonError(value.outcome, recommendation, value.reason);
       if (message) ctx.addIssue({ code: 'custom', path: ['reason'], message });
       if (value.outcome !== 'accept_on_concession') return;
-      if (value.scope.trim().length < 10)
+      if (value.scope.trim().length < TEXT_MIN.answer)
         ctx.addIssue({
           code: 'custom',
           path: ['scope'],
-          message: 'Say in at least 10 characters what the material may be used for.',
+          message: `Say in at least ${TEXT_MIN.answer} characters what the material may be used for.`,
         });
-      const q = Number(value.quantity);
-      if (!value.quantity.trim() || !Number.isFinite(q) || q <= 0)
+      const q = parseDecimal(value.quantity);
+      if (q === null || q <= 0)
         ctx.addIssue({ code: 'custom', path: ['quantity'], message: 'Give a quantity above 0.' });
       else if (q > lotQuantity)
         ctx.addIssue({
@@ -62,7 +63,11 @@ export function decisionInputOf(v: DecisionFormValues): DecisionInput {
     ? {
         outcome: v.outcome,
         reason: v.reason,
-        concession: { scope: v.scope.trim(), quantity: Number(v.quantity), expiresOn: v.expiresOn },
+        concession: {
+          scope: v.scope.trim(),
+          quantity: parseDecimal(v.quantity) ?? Number.NaN,
+          expiresOn: v.expiresOn,
+        },
       }
     : { outcome: v.outcome, reason: v.reason };
 }

@@ -7,6 +7,7 @@ import {
 } from '@/features/decisions/api/concessions';
 import { isoDayOf } from '@/lib/dates';
 import { errorMessage } from '@/lib/query-client';
+import { TEXT_MIN } from '@gaugeproof/api-types';
 
 /** The terms in one line: what for, how much, until when. */
 export function concessionTerms(c: Concession): string {
@@ -19,7 +20,10 @@ function Pending({ c, meId }: { c: Concession; meId: number }) {
   const [refusing, setRefusing] = useState(false);
   const [note, setNote] = useState('');
   const mine = c.requestedBy.id === meId;
-  const noteError = note.trim().length < 10 ? 'Say in at least 10 characters why.' : null;
+  const noteError =
+    note.trim().length < TEXT_MIN.answer
+      ? `Say in at least ${TEXT_MIN.answer} characters why.`
+      : null;
   const error = approve.error ?? refuse.error;
   return (
     <Alert severity="warning" role="region" aria-label="Concession waiting for approval">

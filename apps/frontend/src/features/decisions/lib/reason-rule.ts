@@ -1,7 +1,8 @@
+import { TEXT_MAX, TEXT_MIN } from '@gaugeproof/api-types';
 import type { DecisionOutcome, Recommendation } from '@/features/decisions/types';
 
-/** Shortest reason for a decision against the recommendation or on concession (issue 5). */
-export const MIN_REASON_LENGTH = 20;
+/** Shortest reason for a decision against the recommendation or on concession (the contract's). */
+export const MIN_REASON_LENGTH = TEXT_MIN.decisionReason;
 
 /**
  * A concession, or an outcome other than the recommendation (an "incomplete" evaluation
@@ -29,7 +30,7 @@ export function reasonError(
   reason: string,
 ): string | null {
   const length = reason.trim().length;
-  if (length > 4000) return 'At most 4000 characters.';
+  if (length > TEXT_MAX.long) return `At most ${TEXT_MAX.long} characters.`;
   if (!reasonRequired(outcome, recommendation) || length >= MIN_REASON_LENGTH) return null;
   return `${reasonRequirement(outcome, recommendation)} of at least ${MIN_REASON_LENGTH} characters (${length} so far).`;
 }

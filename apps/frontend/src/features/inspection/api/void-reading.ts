@@ -3,15 +3,17 @@ import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import type { Reading } from '@/features/inspection/types';
 import { queryKeys } from '@/lib/query-keys';
+import { maxChars } from '@/lib/contract-rules';
+import { TEXT_MIN } from '@gaugeproof/api-types';
 
-export const VOID_REASON_MIN_LENGTH = 10;
+export const VOID_REASON_MIN_LENGTH = TEXT_MIN.voidReason;
 
 export const voidReadingSchema = z.object({
   reason: z
     .string()
     .trim()
     .min(VOID_REASON_MIN_LENGTH, `Say why, in at least ${VOID_REASON_MIN_LENGTH} characters.`)
-    .max(500, 'At most 500 characters.'),
+    .max(...maxChars('reason')),
 });
 export type VoidReadingInput = z.infer<typeof voidReadingSchema>;
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { parseDecimal, parseDecimalList, READING_LIMITS, type Range } from '@gaugeproof/api-types';
 import type {
   InputField,
   MethodDefinition,
@@ -14,29 +15,41 @@ export interface ReadingFormValues {
   instruments: Partial<Record<ResolutionSlot, string>>;
 }
 
-/** "76.1" or "76,1" → 76.1; anything that is not a plain decimal number → null. */
-export function parseDecimal(text: string | undefined): number | null {
-  const trimmed = (text ?? '').trim().replace(',', '.');
-  if (!/^-?(\d+\.?\d*|\.\d+)(e-?\d+)?$/i.test(trimmed)) return null;
-  const value = Number(trimmed);
-  return Number.isFinite(value) ? value : null;
-}
+/**
+ * Typed text → number, the rule of the contract (libs/api-types): the same in this form and
+ * in the server's CSV import ("76,1" is 76.1; "0x10" is no number in either).
+ */
+export { parseDecimal, parseDecimalList };
 
-/** "0.253 0.254; 0,255" → [0.253, 0.254, 0.255]; null when any part is not a number. */
-export function parseDecimalList(text: string | undefined): number[] | null {
-  const parts = (text ?? '')
-    .trim()
-    .split(/[\s;]+/)
-    .filter(Boolean);
-  if (parts.length === 0) return null;
-  const values = parts.map(parseDecimal);
-  return values.every((v) => v !== null) ? (values as number[]) : null;
-}
+/** The bounds of a reading's inputs, the server's (READING_LIMITS); above 0 where min is 0. */
+const FIELD_LIMITS: Readonly<Record<FieldName, Range | null>> = {
+  massG: null,
+  lengthMm: READING_LIMITS.lengthMm,
+  count: READING_LIMITS.count,
+  strandDiameterMm: READING_LIMITS.strandDiameterMm,
+  resistanceOhm: null,
+  temperatureC: READING_LIMITS.temperatureC,
+  diameterMm: READING_LIMITS.diameterMm,
+};
 
-/** Strand readings a sample may carry: 1 to 10 (issue 13; the server's limit). */
-const MAX_LIST_VALUES = 10;
+/** What is wrong with one typed value of a field, or null. */
+function outOfRange(field: InputField, value: number): string | null {
+  const range = FIELD_LIMITS[field.name];
+  if (field.allowNonPositive) {
+    // A temperature may be zero or below; its bounds are the contract's.
+    return range && (value < range.min || value > range.max)
+      ? `Enter a temperature from ${range.min} to ${range.max} ${field.unit}.`
+      : null;
+  }
+  if (value <= 0) return 'Must be greater than 0.';
+  if (range && value < range.min) return `Enter at least ${range.min} ${field.unit}.`;
+  if (range && value > range.max) return `Enter at most ${range.max} ${field.unit}.`;
+  return null;
+}
 
 function listSchema(field: InputField) {
+  const { max } = READING_LIMITS.strandDiameters;
+  const range = FIELD_LIMITS[field.name];
   return z.string().superRefine((text, ctx) => {
     const values = parseDecimalList(text);
     if (text.trim() === '') {
@@ -46,10 +59,12 @@ function listSchema(field: InputField) {
         code: 'custom',
         message: `Enter numbers in ${field.unit}, separated by spaces.`,
       });
-    } else if (values.length > MAX_LIST_VALUES) {
-      ctx.addIssue({ code: 'custom', message: `Enter at most ${MAX_LIST_VALUES} values.` });
+    } else if (values.length > max) {
+      ctx.addIssue({ code: 'custom', message: `Enter at most ${max} values.` });
     } else if (values.some((v) => v <= 0)) {
       ctx.addIssue({ code: 'custom', message: 'Each must be greater than 0.' });
+    } else if (range && values.some((v) => v > range.max)) {
+      ctx.addIssue({ code: 'custom', message: `Each must be at most ${range.max} ${field.unit}.` });
     }
   });
 }
@@ -66,14 +81,9 @@ function fieldSchema(field: InputField) {
       ctx.addIssue({ code: 'custom', message: `Enter a number, in ${field.unit}.` });
     } else if (field.integer && !Number.isInteger(value)) {
       ctx.addIssue({ code: 'custom', message: 'Enter a whole number.' });
-    } else if (field.allowNonPositive ? value < -40 || value > 150 : value <= 0) {
-      ctx.addIssue({
-        code: 'custom',
-        // -40…150 °C: a plausibility bound for a bench reading (common practice, no source).
-        message: field.allowNonPositive
-          ? 'Enter a temperature from -40 to 150 °C.'
-          : 'Must be greater than 0.',
-      });
+    } else {
+      const wrong = outOfRange(field, value);
+      if (wrong) ctx.addIssue({ code: 'custom', message: wrong });
     }
   });
 }

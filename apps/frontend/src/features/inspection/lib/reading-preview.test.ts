@@ -83,7 +83,7 @@ describe('reading form validation', () => {
     expect(resistance.safeParse(cold).success).toBe(true);
     const hot = { ...cold, values: { ...cold.values, temperatureC: '400' } };
     expect(resistance.safeParse(hot).error?.issues[0]?.message).toBe(
-      'Enter a temperature from -40 to 150 °C.',
+      'Enter a temperature from -40 to 100 °C.',
     );
   });
 

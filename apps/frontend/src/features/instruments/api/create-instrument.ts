@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
+import { ACCURACY_PERCENT, parseDecimal } from '@gaugeproof/api-types';
 import { api } from '@/lib/api-client';
 import {
   INSTRUMENT_KINDS,
@@ -8,32 +9,44 @@ import {
   type Instrument,
 } from '@/features/instruments/types';
 import { queryKeys } from '@/lib/query-keys';
+import { maxChars } from '@/lib/contract-rules';
 
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
 const realDate = (v: string) => DATE.test(v) && !Number.isNaN(Date.parse(`${v}T00:00:00Z`));
 
 /** An optional amount typed as text: empty, or a number from 0 (to `max`). */
+/** An optional amount typed as text: empty, or a number from 0 (to `max`), read as the contract's parseDecimal. */
 const optionalAmount = (message: string, max = Infinity) =>
   z.string().refine((v) => {
     if (v.trim() === '') return true;
-    const n = Number(v.replace(',', '.'));
-    return Number.isFinite(n) && n >= 0 && n <= max;
+    const n = parseDecimal(v);
+    return n !== null && n >= 0 && n <= max;
   }, message);
 
-const amountOrNull = (v: string): number | null =>
-  v.trim() === '' ? null : Number(v.replace(',', '.'));
+const amountOrNull = (v: string): number | null => (v.trim() === '' ? null : parseDecimal(v));
 
 export const instrumentSchema = z
   .object({
     kind: z.enum(INSTRUMENT_KINDS, 'Choose the kind of instrument.'),
-    name: z.string().trim().min(1, 'Enter a name, e.g. “Bench balance B-2”.').max(120),
-    serial: z.string().trim().min(1, 'Enter the serial number.').max(64),
+    name: z
+      .string()
+      .trim()
+      .min(1, 'Enter a name, e.g. “Bench balance B-2”.')
+      .max(...maxChars('name')),
+    serial: z
+      .string()
+      .trim()
+      .min(1, 'Enter the serial number.')
+      .max(...maxChars('reference')),
     resolution: z.string().refine((v) => {
-      const n = Number(v);
-      return v.trim() !== '' && Number.isFinite(n) && n > 0;
+      const n = parseDecimal(v);
+      return n !== null && n > 0;
     }, 'The smallest step it shows, a number greater than 0.'),
     resolutionUnit: z.enum(RESOLUTION_UNITS, 'Choose the unit.'),
-    accuracyPercentOfReading: optionalAmount('A percentage of 0 or more, e.g. 0.2.', 10),
+    accuracyPercentOfReading: optionalAmount(
+      `A percentage from ${ACCURACY_PERCENT.min} to ${ACCURACY_PERCENT.max}, e.g. 0.2.`,
+      ACCURACY_PERCENT.max,
+    ),
     accuracyAbsolute: optionalAmount('An amount of 0 or more, in the unit above.'),
     calibrationUncertainty: optionalAmount('The certificate’s U (k = 2), 0 or more.'),
     calibratedOn: z.string().refine(realDate, 'Enter the calibration date.'),
@@ -73,7 +86,7 @@ export const toInstrumentBody = (input: InstrumentInput): InstrumentBody => ({
   ...input,
   name: input.name.trim(),
   serial: input.serial.trim(),
-  resolution: Number(input.resolution),
+  resolution: parseDecimal(input.resolution) ?? Number.NaN,
   accuracyPercentOfReading: amountOrNull(input.accuracyPercentOfReading),
   accuracyAbsolute: amountOrNull(input.accuracyAbsolute),
   calibrationUncertainty: amountOrNull(input.calibrationUncertainty),

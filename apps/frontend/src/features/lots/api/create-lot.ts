@@ -1,20 +1,25 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
+import { LOT_QUANTITY } from '@gaugeproof/api-types';
 import { api } from '@/lib/api-client';
 import type { LotSummary } from '@/features/lots/types';
 import { queryKeys } from '@/lib/query-keys';
+import { maxChars } from '@/lib/contract-rules';
 
 /** Units a delivery is counted in, as packing slips write them. */
 export const LOT_UNITS = ['spools', 'reels', 'coils', 'kits', 'boxes', 'metres', 'feet'] as const;
 
-const optionalCode = z.string().trim().max(64, 'At most 64 characters.');
+const optionalCode = z
+  .string()
+  .trim()
+  .max(...maxChars('reference'));
 
-/** Whole number of at least 1 (a lot of one is inspected whole, ISO 2859-1), or null. */
+/** A whole number within the contract's LOT_QUANTITY (a lot of one is inspected whole), or null. */
 export function parseLotQuantity(text: string): number | null {
   const trimmed = text.trim();
   if (!/^\d+$/.test(trimmed)) return null;
   const value = Number(trimmed);
-  return Number.isSafeInteger(value) && value >= 1 ? value : null;
+  return value >= LOT_QUANTITY.min && value <= LOT_QUANTITY.max ? value : null;
 }
 
 export const createLotSchema = z.object({
@@ -24,14 +29,28 @@ export const createLotSchema = z.object({
     .string()
     .trim()
     .min(1, 'Enter the purchase order number.')
-    .max(64, 'At most 64 characters.'),
+    .max(...maxChars('reference')),
   packingSlip: optionalCode,
   supplierLotCode: optionalCode,
   quantity: z
     .string()
-    .refine((text) => parseLotQuantity(text) !== null, 'Enter a whole number of at least 1.'),
-  unit: z.string().trim().min(1, 'Choose the unit.').max(16, 'At most 16 characters.'),
-  notes: z.string().trim().max(2000, 'At most 2000 characters.'),
+    .refine((text) => {
+      const digits = text.trim();
+      return !/^\d+$/.test(digits) || Number(digits) <= LOT_QUANTITY.max;
+    }, `At most ${LOT_QUANTITY.max} units in one lot.`)
+    .refine(
+      (text) => parseLotQuantity(text) !== null,
+      `Enter a whole number of at least ${LOT_QUANTITY.min}.`,
+    ),
+  unit: z
+    .string()
+    .trim()
+    .min(1, 'Choose the unit.')
+    .max(...maxChars('unit')),
+  notes: z
+    .string()
+    .trim()
+    .max(...maxChars('long')),
 });
 export type CreateLotForm = z.infer<typeof createLotSchema>;
 

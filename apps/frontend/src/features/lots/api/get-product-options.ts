@@ -1,6 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { Page, ProductOption } from '@/features/lots/types';
+import type { Page } from '@gaugeproof/api-types';
+import type { ProductOption } from '@/features/lots/types';
 import { queryKeys } from '@/lib/query-keys';
 
 export const productOptionsQueryOptions = (supplierId: number, q: string) => {

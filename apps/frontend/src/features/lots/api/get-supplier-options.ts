@@ -1,6 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { Page, SupplierOption } from '@/features/lots/types';
+import type { Page } from '@gaugeproof/api-types';
+import type { SupplierOption } from '@/features/lots/types';
 import { queryKeys } from '@/lib/query-keys';
 
 // Same layered key as the supplier screens use for the same request, so their edits refresh it.

@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { MessageStatus, OutboundMessage, Page } from '@/features/messages/types';
+import type { Page } from '@gaugeproof/api-types';
+import type { MessageStatus, OutboundMessage } from '@/features/messages/types';
 import { queryKeys } from '@/lib/query-keys';
 
 export interface RelatedRecord {

@@ -2,14 +2,16 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import type { Photo } from '@/features/photos/types';
+import { maxChars } from '@/lib/contract-rules';
+import { TEXT_MIN } from '@gaugeproof/api-types';
 
-/** As the server (VoidPhotoDto): 10 to 2000 characters after trimming. */
+/** As the server (VoidPhotoDto): the contract's void reason, after trimming. */
 export const voidPhotoSchema = z.object({
   reason: z
     .string()
     .trim()
-    .min(10, 'Say why, in at least 10 characters.')
-    .max(2000, 'At most 2000 characters.'),
+    .min(TEXT_MIN.voidReason, `Say why, in at least ${TEXT_MIN.voidReason} characters.`)
+    .max(...maxChars('reason')),
 });
 export type VoidPhotoInput = z.infer<typeof voidPhotoSchema>;
 

@@ -1,4 +1,11 @@
 import { AQLS, INSPECTION_LEVELS } from '@gaugeproof/standards';
+import {
+  CLAIMED_STRANDS,
+  LENGTH_PER_UNIT_M,
+  MIN_AREA_RATIO,
+  parseDecimal,
+  PRODUCT_CONDUCTORS,
+} from '@gaugeproof/api-types';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
@@ -10,12 +17,18 @@ import {
   type Product,
 } from '@/features/products/types';
 import { queryKeys } from '@/lib/query-keys';
+import { maxChars } from '@/lib/contract-rules';
 
+/** Empty, or a number (typed as the contract's parseDecimal reads it) that passes `test`. */
 const optionalNumber = (test: (n: number) => boolean, message: string) =>
   z
     .string()
     .trim()
-    .refine((v) => v === '' || (v !== '' && test(Number(v))), message);
+    .refine((v) => {
+      if (v === '') return true;
+      const n = parseDecimal(v);
+      return n !== null && test(n);
+    }, message);
 
 export const conductorSchema = z.object({
   purpose: z.enum(CONDUCTOR_PURPOSES, 'Choose what the conductor is for.'),
@@ -25,7 +38,7 @@ export const conductorSchema = z.object({
   }),
   claimedMaterial: z.enum(CLAIMED_MATERIALS, 'Choose the material the label claims.'),
   claimedStrands: optionalNumber(
-    (n) => Number.isInteger(n) && n >= 1 && n <= 100_000,
+    (n) => Number.isInteger(n) && n >= CLAIMED_STRANDS.min && n <= CLAIMED_STRANDS.max,
     'A whole number of strands, or leave empty.',
   ),
 });
@@ -33,16 +46,20 @@ export const conductorSchema = z.object({
 /** The product form (create and edit). Numbers stay text until sent. */
 export const productSchema = z.object({
   supplierId: z.string().min(1, 'Choose the supplier.'),
-  sku: z.string().trim().min(1, 'Enter the SKU.').max(64, 'At most 64 characters.'),
+  sku: z
+    .string()
+    .trim()
+    .min(1, 'Enter the SKU.')
+    .max(...maxChars('reference')),
   kind: z.enum(PRODUCT_KINDS, 'Choose spool or kit.'),
   description: z
     .string()
     .trim()
     .min(1, 'Describe the product, e.g. “4 AWG power cable, red, 30 m spool”.')
-    .max(300, 'At most 300 characters.'),
+    .max(...maxChars('description')),
   lengthPerUnitM: optionalNumber(
-    (n) => Number.isFinite(n) && n > 0 && n <= 10_000,
-    'A length in metres greater than 0, or leave empty.',
+    (n) => n >= LENGTH_PER_UNIT_M.min && n <= LENGTH_PER_UNIT_M.max,
+    `A length in metres from ${LENGTH_PER_UNIT_M.min} to ${LENGTH_PER_UNIT_M.max}, or leave empty.`,
   ),
   inspectionLevel: z.enum(INSPECTION_LEVELS, 'Choose an inspection level.'),
   aql: z.enum(AQLS, 'Choose an AQL from the tables.'),
@@ -50,11 +67,17 @@ export const productSchema = z.object({
   minAreaRatioPercent: z
     .string()
     .trim()
-    .refine((v) => {
-      const n = Number(v);
-      return v !== '' && Number.isFinite(n) && n >= 50 && n <= 100;
-    }, 'A percentage from 50 to 100.'),
-  conductors: z.array(conductorSchema).min(1, 'Add at least one conductor.'),
+    .refine(
+      (v) => {
+        const n = parseDecimal(v);
+        return n !== null && n >= MIN_AREA_RATIO.min * 100 && n <= MIN_AREA_RATIO.max * 100;
+      },
+      `A percentage from ${MIN_AREA_RATIO.min * 100} to ${MIN_AREA_RATIO.max * 100}.`,
+    ),
+  conductors: z
+    .array(conductorSchema)
+    .min(PRODUCT_CONDUCTORS.min, 'Add at least one conductor.')
+    .max(PRODUCT_CONDUCTORS.max, `At most ${PRODUCT_CONDUCTORS.max} conductors.`),
 });
 export type ProductInput = z.infer<typeof productSchema>;
 export type ConductorInput = z.infer<typeof conductorSchema>;
@@ -101,17 +124,17 @@ export function toProductBody(input: ProductInput): ProductBody {
     sku: input.sku.trim(),
     kind: input.kind,
     description: input.description.trim(),
-    lengthPerUnitM: input.lengthPerUnitM === '' ? null : Number(input.lengthPerUnitM),
+    lengthPerUnitM: parseDecimal(input.lengthPerUnitM),
     inspectionLevel: input.inspectionLevel,
     aql: input.aql,
-    minAreaRatio: Number(input.minAreaRatioPercent) / 100,
+    minAreaRatio: (parseDecimal(input.minAreaRatioPercent) ?? Number.NaN) / 100,
     conductors: input.conductors.map((c) => {
       const preview = previewGauge(c.gauge);
       return {
         purpose: c.purpose,
         gauge: preview.ok ? preview.gauge.label : c.gauge.trim(),
         claimedMaterial: c.claimedMaterial,
-        claimedStrands: c.claimedStrands === '' ? null : Number(c.claimedStrands),
+        claimedStrands: parseDecimal(c.claimedStrands),
       };
     }),
   };

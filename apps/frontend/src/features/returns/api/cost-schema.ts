@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { RETURN_AMOUNTS } from '@gaugeproof/api-types';
 import type { ReturnCosts } from '@/features/returns/types';
 
 /** A typed amount: empty, or a number ≥ 0 with at most 2 decimals and at most `max`. */
@@ -9,12 +10,12 @@ const amount = (max: number) =>
     .refine((v) => v === '' || /^\d+(\.\d{1,2})?$/.test(v), 'A number ≥ 0 with at most 2 decimals.')
     .refine((v) => v === '' || Number(v) <= max, `At most ${max}.`);
 
-// The server's limits (ReturnCostsDto).
+// The contract's limits (RETURN_AMOUNTS), as the server's ReturnCostsDto.
 export const costsSchema = z.object({
-  inspectionHours: amount(10_000),
-  hourlyRate: amount(100_000),
-  freight: amount(10_000_000),
-  other: amount(10_000_000),
+  inspectionHours: amount(RETURN_AMOUNTS.inspectionHours.max),
+  hourlyRate: amount(RETURN_AMOUNTS.hourlyRate.max),
+  freight: amount(RETURN_AMOUNTS.freight.max),
+  other: amount(RETURN_AMOUNTS.other.max),
 });
 export type CostsForm = z.infer<typeof costsSchema>;
 export const COST_FIELDS = ['inspectionHours', 'hourlyRate', 'freight', 'other'] as const;

@@ -4,12 +4,19 @@ import { api } from '@/lib/api-client';
 import { costsFromForm, costsSchema } from '@/features/returns/api/cost-schema';
 import type { VendorReturn } from '@/features/returns/types';
 import { queryKeys } from '@/lib/query-keys';
+import { maxChars } from '@/lib/contract-rules';
 
 export const createReturnSchema = z.object({
   supplierId: z.number('Choose the supplier.').int().positive('Choose the supplier.'),
   lotIds: z.array(z.number().int()).min(1, 'Choose at least one rejected lot.').max(100),
-  rmaNumber: z.string().trim().max(64, 'At most 64 characters.'),
-  notes: z.string().trim().max(4000, 'At most 4000 characters.'),
+  rmaNumber: z
+    .string()
+    .trim()
+    .max(...maxChars('reference')),
+  notes: z
+    .string()
+    .trim()
+    .max(...maxChars('long')),
   costs: costsSchema,
 });
 export type CreateReturnForm = z.input<typeof createReturnSchema>;

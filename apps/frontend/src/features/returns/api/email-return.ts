@@ -2,10 +2,11 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { queryKeys } from '@/lib/query-keys';
+import { maxChars } from '@/lib/contract-rules';
 
 export const emailReturnSchema = z.object({
   to: z.string().trim().pipe(z.email('Enter a valid e-mail address.')),
-  message: z.string().max(4000, 'At most 4000 characters.'),
+  message: z.string().max(...maxChars('long')),
 });
 export type EmailReturnInput = z.infer<typeof emailReturnSchema>;
 

@@ -1,7 +1,8 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { toQueryString } from '@/components/data-table/use-list-params';
 import { api } from '@/lib/api-client';
-import type { Page, VendorReturn } from '@/features/returns/types';
+import type { Page } from '@gaugeproof/api-types';
+import type { VendorReturn } from '@/features/returns/types';
 import { queryKeys } from '@/lib/query-keys';
 
 /** Query parameters of GET /api/returns: page, pageSize, sort, status (comma list), supplierId. */

@@ -4,6 +4,8 @@ import { api } from '@/lib/api-client';
 import type { ReturnStep } from '@/features/returns/lib/return-steps';
 import type { VendorReturn } from '@/features/returns/types';
 import { queryKeys } from '@/lib/query-keys';
+import { decimalText, maxChars } from '@/lib/contract-rules';
+import { RETURN_AMOUNTS, TEXT_MIN } from '@gaugeproof/api-types';
 
 const isoDate = z
   .string()
@@ -12,13 +14,22 @@ const isoDate = z
 
 /** The goods left: the server checks the same (ShipReturnDto). */
 export const shipSchema = z.object({
-  carrier: z.string().trim().min(2, 'Name the carrier.').max(64, 'At most 64 characters.'),
-  trackingNumber: z.string().trim().max(64, 'At most 64 characters.'),
+  carrier: z
+    .string()
+    .trim()
+    .min(TEXT_MIN.carrier, 'Name the carrier.')
+    .max(...maxChars('reference')),
+  trackingNumber: z
+    .string()
+    .trim()
+    .max(...maxChars('reference')),
   shippedOn: isoDate,
-  quantity: z.coerce
-    .number({ message: 'Enter how much went back.' })
-    .positive('Enter how much went back.')
-    .max(100_000_000, 'At most 100000000.'),
+  quantity: decimalText('Enter how much went back.').pipe(
+    z
+      .number()
+      .positive('Enter how much went back.')
+      .max(RETURN_AMOUNTS.shippedQuantity.max, `At most ${RETURN_AMOUNTS.shippedQuantity.max}.`),
+  ),
 });
 export type ShipInput = z.input<typeof shipSchema>;
 
@@ -27,12 +38,14 @@ export const creditSchema = z.object({
     .string()
     .trim()
     .min(1, 'Enter the credit note number.')
-    .max(64, 'At most 64 characters.'),
-  creditAmount: z.coerce
-    .number({ message: 'Enter the amount credited.' })
-    .min(0, 'The amount cannot be negative.')
-    .max(10_000_000, 'At most 10000000.')
-    .refine((v) => Math.round(v * 100) === v * 100, 'At most 2 decimals.'),
+    .max(...maxChars('reference')),
+  creditAmount: decimalText('Enter the amount credited.').pipe(
+    z
+      .number()
+      .min(0, 'The amount cannot be negative.')
+      .max(RETURN_AMOUNTS.creditAmount.max, `At most ${RETURN_AMOUNTS.creditAmount.max}.`)
+      .refine((v) => Math.round(v * 100) === v * 100, 'At most 2 decimals.'),
+  ),
 });
 export type CreditInput = z.input<typeof creditSchema>;
 
@@ -40,8 +53,8 @@ export const cancelSchema = z.object({
   reason: z
     .string()
     .trim()
-    .min(5, 'Say why in at least 5 characters.')
-    .max(2000, 'At most 2000 characters.'),
+    .min(TEXT_MIN.cancelReason, `Say why in at least ${TEXT_MIN.cancelReason} characters.`)
+    .max(...maxChars('reason')),
 });
 export type CancelInput = z.input<typeof cancelSchema>;
 

@@ -4,11 +4,21 @@ import { api } from '@/lib/api-client';
 import { costsSchema } from '@/features/returns/api/cost-schema';
 import type { ReturnCosts, VendorReturn } from '@/features/returns/types';
 import { queryKeys } from '@/lib/query-keys';
+import { maxChars } from '@/lib/contract-rules';
 
 export const editReturnSchema = z.object({
-  rmaNumber: z.string().trim().max(64, 'At most 64 characters.'),
-  notes: z.string().trim().max(4000, 'At most 4000 characters.'),
-  supplierNote: z.string().trim().max(4000, 'At most 4000 characters.'),
+  rmaNumber: z
+    .string()
+    .trim()
+    .max(...maxChars('reference')),
+  notes: z
+    .string()
+    .trim()
+    .max(...maxChars('long')),
+  supplierNote: z
+    .string()
+    .trim()
+    .max(...maxChars('long')),
   shareDecisionReason: z.boolean(),
   currency: z
     .string()

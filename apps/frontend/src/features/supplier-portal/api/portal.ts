@@ -2,6 +2,8 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { ApiError, api, isApiError } from '@/lib/api-client';
 import { queryKeys } from '@/lib/query-keys';
+import { maxChars } from '@/lib/contract-rules';
+import { TEXT_MIN } from '@gaugeproof/api-types';
 
 interface PortalLot {
   poNumber: string;
@@ -71,8 +73,8 @@ const answer = (what: string) =>
   z
     .string()
     .trim()
-    .min(10, `Describe the ${what} in at least 10 characters.`)
-    .max(4000, 'At most 4000 characters.');
+    .min(TEXT_MIN.answer, `Describe the ${what} in at least ${TEXT_MIN.answer} characters.`)
+    .max(...maxChars('long'));
 
 /** The same rules as the server (SupplierResponseDto). */
 export const answerSchema = z.object({

@@ -3,10 +3,15 @@ import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { SUPPLIER_STATUSES, type Supplier } from '@/features/suppliers/types';
 import { queryKeys } from '@/lib/query-keys';
+import { maxChars } from '@/lib/contract-rules';
 
 /** The supplier form, for creating and editing; the server checks the same rules again. */
 export const supplierSchema = z.object({
-  name: z.string().trim().min(1, 'Enter the supplier’s name.').max(160, 'At most 160 characters.'),
+  name: z
+    .string()
+    .trim()
+    .min(1, 'Enter the supplier’s name.')
+    .max(...maxChars('supplierName')),
   code: z
     .string()
     .trim()
@@ -18,7 +23,7 @@ export const supplierSchema = z.object({
     .trim()
     .refine((v) => v === '' || z.email().safeParse(v).success, 'Enter a valid e-mail address.'),
   status: z.enum(SUPPLIER_STATUSES, 'Choose a status.'),
-  notes: z.string().max(4000, 'At most 4000 characters.'),
+  notes: z.string().max(...maxChars('long')),
 });
 export type SupplierInput = z.infer<typeof supplierSchema>;
 

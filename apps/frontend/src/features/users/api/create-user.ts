@@ -1,20 +1,31 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
+import { PASSWORD } from '@gaugeproof/api-types';
 import { api } from '@/lib/api-client';
 import { ROLES } from '@/lib/roles';
 import type { User } from '@/features/users/types';
 import { queryKeys } from '@/lib/query-keys';
+import { maxChars, passwordProblem } from '@/lib/contract-rules';
 
-export const PASSWORD_MIN_LENGTH = 10;
+/** The contract's password rule (PASSWORD): at least 10 characters once trimmed, at most 72 bytes. */
+export const PASSWORD_MIN_LENGTH = PASSWORD.minLength;
 
 export const createUserSchema = z.object({
-  email: z.string().trim().pipe(z.email('Enter a valid e-mail address.')),
-  name: z.string().trim().min(1, 'Enter the person’s name.').max(120, 'At most 120 characters.'),
-  role: z.enum(ROLES, 'Choose a role.'),
-  password: z
+  email: z
     .string()
-    .min(PASSWORD_MIN_LENGTH, `At least ${PASSWORD_MIN_LENGTH} characters.`)
-    .max(200, 'At most 200 characters.'),
+    .trim()
+    .max(...maxChars('email'))
+    .pipe(z.email('Enter a valid e-mail address.')),
+  name: z
+    .string()
+    .trim()
+    .min(1, 'Enter the person’s name.')
+    .max(...maxChars('name')),
+  role: z.enum(ROLES, 'Choose a role.'),
+  password: z.string().superRefine((value, ctx) => {
+    const problem = passwordProblem(value);
+    if (problem) ctx.addIssue({ code: 'custom', message: problem });
+  }),
 });
 export type CreateUserInput = z.infer<typeof createUserSchema>;
 

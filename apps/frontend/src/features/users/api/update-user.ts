@@ -2,16 +2,22 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { ROLES, type Role } from '@/lib/roles';
-import { PASSWORD_MIN_LENGTH } from '@/features/users/api/create-user';
 import type { User } from '@/features/users/types';
 import { queryKeys } from '@/lib/query-keys';
+import { maxChars, passwordProblem } from '@/lib/contract-rules';
 
 /** The edit form: an empty password means "leave it as it is". */
 export const editUserSchema = z.object({
-  name: z.string().trim().min(1, 'Enter the person’s name.').max(120, 'At most 120 characters.'),
+  name: z
+    .string()
+    .trim()
+    .min(1, 'Enter the person’s name.')
+    .max(...maxChars('name')),
   role: z.enum(ROLES, 'Choose a role.'),
-  password: z.string().refine((value) => value === '' || value.length >= PASSWORD_MIN_LENGTH, {
-    message: `At least ${PASSWORD_MIN_LENGTH} characters, or leave empty.`,
+  password: z.string().superRefine((value, ctx) => {
+    const problem = value === '' ? null : passwordProblem(value);
+    if (problem)
+      ctx.addIssue({ code: 'custom', message: `${problem.slice(0, -1)}, or leave empty.` });
   }),
 });
 export type EditUserInput = z.infer<typeof editUserSchema>;

@@ -5,6 +5,7 @@ import { FormTextField } from '@/components/form/form-text-field';
 import { ServerErrorAlert, submitWithServerErrors } from '@/components/form/server-errors';
 import {
   createUserSchema,
+  PASSWORD_MIN_LENGTH,
   useCreateUser,
   type CreateUserInput,
 } from '@/features/users/api/create-user';
@@ -52,7 +53,7 @@ export function CreateUserDialog({ open, onClose }: { open: boolean; onClose: ()
             label="Password"
             type="password"
             autoComplete="new-password"
-            helperText="At least 10 characters. Share it with the person in private."
+            helperText={`At least ${PASSWORD_MIN_LENGTH} characters. Share it with the person in private.`}
           />
         </DialogContent>
         <DialogActions>
