@@ -1,9 +1,5 @@
-import {
-  BadRequestException,
-  Injectable,
-  NotFoundException,
-  UnprocessableEntityException,
-} from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
+import { Injectable } from '@nestjs/common';
 import { EntityManager, type FilterQuery } from '@mikro-orm/core';
 import type { RequestUser } from '../auth/request-user';
 import type { CsvRow } from '../common/csv';
@@ -30,9 +26,10 @@ export interface TimelineEvent {
   after: Record<string, unknown> | null;
 }
 
-function instant(value: string, endOfDay: boolean): Date {
+function instant(value: string, endOfDay: boolean, field: 'from' | 'to'): Date {
   const d = new Date(value.length === 10 ? `${value}T00:00:00.000Z` : value);
-  if (Number.isNaN(d.getTime())) throw new BadRequestException([`${value} is not a date`]);
+  if (Number.isNaN(d.getTime()))
+    throw DomainError.invalid([{ field, message: `${value} is not a date` }]);
   return endOfDay && value.length === 10 ? new Date(d.getTime() + 86_400_000 - 1) : d;
 }
 
@@ -68,7 +65,7 @@ export class AuditQueryService {
 
   async timeline(lotId: number): Promise<TimelineEvent[]> {
     if (!(await this.em.count(Lot, { id: lotId })))
-      throw new NotFoundException(`There is no lot ${lotId}`);
+      throw DomainError.notFound(`There is no lot ${lotId}`);
     const events = await this.em.find(AuditEvent, { lotId }, { orderBy: { at: 'asc', id: 'asc' } });
     return this.views(events);
   }
@@ -111,7 +108,7 @@ export class AuditQueryService {
     const where = this.where(q);
     const total = await em.count(AuditEvent, where);
     if (total > AUDIT_EXPORT_MAX_ROWS) {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `${total} events match; narrow the filters to at most ${AUDIT_EXPORT_MAX_ROWS} for one export.`,
       );
     }
@@ -164,9 +161,10 @@ export class AuditQueryService {
     if (q.action) where.action = q.action;
     if (q.actorId) where.actorId = q.actorId;
     if (q.from || q.to) {
-      const from = q.from ? instant(q.from, false) : null;
-      const to = q.to ? instant(q.to, true) : null;
-      if (from && to && from > to) throw new BadRequestException(['from must be on or before to']);
+      const from = q.from ? instant(q.from, false, 'from') : null;
+      const to = q.to ? instant(q.to, true, 'to') : null;
+      if (from && to && from > to)
+        throw DomainError.invalid([{ field: 'from', message: 'from must be on or before to' }]);
       where.at = {
         ...(from ? { $gte: from } : {}),
         ...(to ? { $lte: to } : {}),

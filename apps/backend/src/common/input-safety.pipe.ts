@@ -1,9 +1,5 @@
-import {
-  BadRequestException,
-  Injectable,
-  type ArgumentMetadata,
-  type PipeTransform,
-} from '@nestjs/common';
+import { Injectable, type ArgumentMetadata, type PipeTransform } from '@nestjs/common';
+import { DomainError, type FieldError } from './domain-error';
 
 /**
  * C0 control characters but tab, line feed and carriage return, and DEL (Unicode "Cc"):
@@ -30,29 +26,47 @@ function outOfRange(n: number): boolean {
   return Number.isFinite(n) && m !== 0 && (m < MIN_MAGNITUDE || m > MAX_MAGNITUDE);
 }
 
-/** The first problem in `value`, with the path of the field that has it. */
-export function textProblem(value: unknown, name: string): string | null {
+/**
+ * The first problem in `value`, on the path of the field that has it (`conductors.0.gauge`,
+ * as the validation pipe names nested properties; null for the body itself).
+ */
+export function textProblem(value: unknown, name: string): FieldError | null {
+  const at = (path: string, message: string): FieldError => ({
+    field: path || null,
+    message,
+  });
   const stack: [unknown, string][] = [[value, name]];
   while (stack.length > 0) {
     const [v, path] = stack.pop()!;
     if (typeof v === 'string') {
       if (CONTROL.test(v)) {
-        return `${path} must not contain control characters (tab and line breaks are allowed)`;
+        return at(
+          path,
+          `${path} must not contain control characters (tab and line breaks are allowed)`,
+        );
       }
-      if (LONE_SURROGATE.test(v)) return `${path} is not valid text (it holds a broken character)`;
+      if (LONE_SURROGATE.test(v)) {
+        return at(path, `${path} is not valid text (it holds a broken character)`);
+      }
       if (EXPONENT_NUMBER.test(v.trim()) && outOfRange(Number(v))) {
-        return `${path} must be 0 or a number from ${MIN_MAGNITUDE} to ${MAX_MAGNITUDE} in size`;
+        return at(
+          path,
+          `${path} must be 0 or a number from ${MIN_MAGNITUDE} to ${MAX_MAGNITUDE} in size`,
+        );
       }
     } else if (typeof v === 'number') {
       if (outOfRange(v)) {
-        return `${path} must be 0 or a number from ${MIN_MAGNITUDE} to ${MAX_MAGNITUDE} in size`;
+        return at(
+          path,
+          `${path} must be 0 or a number from ${MIN_MAGNITUDE} to ${MAX_MAGNITUDE} in size`,
+        );
       }
     } else if (v !== null && typeof v === 'object') {
       for (const [k, child] of Object.entries(v as Record<string, unknown>)) {
         if (CONTROL.test(k) || LONE_SURROGATE.test(k)) {
-          return `${path || 'body'} has a field name that is not valid text`;
+          return at(path, `${path || 'body'} has a field name that is not valid text`);
         }
-        const childPath = Array.isArray(v) ? `${path}[${k}]` : path ? `${path}.${k}` : k;
+        const childPath = path ? `${path}.${k}` : k;
         stack.push([child, childPath]);
       }
     }
@@ -61,7 +75,7 @@ export function textProblem(value: unknown, name: string): string | null {
 }
 
 /**
- * Refuses, with 400 naming the field, any body field, query parameter or path parameter
+ * Refuses, with 400 on the field (`errors: [{field, message}]`), any body field, query parameter or path parameter
  * holding a control character, a lone surrogate or a number outside MIN/MAX_MAGNITUDE, before validation and before any of it
  * reaches the database. A global pipe, placed first.
  */
@@ -70,7 +84,7 @@ export class InputSafetyPipe implements PipeTransform {
   transform(value: unknown, meta: ArgumentMetadata): unknown {
     if (meta.type === 'custom') return value;
     const problem = textProblem(value, meta.type === 'body' ? '' : (meta.data ?? ''));
-    if (problem) throw new BadRequestException([problem]);
+    if (problem) throw DomainError.invalid([problem]);
     return value;
   }
 }

@@ -1,4 +1,4 @@
-import { BadRequestException } from '@nestjs/common';
+import { DomainError } from './domain-error';
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { IsInt, IsOptional, IsString, Max, Matches, Min } from 'class-validator';
@@ -58,10 +58,12 @@ export function parseSort<F extends string>(
   if (!sort) return fallback;
   const [field, dir] = sort.split(':') as [string, 'asc' | 'desc'];
   if (!(allowed as readonly string[]).includes(field)) {
-    throw new BadRequestException([`sort field must be one of ${allowed.join(', ')}`]);
+    throw DomainError.invalid([
+      { field: 'sort', message: `sort field must be one of ${allowed.join(', ')}` },
+    ]);
   }
   if (dir !== undefined && dir !== 'asc' && dir !== 'desc') {
-    throw new BadRequestException(['sort direction must be asc or desc']);
+    throw DomainError.invalid([{ field: 'sort', message: 'sort direction must be asc or desc' }]);
   }
   return [field as F, dir];
 }

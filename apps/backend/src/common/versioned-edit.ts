@@ -1,4 +1,4 @@
-import { ConflictException } from '@nestjs/common';
+import { DomainError } from './domain-error';
 import { ApiProperty } from '@nestjs/swagger';
 import { EntityManager, OptimisticLockError } from '@mikro-orm/core';
 import { IsInt, Max, Min } from 'class-validator';
@@ -49,10 +49,16 @@ export async function versionedEdit<E extends Versioned, V>(
   edit: VersionedEdit<E, V>,
 ): Promise<V> {
   const stale = async (tx: EntityManager, record: E) =>
-    new ConflictException({
-      message: `Someone else saved ${edit.name(record)} after you opened it; your change was not saved. Reload it, then make your change again.`,
-      current: await edit.view(tx, record),
-    });
+    new DomainError(
+      'conflict',
+      [
+        {
+          field: null,
+          message: `Someone else saved ${edit.name(record)} after you opened it; your change was not saved. Reload it, then make your change again.`,
+        },
+      ],
+      { current: await edit.view(tx, record) },
+    );
   try {
     return await em.transactional(async (tx) => {
       const record = await edit.load(tx);

@@ -1,10 +1,5 @@
-import {
-  BadRequestException,
-  ConflictException,
-  Injectable,
-  NotFoundException,
-  UnprocessableEntityException,
-} from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
+import { Injectable } from '@nestjs/common';
 import { EntityManager, OptimisticLockError, type FilterQuery } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
@@ -39,7 +34,9 @@ function audited(c: CorrectiveAction) {
 
 function checkDate(field: string, value: string): void {
   if (!isCalendarDate(value))
-    throw new BadRequestException([`${field} must be a real date YYYY-MM-DD`]);
+    throw DomainError.invalid([
+      { field: field, message: `${field} must be a real date YYYY-MM-DD` },
+    ]);
 }
 
 @Injectable()
@@ -71,20 +68,22 @@ export class CorrectiveActionsService {
 
   create(dto: CreateCorrectiveActionDto, actor: RequestUser): Promise<CorrectiveActionView> {
     checkDate('dueOn', dto.dueOn);
-    if (dto.dueOn < today()) throw new BadRequestException(['dueOn must be today or later']);
+    if (dto.dueOn < today())
+      throw DomainError.invalid([{ field: 'dueOn', message: 'dueOn must be today or later' }]);
     return retryOnUniqueConflict(() =>
       this.em.transactional(async (tx) => {
         const supplier = await tx.findOne(Supplier, dto.supplierId);
         if (!supplier)
-          throw new UnprocessableEntityException(`There is no supplier ${dto.supplierId}`);
+          throw DomainError.refused(`There is no supplier ${dto.supplierId}`, 'supplierId');
         const lots = dto.lotIds.length ? await tx.find(Lot, { id: { $in: dto.lotIds } }) : [];
         const missing = dto.lotIds.filter((id) => !lots.some((l) => l.id === id));
         if (missing.length)
-          throw new UnprocessableEntityException(`There is no lot ${missing.join(', ')}`);
+          throw DomainError.refused(`There is no lot ${missing.join(', ')}`, 'lotIds');
         const others = lots.filter((l) => l.supplier.id !== supplier.id);
         if (others.length) {
-          throw new UnprocessableEntityException(
+          throw DomainError.refused(
             `Lot ${others.map((l) => l.id).join(', ')} came from another supplier than ${supplier.name}`,
+            'lotIds',
           );
         }
         const year = new Date().getUTCFullYear();
@@ -110,7 +109,7 @@ export class CorrectiveActionsService {
 
   private async load(em: EntityManager, id: number) {
     const car = await em.findOne(CorrectiveAction, id, { populate: POPULATE });
-    if (!car) throw new NotFoundException(`There is no corrective action ${id}`);
+    if (!car) throw DomainError.notFound(`There is no corrective action ${id}`);
     return car;
   }
 
@@ -167,10 +166,16 @@ export class CorrectiveActionsService {
   /** The 409 with the request as it stands now. */
   private async stale(id: number, em: EntityManager = this.em.fork()) {
     const current = await this.load(em, id);
-    return new ConflictException({
-      message: `Someone changed ${current.number} first; review it as it is now and try again`,
-      current: correctiveActionView(current, today()),
-    });
+    return new DomainError(
+      'conflict',
+      [
+        {
+          field: null,
+          message: `Someone changed ${current.number} first; review it as it is now and try again`,
+        },
+      ],
+      { current: correctiveActionView(current, today()) },
+    );
   }
 
   /**
@@ -188,12 +193,12 @@ export class CorrectiveActionsService {
         const car = await this.load(tx, id);
         if (dto.version !== car.version) throw await this.stale(id, tx);
         if (car.status === 'closed')
-          throw new UnprocessableEntityException(`${car.number} is closed; it cannot change`);
+          throw DomainError.refused(`${car.number} is closed; it cannot change`);
         const before = audited(car);
         const to = dto.status ?? car.status;
         if (!canMove(car.status, to)) {
           const next = allowedNext(car.status);
-          throw new UnprocessableEntityException(
+          throw DomainError.refused(
             `${car.number} is ${car.status}: it can go to ${next.join(' or ')}, not to ${to}`,
           );
         }
@@ -203,7 +208,7 @@ export class CorrectiveActionsService {
         if (to === 'responded' && car.status !== 'responded') {
           const missing = RESPONSE_FIELDS.filter((f) => !car[f]);
           if (missing.length) {
-            throw new UnprocessableEntityException(
+            throw DomainError.refused(
               `Record the supplier's ${missing.join(', ')} before marking ${car.number} responded`,
             );
           }
@@ -211,16 +216,18 @@ export class CorrectiveActionsService {
         }
         if (to === 'reopened' && car.status !== 'reopened') {
           if (!dto.comment?.trim()) {
-            throw new UnprocessableEntityException(
+            throw DomainError.refused(
               `Say what more the supplier must do (comment) before reopening ${car.number}; it is e-mailed to them`,
+              'comment',
             );
           }
           car.reopenComment = dto.comment.trim();
         }
         if (to === 'verified' && car.status !== 'verified') {
           if (!dto.verificationNote?.trim() && !dto.verifiedLotId) {
-            throw new UnprocessableEntityException(
+            throw DomainError.refused(
               `Give the evidence that the fix works before verifying ${car.number}: a note (verificationNote) or a later lot that passed (verifiedLotId)`,
+              'verificationNote',
             );
           }
           if (dto.verifiedLotId) {
@@ -232,8 +239,9 @@ export class CorrectiveActionsService {
               !passed ||
               lot.receivedAt <= car.createdAt
             ) {
-              throw new UnprocessableEntityException(
+              throw DomainError.refused(
                 `Lot ${dto.verifiedLotId} is no evidence: it must be a lot of ${car.supplier.name} received after ${car.number} was raised and accepted`,
+                'verifiedLotId',
               );
             }
             car.verifiedLot = lot;

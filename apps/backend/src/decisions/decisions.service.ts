@@ -1,11 +1,5 @@
-import {
-  BadRequestException,
-  ConflictException,
-  Injectable,
-  NotFoundException,
-  Optional,
-  UnprocessableEntityException,
-} from '@nestjs/common';
+import { TEXT_MIN } from '@gaugeproof/api-types';
+import { Injectable, Optional } from '@nestjs/common';
 import { EntityManager, OptimisticLockError } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
@@ -39,10 +33,10 @@ const STATUS_OF: Record<DecisionOutcome, LotStatus> = {
   accept_on_concession: 'accepted_on_concession',
   reject: 'rejected',
 };
-/** Shortest reason for a decision against the recommendation or on concession (issue 5). */
-const MIN_REASON = 20;
-/** Shortest note that refuses a concession (our choice, as for a reopened SCAR). */
-const MIN_REFUSAL = 10;
+/** Shortest reason for a decision against the recommendation or on concession (the contract's). */
+const MIN_REASON = TEXT_MIN.decisionReason;
+/** Shortest note that refuses a concession (the contract's, as for a reopened SCAR). */
+const MIN_REFUSAL = TEXT_MIN.answer;
 
 @Injectable()
 export class DecisionsService {
@@ -69,15 +63,21 @@ export class DecisionsService {
   }
 
   /** The 409 with the lot as it stands; inside a transaction pass its manager (one connection). */
-  private async stale(lotId: number, em = this.em.fork()): Promise<ConflictException> {
+  private async stale(lotId: number, em = this.em.fork()): Promise<DomainError> {
     const lot = await em.findOneOrFail(Lot, lotId, {
       populate: ['product', 'supplier', 'receivedBy'],
       refresh: true,
     });
-    return new ConflictException({
-      message: 'Someone decided this lot first; review the current state and decide again',
-      current: lotSummary(lot),
-    });
+    return new DomainError(
+      'conflict',
+      [
+        {
+          field: null,
+          message: 'Someone decided this lot first; review the current state and decide again',
+        },
+      ],
+      { current: lotSummary(lot) },
+    );
   }
 
   private async decideIn(
@@ -87,12 +87,12 @@ export class DecisionsService {
     actor: RequestUser,
   ) {
     const lot = await tx.findOne(Lot, lotId, { populate: ['product', 'supplier', 'receivedBy'] });
-    if (!lot) throw new NotFoundException(`There is no lot ${lotId}`);
+    if (!lot) throw DomainError.notFound(`There is no lot ${lotId}`);
     if (dto.version !== lot.version) throw await this.stale(lotId, tx);
     // A later decision would supersede the one the supplier was sent (issue 17 item 10).
     await assertEvidenceNotSent(tx, lot, 'its decision cannot be superseded');
     if (!DECIDABLE.includes(lot.status)) {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         lot.status === 'returned'
           ? 'This lot has gone back to the supplier; it cannot be decided again'
           : 'This lot is still on hold or being inspected; finish the planned samples first',
@@ -102,7 +102,7 @@ export class DecisionsService {
     if (dto.outcome === 'accept' && evaluation.samplesTested < evaluation.samplesPlanned) {
       // Curtailed rejection decides a lot early; acceptance still needs every planned unit
       // (ISO 2859-1; issue 13).
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `Acceptance needs every planned unit: ${evaluation.samplesTested} of ${evaluation.samplesPlanned} tested. The lot awaits a decision because its nonconforming units reached the reject number; reject it, or finish the planned units first.`,
       );
     }
@@ -441,7 +441,9 @@ function checkReason(outcome: DecisionOutcome, evaluation: Evaluation, reason: s
   const why = concession
     ? 'a concession'
     : `a decision against the recommendation (${evaluation.recommendation})`;
-  throw new BadRequestException([`reason must be at least ${MIN_REASON} characters for ${why}`]);
+  throw DomainError.invalid([
+    { field: 'reason', message: `reason must be at least ${MIN_REASON} characters for ${why}` },
+  ]);
 }
 
 /** The terms a concession needs: what for, how much (at most the lot), until when. */

@@ -1,4 +1,5 @@
-import { Injectable, UnprocessableEntityException } from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
+import { Injectable } from '@nestjs/common';
 import type { EntityManager } from '@mikro-orm/core';
 import {
   initialInspectionState,
@@ -136,7 +137,7 @@ export class InspectionStreams {
     const row = await this.row(tx, product);
     const before = storedState(row);
     if (before.severity !== 'discontinued') {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `Inspection of this product is ${before.severity}, not discontinued: there is nothing to restore`,
       );
     }

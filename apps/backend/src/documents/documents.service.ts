@@ -1,4 +1,5 @@
-import { Inject, Injectable, NotFoundException } from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
+import { Inject, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import { APP_CONFIG } from '../config/config.module';
 import type { AppConfig } from '../config/env';
@@ -27,7 +28,7 @@ export class DocumentsService {
 
   async lotTag(lotId: number): Promise<Buffer> {
     const lot = await this.em.findOne(Lot, lotId, { populate: ['product', 'supplier'] });
-    if (!lot) throw new NotFoundException(`There is no lot ${lotId}`);
+    if (!lot) throw DomainError.notFound(`There is no lot ${lotId}`);
     const decision = await this.em.findOne(
       Decision,
       { lot },

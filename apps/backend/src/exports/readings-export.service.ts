@@ -1,4 +1,5 @@
-import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
+import { DomainError, type FieldError } from '../common/domain-error';
+import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
@@ -19,11 +20,16 @@ export interface ReadingsExport {
 }
 
 function rangeOf(from?: string, to?: string): ExportRange {
-  const errors: string[] = [];
-  if (from !== undefined && !isCalendarDate(from)) errors.push('from must be a real calendar date');
-  if (to !== undefined && !isCalendarDate(to)) errors.push('to must be a real calendar date');
-  if (errors.length) throw new BadRequestException(errors);
-  if (from && to && from > to) throw new BadRequestException(['from must be on or before to']);
+  const errors: FieldError[] = [];
+  if (from !== undefined && !isCalendarDate(from)) {
+    errors.push({ field: 'from', message: 'from must be a real calendar date' });
+  }
+  if (to !== undefined && !isCalendarDate(to)) {
+    errors.push({ field: 'to', message: 'to must be a real calendar date' });
+  }
+  if (errors.length) throw DomainError.invalid(errors);
+  if (from && to && from > to)
+    throw DomainError.invalid([{ field: 'from', message: 'from must be on or before to' }]);
   return {
     start: from ? new Date(`${from}T00:00:00.000Z`) : null,
     end: to ? new Date(`${addDays(to, 1)}T00:00:00.000Z`) : null,
@@ -55,7 +61,7 @@ export class ReadingsExportService {
       { id: supplierId },
       { fields: ['id', 'code'] },
     );
-    if (!supplier) throw new NotFoundException(`Supplier ${supplierId} not found`);
+    if (!supplier) throw DomainError.notFound(`Supplier ${supplierId} not found`);
     this.audit.record(this.em, actor, {
       action: 'export.readings',
       entityType: 'supplier',

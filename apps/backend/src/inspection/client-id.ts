@@ -1,4 +1,4 @@
-import { ConflictException } from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
 import type { EntityManager } from '@mikro-orm/core';
 import { plainSql } from '../common/plain-sql';
 import type { ClientKeyKind } from './entities/client-key.entity';
@@ -20,8 +20,9 @@ export async function earlierRecord(
   );
   if (!row) return null;
   if (row.kind !== kind) {
-    throw new ConflictException(
+    throw DomainError.conflict(
       `clientId ${clientId} was already used for a ${row.kind}; make a new id for a new ${kind}.`,
+      'clientId',
     );
   }
   return Number(row.recordId);

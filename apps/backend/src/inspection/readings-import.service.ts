@@ -1,10 +1,5 @@
 import { MAX_IMPORT_ROWS, parseDecimal, parseDecimalList } from '@gaugeproof/api-types';
-import {
-  BadRequestException,
-  HttpException,
-  Injectable,
-  UnprocessableEntityException,
-} from '@nestjs/common';
+import { HttpException, Injectable, UnprocessableEntityException } from '@nestjs/common';
 import { EntityManager, UniqueConstraintViolationException } from '@mikro-orm/core';
 import { plainToInstance } from 'class-transformer';
 import { validateSync } from 'class-validator';
@@ -91,10 +86,17 @@ export class ReadingsImportService {
     actor: RequestUser,
     idempotencyKey?: string,
   ): Promise<ImportAnswer & { replayed: boolean }> {
-    if (!file) throw new BadRequestException(['file is required: attach the CSV of readings']);
+    if (!file)
+      throw DomainError.invalid([
+        { field: 'file', message: 'file is required: attach the CSV of readings' },
+      ]);
     if (idempotencyKey !== undefined && !KEY.test(idempotencyKey)) {
-      throw new BadRequestException([
-        'Idempotency-Key must be 1 to 200 visible characters (letters, digits, punctuation)',
+      throw DomainError.invalid([
+        {
+          field: null,
+          message:
+            'Idempotency-Key must be 1 to 200 visible characters (letters, digits, punctuation)',
+        },
       ]);
     }
     const fileSha256 = createHash('sha256').update(file.buffer).digest('hex');
@@ -484,7 +486,7 @@ function columnOf(field: string | null, columns: Record<string, string>): string
 /** The first import's answer to a retry; 422 when the key came with another file. */
 function replay(first: ReadingImport, fileSha256: string): ImportAnswer {
   if (first.fileSha256 !== fileSha256 || !first.answer) {
-    throw new UnprocessableEntityException(
+    throw DomainError.refused(
       `This Idempotency-Key was already used on ${first.importedAt.toISOString().slice(0, 10)} for another file on this lot: send a new key with a new file.`,
     );
   }

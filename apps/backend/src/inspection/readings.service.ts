@@ -1,9 +1,4 @@
-import {
-  ConflictException,
-  ForbiddenException,
-  Injectable,
-  UnprocessableEntityException,
-} from '@nestjs/common';
+import { ForbiddenException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import { earlierRecord } from './client-id';
 import { Reading } from './entities/reading.entity';
@@ -92,8 +87,9 @@ export class ReadingsService {
       { populate: ['sample', 'takenBy', 'voidedBy'] },
     );
     if (reading.sample.id !== sampleId) {
-      throw new ConflictException(
+      throw DomainError.conflict(
         `clientId ${clientId} was already used for a reading of sample ${reading.sample.id}; make a new id for a new reading.`,
+        'clientId',
       );
     }
     return readingView(reading);
@@ -113,7 +109,7 @@ export class ReadingsService {
       }
       const lot = reading?.sample.lot;
       if (lot && !OPEN_STATUSES.includes(lot.status)) {
-        throw new UnprocessableEntityException(
+        throw DomainError.refused(
           `Lot ${lot.poNumber} is already ${lot.status.replace(/_/g, ' ')}: after the decision only a QA lead can void its readings.`,
         );
       }

@@ -1,4 +1,4 @@
-import { ConflictException, Injectable } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import { DomainError } from '../common/domain-error';
 import { EntityManager } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
@@ -51,8 +51,9 @@ export class SamplesService {
       { populate: ['lot', 'createdBy', 'readings.takenBy', 'readings.voidedBy'] },
     );
     if (sample.lot.id !== lotId) {
-      throw new ConflictException(
+      throw DomainError.conflict(
         `clientId ${clientId} was already used for a sample of lot ${sample.lot.id}; make a new id for a new sample.`,
+        'clientId',
       );
     }
     return sampleView(sample);

@@ -1,4 +1,4 @@
-import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import { EntityManager, type FilterQuery } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
@@ -171,12 +171,19 @@ export class InstrumentsService {
 
   private check(i: Parameters<typeof instrumentProblems>[0]): void {
     const problems = instrumentProblems(i);
-    if (problems.length) throw new BadRequestException(problems);
+    if (problems.length) {
+      throw DomainError.invalid(
+        problems.map((message) => ({ field: message.split(' ', 1)[0], message })),
+      );
+    }
   }
 
   private async assertSerialFree(serial: string, em: EntityManager = this.em): Promise<void> {
     if (await em.count(Instrument, { serial })) {
-      throw new ConflictException(`An instrument with serial ${serial} is already registered`);
+      throw DomainError.conflict(
+        `An instrument with serial ${serial} is already registered`,
+        'serial',
+      );
     }
   }
 }

@@ -1,4 +1,4 @@
-import { BadRequestException } from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
 import { addDays } from '../common/calendar';
 import { likePattern, parseSort } from '../common/paging';
 import type { LotFiltersDto } from './dto/list-lots.dto';
@@ -39,7 +39,9 @@ export interface LotFilterSql {
  */
 export function lotFilterSql(q: LotFiltersDto, walkByDate = false): LotFilterSql {
   if (q.receivedFrom && q.receivedTo && q.receivedTo < q.receivedFrom) {
-    throw new BadRequestException(['receivedTo must not be before receivedFrom']);
+    throw DomainError.invalid([
+      { field: 'receivedTo', message: 'receivedTo must not be before receivedFrom' },
+    ]);
   }
   const terms: string[] = [];
   const bindings: unknown[] = [];

@@ -1,4 +1,5 @@
-import { BadRequestException, Injectable, UnprocessableEntityException } from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
+import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
@@ -55,15 +56,19 @@ export class LotsService {
       { id: dto.productId },
       { populate: ['supplier'] },
     );
-    if (!product) throw new BadRequestException(['productId must be the id of a product']);
+    if (!product)
+      throw DomainError.invalid([
+        { field: 'productId', message: 'productId must be the id of a product' },
+      ]);
     if (!product.active) {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `${product.sku} of ${product.supplier.name} is no longer an active product; reactivate it or receive the delivery against the right product.`,
+        'productId',
       );
     }
     const state = await this.em.findOne(InspectionState, { product });
     const plan = planForLot(product, state, dto.quantity);
-    if (!plan.samplingPlan) throw new UnprocessableEntityException(plan.message);
+    if (!plan.samplingPlan) throw DomainError.refused(plan.message);
     const samplingPlan = plan.samplingPlan;
     return this.em.transactional(async (em) => {
       // Inside the write transaction: on SQLite two receipts of one slip at once queue here.
@@ -174,7 +179,7 @@ export class LotsService {
     );
     const total = await this.count(em, filter);
     if (total > LOT_EXPORT_MAX_ROWS) {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `${total} lots match; narrow the filters to at most ${LOT_EXPORT_MAX_ROWS} for one export.`,
       );
     }

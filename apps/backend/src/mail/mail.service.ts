@@ -1,12 +1,10 @@
+import { DomainError } from '../common/domain-error';
 import {
-  ConflictException,
   Inject,
   Injectable,
   Logger,
-  NotFoundException,
   OnApplicationBootstrap,
   OnModuleDestroy,
-  UnprocessableEntityException,
 } from '@nestjs/common';
 import { EntityManager, type FilterQuery } from '@mikro-orm/core';
 import nodemailer from 'nodemailer';
@@ -144,12 +142,12 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
   async retry(id: number, actor: RequestUser): Promise<MessageView> {
     const em = this.em.fork();
     const message = await em.findOne(OutboundMessage, id);
-    if (!message) throw new NotFoundException(`There is no message ${id}`);
+    if (!message) throw DomainError.notFound(`There is no message ${id}`);
     if (message.status === 'sent') {
-      throw new UnprocessableEntityException('This message was already sent; nothing to retry');
+      throw DomainError.refused('This message was already sent; nothing to retry');
     }
     if (message.leaseUntil && message.leaseUntil > new Date()) {
-      throw new ConflictException('This message is being sent right now; look again shortly');
+      throw DomainError.conflict('This message is being sent right now; look again shortly');
     }
     const before = { status: message.status, error: message.error, attempts: message.attempts };
     message.nextAttemptAt = new Date();

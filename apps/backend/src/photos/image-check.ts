@@ -1,8 +1,5 @@
-import {
-  ServiceUnavailableException,
-  UnprocessableEntityException,
-  UnsupportedMediaTypeException,
-} from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
+import { ServiceUnavailableException, UnsupportedMediaTypeException } from '@nestjs/common';
 import {
   DecodePoolBusyError,
   DecodeTimeoutError,
@@ -27,7 +24,7 @@ export interface CheckedImage {
 }
 
 const corrupt = () =>
-  new UnprocessableEntityException(
+  DomainError.refused(
     'The image could not be read: the file is truncated or corrupt. Export it again and retry.',
   );
 
@@ -47,7 +44,7 @@ export async function checkImage(data: Buffer): Promise<CheckedImage> {
   if (!header) throw corrupt();
   const megapixels = (header.width * header.height) / 1e6;
   if (megapixels > MAX_MEGAPIXELS) {
-    throw new UnprocessableEntityException(
+    throw DomainError.refused(
       `The image claims ${header.width} × ${header.height} pixels (${megapixels.toFixed(0)} megapixels); at most ${MAX_MEGAPIXELS} megapixels are accepted.`,
     );
   }
@@ -67,9 +64,7 @@ export async function checkImage(data: Buffer): Promise<CheckedImage> {
   } catch (e) {
     if (!(e instanceof ImageBoundError)) throw e;
     if (e.kind === 'refused') {
-      throw new UnprocessableEntityException(
-        `The image was refused before decoding: ${e.message}.`,
-      );
+      throw DomainError.refused(`The image was refused before decoding: ${e.message}.`);
     }
     throw corrupt();
   }
@@ -89,7 +84,7 @@ export async function checkImage(data: Buffer): Promise<CheckedImage> {
       );
     }
     if (e instanceof DecodeTimeoutError) {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         'The image took too long to decode and was refused; nothing was saved. Export it again at a smaller size.',
       );
     }
@@ -97,7 +92,7 @@ export async function checkImage(data: Buffer): Promise<CheckedImage> {
   }
   if (!result.ok) {
     if (result.reason === 'inflates') {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `The image's compressed data inflates to more than its ${header.width} × ${header.height} pixels need; it was refused before decoding (a damaged file or a decompression bomb).`,
       );
     }

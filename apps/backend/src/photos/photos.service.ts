@@ -1,11 +1,5 @@
-import {
-  BadRequestException,
-  ConflictException,
-  ForbiddenException,
-  Injectable,
-  NotFoundException,
-  UnprocessableEntityException,
-} from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
+import { ForbiddenException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import { createHash, randomUUID } from 'node:crypto';
 import type { Readable } from 'node:stream';
@@ -53,15 +47,18 @@ export class PhotosService {
     actor: RequestUser,
   ) {
     if (!file) {
-      throw new BadRequestException(['file is required: attach a JPEG, PNG or WebP photo']);
+      throw DomainError.invalid([
+        { field: 'file', message: 'file is required: attach a JPEG, PNG or WebP photo' },
+      ]);
     }
     const lot = await this.em.findOneOrFail(Lot, { id: lotId });
     await assertEvidenceNotSent(this.em, lot, 'no photo can be added to it', 'file');
     if (dto.sampleId !== undefined) {
       const sample = await this.em.findOne(Sample, { id: dto.sampleId, lot });
       if (!sample) {
-        throw new UnprocessableEntityException(
+        throw DomainError.refused(
           `Sample #${dto.sampleId} is not a sample of this lot.`,
+          'sampleId',
         );
       }
     }
@@ -120,7 +117,7 @@ export class PhotosService {
   async void(id: number, reason: string, actor: RequestUser) {
     const photo = await this.em.transactional(async (tx) => {
       const p = await tx.findOne(Photo, { id }, { populate: ['lot', 'uploadedBy', 'voidedBy'] });
-      if (!p) throw new NotFoundException('No such record');
+      if (!p) throw DomainError.notFound('No such record');
       if (actor.role === 'clerk') {
         if (p.uploadedBy.id !== actor.id) {
           throw new ForbiddenException(
@@ -128,13 +125,13 @@ export class PhotosService {
           );
         }
         if (!OPEN_STATUSES.includes(p.lot.status)) {
-          throw new UnprocessableEntityException(
+          throw DomainError.refused(
             `Lot ${p.lot.poNumber} is already ${p.lot.status.replace(/_/g, ' ')}: after the decision only a QA lead can void its photos.`,
           );
         }
       }
       if (p.voided) {
-        throw new ConflictException(
+        throw DomainError.conflict(
           `This photo was already voided on ${p.voidedAt?.toISOString().slice(0, 10)}: ${p.voidReason}`,
         );
       }

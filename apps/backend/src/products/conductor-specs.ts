@@ -1,4 +1,4 @@
-import { BadRequestException } from '@nestjs/common';
+import { DomainError, type FieldError } from '../common/domain-error';
 import type { EntityManager } from '@mikro-orm/core';
 import {
   DEFAULT_CONDUCTOR_CLASS,
@@ -17,30 +17,34 @@ interface ParsedConductor extends ConductorDto {
 }
 
 /**
- * Reads every label with parseGauge; a label it refuses is a 400 naming the field,
- * `conductors[1].gauge` (0-based, as the other conductor field messages count).
+ * Reads every label with parseGauge; a label it refuses is a 400 on the field
+ * `conductors.1.gauge` (0-based, as the validation pipe names nested properties).
  */
 export function parseConductors(list: readonly ConductorDto[]): ParsedConductor[] {
-  const problems: string[] = [];
+  const problems: FieldError[] = [];
   const parsed = list.map((c, i) => {
     try {
       const gaugeOf = parseGauge(c.gauge);
       const given = c.conductorClass ?? null;
       if (gaugeOf.system !== 'metric' && given !== null) {
-        problems.push(
-          `conductors[${i}].conductorClass: conductorClass is for metric (IEC 60228) sizes only; ${gaugeOf.label} is judged by its area (ASTM B258).`,
-        );
+        problems.push({
+          field: `conductors.${i}.conductorClass`,
+          message: `conductors[${i}].conductorClass: conductorClass is for metric (IEC 60228) sizes only; ${gaugeOf.label} is judged by its area (ASTM B258).`,
+        });
       }
       // IEC 60228 class 5, the flexible class of vehicle power cable, by default (issue 13).
       const classOf = gaugeOf.system === 'metric' ? (given ?? DEFAULT_CONDUCTOR_CLASS) : null;
       return { ...c, gaugeOf, classOf };
     } catch (e) {
       if (!(e instanceof StandardsInputError)) throw e;
-      problems.push(`conductors[${i}].gauge: ${e.message}`);
+      problems.push({
+        field: `conductors.${i}.gauge`,
+        message: `conductors[${i}].gauge: ${e.message}`,
+      });
       return null;
     }
   });
-  if (problems.length) throw new BadRequestException(problems);
+  if (problems.length) throw DomainError.invalid(problems);
   return parsed as ParsedConductor[];
 }
 

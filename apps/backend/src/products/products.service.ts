@@ -1,9 +1,5 @@
-import {
-  BadRequestException,
-  ConflictException,
-  ForbiddenException,
-  Injectable,
-} from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
+import { ForbiddenException, Injectable } from '@nestjs/common';
 import type { Role } from '../auth/roles';
 import { EntityManager } from '@mikro-orm/core';
 import type { SqlEntityManager } from '@mikro-orm/knex';
@@ -116,10 +112,13 @@ export class ProductsService {
   async create(dto: CreateProductDto, actor: RequestUser): Promise<ProductView> {
     const conductors = parseConductors(dto.conductors);
     const supplier = await this.em.findOne(Supplier, { id: dto.supplierId });
-    if (!supplier) throw new BadRequestException(['supplierId must be the id of a supplier']);
+    if (!supplier)
+      throw DomainError.invalid([
+        { field: 'supplierId', message: 'supplierId must be the id of a supplier' },
+      ]);
     const sku = dto.sku.trim();
     if (await this.em.count(Product, { supplier, sku })) {
-      throw new ConflictException(`${supplier.name} already has a product with SKU ${sku}`);
+      throw DomainError.conflict(`${supplier.name} already has a product with SKU ${sku}`, 'sku');
     }
     if (!CRITERIA_ROLES.includes(actor.role)) {
       const off = (

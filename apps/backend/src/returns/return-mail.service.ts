@@ -1,10 +1,5 @@
-import {
-  Inject,
-  Injectable,
-  NotFoundException,
-  OnModuleInit,
-  UnprocessableEntityException,
-} from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
+import { Inject, Injectable, OnModuleInit } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
@@ -66,7 +61,7 @@ export class ReturnMailService implements OnModuleInit {
     const draft = await this.returns.load(em, id);
     const to = dto.to ?? draft.supplier.contactEmail;
     if (!to) {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `${draft.supplier.name} has no contact e-mail: add one to the supplier or give an address`,
       );
     }
@@ -129,7 +124,7 @@ export class ReturnMailService implements OnModuleInit {
   async revokeLinks(id: number, actor: RequestUser): Promise<{ revoked: number }> {
     const em = this.em.fork();
     const ret = await em.findOne(VendorReturnEntity, id);
-    if (!ret) throw new NotFoundException(`There is no return ${id}`);
+    if (!ret) throw DomainError.notFound(`There is no return ${id}`);
     const revoked = await em.nativeUpdate(
       ReturnLink,
       { vendorReturn: id, revokedAt: null },

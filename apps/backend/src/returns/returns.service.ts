@@ -1,10 +1,5 @@
-import {
-  ConflictException,
-  Inject,
-  Injectable,
-  NotFoundException,
-  UnprocessableEntityException,
-} from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
+import { Inject, Injectable } from '@nestjs/common';
 import type { SqlEntityManager } from '@mikro-orm/knex';
 import { EntityManager, OptimisticLockError, type FilterQuery } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
@@ -80,10 +75,10 @@ const STEP_WORDS: Record<string, string> = {
 
 function checkCurrency(code: string): string {
   if (!isCurrencyCode(code)) {
-    throw new UnprocessableEntityException({
-      message: `currency ${code} is not an ISO 4217 code this server knows`,
-      errors: [{ field: 'currency', message: `${code} is not an ISO 4217 currency code` }],
-    });
+    throw DomainError.refused(
+      `currency ${code} is not an ISO 4217 code this server knows`,
+      'currency',
+    );
   }
   return code;
 }
@@ -112,17 +107,19 @@ export class ReturnsService {
     const lots = await tx.find(Lot, { id: { $in: lotIds } }, { populate: ['supplier'] });
     const missing = lotIds.filter((id) => !lots.some((l) => l.id === id));
     if (missing.length)
-      throw new UnprocessableEntityException(`There is no lot ${missing.join(', ')}`);
+      throw DomainError.refused(`There is no lot ${missing.join(', ')}`, 'lotIds');
     const notRejected = lots.filter((l) => l.status !== 'rejected');
     if (notRejected.length) {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `Only rejected lots go back to the supplier: ${notRejected.map((l) => `lot ${l.id} is ${l.status.replace(/_/g, ' ')}`).join('; ')}`,
+        'lotIds',
       );
     }
     const suppliers = new Set(lots.map((l) => l.supplier.id));
     if (suppliers.size > 1) {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         'A return goes to one supplier: choose lots of one supplier only',
+        'lotIds',
       );
     }
     const claims = await tx.find(
@@ -138,8 +135,9 @@ export class ReturnsService {
         byReturn.set(c.vendorReturn.number, list);
       }
       const taken = [...byReturn].map(([n, ids]) => `${n} (lots ${ids.join(', ')})`);
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `These lots are already on an open return: ${taken.join('; ')}`,
+        'lotIds',
       );
     }
     return lots;
@@ -194,7 +192,7 @@ export class ReturnsService {
       'select id, number from vendor_returns where id = ?',
       [id],
     );
-    if (!ret) throw new NotFoundException(`There is no return ${id}`);
+    if (!ret) throw DomainError.notFound(`There is no return ${id}`);
     const lots = await plainSql<{ lotId: number }[]>(
       sql,
       'select lot_id as "lotId" from vendor_return_lots where vendor_return_id = ? order by lot_id',
@@ -210,7 +208,7 @@ export class ReturnsService {
 
   async load(em: EntityManager, id: number): Promise<VendorReturn> {
     const ret = await em.findOne(VendorReturn, id, { populate: POPULATE });
-    if (!ret) throw new NotFoundException(`There is no return ${id}`);
+    if (!ret) throw DomainError.notFound(`There is no return ${id}`);
     return ret;
   }
 
@@ -299,12 +297,18 @@ export class ReturnsService {
   }
 
   /** The 409 with the return as it stands now. */
-  private async stale(id: number): Promise<ConflictException> {
+  private async stale(id: number): Promise<DomainError> {
     const current = await this.load(this.em.fork(), id);
-    return new ConflictException({
-      message: `Someone changed return ${current.number} first; review it as it is now and try again`,
-      current: returnView(current),
-    });
+    return new DomainError(
+      'conflict',
+      [
+        {
+          field: null,
+          message: `Someone changed return ${current.number} first; review it as it is now and try again`,
+        },
+      ],
+      { current: returnView(current) },
+    );
   }
 
   /**
@@ -324,10 +328,16 @@ export class ReturnsService {
           this.em.transactional(async (tx) => {
             const ret = await this.load(tx, id);
             if (version !== undefined && version !== ret.version) {
-              throw new ConflictException({
-                message: `Someone changed return ${ret.number} first; review it as it is now and try again`,
-                current: returnView(ret),
-              });
+              throw new DomainError(
+                'conflict',
+                [
+                  {
+                    field: null,
+                    message: `Someone changed return ${ret.number} first; review it as it is now and try again`,
+                  },
+                ],
+                { current: returnView(ret) },
+              );
             }
             const before = audited(ret);
             const beforeLots = ret.lots.getItems().map((l) => l.id);
@@ -359,15 +369,13 @@ export class ReturnsService {
 
   private refuseClosed(ret: VendorReturn) {
     if (ret.status === 'closed' || ret.status === 'cancelled') {
-      throw new UnprocessableEntityException(
-        `Return ${ret.number} is ${ret.status}; it cannot change`,
-      );
+      throw DomainError.refused(`Return ${ret.number} is ${ret.status}; it cannot change`);
     }
   }
 
   private draftOnly(ret: VendorReturn, what: string) {
     if (ret.status !== 'draft') {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `Return ${ret.number} is ${STEP_WORDS[ret.status]}: ${what} can change only while it is a draft`,
       );
     }
@@ -399,7 +407,7 @@ export class ReturnsService {
           const lots = added.length ? await this.returnableLots(tx, added, ret.id) : [];
           const other = lots.find((l) => l.supplier.id !== ret.supplier.id);
           if (other) {
-            throw new UnprocessableEntityException(
+            throw DomainError.refused(
               `Lot ${other.id} came from another supplier than ${ret.supplier.name}; a return goes to one supplier`,
             );
           }
@@ -421,7 +429,7 @@ export class ReturnsService {
   private move(tx: EntityManager, actor: RequestUser, ret: VendorReturn, to: ReturnStatus) {
     if (!canMove(ret.status, to)) {
       const next = allowedNext(ret.status).map((s) => STEP_WORDS[s]);
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `Return ${ret.number} is ${STEP_WORDS[ret.status]}: it can go on to ${next.length ? next.join(' or ') : 'nothing'}, not ${STEP_WORDS[to]}`,
       );
     }
@@ -433,7 +441,7 @@ export class ReturnsService {
   private leaveDraft(tx: EntityManager, actor: RequestUser, ret: VendorReturn) {
     const redecided = ret.lots.getItems().filter((l) => l.status !== 'rejected');
     if (redecided.length) {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `Lot ${redecided.map((l) => l.id).join(', ')} is no longer rejected; take it off the return first`,
       );
     }
@@ -477,10 +485,7 @@ export class ReturnsService {
 
   ship(id: number, dto: ShipReturnDto, actor: RequestUser): Promise<ReturnView> {
     if (!isCalendarDate(dto.shippedOn)) {
-      throw new UnprocessableEntityException({
-        message: 'shippedOn must be a real date YYYY-MM-DD',
-        errors: [{ field: 'shippedOn', message: 'must be a real date YYYY-MM-DD' }],
-      });
+      throw DomainError.refused('shippedOn must be a real date YYYY-MM-DD', 'shippedOn');
     }
     return this.change(id, dto.version, actor, async (tx, ret) => {
       this.move(tx, actor, ret, 'shipped');

@@ -1,4 +1,4 @@
-import { BadRequestException } from '@nestjs/common';
+import { DomainError, type FieldError } from '../common/domain-error';
 import { addDays, isCalendarDate, isoDate } from '../common/calendar';
 
 /** Longest range a scorecard answers: five years of monthly buckets (our choice). */
@@ -69,23 +69,29 @@ export function resolveRange(
 ): ScorecardRange {
   const fallback = defaultRange(today);
   const toDate = to ?? fallback.to;
-  const errors: string[] = [];
+  const errors: FieldError[] = [];
   if (from !== undefined && !isCalendarDate(from)) {
-    errors.push('from must be a real calendar date (YYYY-MM-DD)');
+    errors.push({ field: 'from', message: 'from must be a real calendar date (YYYY-MM-DD)' });
   }
-  if (!isCalendarDate(toDate)) errors.push('to must be a real calendar date (YYYY-MM-DD)');
-  if (errors.length) throw new BadRequestException(errors);
+  if (!isCalendarDate(toDate)) {
+    errors.push({ field: 'to', message: 'to must be a real calendar date (YYYY-MM-DD)' });
+  }
+  if (errors.length) throw DomainError.invalid(errors);
   // Only now: counting back from a `to` like 0000-00-00 threw a RangeError (a 500).
   // `to` alone: the twelve calendar months ending with its month, as without it (365 days
   // back from a mid-month `to` spanned thirteen months).
   const fromDate = from ?? (to ? twelveMonthsBefore(utcMidnight(toDate)) : fallback.from);
-  if (fromDate > toDate) throw new BadRequestException(['from must be on or before to']);
+  if (fromDate > toDate)
+    throw DomainError.invalid([{ field: 'from', message: 'from must be on or before to' }]);
   const start = utcMidnight(fromDate);
   const end = utcMidnight(addDays(toDate, 1));
   const months = monthBuckets(start, end);
   if (months.length > MAX_RANGE_MONTHS) {
-    throw new BadRequestException([
-      `the range may span at most ${MAX_RANGE_MONTHS} calendar months (got ${months.length})`,
+    throw DomainError.invalid([
+      {
+        field: 'from',
+        message: `the range may span at most ${MAX_RANGE_MONTHS} calendar months (got ${months.length})`,
+      },
     ]);
   }
   return { from: fromDate, to: toDate, start, end, months };

@@ -1,4 +1,5 @@
-import { Injectable, NotFoundException } from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
+import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import { isoDate } from '../common/calendar';
 import { CONDUCTOR_PURPOSES } from '../products/entities/conductor-spec.entity';
@@ -75,7 +76,7 @@ export class ScorecardsService {
       { id: supplierId },
       { fields: ['id', 'name', 'code', 'status'] },
     );
-    if (!supplier) throw new NotFoundException(`Supplier ${supplierId} not found`);
+    if (!supplier) throw DomainError.notFound(`Supplier ${supplierId} not found`);
     const [[row], histogram, purposes, products, worstLots] = await Promise.all([
       this.rows(range, [supplier], supplierId),
       this.detail.histogram(range, supplierId),

@@ -5,10 +5,10 @@ import {
   HttpStatus,
   Injectable,
   NestInterceptor,
-  NotFoundException,
 } from '@nestjs/common';
 import type { Request, Response } from 'express';
 import { catchError, type Observable } from 'rxjs';
+import { UnknownLinkError } from './supplier-portal.service';
 
 /**
  * Requests one client address may make to the public supplier pages in a minute: a supplier
@@ -89,7 +89,7 @@ export class PortalThrottle implements NestInterceptor {
     }
     return next.handle().pipe(
       catchError((e: unknown) => {
-        if (e instanceof NotFoundException && isUnknownToken(e)) this.badTokens.add(address, 1);
+        if (e instanceof UnknownLinkError) this.badTokens.add(address, 1);
         throw e;
       }),
     );
@@ -100,8 +100,4 @@ export class PortalThrottle implements NestInterceptor {
     this.requests.clear();
     this.badTokens.clear();
   }
-}
-
-function isUnknownToken(e: NotFoundException): boolean {
-  return /^This link is not valid/.test(e.message);
 }

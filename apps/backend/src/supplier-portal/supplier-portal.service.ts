@@ -1,13 +1,7 @@
+import { DomainError } from '../common/domain-error';
 import { MAX_ATTACHMENT_BYTES } from '@gaugeproof/api-types';
 import { randomUUID } from 'node:crypto';
-import {
-  GoneException,
-  Inject,
-  Injectable,
-  NotFoundException,
-  UnprocessableEntityException,
-  UnsupportedMediaTypeException,
-} from '@nestjs/common';
+import { GoneException, Inject, Injectable, UnsupportedMediaTypeException } from '@nestjs/common';
 import { EntityManager, OptimisticLockError } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
@@ -40,6 +34,13 @@ export { MAX_ATTACHMENT_BYTES };
 const MAX_ATTACHMENTS = 20;
 const NOT_VALID =
   'This link is not valid. Check that the whole address from the e-mail was copied, or ask your customer for a new link.';
+
+/** A link that is not ours, unknown or gone: the portal's throttle counts these per address. */
+export class UnknownLinkError extends DomainError {
+  constructor() {
+    super('not_found', [{ field: null, message: NOT_VALID }]);
+  }
+}
 
 /** PDF by its "%PDF-" header (ISO 32000-1, 7.5.2), images by their own magic bytes. */
 function sniffAttachment(b: Buffer): string | null {
@@ -85,15 +86,15 @@ export class SupplierPortalService {
   ): Promise<{ message: MessageView; link: { id: number; expiresAt: Date } }> {
     const em = this.em.fork();
     const car = await em.findOne(CorrectiveAction, id, { populate: ['supplier', 'lots'] });
-    if (!car) throw new NotFoundException(`There is no corrective action ${id}`);
+    if (!car) throw DomainError.notFound(`There is no corrective action ${id}`);
     if (car.status === 'verified' || car.status === 'closed') {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `${car.number} is ${car.status}: there is nothing left for the supplier to answer`,
       );
     }
     const to = dto.to ?? car.supplier.contactEmail;
     if (!to) {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `${car.supplier.name} has no contact e-mail: add one to the supplier or give an address`,
       );
     }
@@ -152,7 +153,7 @@ export class SupplierPortalService {
   async revoke(id: number, actor: RequestUser): Promise<{ revoked: number }> {
     const em = this.em.fork();
     const car = await em.findOne(CorrectiveAction, id);
-    if (!car) throw new NotFoundException(`There is no corrective action ${id}`);
+    if (!car) throw DomainError.notFound(`There is no corrective action ${id}`);
     const revoked = await em.nativeUpdate(
       SupplierLink,
       { correctiveAction: id, revokedAt: null },
@@ -173,7 +174,7 @@ export class SupplierPortalService {
    * or revoked. The signature is checked first, so a guessed token costs no look-up.
    */
   private async resolveAny(em: EntityManager, token: string): Promise<Resolved> {
-    if (!signedByUs(this.config.jwtSecret, token)) throw new NotFoundException(NOT_VALID);
+    if (!signedByUs(this.config.jwtSecret, token)) throw new UnknownLinkError();
     const hash = sha256(token);
     const scar = await em.findOne(
       SupplierLink,
@@ -189,7 +190,7 @@ export class SupplierPortalService {
             { populate: ['vendorReturn', 'vendorReturn.supplier', 'vendorReturn.lots'] },
           )
           .then((link) => (link ? { kind: 'return' as const, link } : null));
-    if (!found) throw new NotFoundException(NOT_VALID);
+    if (!found) throw new UnknownLinkError();
     const { link } = found;
     if (link.revokedAt) {
       throw new GoneException(
@@ -208,7 +209,7 @@ export class SupplierPortalService {
   private async resolve(em: EntityManager, token: string): Promise<SupplierLink> {
     const found = await this.resolveAny(em, token);
     if (found.kind !== 'scar') {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         'This page shows a return notice; it takes no answer or files. Reply to the e-mail it came with.',
       );
     }
@@ -274,9 +275,9 @@ export class SupplierPortalService {
   async photo(token: string, n: number, which: 'original' | 'thumbnail') {
     const em = this.em.fork();
     const found = await this.resolveAny(em, token);
-    if (found.kind !== 'return') throw new NotFoundException('This page has no photos');
+    if (found.kind !== 'return') throw DomainError.notFound('This page has no photos');
     const photo = (await this.returnPhotos(em, found.link.vendorReturn))[n - 1];
-    if (!photo) throw new NotFoundException(`There is no photo ${n} on this page`);
+    if (!photo) throw DomainError.notFound(`There is no photo ${n} on this page`);
     const key = which === 'original' ? photo.storageKey : photo.thumbnailKey;
     const type = typeOfKey(key);
     return { stream: await this.storage.get(key), type, name: `photo-${n}.${type.split('/')[1]}` };
@@ -350,24 +351,21 @@ export class SupplierPortalService {
       found.kind === 'return'
         ? found.link.vendorReturn
         : await this.evidenceReturn(em, found.link.correctiveAction);
-    if (!ret) throw new NotFoundException('There is no evidence pack for this request yet');
+    if (!ret) throw DomainError.notFound('There is no evidence pack for this request yet');
     await em.populate(ret, ['supplier', 'lots', 'createdBy']);
     return { pdf: await this.documents.pdf(ret), number: ret.number };
   }
 
   async respond(token: string, dto: SupplierResponseDto) {
     if (!isCalendarDate(dto.promisedOn)) {
-      throw new UnprocessableEntityException({
-        message: 'promisedOn must be a real date YYYY-MM-DD',
-        errors: [{ field: 'promisedOn', message: 'must be a real date YYYY-MM-DD' }],
-      });
+      throw DomainError.refused('promisedOn must be a real date YYYY-MM-DD', 'promisedOn');
     }
     try {
       const view = await this.em.fork().transactional(async (tx) => {
         const link = await this.resolve(tx, token);
         const car = link.correctiveAction;
         if (car.status !== 'open' && car.status !== 'reopened') {
-          throw new UnprocessableEntityException(
+          throw DomainError.refused(
             `${car.number} is already answered (${car.status}); your customer will reopen it if they need more`,
           );
         }
@@ -419,7 +417,7 @@ export class SupplierPortalService {
       return view;
     } catch (e) {
       if (e instanceof OptimisticLockError) {
-        throw new UnprocessableEntityException(
+        throw DomainError.refused(
           'Your customer changed this request while you answered; reload the page and answer again',
         );
       }
@@ -428,7 +426,7 @@ export class SupplierPortalService {
   }
 
   async attach(token: string, file: Express.Multer.File | undefined) {
-    if (!file) throw new UnprocessableEntityException('Choose a file to send (PDF or image)');
+    if (!file) throw DomainError.refused('Choose a file to send (PDF or image)', 'file');
     const type = sniffAttachment(file.buffer);
     if (!type) {
       throw new UnsupportedMediaTypeException(
@@ -439,12 +437,10 @@ export class SupplierPortalService {
     const link = await this.resolve(em, token);
     const car = link.correctiveAction;
     if (car.status === 'verified' || car.status === 'closed') {
-      throw new UnprocessableEntityException(
-        `${car.number} is ${car.status}; it takes no more files`,
-      );
+      throw DomainError.refused(`${car.number} is ${car.status}; it takes no more files`);
     }
     if ((await em.count(ScarAttachment, { correctiveAction: car.id })) >= MAX_ATTACHMENTS) {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         `${car.number} holds ${MAX_ATTACHMENTS} files already; put the rest into one PDF`,
       );
     }
@@ -495,7 +491,7 @@ export class SupplierPortalService {
 
   async openAttachment(carId: number, id: number) {
     const att = await this.em.fork().findOne(ScarAttachment, { id, correctiveAction: carId });
-    if (!att) throw new NotFoundException(`There is no file ${id} on this request`);
+    if (!att) throw DomainError.notFound(`There is no file ${id} on this request`);
     return { stream: await this.storage.get(att.storageKey), att };
   }
 }

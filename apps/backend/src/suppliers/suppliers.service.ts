@@ -1,4 +1,5 @@
-import { ConflictException, Injectable } from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
+import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import type { SqlEntityManager } from '@mikro-orm/knex';
 import { AuditService } from '../audit/audit.service';
@@ -104,7 +105,10 @@ export class SuppliersService {
 
   private async assertCodeFree(code: string, em: EntityManager = this.em): Promise<void> {
     if (await em.count(Supplier, { code })) {
-      throw new ConflictException(`Supplier code ${code} is already used by another supplier`);
+      throw DomainError.conflict(
+        `Supplier code ${code} is already used by another supplier`,
+        'code',
+      );
     }
   }
 }

@@ -1,4 +1,5 @@
-import { ConflictException, Injectable, UnprocessableEntityException } from '@nestjs/common';
+import { DomainError } from '../common/domain-error';
+import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import bcrypt from 'bcryptjs';
 import { AuditService } from '../audit/audit.service';
@@ -35,7 +36,7 @@ export class UsersService {
   async create(dto: CreateUserDto, actor: RequestUser) {
     const email = dto.email.trim().toLowerCase();
     if (await this.em.count(User, { email })) {
-      throw new ConflictException(`A user with e-mail ${email} already exists`);
+      throw DomainError.conflict(`A user with e-mail ${email} already exists`, 'email');
     }
     const user = this.em.create(User, {
       email,
@@ -58,7 +59,7 @@ export class UsersService {
 
   async update(id: number, dto: UpdateUserDto, actor: RequestUser) {
     if (id === actor.id && (dto.active === false || (dto.role && dto.role !== 'admin'))) {
-      throw new UnprocessableEntityException(
+      throw DomainError.refused(
         'You cannot deactivate your own account or take away your own admin role',
       );
     }
