@@ -1,4 +1,5 @@
 import {
+  UNITS_BY_KIND,
   INSTRUMENT_KINDS,
   RESOLUTION_UNITS,
   type CalibrationStatus,
@@ -44,12 +45,5 @@ export const unitLabels: Record<ResolutionUnit, string> = {
   degC: '°C',
 };
 
-/** What each kind of instrument reads in (the server's rule; common practice, no source). */
-export const UNITS_BY_KIND: Record<InstrumentKind, readonly ResolutionUnit[]> = {
-  balance: ['g'],
-  micrometer: ['mm'],
-  caliper: ['mm'],
-  length_rule: ['mm'],
-  milliohm_meter: ['ohm', 'mohm'],
-  thermometer: ['degC'],
-};
+/** What each kind of instrument reads in: the contract's rule, as the server checks it. */
+export { UNITS_BY_KIND };

@@ -1,16 +1,10 @@
+import { NOTICE_SWITCHES, type NoticeSwitch } from '@gaugeproof/api-types';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { queryKeys } from '@/lib/query-keys';
 
-export const NOTICE_SWITCHES = [
-  'lotAwaitsDecision',
-  'lotRejectNumber',
-  'lotRejected',
-  'scarOverdue',
-  'scarAnswered',
-  'concessionAwaitsApproval',
-] as const;
-export type NoticeSwitch = (typeof NOTICE_SWITCHES)[number];
+// The switches are the contract's (libs/api-types).
+export { NOTICE_SWITCHES, type NoticeSwitch };
 export type NoticeChoices = Record<NoticeSwitch, boolean> & { digest: boolean };
 
 /** GET /api/me/notices: the user's choices and the notices their role is offered. */
