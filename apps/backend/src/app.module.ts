@@ -38,6 +38,7 @@ import { InstrumentsModule } from './instruments/instruments.module';
 import { SuppliersModule } from './suppliers/suppliers.module';
 import { ProductsModule } from './products/products.module';
 import { LotsModule } from './lots/lots.module';
+import { LotPageModule } from './lot-page/lot-page.module';
 
 /** Domain modules; each later domain adds its module here. */
 const DOMAIN_MODULES = [
@@ -51,6 +52,7 @@ const DOMAIN_MODULES = [
   // LotsModule before InspectionModule: /api/lots/export.csv must match before /api/lots/:id.
   LotsModule,
   InspectionModule,
+  LotPageModule,
   StorageModule,
   PhotosModule,
   ScorecardsModule,

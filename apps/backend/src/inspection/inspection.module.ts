@@ -1,8 +1,6 @@
 import { Module } from '@nestjs/common';
 import { GroupCommit } from '../common/group-commit';
 import { InspectionController } from './inspection.controller';
-import { LotDetailController } from './lot-detail.controller';
-import { LotDetailService } from './lot-detail.service';
 import { LotEvaluationService } from './lot-evaluation';
 import { ReadingsImportController } from './readings-import.controller';
 import { ReadingsImportService } from './readings-import.service';
@@ -12,11 +10,10 @@ import { SamplesService } from './samples.service';
 
 /** Samples, readings, their computation, the lot's status flow and its evaluation. */
 @Module({
-  controllers: [InspectionController, LotDetailController, ReadingsImportController],
+  controllers: [InspectionController, ReadingsImportController],
   providers: [
     GroupCommit,
     LotEvaluationService,
-    LotDetailService,
     SamplesService,
     ReadingsService,
     ReadingWriter,

@@ -12,7 +12,7 @@ import { LotFiltersDto } from './dto/list-lots.dto';
 import { LOT_CSV_COLUMNS } from './lots-csv';
 import { LotsService } from './lots.service';
 
-/** Receiving and the lot list. The lot detail (GET /lots/:id) lives with inspection. */
+/** Receiving and the lot list. The Lot page (GET /lots/:id) is the lot-page module's. */
 @ApiTags('lots')
 @Controller('lots')
 export class LotsController {

@@ -3,13 +3,13 @@ import { Controller, Get, Param } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { Roles } from '../auth/decorators';
 import { ALL_ROLES } from '../auth/roles';
-import { LotDetailService } from './lot-detail.service';
+import { LotPageService } from './lot-page.service';
 import { IdPipe } from '../common/id.pipe';
 
 @ApiTags('lots')
 @Controller('lots')
-export class LotDetailController {
-  constructor(private readonly lots: LotDetailService) {}
+export class LotPageController {
+  constructor(private readonly lots: LotPageService) {}
 
   @Get(':id')
   @Answers('LotDetail')

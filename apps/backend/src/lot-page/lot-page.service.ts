@@ -1,5 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
+import { decisionView } from '../decisions/decision-view';
 import { Decision } from '../decisions/entities/decision.entity';
 import { Nonconformance } from '../decisions/entities/nonconformance.entity';
 import { Lot } from '../lots/entities/lot.entity';
@@ -8,12 +9,16 @@ import { InspectionState } from '../products/entities/inspection-state.entity';
 import { productView } from '../products/product-view';
 import { Photo } from '../photos/entities/photo.entity';
 import { photoView } from '../photos/photo-view';
-import { LotEvaluationService } from './lot-evaluation';
-import { sampleView } from './views';
+import { LotEvaluationService } from '../inspection/lot-evaluation';
+import { sampleView } from '../inspection/views';
 
-/** LotDetail of docs/api-conventions.md: the lot with all its evidence and its evaluation. */
+/**
+ * LotDetail of docs/api-conventions.md: the lot with all its evidence and its evaluation.
+ * The Lot page's read model sits above inspection, decisions and photos, whose records it
+ * gathers; none of them imports it.
+ */
 @Injectable()
-export class LotDetailService {
+export class LotPageService {
   constructor(
     private readonly em: EntityManager,
     private readonly evaluation: LotEvaluationService,
@@ -61,16 +66,9 @@ export class LotDetailService {
       samples: samples.map(sampleView),
       photos: photos.map(photoView),
       evaluation: this.evaluation.evaluateLoaded(lot),
-      decisions: decisions.map((d) => ({
-        id: d.id,
-        outcome: d.outcome,
-        recommendation: d.recommendation,
-        reason: d.reason,
-        decidedBy: { id: d.decidedBy.id, name: d.decidedBy.name },
-        decidedAt: d.decidedAt,
-        lotVersion: d.lotVersion,
-        ncrNumber: ncr && ncr.decision.id === d.id ? ncr.number : null,
-      })),
+      decisions: decisions.map((d) =>
+        decisionView(d, ncr && ncr.decision.id === d.id ? ncr.number : null),
+      ),
       ncrNumber: ncr?.number ?? null,
     };
   }
