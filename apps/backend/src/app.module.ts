@@ -17,6 +17,7 @@ import type { IncomingMessage } from 'node:http';
 import { AuditModule } from './audit/audit.module';
 import { AuthModule } from './auth/auth.module';
 import { ConfigModule } from './config/config.module';
+import { ClockModule } from './common/clock';
 import { ServerLockHolder } from './ops/server-lock.holder';
 import { CorrectiveActionsModule } from './corrective-actions/corrective-actions.module';
 import { ExportsModule } from './exports/exports.module';
@@ -107,6 +108,7 @@ export class AppModule implements NestModule {
       module: AppModule,
       imports: [
         ConfigModule.forRoot(config),
+        ClockModule,
         DiscoveryModule,
         LoggerModule.forRoot({
           forRoutes: [{ path: '{*splat}', method: RequestMethod.ALL }],

@@ -3,6 +3,7 @@ import { EntityManager } from '@mikro-orm/core';
 import type { RequestUser } from '../auth/request-user';
 import { AuditEvent } from './entities/audit-event.entity';
 import { plainSql } from '../common/plain-sql';
+import { clock } from '../common/clock';
 
 export interface AuditEntry {
   action: string;
@@ -32,7 +33,7 @@ export class AuditService {
       lotId: entry.lotId ?? null,
       before: entry.before ?? null,
       after: entry.after ?? null,
-      at: new Date(),
+      at: clock.now(),
     });
     em.persist(event);
     return event;
@@ -47,7 +48,7 @@ export class AuditService {
     em: EntityManager,
     actor: RequestUser | null,
     entries: readonly AuditEntry[],
-    at = new Date(),
+    at = clock.now(),
   ) {
     const json = (v: Record<string, unknown> | null | undefined) => (v ? JSON.stringify(v) : null);
     for (let i = 0; i < entries.length; i += APPEND_BATCH) {

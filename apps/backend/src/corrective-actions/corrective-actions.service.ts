@@ -15,10 +15,11 @@ import { CreateCorrectiveActionDto } from './dto/create-corrective-action.dto';
 import { ListCorrectiveActionsDto } from './dto/list-corrective-actions.dto';
 import { UpdateCorrectiveActionDto } from './dto/update-corrective-action.dto';
 import { CorrectiveAction, type CorrectiveActionStatus } from './entities/corrective-action.entity';
+import { clock } from '../common/clock';
 
 const POPULATE = ['supplier', 'lots', 'createdBy', 'verifiedBy', 'verifiedLot'] as const;
 const RESPONSE_FIELDS = ['containment', 'rootCause', 'correctiveAction'] as const;
-const today = () => isoDate(new Date());
+const today = () => isoDate(clock.now());
 
 function audited(c: CorrectiveAction) {
   return {
@@ -86,7 +87,7 @@ export class CorrectiveActionsService {
             'lotIds',
           );
         }
-        const year = new Date().getUTCFullYear();
+        const year = clock.now().getUTCFullYear();
         const car = tx.create(CorrectiveAction, {
           number: formatNumber(
             'SCAR',
@@ -212,7 +213,7 @@ export class CorrectiveActionsService {
               `Record the supplier's ${missing.join(', ')} before marking ${car.number} responded`,
             );
           }
-          car.respondedAt = new Date();
+          car.respondedAt = clock.now();
         }
         if (to === 'reopened' && car.status !== 'reopened') {
           if (!dto.comment?.trim()) {
@@ -248,12 +249,12 @@ export class CorrectiveActionsService {
           }
           car.verificationNote = dto.verificationNote?.trim() || null;
           car.verifiedBy = tx.getReference(User, actor.id);
-          car.verifiedAt = new Date();
+          car.verifiedAt = clock.now();
         }
         if (to === 'responded' && car.status !== 'responded') car.respondedBy = actor.email;
-        if (to === 'closed') car.closedAt = new Date();
+        if (to === 'closed') car.closedAt = clock.now();
         car.status = to;
-        car.updatedAt = new Date();
+        car.updatedAt = clock.now();
         await tx.flush();
         this.record(tx, actor, car, 'corrective_action.update', before);
         await tx.populate(car, POPULATE);

@@ -1,5 +1,6 @@
 import { isoDate } from '../common/calendar';
 import type { Concession } from './entities/concession.entity';
+import { clock } from '../common/clock';
 
 /** A concession as the API shows it; `requestedBy`, `reviewedBy` and `lot` loaded. */
 export function concessionView(c: Concession) {
@@ -11,7 +12,7 @@ export function concessionView(c: Concession) {
     quantity: c.quantity,
     unit: c.lot.unit,
     expiresOn: c.expiresOn,
-    expired: c.expiresOn < isoDate(new Date()),
+    expired: c.expiresOn < isoDate(clock.now()),
     reason: c.reason,
     recommendation: c.recommendation,
     needsSecondApproval: c.needsSecondApproval,

@@ -20,6 +20,7 @@ import { Concession } from './entities/concession.entity';
 import { Decision, type DecisionOutcome } from './entities/decision.entity';
 import { openNonconformance } from './nonconformances';
 import { InspectionStreams } from './inspection-streams';
+import { clock } from '../common/clock';
 
 /** Lots a decision may be taken on: awaiting one, or decided (a later one supersedes). */
 const DECIDABLE: readonly LotStatus[] = [
@@ -184,7 +185,7 @@ export class DecisionsService {
     );
     concession.status = 'approved';
     concession.reviewedBy = tx.getReference(User, actor.id);
-    concession.reviewedAt = new Date();
+    concession.reviewedAt = clock.now();
     concession.decision = tx.getReference(Decision, result.decision.id);
     await tx.flush();
     await tx.populate(concession, ['requestedBy', 'reviewedBy', 'lot']);
@@ -370,7 +371,7 @@ export class DecisionsService {
           );
           c.status = 'approved';
           c.reviewedBy = tx.getReference(User, actor.id);
-          c.reviewedAt = new Date();
+          c.reviewedAt = clock.now();
           c.reviewNote = dto.note?.trim() || null;
           c.decision = tx.getReference(Decision, result.decision.id);
           this.audit.record(tx, actor, {
@@ -407,7 +408,7 @@ export class DecisionsService {
         const c = await this.pendingConcession(tx, id, dto);
         c.status = 'refused';
         c.reviewedBy = tx.getReference(User, actor.id);
-        c.reviewedAt = new Date();
+        c.reviewedAt = clock.now();
         c.reviewNote = note;
         this.audit.record(tx, actor, {
           action: 'concession.refuse',
@@ -469,7 +470,7 @@ function checkTerms(dto: CreateDecisionDto, lot: Lot) {
       field: 'concession.expiresOn',
       message: 'concession.expiresOn must be a real date',
     });
-  } else if (t.expiresOn < isoDate(new Date())) {
+  } else if (t.expiresOn < isoDate(clock.now())) {
     errors.push({
       field: 'concession.expiresOn',
       message: 'concession.expiresOn must be today or later',

@@ -5,6 +5,7 @@ import { formatNumber, nextSeqInYear } from '../common/numbering';
 import type { Lot } from '../lots/entities/lot.entity';
 import type { Decision } from './entities/decision.entity';
 import { Nonconformance } from './entities/nonconformance.entity';
+import { clock } from '../common/clock';
 
 /**
  * A reject opens a nonconformance report numbered NCR-YYYY-NNNN, sequential per year. A lot
@@ -19,7 +20,7 @@ export async function openNonconformance(
 ): Promise<string> {
   const open = await tx.findOne(Nonconformance, { lot, status: 'open' });
   if (open) return open.number;
-  const year = new Date().getUTCFullYear();
+  const year = clock.now().getUTCFullYear();
   const seq = await nextSeqInYear(tx, Nonconformance, 'NCR', year);
   const ncr = tx.create(Nonconformance, {
     number: formatNumber('NCR', year, seq),

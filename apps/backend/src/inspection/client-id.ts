@@ -2,6 +2,7 @@ import { DomainError } from '../common/domain-error';
 import type { EntityManager } from '@mikro-orm/core';
 import { plainSql } from '../common/plain-sql';
 import type { ClientKeyKind } from './entities/client-key.entity';
+import { clock } from '../common/clock';
 
 /**
  * The id of the record `clientId` made earlier, or null; 409 when it made another kind of
@@ -34,7 +35,7 @@ export async function keepClientKey(
   clientId: string,
   kind: ClientKeyKind,
   recordId: number,
-  at: Date = new Date(),
+  at: Date = clock.now(),
 ): Promise<void> {
   await plainSql(
     em,

@@ -24,6 +24,7 @@ import { keepClientKey } from './client-id';
 import { GroupCommit } from '../common/group-commit';
 import { plainSql } from '../common/plain-sql';
 import { assertEvidenceNotSent } from './evidence-freeze';
+import { clock } from '../common/clock';
 
 /** One reading to record: on a sample, by a method, with the register's instruments used. */
 export interface NewReading {
@@ -220,7 +221,7 @@ export class ReadingWriter {
    * nothing of the call is written.
    */
   async write(entries: readonly NewReading[], actor: RequestUser, options: WriteOptions = {}) {
-    const at = options.at ?? new Date();
+    const at = options.at ?? clock.now();
     if (options.em) return this.writeIn(options.em, entries, actor, at);
     // Readings posted at the same moment share one commit (common/group-commit.ts).
     return this.commits.run((em) => this.writeIn(em, entries, actor, at));
@@ -228,7 +229,7 @@ export class ReadingWriter {
 
   /** Voids a reading with a reason; its sample's other live readings are computed again. */
   async void(id: number, reason: string, actor: RequestUser, options: WriteOptions = {}) {
-    const at = options.at ?? new Date();
+    const at = options.at ?? clock.now();
     if (options.em) return this.voidIn(options.em, id, reason, actor, at);
     return this.commits.run((em) => this.voidIn(em, id, reason, actor, at));
   }
@@ -310,7 +311,7 @@ export class ReadingWriter {
     em: EntityManager,
     entries: readonly NewReading[],
     newSamples: readonly NewSamplePlan[],
-    at: Date = new Date(),
+    at: Date = clock.now(),
   ): Promise<PreparedReadings> {
     const read = await this.read(em, entries, newSamples);
     const computed = await this.compute(read, entries, at, true);

@@ -11,6 +11,7 @@ import { Sample } from './entities/sample.entity';
 import { earlierRecord, keepClientKey } from './client-id';
 import { assertLotOpen } from './lot-status';
 import { sampleView } from './views';
+import { clock } from '../common/clock';
 
 const planText = (lot: Lot) => {
   const p = lot.samplingPlan;
@@ -73,7 +74,7 @@ export class SamplesService {
         actor,
         dto.clientId ?? null,
       );
-      lot.updatedAt = new Date();
+      lot.updatedAt = clock.now();
       await tx.flush();
       return sampleView(sample);
     });

@@ -1,6 +1,7 @@
 import { daysBetween, isCalendarDate, isoDate } from '../common/calendar';
 import type { Instrument, InstrumentKind } from './entities/instrument.entity';
 import { RESOLUTION_UNITS, UNITS_BY_KIND, type ResolutionUnit } from '@gaugeproof/api-types';
+import { clock } from '../common/clock';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { RESOLUTION_UNITS, UNITS_BY_KIND, type ResolutionUnit };
@@ -26,7 +27,7 @@ export function calibrationStatus(dueOn: string, today: string): CalibrationStat
   return days <= DUE_SOON_DAYS ? 'due_soon' : 'ok';
 }
 
-export function instrumentView(i: Instrument, now = new Date()) {
+export function instrumentView(i: Instrument, now = clock.now()) {
   const today = isoDate(now);
   return {
     id: i.id,

@@ -16,6 +16,7 @@ import {
   KIND_NAMES,
   type InstrumentView,
 } from './instrument-rules';
+import { clock } from '../common/clock';
 
 const SORTS = ['name', 'kind', 'serial', 'calibrationDueOn'] as const;
 
@@ -86,7 +87,7 @@ export class InstrumentsService {
   ) {}
 
   /** See assertUsableInstruments; uses this request's EntityManager. */
-  assertUsable(ids: readonly number[], on: Date = new Date()): Promise<Instrument[]> {
+  assertUsable(ids: readonly number[], on: Date = clock.now()): Promise<Instrument[]> {
     return assertUsableInstruments(this.em, ids, on);
   }
 
@@ -97,7 +98,7 @@ export class InstrumentsService {
     if (q.kind) where.kind = q.kind;
     if (q.active !== undefined) where.active = q.active;
     if (q.dueWithinDays !== undefined) {
-      where.calibrationDueOn = { $lte: addDays(isoDate(new Date()), q.dueWithinDays) };
+      where.calibrationDueOn = { $lte: addDays(isoDate(clock.now()), q.dueWithinDays) };
     }
     const [rows, total] = await this.em.findAndCount(Instrument, where, {
       orderBy: { [field]: dir, id: 'asc' },

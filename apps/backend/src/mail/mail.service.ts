@@ -16,6 +16,7 @@ import type { AppConfig } from '../config/env';
 import { ListMessagesDto } from './dto/list-messages.dto';
 import { OutboundMessage } from './entities/outbound-message.entity';
 import { messageView, type MessageView } from './message-view';
+import { clock } from '../common/clock';
 
 export interface MailAttachment {
   filename: string;
@@ -115,7 +116,7 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
       relatedId: mail.relatedId,
       sentById: actor.id,
       replyTo: actor.email,
-      nextAttemptAt: new Date(),
+      nextAttemptAt: clock.now(),
     });
     await em.flush();
     await this.attempt(message.id, mail.attachments);
@@ -135,7 +136,7 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
       attachments: [],
       relatedType: mail.relatedType,
       relatedId: mail.relatedId,
-      nextAttemptAt: new Date(),
+      nextAttemptAt: clock.now(),
     });
   }
 
@@ -146,11 +147,11 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
     if (message.status === 'sent') {
       throw DomainError.refused('This message was already sent; nothing to retry');
     }
-    if (message.leaseUntil && message.leaseUntil > new Date()) {
+    if (message.leaseUntil && message.leaseUntil > clock.now()) {
       throw DomainError.conflict('This message is being sent right now; look again shortly');
     }
     const before = { status: message.status, error: message.error, attempts: message.attempts };
-    message.nextAttemptAt = new Date();
+    message.nextAttemptAt = clock.now();
     await em.flush();
     await this.attempt(id);
     const after = await this.em.fork().findOneOrFail(OutboundMessage, id);
@@ -186,7 +187,7 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
     this.draining = (async () => {
       try {
         for (;;) {
-          const now = new Date();
+          const now = clock.now();
           const due = await this.em.fork().find(
             OutboundMessage,
             {
@@ -216,7 +217,7 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
    */
   private async attempt(id: number, files?: MailAttachment[]): Promise<boolean> {
     const em = this.em.fork();
-    const now = new Date();
+    const now = clock.now();
     const claimed = await em.nativeUpdate(
       OutboundMessage,
       {
@@ -256,7 +257,7 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
       });
       message.status = 'sent';
       message.error = null;
-      message.sentAt = new Date();
+      message.sentAt = clock.now();
       message.nextAttemptAt = null;
     } catch (e) {
       message.status = 'failed';
@@ -265,7 +266,7 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
       message.nextAttemptAt =
         message.attempts >= maxAttempts
           ? null
-          : new Date(Date.now() + backoffMs(message.attempts, retryBaseMs));
+          : new Date(clock.nowMs() + backoffMs(message.attempts, retryBaseMs));
     } finally {
       transport.close();
     }

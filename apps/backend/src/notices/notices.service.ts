@@ -29,6 +29,7 @@ import {
   SWITCH_OF,
   type NoticeChoices,
 } from './notice-settings';
+import { clock } from '../common/clock';
 
 /** An event worth a notice; `key` names it once and for all (see Notice). */
 export interface NoticeEvent {
@@ -93,7 +94,7 @@ export class NoticesService implements OnApplicationBootstrap, OnModuleDestroy {
   }
 
   /** One round of the job: scan for state events, then send the digests that are due. */
-  tick(now = new Date()): Promise<void> {
+  tick(now = clock.now()): Promise<void> {
     if (this.running) return this.running;
     this.running = (async () => {
       try {
@@ -225,7 +226,7 @@ export class NoticesService implements OnApplicationBootstrap, OnModuleDestroy {
   // ---- the scan: events that are states ----------------------------------------------
 
   /** Lots awaiting a decision (or at their reject number) and SCARs past their date. */
-  async scan(now = new Date()): Promise<number> {
+  async scan(now = clock.now()): Promise<number> {
     const em = this.em.fork();
     let stored = 0;
     const awaiting = await em.find(
@@ -286,7 +287,7 @@ export class NoticesService implements OnApplicationBootstrap, OnModuleDestroy {
    * Sends each waiting user's digest once a day, from the digest hour (UTC) on. Returns the
    * number of digests queued.
    */
-  async sendDigests(now = new Date()): Promise<number> {
+  async sendDigests(now = clock.now()): Promise<number> {
     if (now.getUTCHours() < this.config.notices.digestHourUtc) return 0;
     const today = isoDate(now);
     const waiting = await this.em

@@ -15,6 +15,7 @@ import { Photo } from './entities/photo.entity';
 import { checkImage } from './image-check';
 import type { ImageType } from './image-header';
 import { photoView } from './photo-view';
+import { clock } from '../common/clock';
 
 const EXTENSIONS: Record<ImageType, string> = {
   'image/jpeg': 'jpg',
@@ -137,7 +138,7 @@ export class PhotosService {
       }
       // The supplier's notice and evidence pack show the photo: it stays as they were sent.
       await assertEvidenceNotSent(tx, p.lot, 'this photo cannot be voided');
-      const at = new Date();
+      const at = clock.now();
       p.voided = true;
       p.voidReason = reason;
       p.voidedBy = await tx.findOneOrFail(User, { id: actor.id });

@@ -17,6 +17,7 @@ import { Product } from './entities/product.entity';
 import { productView, type ProductView } from './product-view';
 import { planForLot, type PlanAnswer } from './sampling-plan';
 import { versionedEdit } from '../common/versioned-edit';
+import { clock } from '../common/clock';
 
 const SORTS = ['sku', 'description', 'kind', 'supplier', 'createdAt'] as const;
 const SORT_COLUMNS: Record<(typeof SORTS)[number], string> = {
@@ -193,7 +194,7 @@ export class ProductsService {
         if (conductors) {
           replaceConductors(em, product, conductors);
           // The product row is written too, so its version moves with its conductors.
-          product.updatedAt = new Date();
+          product.updatedAt = clock.now();
         }
         const criteriaBefore = acceptanceCriteria(before);
         const criteriaAfter = acceptanceCriteria(productView(product, state));

@@ -26,6 +26,7 @@ import type { VendorReturn } from './entities/vendor-return.entity';
 import { ReadingsExportService } from '../exports/readings-export.service';
 import { money } from './return-money';
 import { ReturnEvidence, type LotEvidence } from './return-evidence';
+import { clock } from '../common/clock';
 
 const OUTCOME: Record<string, string> = {
   accept: 'Accepted',
@@ -271,7 +272,7 @@ export class ReturnDocuments {
     return evidencePackPdf({
       number: ret.number,
       documentNumber: `${ret.number}-EP${ret.version}`,
-      issuedAt: new Date(),
+      issuedAt: clock.now(),
       paper,
       supplier: `${ret.supplier.name} (${ret.supplier.code})`,
       status: statusWords(ret),

@@ -16,6 +16,7 @@ import type { VendorReturn } from './entities/vendor-return.entity';
 import { ReturnDocuments } from './return-documents';
 import { money } from './return-money';
 import { ReturnsService, type ReturnRef } from './returns.service';
+import { clock } from '../common/clock';
 
 const RELATED = 'vendor_return';
 
@@ -128,7 +129,7 @@ export class ReturnMailService implements OnModuleInit {
     const revoked = await em.nativeUpdate(
       ReturnLink,
       { vendorReturn: id, revokedAt: null },
-      { revokedAt: new Date() },
+      { revokedAt: clock.now() },
     );
     this.audit.record(em, actor, {
       action: 'return.revoke_links',

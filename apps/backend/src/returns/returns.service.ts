@@ -27,6 +27,7 @@ import { OpenReturnLot } from './entities/open-return-lot.entity';
 import { VendorReturn, type ReturnStatus } from './entities/vendor-return.entity';
 import { allowedNext, canMove, chargeback, cleanCosts } from './return-rules';
 import { returnView, type ReturnView } from './return-view';
+import { clock } from '../common/clock';
 
 const POPULATE = ['supplier', 'lots', 'createdBy'] as const;
 
@@ -150,7 +151,7 @@ export class ReturnsService {
     actor: RequestUser,
   ) {
     const lots = await this.returnableLots(tx, dto.lotIds);
-    const year = new Date().getUTCFullYear();
+    const year = clock.now().getUTCFullYear();
     const costs = cleanCosts(dto.costs);
     const ret = tx.create(VendorReturn, {
       number: formatNumber('RTV', year, await nextSeqInYear(tx, VendorReturn, 'RTV', year)),
@@ -343,7 +344,7 @@ export class ReturnsService {
             const beforeLots = ret.lots.getItems().map((l) => l.id);
             const action = await work(tx, ret);
             // Every change writes the row, so its version moves even when only the lots did.
-            ret.updatedAt = new Date();
+            ret.updatedAt = clock.now();
             await tx.flush();
             const lotIds = new Set([...beforeLots, ...ret.lots.getItems().map((l) => l.id)]);
             for (const lotId of lotIds) {
@@ -467,7 +468,7 @@ export class ReturnsService {
     return this.change(id, dto.version, actor, async (tx, ret) => {
       this.move(tx, actor, ret, 'cancelled');
       ret.cancelReason = dto.reason.trim();
-      ret.cancelledAt = new Date();
+      ret.cancelledAt = clock.now();
       await this.release(tx, ret);
       return 'return.cancel';
     });
@@ -478,7 +479,7 @@ export class ReturnsService {
     return this.change(id, undefined, actor, async (tx, ret) => {
       this.refuseClosed(ret);
       if (ret.status === 'draft') this.move(tx, actor, ret, 'emailed');
-      ret.emailedAt = new Date();
+      ret.emailedAt = clock.now();
       return 'return.emailed';
     });
   }
@@ -501,7 +502,7 @@ export class ReturnsService {
     return this.change(id, dto.version, actor, async (tx, ret) => {
       this.move(tx, actor, ret, 'acknowledged');
       if (dto.rmaNumber?.trim()) ret.rmaNumber = dto.rmaNumber.trim();
-      ret.acknowledgedAt = new Date();
+      ret.acknowledgedAt = clock.now();
       return 'return.acknowledge';
     });
   }
@@ -511,7 +512,7 @@ export class ReturnsService {
       this.move(tx, actor, ret, 'credited');
       ret.creditNoteNumber = dto.creditNoteNumber.trim();
       ret.creditAmount = dto.creditAmount;
-      ret.creditedAt = new Date();
+      ret.creditedAt = clock.now();
       return 'return.credit';
     });
   }
@@ -519,7 +520,7 @@ export class ReturnsService {
   close(id: number, dto: ReturnStepDto, actor: RequestUser): Promise<ReturnView> {
     return this.change(id, dto.version, actor, async (tx, ret) => {
       this.move(tx, actor, ret, 'closed');
-      ret.closedAt = new Date();
+      ret.closedAt = clock.now();
       await this.release(tx, ret);
       return 'return.close';
     });

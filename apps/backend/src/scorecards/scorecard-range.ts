@@ -1,5 +1,6 @@
 import { DomainError, type FieldError } from '../common/domain-error';
 import { addDays, isCalendarDate, isoDate } from '../common/calendar';
+import { clock } from '../common/clock';
 
 /** Longest range a scorecard answers: five years of monthly buckets (our choice). */
 export const MAX_RANGE_MONTHS = 60;
@@ -65,7 +66,7 @@ export function monthBuckets(start: Date, end: Date): MonthBucket[] {
 export function resolveRange(
   from: string | undefined,
   to: string | undefined,
-  today: Date = new Date(),
+  today: Date = clock.now(),
 ): ScorecardRange {
   const fallback = defaultRange(today);
   const toDate = to ?? fallback.to;

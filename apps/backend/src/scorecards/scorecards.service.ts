@@ -11,6 +11,7 @@ import type { ScorecardRange } from './scorecard-range';
 import type { ScorecardList, ScorecardRow, SupplierScorecard } from '@gaugeproof/api-types';
 import { SupplierDetailQuery } from './supplier-detail.query';
 import { SupplierMetricsQuery } from './supplier-metrics.query';
+import { clock } from '../common/clock';
 
 const byPurposeOrder = (a: { purpose: string }, b: { purpose: string }) =>
   (CONDUCTOR_PURPOSES as readonly string[]).indexOf(a.purpose) -
@@ -28,7 +29,7 @@ export class ScorecardsService {
   ) {}
 
   private async rows(range: ScorecardRange, suppliers: SupplierIdentity[], supplierId?: number) {
-    const today = isoDate(new Date());
+    const today = isoDate(clock.now());
     const [lots, readings, samples, units, cars, chargebacks] = await Promise.all([
       this.metrics.lotsByMonth(range, supplierId),
       this.metrics.readingsByMonth(range, supplierId),
@@ -55,7 +56,7 @@ export class ScorecardsService {
    * part of the key (overdue SCARs).
    */
   async list(range: ScorecardRange): Promise<ScorecardList> {
-    const key = `${range.start.toISOString()}|${range.end.toISOString()}|${isoDate(new Date())}`;
+    const key = `${range.start.toISOString()}|${range.end.toISOString()}|${isoDate(clock.now())}`;
     return this.cache.list(await this.changes.read(), key, () => this.computeList(range));
   }
 

@@ -24,6 +24,7 @@ import { ReturnLink } from './entities/return-link.entity';
 import { ScarAttachment } from './entities/scar-attachment.entity';
 import { SupplierLink } from './entities/supplier-link.entity';
 import { DAY_MS, LINK_DAYS, newPortalToken, sha256, signedByUs } from './portal-token';
+import { clock } from '../common/clock';
 
 export { LINK_DAYS } from './portal-token';
 
@@ -103,7 +104,7 @@ export class SupplierPortalService {
       tokenHash: sha256(token),
       correctiveAction: car,
       sentTo: to,
-      expiresAt: new Date(Date.now() + LINK_DAYS * DAY_MS),
+      expiresAt: new Date(clock.nowMs() + LINK_DAYS * DAY_MS),
       createdBy: em.getReference(User, actor.id),
     });
     await em.flush();
@@ -157,7 +158,7 @@ export class SupplierPortalService {
     const revoked = await em.nativeUpdate(
       SupplierLink,
       { correctiveAction: id, revokedAt: null },
-      { revokedAt: new Date() },
+      { revokedAt: clock.now() },
     );
     this.audit.record(em, actor, {
       action: 'corrective_action.revoke_links',
@@ -197,7 +198,7 @@ export class SupplierPortalService {
         'This link was withdrawn by your customer. Use the newest link you received, or ask for a new one.',
       );
     }
-    if (link.expiresAt.getTime() < Date.now()) {
+    if (link.expiresAt.getTime() < clock.nowMs()) {
       throw new GoneException(
         `This link expired on ${isoDate(link.expiresAt)}. Ask your customer for a new one.`,
       );
@@ -220,7 +221,7 @@ export class SupplierPortalService {
   async view(token: string) {
     const em = this.em.fork();
     const found = await this.resolveAny(em, token);
-    found.link.lastOpenedAt = new Date();
+    found.link.lastOpenedAt = clock.now();
     await em.flush();
     return found.kind === 'scar' ? this.viewOf(em, found.link) : this.returnViewOf(em, found.link);
   }
@@ -375,9 +376,9 @@ export class SupplierPortalService {
         car.correctiveAction = dto.correctiveAction.trim();
         car.promisedOn = dto.promisedOn;
         car.status = 'responded';
-        car.respondedAt = new Date();
+        car.respondedAt = clock.now();
         car.respondedBy = `supplier link (${link.sentTo})`;
-        car.updatedAt = new Date();
+        car.updatedAt = clock.now();
         await tx.flush();
         const lotIds = car.lots.getItems().map((l) => l.id);
         for (const lotId of lotIds.length ? lotIds : [null]) {

@@ -1,4 +1,5 @@
 import { Entity, Index, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { clock } from '../../common/clock';
 
 /** Append-only record of who did what to which record. No API deletes one. */
 @Entity({ tableName: 'audit_events' })
@@ -38,5 +39,5 @@ export class AuditEvent {
 
   @Property({ type: 'Date' })
   @Index()
-  at: Opt<Date> = new Date();
+  at: Opt<Date> = clock.now();
 }

@@ -3,6 +3,7 @@ import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property, type Opt } from '
 import { Lot } from '../../lots/entities/lot.entity';
 import { User } from '../../users/entities/user.entity';
 import { Decision } from './decision.entity';
+import { clock } from '../../common/clock';
 
 /**
  * `pending`: asked for, waiting for a second QA lead or an admin (the product's policy
@@ -58,7 +59,7 @@ export class Concession {
   requestedBy!: User;
 
   @Property({ type: 'Date' })
-  requestedAt: Opt<Date> = new Date();
+  requestedAt: Opt<Date> = clock.now();
 
   /** Who approved or refused it (the requester when no second approval was needed). */
   @ManyToOne(() => User, { nullable: true })

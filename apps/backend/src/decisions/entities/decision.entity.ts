@@ -2,6 +2,7 @@ import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property, type Opt } from '
 import { Lot } from '../../lots/entities/lot.entity';
 import { User } from '../../users/entities/user.entity';
 import { DECISION_OUTCOMES, type DecisionOutcome } from '@gaugeproof/api-types';
+import { clock } from '../../common/clock';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { DECISION_OUTCOMES, type DecisionOutcome };
@@ -38,5 +39,5 @@ export class Decision {
   decidedBy!: User;
 
   @Property({ type: 'Date' })
-  decidedAt: Opt<Date> = new Date();
+  decidedAt: Opt<Date> = clock.now();
 }

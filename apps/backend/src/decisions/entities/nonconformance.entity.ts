@@ -2,6 +2,7 @@ import { Entity, ManyToOne, PrimaryKey, Property, Unique, type Opt } from '@mikr
 import { Lot } from '../../lots/entities/lot.entity';
 import { Decision } from './decision.entity';
 import { NCR_STATUSES } from '@gaugeproof/api-types';
+import { clock } from '../../common/clock';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { NCR_STATUSES };
@@ -37,5 +38,5 @@ export class Nonconformance {
   status: Opt<string> = 'open';
 
   @Property({ type: 'Date' })
-  createdAt: Opt<Date> = new Date();
+  createdAt: Opt<Date> = clock.now();
 }

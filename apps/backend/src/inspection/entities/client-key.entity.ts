@@ -1,4 +1,5 @@
 import { Entity, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { clock } from '../../common/clock';
 
 export const CLIENT_KEY_KINDS = ['reading', 'sample'] as const;
 export type ClientKeyKind = (typeof CLIENT_KEY_KINDS)[number];
@@ -21,5 +22,5 @@ export class ClientKey {
   recordId!: number;
 
   @Property({ type: 'Date' })
-  createdAt: Opt<Date> = new Date();
+  createdAt: Opt<Date> = clock.now();
 }

@@ -1,6 +1,7 @@
 import { Entity, ManyToOne, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
 import { Lot } from '../../lots/entities/lot.entity';
 import { User } from '../../users/entities/user.entity';
+import { clock } from '../../common/clock';
 
 /**
  * A readings CSV import that was recorded, kept so that a retry of it (the same
@@ -27,7 +28,7 @@ export class ReadingImport {
   importedBy!: User;
 
   @Property({ type: 'Date' })
-  importedAt: Opt<Date> = new Date();
+  importedAt: Opt<Date> = clock.now();
 
   /** The answer the import gave (null only inside its own transaction). */
   @Property({ type: 'json', nullable: true })

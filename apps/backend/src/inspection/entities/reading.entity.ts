@@ -2,6 +2,7 @@ import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property, type Opt } from '
 import { User } from '../../users/entities/user.entity';
 import { Sample } from './sample.entity';
 import { READING_METHODS, VERDICTS, type ReadingMethod, type Verdict } from '@gaugeproof/api-types';
+import { clock } from '../../common/clock';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { READING_METHODS, VERDICTS, type ReadingMethod, type Verdict };
@@ -91,7 +92,7 @@ export class Reading {
   takenBy!: User;
 
   @Property({ type: 'Date' })
-  takenAt: Opt<Date> = new Date();
+  takenAt: Opt<Date> = clock.now();
 
   @Property({ type: 'boolean' })
   voided: Opt<boolean> = false;

@@ -11,6 +11,7 @@ import { Lot } from '../../lots/entities/lot.entity';
 import { ConductorSpec } from '../../products/entities/conductor-spec.entity';
 import { User } from '../../users/entities/user.entity';
 import { Reading } from './reading.entity';
+import { clock } from '../../common/clock';
 
 /** One cut piece from one unit of a lot, for one conductor of the product. */
 @Entity({ tableName: 'samples' })
@@ -39,5 +40,5 @@ export class Sample {
   createdBy!: User;
 
   @Property({ type: 'Date' })
-  createdAt: Opt<Date> = new Date();
+  createdAt: Opt<Date> = clock.now();
 }

@@ -1,5 +1,6 @@
 import { Entity, Enum, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
 import { INSTRUMENT_KINDS, type InstrumentKind } from '@gaugeproof/api-types';
+import { clock } from '../../common/clock';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { INSTRUMENT_KINDS, type InstrumentKind };
@@ -39,10 +40,10 @@ export class Instrument {
   active: Opt<boolean> = true;
 
   @Property({ type: 'Date' })
-  createdAt: Opt<Date> = new Date();
+  createdAt: Opt<Date> = clock.now();
 
-  @Property({ type: 'Date', onUpdate: () => new Date() })
-  updatedAt: Opt<Date> = new Date();
+  @Property({ type: 'Date', onUpdate: () => clock.now() })
+  updatedAt: Opt<Date> = clock.now();
 
   /** Stated accuracy as ± % of the reading (maker's specification); null when not stated. */
   @Property({ type: 'double', nullable: true })

@@ -14,6 +14,7 @@ import { Supplier } from '../../suppliers/entities/supplier.entity';
 import { User } from '../../users/entities/user.entity';
 import { Sample } from '../../inspection/entities/sample.entity';
 import { LOT_STATUSES, type LotStatus } from '@gaugeproof/api-types';
+import { clock } from '../../common/clock';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { LOT_STATUSES, type LotStatus };
@@ -64,7 +65,7 @@ export class Lot {
   unit!: string;
 
   @Property({ type: 'Date' })
-  receivedAt: Opt<Date> = new Date();
+  receivedAt: Opt<Date> = clock.now();
 
   @ManyToOne(() => User)
   receivedBy!: User;
@@ -86,8 +87,8 @@ export class Lot {
   version!: number;
 
   @Property({ type: 'Date' })
-  createdAt: Opt<Date> = new Date();
+  createdAt: Opt<Date> = clock.now();
 
-  @Property({ type: 'Date', onUpdate: () => new Date() })
-  updatedAt: Opt<Date> = new Date();
+  @Property({ type: 'Date', onUpdate: () => clock.now() })
+  updatedAt: Opt<Date> = clock.now();
 }

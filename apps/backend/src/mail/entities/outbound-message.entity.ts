@@ -1,5 +1,6 @@
 import { Entity, Enum, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
 import { MESSAGE_STATUSES, type MessageStatus } from '@gaugeproof/api-types';
+import { clock } from '../../common/clock';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { MESSAGE_STATUSES, type MessageStatus };
@@ -47,7 +48,7 @@ export class OutboundMessage {
   sentById: number | null = null;
 
   @Property({ type: 'Date' })
-  createdAt: Opt<Date> = new Date();
+  createdAt: Opt<Date> = clock.now();
 
   @Property({ type: 'Date', nullable: true })
   sentAt: Date | null = null;

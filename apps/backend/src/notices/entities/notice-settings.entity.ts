@@ -1,5 +1,6 @@
 import { Entity, OneToOne, Property, type Opt } from '@mikro-orm/core';
 import { User } from '../../users/entities/user.entity';
+import { clock } from '../../common/clock';
 
 /**
  * One user's e-mail notices, each switchable (issue 14 §6). A user without a row has the
@@ -38,6 +39,6 @@ export class NoticeSettings {
   @Property({ type: 'string', length: 10, nullable: true })
   digestSentOn: string | null = null;
 
-  @Property({ type: 'Date', onUpdate: () => new Date() })
-  updatedAt: Opt<Date> = new Date();
+  @Property({ type: 'Date', onUpdate: () => clock.now() })
+  updatedAt: Opt<Date> = clock.now();
 }

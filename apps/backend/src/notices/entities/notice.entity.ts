@@ -1,5 +1,6 @@
 import { Entity, Index, ManyToOne, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
 import { User } from '../../users/entities/user.entity';
+import { clock } from '../../common/clock';
 
 export const NOTICE_KINDS = [
   'lot_awaits_decision',
@@ -47,5 +48,5 @@ export class Notice {
   messageId: number | null = null;
 
   @Property({ type: 'Date' })
-  createdAt: Opt<Date> = new Date();
+  createdAt: Opt<Date> = clock.now();
 }

@@ -2,6 +2,7 @@ import { Entity, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/co
 import { Sample } from '../../inspection/entities/sample.entity';
 import { Lot } from '../../lots/entities/lot.entity';
 import { User } from '../../users/entities/user.entity';
+import { clock } from '../../common/clock';
 
 @Entity({ tableName: 'photos' })
 export class Photo {
@@ -43,7 +44,7 @@ export class Photo {
   uploadedBy!: User;
 
   @Property({ type: 'Date' })
-  createdAt: Opt<Date> = new Date();
+  createdAt: Opt<Date> = clock.now();
 
   /** Never deleted: a wrong or misleading photo is voided with a reason (issue 15). */
   @Property({ type: 'boolean' })

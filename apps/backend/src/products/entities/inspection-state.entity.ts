@@ -1,5 +1,6 @@
 import { Entity, OneToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
 import { Product } from './product.entity';
+import { clock } from '../../common/clock';
 
 /** ISO 2859-1 switching state of one supplier's product (a product has one supplier). */
 @Entity({ tableName: 'inspection_states' })
@@ -22,6 +23,6 @@ export class InspectionState {
   @Property({ type: 'text', nullable: true })
   reason: string | null = null;
 
-  @Property({ type: 'Date', onUpdate: () => new Date() })
-  updatedAt: Opt<Date> = new Date();
+  @Property({ type: 'Date', onUpdate: () => clock.now() })
+  updatedAt: Opt<Date> = clock.now();
 }

@@ -12,6 +12,7 @@ import {
 import { Supplier } from '../../suppliers/entities/supplier.entity';
 import { ConductorSpec } from './conductor-spec.entity';
 import { PRODUCT_KINDS, type ProductKind } from '@gaugeproof/api-types';
+import { clock } from '../../common/clock';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { PRODUCT_KINDS, type ProductKind };
@@ -57,10 +58,10 @@ export class Product {
   conductors = new Collection<ConductorSpec>(this);
 
   @Property({ type: 'Date' })
-  createdAt: Opt<Date> = new Date();
+  createdAt: Opt<Date> = clock.now();
 
-  @Property({ type: 'Date', onUpdate: () => new Date() })
-  updatedAt: Opt<Date> = new Date();
+  @Property({ type: 'Date', onUpdate: () => clock.now() })
+  updatedAt: Opt<Date> = clock.now();
 
   // Last, as the migration adds it (SQLite compares column order).
   /**

@@ -1,5 +1,6 @@
 import { Entity, Enum, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
 import { SUPPLIER_STATUSES, type SupplierStatus } from '@gaugeproof/api-types';
+import { clock } from '../../common/clock';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { SUPPLIER_STATUSES, type SupplierStatus };
@@ -26,10 +27,10 @@ export class Supplier {
   notes: string | null = null;
 
   @Property({ type: 'Date' })
-  createdAt: Opt<Date> = new Date();
+  createdAt: Opt<Date> = clock.now();
 
-  @Property({ type: 'Date', onUpdate: () => new Date() })
-  updatedAt: Opt<Date> = new Date();
+  @Property({ type: 'Date', onUpdate: () => clock.now() })
+  updatedAt: Opt<Date> = clock.now();
 
   /** Optimistic lock: an edit made on a stale copy is refused with 409 (issue 17 item 7). */
   @Property({ type: 'integer', version: true })

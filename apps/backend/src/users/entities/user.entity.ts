@@ -1,5 +1,6 @@
 import { Entity, Enum, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
 import { ROLES, type Role } from '../../auth/roles';
+import { clock } from '../../common/clock';
 
 @Entity({ tableName: 'users' })
 export class User {
@@ -23,10 +24,10 @@ export class User {
   active: Opt<boolean> = true;
 
   @Property({ type: 'Date' })
-  createdAt: Opt<Date> = new Date();
+  createdAt: Opt<Date> = clock.now();
 
-  @Property({ type: 'Date', onUpdate: () => new Date() })
-  updatedAt: Opt<Date> = new Date();
+  @Property({ type: 'Date', onUpdate: () => clock.now() })
+  updatedAt: Opt<Date> = clock.now();
 
   // Last, as the migration adds it (SQLite compares column order).
   /**
