@@ -13,7 +13,6 @@ import { InputSafetyPipe } from './common/input-safety.pipe';
 import { BodyDepthPipe } from './common/body-depth.pipe';
 import { BootQuietLogger } from './common/boot-quiet.logger';
 import type { AppConfig } from './config/env';
-import { StorageService } from './storage/storage.service';
 import { FieldValidationPipe } from './common/field-validation.pipe';
 import { checkCountedTables } from './database/change-counters';
 
@@ -82,7 +81,7 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
   if (config.seedDemo) {
     // Loaded only when demo data is wanted: it draws its photos with jimp.
     const { seedDemo } = await import('./seed/seed-demo.js');
-    await seedDemo(orm.em.fork(), app.get(StorageService), config.seedHistory);
+    await seedDemo(app, config.seedHistory);
   } else {
     // A real start: say so at every start while the published demo sign-ins still work.
     const { openDemoAccounts, demoAccountsWarning } = await import('./seed/demo-accounts.js');

@@ -1,5 +1,5 @@
 import { TEXT_MIN } from '@gaugeproof/api-types';
-import { Injectable, Optional } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import { EntityManager, OptimisticLockError } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
@@ -46,8 +46,7 @@ export class DecisionsService {
     private readonly audit: AuditService,
     private readonly evaluations: LotEvaluationService,
     private readonly streams: InspectionStreams,
-    /** Absent only in the demo seed: its history raises no notices. */
-    @Optional() private readonly notices?: NoticesService,
+    private readonly notices: NoticesService,
   ) {}
 
   async decide(lotId: number, dto: CreateDecisionDto, actor: RequestUser) {
@@ -55,7 +54,7 @@ export class DecisionsService {
       const result = await retryOnUniqueConflict(() =>
         this.em.transactional((tx) => this.decideIn(tx, lotId, dto, actor)),
       );
-      if (result.decision?.outcome === 'reject' || result.pendingApproval) this.notices?.deliver();
+      if (result.decision?.outcome === 'reject' || result.pendingApproval) this.notices.deliver();
       return result;
     } catch (e) {
       if (e instanceof OptimisticLockError) throw await this.stale(lotId);
@@ -203,7 +202,6 @@ export class DecisionsService {
     evaluation: Evaluation,
     actor: RequestUser,
   ) {
-    if (!this.notices) return;
     const url = this.notices.link('');
     await this.notices.raise(tx, {
       kind: 'concession_awaits_approval',
@@ -272,7 +270,7 @@ export class DecisionsService {
       evaluation,
       approveReduced,
     });
-    if (outcome === 'reject' && this.notices) {
+    if (outcome === 'reject') {
       const url = this.notices.link('');
       await this.notices.raise(tx, {
         kind: 'lot_rejected',

@@ -47,8 +47,6 @@ export interface WriteOptions {
    * own; the caller then commits.
    */
   em?: EntityManager;
-  /** When the readings are taken and audited (default: now); the seed's story time. */
-  at?: Date;
 }
 
 /**
@@ -221,7 +219,7 @@ export class ReadingWriter {
    * nothing of the call is written.
    */
   async write(entries: readonly NewReading[], actor: RequestUser, options: WriteOptions = {}) {
-    const at = options.at ?? clock.now();
+    const at = clock.now();
     if (options.em) return this.writeIn(options.em, entries, actor, at);
     // Readings posted at the same moment share one commit (common/group-commit.ts).
     return this.commits.run((em) => this.writeIn(em, entries, actor, at));
@@ -229,7 +227,7 @@ export class ReadingWriter {
 
   /** Voids a reading with a reason; its sample's other live readings are computed again. */
   async void(id: number, reason: string, actor: RequestUser, options: WriteOptions = {}) {
-    const at = options.at ?? clock.now();
+    const at = clock.now();
     if (options.em) return this.voidIn(options.em, id, reason, actor, at);
     return this.commits.run((em) => this.voidIn(em, id, reason, actor, at));
   }

@@ -1,5 +1,6 @@
 import type { EntityManager } from '@mikro-orm/core';
 import { initialInspectionState } from '@gaugeproof/standards';
+import { clock } from '../common/clock';
 import { addDays, isoDate } from '../common/calendar';
 import { Instrument, type InstrumentKind } from '../instruments/entities/instrument.entity';
 import { parseConductors, replaceConductors } from '../products/conductor-specs';
@@ -199,7 +200,7 @@ export interface DemoCatalog {
  * ground smaller than its power), and the instrument register with one instrument overdue
  * and one due soon, dated from `now` so the demo reads right whatever day it starts.
  */
-export async function seedCatalog(em: EntityManager, now = new Date()): Promise<DemoCatalog> {
+export async function seedCatalog(em: EntityManager, now = clock.now()): Promise<DemoCatalog> {
   const today = isoDate(now);
   const suppliers: Record<string, Supplier> = {};
   for (const { key, notes, ...s } of SUPPLIERS) {

@@ -1,25 +1,21 @@
 import type { EntityManager } from '@mikro-orm/core';
-import { AuditService, type AuditEntry } from '../audit/audit.service';
-import type { AuditEvent } from '../audit/entities/audit-event.entity';
+import type { INestApplicationContext } from '@nestjs/common';
+import { AuditService } from '../audit/audit.service';
 import type { RequestUser } from '../auth/request-user';
+import { Clock } from '../common/clock';
 import { DecisionsService } from '../decisions/decisions.service';
-import { InspectionStreams } from '../decisions/inspection-streams';
 import { LotEvaluationService } from '../inspection/lot-evaluation';
 import { ReadingWriter } from '../inspection/reading-writer';
 import { SamplesService } from '../inspection/samples.service';
 import { LotsService } from '../lots/lots.service';
-import { LotListCache } from '../lots/lot-list-cache';
-import { ChangeCounters } from '../database/change-counters';
 import { PhotosService } from '../photos/photos.service';
 import { ReturnsService } from '../returns/returns.service';
-import type { StorageService } from '../storage/storage.service';
 import { User } from '../users/entities/user.entity';
 import type { DemoCatalog } from './seed-catalog';
 import { SeedRandom } from './seed-scenario-random';
-import { GroupCommit } from '../common/group-commit';
 
-/** The story's own time: services stamp "now", the seed moves what they stamp to this. */
-export class SeedClock {
+/** Where the story stands: the moment its next step happens. */
+export class StoryTime {
   constructor(public now: Date) {}
 
   set(at: Date): Date {
@@ -33,25 +29,18 @@ export class SeedClock {
   }
 }
 
-/** The real audit service, with each event dated at the story's clock. */
-class ClockedAudit extends AuditService {
-  constructor(private readonly clock: SeedClock) {
-    super();
-  }
-
-  override record(em: EntityManager, actor: RequestUser | null, entry: AuditEntry): AuditEvent {
-    const event = super.record(em, actor, entry);
-    event.at = new Date(this.clock.now);
-    return event;
-  }
-}
-
 export type DemoRole = 'clerk' | 'qa' | 'buyer' | 'admin';
 
 export interface ScenarioContext {
   em: EntityManager;
   now: Date;
-  clock: SeedClock;
+  time: StoryTime;
+  /**
+   * Runs one step of the story at the story's time (`Clock.runAt`): whatever the services
+   * stamp in it (audit events, created and updated times, a decision's, a return's steps)
+   * is dated then, when it is written.
+   */
+  step<T>(fn: () => Promise<T>): Promise<T>;
   rnd: SeedRandom;
   catalog: DemoCatalog;
   users: Record<DemoRole, RequestUser>;
@@ -68,16 +57,18 @@ export interface ScenarioContext {
 /** The demo shop's currency (ISO 4217), invented for the story. */
 export const DEMO_CURRENCY = 'EUR';
 
-/** The real services, built on the seed's unit of work, with the story's clock on audit. */
+/**
+ * The application's own services, from Nest's container; inside the seed's transaction
+ * their EntityManager is the seed's unit of work (MikroORM's transaction context).
+ */
 export async function scenarioContext(
+  app: INestApplicationContext,
   em: EntityManager,
-  storage: StorageService,
   catalog: DemoCatalog,
   now: Date,
 ): Promise<ScenarioContext> {
-  const clock = new SeedClock(now);
-  const audit = new ClockedAudit(clock);
-  const evaluations = new LotEvaluationService(em);
+  const clock = app.get(Clock);
+  const time = new StoryTime(now);
   const users = {} as Record<DemoRole, RequestUser>;
   for (const role of ['clerk', 'qa', 'buyer', 'admin'] as const) {
     const u = await em.findOneOrFail(User, { email: `${role}@demo.example` });
@@ -86,17 +77,18 @@ export async function scenarioContext(
   return {
     em,
     now,
-    clock,
+    time,
+    step: (fn) => clock.runAt(time.now, fn),
     rnd: new SeedRandom(20260412),
     catalog,
     users,
-    audit,
-    lots: new LotsService(em, audit, new LotListCache(), new ChangeCounters(em)),
-    samples: new SamplesService(em, audit),
-    writer: new ReadingWriter(new GroupCommit(em), audit),
-    evaluations,
-    decisions: new DecisionsService(em, audit, evaluations, new InspectionStreams(audit)),
-    photos: new PhotosService(em, audit, storage),
-    returns: new ReturnsService(em, audit, { currency: DEMO_CURRENCY }),
+    audit: app.get(AuditService),
+    lots: app.get(LotsService),
+    samples: app.get(SamplesService),
+    writer: app.get(ReadingWriter),
+    evaluations: app.get(LotEvaluationService),
+    decisions: app.get(DecisionsService),
+    photos: app.get(PhotosService),
+    returns: app.get(ReturnsService),
   };
 }

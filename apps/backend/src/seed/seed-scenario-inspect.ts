@@ -34,7 +34,7 @@ function truePiece(
 /**
  * Cuts one unit's sample of a conductor and records its readings through the application's
  * one reading write path (ReadingWriter), as a clerk's entries would be, at the story's
- * time, with instruments in calibration on the story's day.
+ * time (each step inside `ctx.step`), with instruments in calibration on the story's day.
  */
 class Bench {
   constructor(
@@ -45,23 +45,24 @@ class Bench {
 
   async cut(c: ConductorSpec, seq: number, unitRef: string): Promise<Sample> {
     const { ctx } = this;
-    ctx.clock.advance(ctx.rnd.between(1, 3));
-    const [sample] = await ctx.samples.add(
-      ctx.em,
-      this.lot,
-      [{ conductor: c, seq, unitRef }],
-      ctx.users.clerk,
-    );
-    sample.createdAt = new Date(ctx.clock.now);
-    await ctx.em.flush();
-    return sample;
+    ctx.time.advance(ctx.rnd.between(1, 3));
+    return ctx.step(async () => {
+      const [sample] = await ctx.samples.add(
+        ctx.em,
+        this.lot,
+        [{ conductor: c, seq, unitRef }],
+        ctx.users.clerk,
+      );
+      await ctx.em.flush();
+      return sample;
+    });
   }
 
   /** `confirmUnusual`: the clerk confirmed a reading the plausibility checks question. */
   async read(sample: Sample, method: ReadingMethod, inputs: ReadingInputs, confirmUnusual = false) {
     const { ctx } = this;
-    ctx.clock.advance(ctx.rnd.between(1.5, 4));
-    const instruments = this.instruments.for(method, ctx.clock.now);
+    ctx.time.advance(ctx.rnd.between(1.5, 4));
+    const instruments = this.instruments.for(method, ctx.time.now);
     const entry = {
       sampleId: sample.id,
       method,
@@ -70,10 +71,9 @@ class Bench {
       confirmUnusual,
     };
     try {
-      const [reading] = await ctx.writer.write([entry], ctx.users.clerk, {
-        em: ctx.em,
-        at: new Date(ctx.clock.now),
-      });
+      const [reading] = await ctx.step(() =>
+        ctx.writer.write([entry], ctx.users.clerk, { em: ctx.em }),
+      );
       return reading;
     } catch (e) {
       throw e instanceof ReadingsRefused ? e.refusals[0].error : e;
@@ -90,7 +90,7 @@ export async function inspect(
 ): Promise<void> {
   const measured = story.measured ?? lot.samplingPlan.sampleSize;
   if (measured === 0) return;
-  ctx.clock.advance(ctx.rnd.between(50, 140));
+  ctx.time.advance(ctx.rnd.between(50, 140));
   const bench = new Bench(ctx, instruments, lot);
   const conductors = lot.product.conductors.getItems().filter((c) => c.active);
   for (let seq = 1; seq <= measured; seq++) {
@@ -109,14 +109,11 @@ export async function inspect(
           { ...mass, lengthMm: Math.round(mass.lengthMm! / 10) },
           true,
         );
-        ctx.clock.advance(1);
-        await ctx.writer.void(typo.id, story.voided, ctx.users.qa, {
-          em: ctx.em,
-          at: new Date(ctx.clock.now),
-        });
+        ctx.time.advance(1);
+        await ctx.step(() => ctx.writer.void(typo.id, story.voided!, ctx.users.qa, { em: ctx.em }));
       }
       await bench.read(sample, 'mass', mass);
-      const now = ctx.clock.now;
+      const now = ctx.time.now;
       if ((story.resistance === 'all' || seq === 1) && instruments.covers('resistance', now)) {
         await bench.read(sample, 'resistance', resistanceInputs(piece, ctx.rnd));
       }

@@ -1,7 +1,4 @@
 import { Sample } from '../inspection/entities/sample.entity';
-import { Concession } from '../decisions/entities/concession.entity';
-import { Decision } from '../decisions/entities/decision.entity';
-import { Nonconformance } from '../decisions/entities/nonconformance.entity';
 import { Lot } from '../lots/entities/lot.entity';
 import type { ScenarioContext } from './seed-scenario-context';
 import type { InstrumentBench } from './seed-scenario-instruments';
@@ -33,45 +30,36 @@ async function decide(ctx: ScenarioContext, lot: Lot, story: LotStory, received:
     outcome: evaluation.recommendation,
     reason: REASONS[evaluation.recommendation],
   };
-  ctx.clock.set(new Date(received.getTime() + DAY_MS + ctx.rnd.int(60, 180) * 60_000));
+  ctx.time.set(new Date(received.getTime() + DAY_MS + ctx.rnd.int(60, 180) * 60_000));
   const terms = story.concession;
-  let result = await ctx.decisions.decide(
-    lot.id,
-    {
-      outcome: chosen.outcome,
-      reason: chosen.reason,
-      version: lot.version,
-      concession: terms
-        ? {
-            scope: terms.scope,
-            quantity: terms.quantity,
-            expiresOn: new Date(ctx.clock.now.getTime() + terms.days * DAY_MS)
-              .toISOString()
-              .slice(0, 10),
-          }
-        : undefined,
-    },
-    ctx.users.qa,
-  );
-  if (result.pendingApproval && result.concession) {
-    // Against a reject, the admin approves the QA lead's concession (the product's policy).
-    result = await ctx.decisions.approve(
-      result.concession.id,
-      { version: result.concession.version, note: 'Terms agreed with engineering.' },
-      ctx.users.admin,
+  await ctx.step(async () => {
+    const result = await ctx.decisions.decide(
+      lot.id,
+      {
+        outcome: chosen.outcome,
+        reason: chosen.reason,
+        version: lot.version,
+        concession: terms
+          ? {
+              scope: terms.scope,
+              quantity: terms.quantity,
+              expiresOn: new Date(ctx.time.now.getTime() + terms.days * DAY_MS)
+                .toISOString()
+                .slice(0, 10),
+            }
+          : undefined,
+      },
+      ctx.users.qa,
     );
-  }
-  const decision = result.decision!;
-  const at = new Date(ctx.clock.now);
-  await ctx.em.nativeUpdate(Decision, { id: decision.id }, { decidedAt: at });
-  if (result.concession) {
-    await ctx.em.nativeUpdate(
-      Concession,
-      { id: result.concession.id },
-      { requestedAt: at, reviewedAt: at },
-    );
-  }
-  await ctx.em.nativeUpdate(Nonconformance, { lot: lot.id }, { createdAt: at });
+    if (result.pendingApproval && result.concession) {
+      // Against a reject, the admin approves the QA lead's concession (the product's policy).
+      await ctx.decisions.approve(
+        result.concession.id,
+        { version: result.concession.version, note: 'Terms agreed with engineering.' },
+        ctx.users.admin,
+      );
+    }
+  });
 }
 
 /** Receives one lot of the story, inspects it and decides it, each step at the story's time. */
@@ -82,18 +70,20 @@ export async function runLot(
   index: number,
 ): Promise<Lot> {
   const product = ctx.catalog.products[story.product];
-  const received = ctx.clock.set(receivedAt(ctx, story));
+  const received = ctx.time.set(receivedAt(ctx, story));
   const stamp = received.toISOString().slice(2, 10).replace(/-/g, '');
-  const created = await ctx.lots.create(
-    {
-      productId: product.id,
-      poNumber: `PO-${26100 + index * 3}`,
-      packingSlip: `PS-${stamp}-${index + 1}`,
-      supplierLotCode: `${product.supplier.code}-${stamp}`,
-      quantity: story.quantity,
-      unit: story.unit,
-    },
-    ctx.users.clerk,
+  const created = await ctx.step(() =>
+    ctx.lots.create(
+      {
+        productId: product.id,
+        poNumber: `PO-${26100 + index * 3}`,
+        packingSlip: `PS-${stamp}-${index + 1}`,
+        supplierLotCode: `${product.supplier.code}-${stamp}`,
+        quantity: story.quantity,
+        unit: story.unit,
+      },
+      ctx.users.clerk,
+    ),
   );
   const load = () => ctx.em.findOneOrFail(Lot, created.id, { populate: ['product.conductors'] });
   await inspect(ctx, bench, await load(), story);
@@ -105,11 +95,5 @@ export async function runLot(
     await photograph(ctx, lot, first, story.photo);
   }
   await decide(ctx, lot, story, received);
-  await ctx.em.flush();
-  await ctx.em.nativeUpdate(
-    Lot,
-    { id: lot.id },
-    { receivedAt: received, createdAt: received, updatedAt: new Date(ctx.clock.now) },
-  );
   return lot;
 }

@@ -1,7 +1,6 @@
 import { Jimp } from 'jimp';
 import type { Sample } from '../inspection/entities/sample.entity';
 import type { Lot } from '../lots/entities/lot.entity';
-import { Photo } from '../photos/entities/photo.entity';
 import type { ScenarioContext } from './seed-scenario-context';
 
 export type CrossSection = 'copper' | 'cca' | 'undersized';
@@ -87,13 +86,13 @@ export async function photograph(
 ): Promise<void> {
   const buffer = await drawCrossSection(kind, lot.id);
   const file = { buffer, size: buffer.length, mimetype: 'image/png' } as Express.Multer.File;
-  ctx.clock.advance(3);
-  const view = await ctx.photos.upload(
-    lot.id,
-    file,
-    { sampleId: sample?.id, caption: SHAPES[kind].caption },
-    ctx.users.clerk,
+  ctx.time.advance(3);
+  await ctx.step(() =>
+    ctx.photos.upload(
+      lot.id,
+      file,
+      { sampleId: sample?.id, caption: SHAPES[kind].caption },
+      ctx.users.clerk,
+    ),
   );
-  const photo = await ctx.em.findOneOrFail(Photo, view.id);
-  photo.createdAt = new Date(ctx.clock.now);
 }

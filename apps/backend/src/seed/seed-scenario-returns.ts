@@ -1,9 +1,10 @@
 import { Nonconformance } from '../decisions/entities/nonconformance.entity';
-import { Lot } from '../lots/entities/lot.entity';
+import type { Lot } from '../lots/entities/lot.entity';
 import { OutboundMessage } from '../mail/entities/outbound-message.entity';
 import { money } from '../returns/return-money';
-import { VendorReturn, type ReturnCosts } from '../returns/entities/vendor-return.entity';
-import type { ScenarioContext } from './seed-scenario-context';
+import type { ReturnCosts } from '../returns/entities/vendor-return.entity';
+import { clock } from '../common/clock';
+import { DEMO_CURRENCY, type ScenarioContext } from './seed-scenario-context';
 
 const DAY_MS = 86_400_000;
 export const daysAgo = (ctx: ScenarioContext, days: number, hour = 10) =>
@@ -17,7 +18,7 @@ interface ReturnStory {
   rmaNumber: string;
   costs: ReturnCosts;
   notes: string;
-  /** ISO 4217 code; the server's CURRENCY when not given. */
+  /** ISO 4217 code; the demo shop's (DEMO_CURRENCY) when not given, whatever CURRENCY says. */
   currency?: string;
   /** Days ago of each step: raised, then e-mailed (shipped, acknowledged, credited, closed when given). */
   steps: number[];
@@ -27,16 +28,18 @@ interface ReturnStory {
 /** A return to vendor of a rejected lot, through the real returns service, e-mailed once. */
 async function returnLot(ctx: ScenarioContext, r: ReturnStory): Promise<void> {
   const [raised, ...later] = r.steps;
-  ctx.clock.set(daysAgo(ctx, raised, 14));
-  const view = await ctx.returns.create(
-    {
-      lotIds: [r.lot.id],
-      rmaNumber: r.rmaNumber,
-      notes: r.notes,
-      costs: r.costs,
-      currency: r.currency,
-    },
-    ctx.users.buyer,
+  ctx.time.set(daysAgo(ctx, raised, 14));
+  const view = await ctx.step(() =>
+    ctx.returns.create(
+      {
+        lotIds: [r.lot.id],
+        rmaNumber: r.rmaNumber,
+        notes: r.notes,
+        costs: r.costs,
+        currency: r.currency ?? DEMO_CURRENCY,
+      },
+      ctx.users.buyer,
+    ),
   );
   const steps: ((at: Date) => Promise<unknown>)[] = [
     async () => {
@@ -64,16 +67,12 @@ async function returnLot(ctx: ScenarioContext, r: ReturnStory): Promise<void> {
     () => ctx.returns.close(view.id, {}, ctx.users.buyer),
   ];
   for (const [i, days] of later.entries()) {
-    ctx.clock.set(daysAgo(ctx, days, 9));
-    await steps[i](daysAgo(ctx, days, 9));
+    const at = ctx.time.set(daysAgo(ctx, days, 9));
+    await ctx.step(() => steps[i](at));
   }
   const ncr = await ctx.em.findOneOrFail(Nonconformance, { lot: r.lot });
   ncr.disposition = 'return_to_vendor';
   await ctx.em.flush();
-  const at = daysAgo(ctx, raised, 14);
-  const last = daysAgo(ctx, later.at(-1) ?? raised, 9);
-  await ctx.em.nativeUpdate(VendorReturn, { id: view.id }, { createdAt: at, updatedAt: last });
-  await ctx.em.nativeUpdate(Lot, { id: r.lot.id }, { updatedAt: last });
 }
 
 /** The e-mail of the return as the mail service would record it (no SMTP in the story). */
@@ -103,8 +102,7 @@ function mailReturn(
     relatedType: 'vendor_return',
     relatedId: id,
     sentById: ctx.users.buyer.id,
-    createdAt: new Date(ctx.clock.now),
-    sentAt: r.mail === 'sent' ? new Date(ctx.clock.now) : null,
+    sentAt: r.mail === 'sent' ? clock.now() : null,
   });
   ctx.em.persist(message);
   ctx.audit.record(ctx.em, ctx.users.buyer, {

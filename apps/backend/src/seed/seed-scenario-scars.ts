@@ -1,4 +1,5 @@
 import { addDays, isoDate } from '../common/calendar';
+import { clock } from '../common/clock';
 import { formatNumber, nextSeqInYear } from '../common/numbering';
 import {
   CorrectiveAction,
@@ -18,26 +19,14 @@ interface ScarStory {
   status: CorrectiveActionStatus;
 }
 
-/** A supplier corrective action request (SCAR), raised by the buyer, perhaps answered. */
+/**
+ * A supplier corrective action request (SCAR), raised by the buyer, perhaps answered on a
+ * later day: each step written at its own time in the story.
+ */
 async function raiseScar(ctx: ScenarioContext, s: ScarStory): Promise<void> {
-  const raisedAt = ctx.clock.set(daysAgo(ctx, s.raised, 15));
+  const raisedAt = ctx.time.set(daysAgo(ctx, s.raised, 15));
   const year = raisedAt.getUTCFullYear();
-  const ca = ctx.em.create(CorrectiveAction, {
-    number: formatNumber('SCAR', year, await nextSeqInYear(ctx.em, CorrectiveAction, 'SCAR', year)),
-    supplier: s.lots[0].supplier,
-    problem: s.problem,
-    dueOn: addDays(isoDate(raisedAt), s.dueInDays),
-    status: s.status,
-    containment: s.response?.containment ?? null,
-    rootCause: s.response?.rootCause ?? null,
-    correctiveAction: s.response?.action ?? null,
-    respondedAt: s.response ? daysAgo(ctx, s.response.days, 11) : null,
-    createdBy: ctx.em.getReference(User, ctx.users.buyer.id),
-    createdAt: raisedAt,
-  });
-  ca.lots.set(s.lots);
-  await ctx.em.flush();
-  const record = (action: string, after: Record<string, unknown>) => {
+  const record = (ca: CorrectiveAction, action: string, after: Record<string, unknown>) => {
     for (const lot of s.lots) {
       ctx.audit.record(ctx.em, ctx.users.buyer, {
         action,
@@ -48,13 +37,41 @@ async function raiseScar(ctx: ScenarioContext, s: ScarStory): Promise<void> {
       });
     }
   };
-  record('corrective_action.create', { problem: ca.problem, dueOn: ca.dueOn, status: 'open' });
-  if (s.response) {
-    ctx.clock.set(daysAgo(ctx, s.response.days, 11));
-    record('corrective_action.respond', { status: s.status, rootCause: ca.rootCause });
-  }
-  await ctx.em.flush();
-  await ctx.em.nativeUpdate(CorrectiveAction, { id: ca.id }, { updatedAt: ctx.clock.now });
+  const ca = await ctx.step(async () => {
+    const created = ctx.em.create(CorrectiveAction, {
+      number: formatNumber(
+        'SCAR',
+        year,
+        await nextSeqInYear(ctx.em, CorrectiveAction, 'SCAR', year),
+      ),
+      supplier: s.lots[0].supplier,
+      problem: s.problem,
+      dueOn: addDays(isoDate(raisedAt), s.dueInDays),
+      status: 'open',
+      createdBy: ctx.em.getReference(User, ctx.users.buyer.id),
+    });
+    created.lots.set(s.lots);
+    await ctx.em.flush();
+    record(created, 'corrective_action.create', {
+      problem: created.problem,
+      dueOn: created.dueOn,
+      status: 'open',
+    });
+    await ctx.em.flush();
+    return created;
+  });
+  const response = s.response;
+  if (!response) return;
+  ctx.time.set(daysAgo(ctx, response.days, 11));
+  await ctx.step(async () => {
+    ca.status = s.status;
+    ca.containment = response.containment;
+    ca.rootCause = response.rootCause;
+    ca.correctiveAction = response.action;
+    ca.respondedAt = clock.now();
+    record(ca, 'corrective_action.respond', { status: s.status, rootCause: ca.rootCause });
+    await ctx.em.flush();
+  });
 }
 
 /** The SCARs purchasing raised: one answered, one verified, one open past its due date. */

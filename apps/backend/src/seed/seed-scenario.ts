@@ -1,10 +1,11 @@
 import type { EntityManager } from '@mikro-orm/core';
+import type { INestApplicationContext } from '@nestjs/common';
 import { initialInspectionState } from '@gaugeproof/standards';
 import { Lot } from '../lots/entities/lot.entity';
 import { parseConductors, replaceConductors } from '../products/conductor-specs';
 import { InspectionState } from '../products/entities/inspection-state.entity';
 import { Product } from '../products/entities/product.entity';
-import type { StorageService } from '../storage/storage.service';
+import { clock } from '../common/clock';
 import type { DemoCatalog } from './seed-catalog';
 import { scenarioContext } from './seed-scenario-context';
 import { InstrumentBench } from './seed-scenario-instruments';
@@ -45,15 +46,15 @@ function addScenarioProducts(em: EntityManager, catalog: DemoCatalog): void {
  * the raw readings; the standards library computes every result from them.
  */
 export async function seedScenario(
+  app: INestApplicationContext,
   em: EntityManager,
-  storage: StorageService,
   catalog: DemoCatalog,
-  now = new Date(),
 ): Promise<void> {
+  const now = clock.now();
   addScenarioProducts(em, catalog);
   await em.flush();
   const bench = await InstrumentBench.open(em, now);
-  const ctx = await scenarioContext(em, storage, catalog, now);
+  const ctx = await scenarioContext(app, em, catalog, now);
   const lots = new Map<string, number>();
   for (const [index, story] of STORY.entries()) {
     lots.set(story.key, (await runLot(ctx, bench, story, index)).id);
