@@ -1,10 +1,11 @@
 import { Alert, Box, Divider, Stack, Typography } from '@mui/material';
 import { useState } from 'react';
+import { VoidWithReasonDialog } from '@/components/void-with-reason-dialog';
+import { useVoidReading, voidReadingSchema } from '@/features/inspection/api/void-reading';
 import { CrossSectionDrawing } from '@/features/inspection/components/cross-section-drawing';
 import { ReadingForm } from '@/features/inspection/components/reading-form';
 import { ReadingsTable } from '@/features/inspection/components/readings-table';
 import { VerdictChip } from '@/features/inspection/components/verdict-chip';
-import { VoidReadingDialog } from '@/features/inspection/components/void-reading-dialog';
 import { currentReading } from '@/features/inspection/lib/labels';
 import type { Conductor, Instrument, Reading, Sample } from '@/features/inspection/types';
 
@@ -28,6 +29,7 @@ export function SamplePanel({
   canVoid,
 }: SamplePanelProps) {
   const [voiding, setVoiding] = useState<number | null>(null);
+  const voidReading = useVoidReading();
   const current = currentReading(sample.readings);
   return (
     <Stack spacing={2} aria-label={`Sample ${sample.seq}`}>
@@ -109,7 +111,17 @@ export function SamplePanel({
           />
         </>
       )}
-      <VoidReadingDialog readingId={voiding} onClose={() => setVoiding(null)} />
+      {/* Readings are never deleted: voiding keeps the reading visible, struck through, with this reason. */}
+      <VoidWithReasonDialog
+        thing="reading"
+        targetId={voiding}
+        explanation="The reading stays visible, struck through, and no longer counts towards the sample's verdict."
+        examples="For example: length mis-typed, sample not fully stripped."
+        schema={voidReadingSchema}
+        mutation={voidReading}
+        onVoid={(readingId, reason) => voidReading.mutateAsync({ readingId, reason })}
+        onClose={() => setVoiding(null)}
+      />
     </Stack>
   );
 }

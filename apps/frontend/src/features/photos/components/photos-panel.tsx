@@ -1,9 +1,10 @@
 import { Card, CardContent, Stack, Typography } from '@mui/material';
 import { useState } from 'react';
+import { VoidWithReasonDialog } from '@/components/void-with-reason-dialog';
+import { useVoidPhoto, voidPhotoSchema } from '@/features/photos/api/void-photo';
 import { PhotoGrid } from '@/features/photos/components/photo-grid';
 import { PhotoUploader } from '@/features/photos/components/photo-uploader';
 import { PhotoViewerDialog } from '@/features/photos/components/photo-viewer-dialog';
-import { VoidPhotoDialog } from '@/features/photos/components/void-photo-dialog';
 import type { Photo, PhotoSampleOption } from '@/features/photos/types';
 
 interface PhotosPanelProps {
@@ -18,6 +19,7 @@ interface PhotosPanelProps {
 export function PhotosPanel({ lotId, photos, samples, canUpload, canVoid }: PhotosPanelProps) {
   const [open, setOpen] = useState<Photo | null>(null);
   const [voiding, setVoiding] = useState<number | null>(null);
+  const voidPhoto = useVoidPhoto();
   const live = photos.filter((p) => !p.voided).length;
   return (
     <Card>
@@ -43,7 +45,17 @@ export function PhotosPanel({ lotId, photos, samples, canUpload, canVoid }: Phot
             : undefined
         }
       />
-      <VoidPhotoDialog photoId={voiding} onClose={() => setVoiding(null)} />
+      {/* Photos are never deleted: a void one stays in the record, struck, with this reason. */}
+      <VoidWithReasonDialog
+        thing="photo"
+        targetId={voiding}
+        explanation="The photo stays in the lot's record, struck, with your reason; it is not deleted."
+        examples="For example: wrong reel, blurred, shows another lot."
+        schema={voidPhotoSchema}
+        mutation={voidPhoto}
+        onVoid={(photoId, reason) => voidPhoto.mutateAsync({ photoId, reason })}
+        onClose={() => setVoiding(null)}
+      />
     </Card>
   );
 }
