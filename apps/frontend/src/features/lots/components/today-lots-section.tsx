@@ -1,21 +1,9 @@
-import {
-  Alert,
-  Button,
-  Card,
-  CardContent,
-  Chip,
-  List,
-  ListItemButton,
-  ListItemText,
-  Skeleton,
-  Stack,
-  Typography,
-} from '@mui/material';
+import { Button } from '@mui/material';
 import { Link as RouterLink } from 'react-router';
+import { WorkListCard } from '@/components/work-list/work-list-card';
 import { paths } from '@/config/paths';
 import { useLots } from '@/features/lots/api/get-lots';
 import type { LotStatus } from '@/features/lots/types';
-import { errorMessage } from '@/lib/query-client';
 import { countOf } from '@/features/lots/lib/plan-preview';
 import { formatDate } from '@/lib/dates';
 
@@ -34,55 +22,30 @@ export function TodayLotsSection({ title, status, emptyText }: TodayLotsSectionP
   const total = lots.data?.total;
   const shown = lots.data?.items.length ?? 0;
   return (
-    <Card component="section" aria-label={title} sx={{ height: '100%' }}>
-      <CardContent>
-        <Stack direction="row" spacing={1} sx={{ alignItems: 'center', mb: 1 }}>
-          <Typography variant="h4" component="h2" sx={{ flexGrow: 1 }}>
-            {title}
-          </Typography>
-          {total !== undefined && (
-            <Chip
-              label={total}
-              color={total > 0 ? 'primary' : 'default'}
-              size="small"
-              aria-label={`${total} lots`}
-            />
-          )}
-        </Stack>
-        {lots.isPending && (
-          <Skeleton variant="rounded" height={72} aria-label={`Loading ${title.toLowerCase()}`} />
-        )}
-        {lots.isError && (
-          <Alert
-            severity="error"
-            action={
-              <Button color="inherit" onClick={() => void lots.refetch()}>
-                Retry
-              </Button>
-            }
-          >
-            {errorMessage(lots.error)}
-          </Alert>
-        )}
-        {lots.isSuccess && lots.data.items.length === 0 && (
-          <Typography color="text.secondary">{emptyText}</Typography>
-        )}
-        {lots.isSuccess && lots.data.items.length > 0 && (
-          <List dense disablePadding>
-            {lots.data.items.map((lot) => {
+    <WorkListCard
+      title={title}
+      countLabel={(n) => `${n} lots`}
+      tone="primary"
+      query={lots}
+      total={total}
+      loadingLabel={`Loading ${title.toLowerCase()}`}
+      items={
+        lots.isSuccess
+          ? lots.data.items.map((lot) => {
               const age = daysAgo(lot.receivedAt);
-              return (
-                <ListItemButton key={lot.id} component={RouterLink} to={paths.lot.getHref(lot.id)}>
-                  <ListItemText
-                    primary={`Lot ${lot.id} · ${lot.product.sku} · PO ${lot.poNumber}`}
-                    secondary={`${lot.supplier.name} · ${countOf(lot.quantity, lot.unit)} · received ${formatDate(lot.receivedAt)}${age >= 1 ? ` (${age} d ago)` : ''}`}
-                  />
-                </ListItemButton>
-              );
-            })}
-          </List>
-        )}
-        {total !== undefined && total > 0 && (
+              return {
+                key: lot.id,
+                href: paths.lot.getHref(lot.id),
+                primary: `Lot ${lot.id} · ${lot.product.sku} · PO ${lot.poNumber}`,
+                secondary: `${lot.supplier.name} · ${countOf(lot.quantity, lot.unit)} · received ${formatDate(lot.receivedAt)}${age >= 1 ? ` (${age} d ago)` : ''}`,
+              };
+            })
+          : undefined
+      }
+      emptyText={emptyText}
+      footer={
+        total !== undefined &&
+        total > 0 && (
           <Button
             component={RouterLink}
             to={paths.lots.getHref(status)}
@@ -91,8 +54,8 @@ export function TodayLotsSection({ title, status, emptyText }: TodayLotsSectionP
           >
             {total > shown ? `All ${total} in the Lots list` : 'Open in the Lots list'}
           </Button>
-        )}
-      </CardContent>
-    </Card>
+        )
+      }
+    />
   );
 }
