@@ -1,9 +1,7 @@
-import { STANDARD_STRANDING_INCREMENT, type MaterialId } from '@gaugeproof/standards';
-import { Stack } from '@mui/material';
-import { useState } from 'react';
 import { calcAreaFromMass } from '@/features/reference/calculations';
+import { useAreaCommonInputs } from '@/features/reference/components/area-common-inputs';
 import { AreaOutcomeView } from '@/features/reference/components/area-outcome-view';
-import { CalcField, MaterialField } from '@/features/reference/components/calc-field';
+import { CalculatorFrame } from '@/features/reference/components/calculator-frame';
 import { useUnitText } from '@/features/reference/use-unit-text';
 import { inputUnits, useUnits } from '@/lib/units';
 
@@ -13,60 +11,37 @@ export function AreaFromMassCalculator() {
   const units = inputUnits[system];
   const [mass, setMass] = useUnitText('mass');
   const [length, setLength] = useUnitText('shortLength');
-  const [material, setMaterial] = useState<MaterialId>('copper');
-  const [k, setK] = useState(String(STANDARD_STRANDING_INCREMENT * 100));
-  const [label, setLabel] = useState('');
-  const calc = calcAreaFromMass({
-    system,
-    mass,
-    length,
-    material,
-    strandingIncrementPercent: k,
-    compareLabel: label,
+  const common = useAreaCommonInputs({
+    materialLabel: 'Assumed material',
+    strandingHelp: 'ASTM B496 standard: 2 %. 0 for a solid conductor.',
+    compareExample: '4 AWG',
   });
-  const errorOf = (field: string) =>
-    !calc.ok && calc.field === field && calc.message !== 'Enter a value.'
-      ? calc.message
-      : undefined;
-
+  const calc = calcAreaFromMass({ system, mass, length, ...common.values });
   return (
-    <Stack spacing={2}>
-      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
-        <CalcField
-          label="Stripped mass"
-          unit={units.mass}
-          value={mass}
-          onChange={setMass}
-          error={errorOf('massG')}
-        />
-        <CalcField
-          label="Cut length"
-          unit={units.shortLength}
-          value={length}
-          onChange={setLength}
-          error={errorOf('lengthMm')}
-        />
-        <MaterialField label="Assumed material" value={material} onChange={setMaterial} />
-      </Stack>
-      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
-        <CalcField
-          label="Stranding increment"
-          unit="%"
-          value={k}
-          onChange={setK}
-          error={errorOf('strandingIncrement')}
-          helperText="ASTM B496 standard: 2 %. 0 for a solid conductor."
-        />
-        <CalcField
-          label="Compare with label"
-          inputMode="text"
-          value={label}
-          onChange={setLabel}
-          error={errorOf('label')}
-          helperText="Optional, e.g. 4 AWG"
-        />
-      </Stack>
-      <AreaOutcomeView calc={calc} />
-    </Stack>
+    <CalculatorFrame
+      calc={calc}
+      rows={[
+        [
+          {
+            label: 'Stripped mass',
+            unit: units.mass,
+            value: mass,
+            onChange: setMass,
+            errorFor: 'massG',
+          },
+          {
+            label: 'Cut length',
+            unit: units.shortLength,
+            value: length,
+            onChange: setLength,
+            errorFor: 'lengthMm',
+          },
+          common.material,
+        ],
+        [common.stranding, common.compare],
+      ]}
+    >
+      {(outcome) => <AreaOutcomeView outcome={outcome} />}
+    </CalculatorFrame>
   );
 }

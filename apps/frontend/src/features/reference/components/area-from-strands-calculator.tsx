@@ -1,8 +1,7 @@
-import { Stack } from '@mui/material';
 import { useState } from 'react';
 import { calcAreaFromStrands } from '@/features/reference/calculations';
 import { AreaOutcomeView } from '@/features/reference/components/area-outcome-view';
-import { CalcField } from '@/features/reference/components/calc-field';
+import { CalculatorFrame } from '@/features/reference/components/calculator-frame';
 import { useUnitText } from '@/features/reference/use-unit-text';
 import { inputUnits, useUnits } from '@/lib/units';
 
@@ -18,40 +17,41 @@ export function AreaFromStrandsCalculator() {
     strandDiameters: diameters,
     compareLabel: label,
   });
-  const errorOf = (field: string) =>
-    !calc.ok && calc.field === field && !calc.message.startsWith('Enter')
-      ? calc.message
-      : undefined;
-
   return (
-    <Stack spacing={2}>
-      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
-        <CalcField
-          label="Strand count"
-          inputMode="numeric"
-          value={count}
-          onChange={setCount}
-          error={errorOf('count')}
-        />
-        <CalcField
-          label="Strand diameters"
-          unit={inputUnits[system].shortLength}
-          inputMode="text"
-          value={diameters}
-          onChange={setDiameters}
-          error={errorOf('strandDiameterMm')}
-          helperText="Measure at least three strands; separate with spaces."
-        />
-        <CalcField
-          label="Compare with label"
-          inputMode="text"
-          value={label}
-          onChange={setLabel}
-          error={errorOf('label')}
-          helperText="Optional, e.g. 8 AWG"
-        />
-      </Stack>
-      <AreaOutcomeView calc={calc} />
-    </Stack>
+    <CalculatorFrame
+      calc={calc}
+      // Any "Enter …" (a value, a number, at least one value) waits below, not on a field.
+      isQuiet={(message) => message.startsWith('Enter')}
+      rows={[
+        [
+          {
+            label: 'Strand count',
+            inputMode: 'numeric',
+            value: count,
+            onChange: setCount,
+            errorFor: 'count',
+          },
+          {
+            label: 'Strand diameters',
+            unit: inputUnits[system].shortLength,
+            inputMode: 'text',
+            value: diameters,
+            onChange: setDiameters,
+            errorFor: 'strandDiameterMm',
+            helperText: 'Measure at least three strands; separate with spaces.',
+          },
+          {
+            label: 'Compare with label',
+            inputMode: 'text',
+            value: label,
+            onChange: setLabel,
+            errorFor: 'label',
+            helperText: 'Optional, e.g. 8 AWG',
+          },
+        ],
+      ]}
+    >
+      {(outcome) => <AreaOutcomeView outcome={outcome} />}
+    </CalculatorFrame>
   );
 }

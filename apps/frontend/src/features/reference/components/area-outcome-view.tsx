@@ -1,5 +1,5 @@
-import { Alert, Box, Stack, Typography } from '@mui/material';
-import type { AreaOutcome, Calc } from '@/features/reference/calculations';
+import { Box, Stack, Typography } from '@mui/material';
+import type { AreaOutcome } from '@/features/reference/calculations';
 import { useUnits } from '@/lib/units';
 
 /** ASTM B496 area acceptance, 98 % of nominal (REFERENCE §3), to colour the ratio only. */
@@ -7,19 +7,10 @@ const MIN_AREA_RATIO = 0.98;
 
 const percent = (ratio: number) => `${(ratio * 100).toFixed(1)} %`;
 
-/** The live result of an area calculator, or why there is none yet. */
-export function AreaOutcomeView({ calc }: { calc: Calc<AreaOutcome> }) {
+/** The live result of an area calculator. */
+export function AreaOutcomeView({ outcome }: { outcome: AreaOutcome }) {
   const { formatAreaMm2 } = useUnits();
-  if (!calc.ok) {
-    return (
-      <Alert severity="info" variant="outlined">
-        {calc.message === 'Enter a value.'
-          ? 'Fill in the fields; the result appears as you type.'
-          : calc.message}
-      </Alert>
-    );
-  }
-  const { result, measuresAs, compare } = calc.value;
+  const { result, measuresAs, compare } = outcome;
   return (
     <Box aria-live="polite" data-testid="area-outcome">
       <Typography variant="h5" component="p">
