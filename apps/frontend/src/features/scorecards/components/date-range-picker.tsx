@@ -10,6 +10,11 @@ import {
 } from '@/features/scorecards/lib/date-range';
 import type { DateRange } from '@/features/scorecards/types';
 
+const DATE_INPUTS = [
+  { name: 'from', label: 'Received from', helperText: ' ' },
+  { name: 'to', label: 'Received to', helperText: 'Both days included' },
+] as const;
+
 interface DateRangePickerProps {
   value: DateRange;
   onChange: (range: DateRange) => void;
@@ -38,26 +43,19 @@ export function DateRangePicker({ value, onChange }: DateRangePickerProps) {
   const active = presetOf(value);
   return (
     <Stack direction={{ xs: 'column', md: 'row' }} spacing={2} sx={{ alignItems: 'flex-start' }}>
-      <FormTextField
-        control={form.control}
-        name="from"
-        onValueChange={apply}
-        label="Received from"
-        type="date"
-        size="small"
-        helperText=" "
-        slotProps={{ inputLabel: { shrink: true } }}
-      />
-      <FormTextField
-        control={form.control}
-        name="to"
-        onValueChange={apply}
-        label="Received to"
-        type="date"
-        size="small"
-        helperText="Both days included"
-        slotProps={{ inputLabel: { shrink: true } }}
-      />
+      {DATE_INPUTS.map((input) => (
+        <FormTextField
+          key={input.name}
+          control={form.control}
+          name={input.name}
+          onValueChange={apply}
+          label={input.label}
+          type="date"
+          size="small"
+          helperText={input.helperText}
+          slotProps={{ inputLabel: { shrink: true } }}
+        />
+      ))}
       <ButtonGroup size="small" aria-label="Range presets" sx={{ mt: { md: 0.5 } }}>
         {RANGE_PRESETS.map((months) => (
           <Button

@@ -1,7 +1,6 @@
 import PersonOutlined from '@mui/icons-material/PersonOutlined';
-import { Alert, Button, List, ListItem, ListItemText, Typography } from '@mui/material';
+import { QueuedReadingsAlert } from '@/features/inspection/components/bench/queued-readings-alert';
 import type { QueuedReading } from '@/features/inspection/lib/offline-queue';
-import { formatTime } from '@/lib/dates';
 
 interface HeldReadingsProps {
   /** Readings on this device taken by someone other than the signed-in user. */
@@ -24,39 +23,19 @@ export function HeldReadings({ entries, onClaim }: HeldReadingsProps) {
   if (entries.length === 0) return null;
   const count = `${entries.length} reading${entries.length === 1 ? '' : 's'}`;
   return (
-    <Alert severity="warning" icon={<PersonOutlined />} aria-label="Waiting for their recorder">
-      <Typography sx={{ fontWeight: 700 }}>
-        {count} taken by {recorderWords(entries)} {entries.length === 1 ? 'waits' : 'wait'} for
-        their recorder
-      </Typography>
-      <Typography variant="body2">
-        Not sent under your name: a reading is filed under whoever sends it. It goes when the person
-        who took it signs in on this device.
-      </Typography>
-      <List dense disablePadding>
-        {entries.map((e) => (
-          <ListItem
-            key={e.clientId}
-            disableGutters
-            secondaryAction={
-              e.recordedBy ? undefined : (
-                <Button size="small" color="inherit" onClick={() => onClaim(e.clientId)}>
-                  I took it
-                </Button>
-              )
-            }
-          >
-            <ListItemText
-              primary={`${e.label} · ${e.request.method} · taken ${formatTime(e.queuedAt)}`}
-              secondary={
-                e.recordedBy
-                  ? `taken by ${e.recordedBy.name}`
-                  : 'kept before this device noted who took readings: send it only if you took it'
-              }
-            />
-          </ListItem>
-        ))}
-      </List>
-    </Alert>
+    <QueuedReadingsAlert
+      label="Waiting for their recorder"
+      severity="warning"
+      icon={<PersonOutlined />}
+      title={`${count} taken by ${recorderWords(entries)} ${entries.length === 1 ? 'waits' : 'wait'} for their recorder`}
+      note="Not sent under your name: a reading is filed under whoever sends it. It goes when the person who took it signs in on this device."
+      entries={entries}
+      describe={(e) =>
+        e.recordedBy
+          ? `taken by ${e.recordedBy.name}`
+          : 'kept before this device noted who took readings: send it only if you took it'
+      }
+      entryAction={(e) => (e.recordedBy ? null : { text: 'I took it', onClick: onClaim })}
+    />
   );
 }

@@ -1,7 +1,7 @@
 import CloudUploadOutlined from '@mui/icons-material/CloudUploadOutlined';
-import { Alert, Button, List, ListItem, ListItemText, Stack, Typography } from '@mui/material';
+import { Button } from '@mui/material';
+import { QueuedReadingsAlert } from '@/features/inspection/components/bench/queued-readings-alert';
 import type { QueuedReading } from '@/features/inspection/lib/offline-queue';
-import { formatTime } from '@/lib/dates';
 
 interface WaitingReadingsProps {
   entries: readonly QueuedReading[];
@@ -15,10 +15,10 @@ export function WaitingReadings({ entries, sending, onSend, onDiscard }: Waiting
   if (entries.length === 0) return null;
   const waiting = entries.filter((e) => e.refused === null);
   return (
-    <Alert
+    <QueuedReadingsAlert
+      label="Waiting to send"
       severity={waiting.length < entries.length ? 'error' : 'info'}
       icon={<CloudUploadOutlined />}
-      aria-label="Waiting to send"
       action={
         waiting.length > 0 ? (
           <Button color="inherit" size="small" loading={sending} onClick={onSend}>
@@ -26,36 +26,13 @@ export function WaitingReadings({ entries, sending, onSend, onDiscard }: Waiting
           </Button>
         ) : undefined
       }
-    >
-      <Typography sx={{ fontWeight: 700 }}>
-        {waiting.length} reading{waiting.length === 1 ? '' : 's'} waiting to send
-      </Typography>
-      <Typography variant="body2">
-        Kept on this device and sent in order when the network answers.
-      </Typography>
-      <List dense disablePadding>
-        {entries.map((e) => (
-          <ListItem
-            key={e.clientId}
-            disableGutters
-            secondaryAction={
-              e.refused ? (
-                <Button size="small" color="inherit" onClick={() => onDiscard(e.clientId)}>
-                  Remove
-                </Button>
-              ) : undefined
-            }
-          >
-            <ListItemText
-              primary={`${e.label} · ${e.request.method} · taken ${formatTime(e.queuedAt)}`}
-              secondary={
-                e.refused ? `Refused by the server, not recorded: ${e.refused}` : 'waiting to send'
-              }
-            />
-          </ListItem>
-        ))}
-      </List>
-      <Stack />
-    </Alert>
+      title={`${waiting.length} reading${waiting.length === 1 ? '' : 's'} waiting to send`}
+      note="Kept on this device and sent in order when the network answers."
+      entries={entries}
+      describe={(e) =>
+        e.refused ? `Refused by the server, not recorded: ${e.refused}` : 'waiting to send'
+      }
+      entryAction={(e) => (e.refused ? { text: 'Remove', onClick: onDiscard } : null)}
+    />
   );
 }
