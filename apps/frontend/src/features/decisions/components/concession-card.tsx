@@ -8,10 +8,11 @@ import {
 import { isoDayOf } from '@/lib/dates';
 import { errorMessage } from '@/lib/query-client';
 import { TEXT_MIN } from '@gaugeproof/api-types';
+import { countOf } from '@/lib/counts';
 
 /** The terms in one line: what for, how much, until when. */
 export function concessionTerms(c: Concession): string {
-  return `Use only for: ${c.scope} · ${c.quantity} ${c.unit} · until ${c.expiresOn}`;
+  return `Use only for: ${c.scope} · ${countOf(c.quantity, c.unit)} · until ${c.expiresOn}`;
 }
 
 function Pending({ c, meId }: { c: Concession; meId: number }) {

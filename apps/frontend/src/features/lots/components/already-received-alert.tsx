@@ -2,7 +2,7 @@ import { Alert, AlertTitle, Checkbox, FormControlLabel, Link, Stack } from '@mui
 import { Link as RouterLink } from 'react-router';
 import { paths } from '@/config/paths';
 import type { LotSummary } from '@/features/lots/types';
-import { countOf } from '@/features/lots/lib/plan-preview';
+import { countOf } from '@/lib/counts';
 import { formatDate } from '@/lib/dates';
 import { inSentence, lotStatusLabels } from '@/lib/labels';
 

@@ -4,7 +4,7 @@ import type { ReactNode } from 'react';
 import { LotStatusChip } from '@/features/lots/components/lot-status-chip';
 import { SamplingPlanSummary } from '@/features/lots/components/sampling-plan-summary';
 import { SupplierStatusAlert } from '@/features/lots/components/supplier-status-alert';
-import { countOf } from '@/features/lots/lib/plan-preview';
+import { countOf } from '@/lib/counts';
 import type { LotSummary } from '@/features/lots/types';
 import { formatDateTime } from '@/lib/dates';
 

@@ -2,7 +2,8 @@ import { Alert, Card, CardContent, LinearProgress, Typography } from '@mui/mater
 import { useSamplingPlan } from '@/features/lots/api/get-sampling-plan';
 import { parseLotQuantity } from '@/features/lots/api/create-lot';
 import { SamplingPlanSummary } from '@/features/lots/components/sampling-plan-summary';
-import { countOf, previewPlan } from '@/features/lots/lib/plan-preview';
+import { previewPlan } from '@/features/lots/lib/plan-preview';
+import { countOf } from '@/lib/counts';
 import { useDebouncedValue } from '@/lib/use-debounced-value';
 import type { ProductOption } from '@/features/lots/types';
 import { errorMessage } from '@/lib/query-client';

@@ -4,7 +4,7 @@ import { WorkListCard } from '@/components/work-list/work-list-card';
 import { paths } from '@/config/paths';
 import { useLots } from '@/features/lots/api/get-lots';
 import type { LotStatus } from '@/features/lots/types';
-import { countOf } from '@/features/lots/lib/plan-preview';
+import { countOf } from '@/lib/counts';
 import { formatDate } from '@/lib/dates';
 
 interface TodayLotsSectionProps {

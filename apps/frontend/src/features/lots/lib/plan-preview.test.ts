@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { parseLotQuantity } from '@/features/lots/api/create-lot';
-import { countOf, cutInstruction, previewPlan } from '@/features/lots/lib/plan-preview';
+import { cutInstruction, previewPlan } from '@/features/lots/lib/plan-preview';
+import { countOf } from '@/lib/counts';
 
 const policy = { inspectionLevel: 'S-3', aql: '1.0', severity: 'normal' as const };
 

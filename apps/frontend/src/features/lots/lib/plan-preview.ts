@@ -5,6 +5,7 @@ import {
   type InspectionLevel,
 } from '@gaugeproof/standards';
 import type { InspectionSeverity, SamplingPlan } from '@/features/lots/types';
+import { singular } from '@/lib/counts';
 
 export interface PlanPreviewInput {
   quantity: number | null;
@@ -51,19 +52,6 @@ export function previewPlan(input: PlanPreviewInput): PlanPreview {
     if (error instanceof StandardsInputError) return { kind: 'error', message: error.message };
     throw error;
   }
-}
-
-/** 'spools' → 'spool', 'boxes' → 'box', 'feet' → 'foot'; other words as given. */
-export function singular(noun: string): string {
-  if (noun === 'feet') return 'foot';
-  if (noun.endsWith('xes')) return noun.slice(0, -2);
-  return noun.endsWith('s') ? noun.slice(0, -1) : noun;
-}
-
-/** "40 spools", "1 spool": a count with its unit as packing slips write it. */
-export function countOf(quantity: number, unit: string): string {
-  const noun = unit.trim() || 'units';
-  return `${quantity} ${quantity === 1 ? singular(noun) : noun}`;
 }
 
 /** What to cut: "Cut 5 spools, one sample from each", or every unit when n reaches the lot size. */

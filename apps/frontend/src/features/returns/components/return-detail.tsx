@@ -34,6 +34,7 @@ import { errorMessage } from '@/lib/query-client';
 import { toasts } from '@/lib/toast-store';
 import { formatCalendarDate, formatDate } from '@/lib/dates';
 import { inSentence, labelOf, lotStatusLabels } from '@/lib/labels';
+import { countOf } from '@/lib/counts';
 
 /** One return to vendor: its lots, status, costs, documents and the e-mail to the supplier. */
 export function ReturnDetail({ ret }: { ret: VendorReturn }) {
@@ -170,7 +171,7 @@ export function ReturnDetail({ ret }: { ret: VendorReturn }) {
                       Lot {lot.id} · PO {lot.poNumber}
                     </Link>
                   }
-                  secondary={`${lot.quantity} ${lot.unit} · ${inSentence(labelOf(lotStatusLabels, lot.status))}`}
+                  secondary={`${countOf(lot.quantity, lot.unit)} · ${inSentence(labelOf(lotStatusLabels, lot.status))}`}
                 />
               </ListItem>
             ))}
@@ -206,7 +207,7 @@ function ReturnFacts({ ret }: { ret: VendorReturn }) {
   if (ret.emailedAt) facts.push(`Notice e-mailed ${formatDate(ret.emailedAt)}`);
   if (ret.shipment)
     facts.push(
-      `Shipped ${formatCalendarDate(ret.shipment.shippedOn)} by ${ret.shipment.carrier}${ret.shipment.trackingNumber ? `, tracking ${ret.shipment.trackingNumber}` : ''}, ${ret.shipment.quantity} ${ret.lots[0]?.unit ?? ''}`.trim(),
+      `Shipped ${formatCalendarDate(ret.shipment.shippedOn)} by ${ret.shipment.carrier}${ret.shipment.trackingNumber ? `, tracking ${ret.shipment.trackingNumber}` : ''}, ${countOf(ret.shipment.quantity, ret.lots[0]?.unit ?? '')}`,
     );
   if (ret.acknowledgedAt) facts.push(`Acknowledged ${formatDate(ret.acknowledgedAt)}`);
   if (ret.credit)

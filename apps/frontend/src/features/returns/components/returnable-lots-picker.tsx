@@ -10,6 +10,7 @@ import {
 import { useReturnableLots } from '@/features/returns/api/get-returnable-lots';
 import { errorMessage } from '@/lib/query-client';
 import { formatDate } from '@/lib/dates';
+import { countOf } from '@/lib/counts';
 
 interface ReturnableLotsPickerProps {
   supplierId: number | null;
@@ -61,7 +62,7 @@ export function ReturnableLotsPicker({
                 onChange={(e) => toggle(lot.id, e.target.checked)}
               />
             }
-            label={`Lot ${lot.id} · PO ${lot.poNumber} · ${lot.product.sku} · ${lot.quantity} ${lot.unit} · received ${formatDate(lot.receivedAt)}`}
+            label={`Lot ${lot.id} · PO ${lot.poNumber} · ${lot.product.sku} · ${countOf(lot.quantity, lot.unit)} · received ${formatDate(lot.receivedAt)}`}
           />
         ))}
       </FormGroup>

@@ -3,6 +3,7 @@ import { Link as RouterLink } from 'react-router';
 import { WorkListCard } from '@/components/work-list/work-list-card';
 import { paths } from '@/config/paths';
 import { useUnreturnedLots } from '@/features/returns/api/get-unreturned-lots';
+import { countOf } from '@/lib/counts';
 
 const DAY_MS = 86_400_000;
 
@@ -33,7 +34,7 @@ export function UnreturnedLotsSection() {
                   Lot {l.id} · {l.supplier.name}
                 </RouterLink>
               ),
-              secondary: `PO ${l.poNumber} · ${l.product.sku} · ${l.quantity} ${l.unit} · ${waited(l.rejectedAt)}`,
+              secondary: `PO ${l.poNumber} · ${l.product.sku} · ${countOf(l.quantity, l.unit)} · ${waited(l.rejectedAt)}`,
               action: (
                 <Button
                   size="small"

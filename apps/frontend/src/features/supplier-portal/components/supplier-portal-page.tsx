@@ -33,6 +33,7 @@ import { isApiError } from '@/lib/api-client';
 import { isoDayOf } from '@/lib/dates';
 import { errorMessage } from '@/lib/query-client';
 import { splitServerErrors } from '@/lib/server-field-errors';
+import { countOf } from '@/lib/counts';
 
 const FIELDS = ['containment', 'rootCause', 'correctiveAction', 'promisedOn'] as const;
 const ACCEPT = 'application/pdf,image/jpeg,image/png,image/webp';
@@ -177,7 +178,7 @@ function Deliveries({ lots }: { lots: PortalRequest['lots'] }) {
       PO {l.poNumber}
       {l.supplierLotCode ? ` · your lot ${l.supplierLotCode}` : ''}
       {l.packingSlip ? ` · packing slip ${l.packingSlip}` : ''} · received {l.receivedOn} ·{' '}
-      {l.quantity} {l.unit}
+      {countOf(l.quantity, l.unit)}
     </Fact>
   ));
 }
