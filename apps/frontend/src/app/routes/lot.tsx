@@ -122,6 +122,7 @@ export function LotRoute() {
                 photos={data.photos}
                 samples={sampleOptions}
                 canUpload={!frozen && RECORDERS.includes(user.role)}
+                frozen={frozen}
                 canVoid={(p) =>
                   !frozen &&
                   (VOIDERS.includes(user.role) ||

@@ -12,16 +12,14 @@ interface PhotoGridProps {
   photos: readonly Photo[];
   samples: readonly PhotoSampleOption[];
   onOpen: (photo: Photo) => void;
+  /** What an empty grid says. */
+  emptyText: string;
 }
 
-export function PhotoGrid({ photos, samples, onOpen }: PhotoGridProps) {
+export function PhotoGrid({ photos, samples, onOpen, emptyText }: PhotoGridProps) {
   const phone = useMediaQuery((theme: Theme) => theme.breakpoints.down('sm'));
   if (photos.length === 0) {
-    return (
-      <Typography color="text.secondary">
-        No photos yet. Photograph the label, the reel and each stripped sample.
-      </Typography>
-    );
+    return <Typography color="text.secondary">{emptyText}</Typography>;
   }
   const sampleLabel = (id: number | null) => samples.find((s) => s.id === id)?.label ?? 'Lot';
   return (

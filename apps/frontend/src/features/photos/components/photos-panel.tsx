@@ -12,11 +12,20 @@ interface PhotosPanelProps {
   photos: readonly Photo[];
   samples: readonly PhotoSampleOption[];
   canUpload: boolean;
+  /** The lot went back to the supplier: its photos stay as sent, none is added. */
+  frozen?: boolean;
   /** Whether the signed-in user may void this photo (the server checks again). */
   canVoid?: (photo: Photo) => boolean;
 }
 
-export function PhotosPanel({ lotId, photos, samples, canUpload, canVoid }: PhotosPanelProps) {
+export function PhotosPanel({
+  lotId,
+  photos,
+  samples,
+  canUpload,
+  frozen = false,
+  canVoid,
+}: PhotosPanelProps) {
   const [open, setOpen] = useState<Photo | null>(null);
   const [voiding, setVoiding] = useState<number | null>(null);
   const voidPhoto = useVoidPhoto();
@@ -29,7 +38,16 @@ export function PhotosPanel({ lotId, photos, samples, canUpload, canVoid }: Phot
             Photos ({live}
             {live !== photos.length ? `, ${photos.length - live} void` : ''})
           </Typography>
-          <PhotoGrid photos={photos} samples={samples} onOpen={setOpen} />
+          <PhotoGrid
+            photos={photos}
+            samples={samples}
+            onOpen={setOpen}
+            emptyText={
+              frozen
+                ? 'No photo was taken before this lot was returned. Its evidence stays as the supplier received it.'
+                : 'No photos yet. Photograph the label, the reel and each stripped sample.'
+            }
+          />
           {canUpload && <PhotoUploader lotId={lotId} samples={samples} />}
         </Stack>
       </CardContent>
