@@ -273,4 +273,33 @@ describe('concessions with terms', () => {
     });
     expect(res.body.concession.reviewedBy).toEqual(res.body.concession.requestedBy);
   });
+  it("leaves Today's reject-number list while its concession waits for a second approval, and comes back when it is refused", async () => {
+    const { lot } = await rejectLot('Oakhollow Wire');
+    const atReject = async () => {
+      const res = await t.http.get('/api/inspection/reject-reached').set(await auth(DEMO.admin));
+      expect(res.status).toBe(200);
+      return res.body.items.map((l: { id: number }) => l.id);
+    };
+    expect(await atReject()).toContain(lot.id);
+    const asked = await decide(lot.id, {
+      outcome: 'accept_on_concession',
+      reason: REASON,
+      version: lot.version,
+      concession: TERMS,
+    });
+    expect(asked.status, JSON.stringify(asked.body)).toBe(202);
+    const c = asked.body.concession;
+    // Decided as far as its requester can: it waits among the concessions, not as a lot to decide.
+    expect(await atReject()).not.toContain(lot.id);
+    const awaiting = await t.http
+      .get('/api/concessions/awaiting-approval')
+      .set(await auth(DEMO.admin));
+    expect(awaiting.body.items.map((a: { lot: { id: number } }) => a.lot.id)).toContain(lot.id);
+    const refused = await t.http
+      .post(`/api/concessions/${c.id}/refuse`)
+      .set(await auth(DEMO.admin))
+      .send({ version: c.version, note: 'Kits go out as sets; no split use is possible.' });
+    expect(refused.status).toBe(200);
+    expect(await atReject()).toContain(lot.id);
+  });
 });

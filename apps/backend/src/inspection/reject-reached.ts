@@ -1,5 +1,6 @@
 import type { EntityManager } from '@mikro-orm/core';
 import { Lot } from '../lots/entities/lot.entity';
+import { plainSql } from '../common/plain-sql';
 import { lotSummary } from '../lots/lot-summary';
 import { evidenceOf } from './lot-status';
 
@@ -7,7 +8,9 @@ import { evidenceOf } from './lot-status';
  * Lots awaiting a decision whose nonconforming units already reach the plan's reject
  * number Re (curtailed rejection, MIL-STD-105E / ISO 2859-1): the QA lead's first work on
  * Today. Lots awaiting a decision are few (they leave the status when decided), so each
- * is judged with the same evidence query the status rule uses (lot-status.ts).
+ * is judged with the same evidence query the status rule uses (lot-status.ts). A lot whose
+ * concession waits for a second approval is left out: its QA lead has decided as far as
+ * they may, and the approvers find it among the concessions awaiting approval.
  */
 export async function lotsAtRejectNumber(em: EntityManager) {
   const lots = await em.find(
@@ -15,8 +18,14 @@ export async function lotsAtRejectNumber(em: EntityManager) {
     { status: 'awaiting_decision' },
     { populate: ['product', 'supplier', 'receivedBy'], orderBy: { receivedAt: 'asc', id: 'asc' } },
   );
+  const pending = await plainSql<{ lot_id: number | string }[]>(
+    em,
+    "select lot_id from concessions where status = 'pending'",
+  );
+  const waitingForApproval = new Set(pending.map((row) => Number(row.lot_id)));
   const found = [];
   for (const lot of lots) {
+    if (waitingForApproval.has(lot.id)) continue;
     const plan = lot.samplingPlan;
     const evidence = await evidenceOf(em, {
       id: lot.id,
