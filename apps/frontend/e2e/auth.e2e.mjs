@@ -1,6 +1,6 @@
 import assert from 'node:assert/strict';
-import { after, before, beforeEach, describe, test } from 'node:test';
-import { launchBrowser, navLabels, screenshot, signIn, url } from './browser.mjs';
+import { describe, test } from 'node:test';
+import { browserForFile, navLabels, screenshot, signIn, url } from './browser.mjs';
 
 // Sign-in is throttled per address: this file signs in five times in all.
 const accounts = [
@@ -30,18 +30,13 @@ const screenRoles = {
 };
 const seenByRole = {};
 
-let browser;
 let page;
-before(async () => {
-  browser = await launchBrowser();
-});
-after(async () => {
-  await browser?.close();
-});
-beforeEach(async () => {
-  await browser.context.clearCookies();
-  page = await browser.context.newPage();
-});
+browserForFile(
+  (p) => {
+    page = p;
+  },
+  { pagePerTest: true },
+);
 
 const pathOf = (p) => new URL(p.url()).pathname;
 

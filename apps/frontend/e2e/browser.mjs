@@ -2,6 +2,7 @@
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { after, before, beforeEach } from 'node:test';
 import { chromium } from 'playwright-core';
 
 export const BASE_URL = process.env.BASE_URL ?? 'http://localhost:3000';
@@ -62,4 +63,34 @@ export async function navLabels(page) {
   const nav = page.getByTestId('side-nav').filter({ visible: true });
   await nav.first().waitFor();
   return nav.first().locator('.MuiListItemText-primary').allTextContents();
+}
+
+/**
+ * One browser for the whole test file, through node:test's hooks: `onOpen(page, browser)`
+ * gets a page in it before the first test (and, with `pagePerTest`, a new page with
+ * no cookies before each test); the browser is closed after the last. Other options go to
+ * `launchBrowser`.
+ */
+export function browserForFile(onOpen, { pagePerTest = false, ...launchOptions } = {}) {
+  let browser;
+  before(async () => {
+    browser = await launchBrowser(launchOptions);
+    if (!pagePerTest) await onOpen(await browser.context.newPage(), browser);
+  });
+  after(async () => {
+    await browser?.close();
+  });
+  if (pagePerTest) {
+    beforeEach(async () => {
+      await browser.context.clearCookies();
+      await onOpen(await browser.context.newPage(), browser);
+    });
+  }
+}
+
+/** Signs in as `email` on the sign-in page that leads on to lot `lotId`, and waits for the lot page. */
+export async function signInToLot(page, email, lotId) {
+  await page.goto(url(`/sign-in?redirectTo=${encodeURIComponent(`/lots/${lotId}`)}`));
+  await signIn(page, email);
+  await page.waitForURL((u) => u.pathname === `/lots/${lotId}`);
 }

@@ -1,24 +1,19 @@
 import assert from 'node:assert/strict';
-import { after, before, beforeEach, test } from 'node:test';
-import { launchBrowser, screenshot, signIn, url } from './browser.mjs';
+import { test } from 'node:test';
+import { browserForFile, screenshot, signIn, url } from './browser.mjs';
 
 // Suppliers, Products, Instruments and Reference as their users meet them. Signs in three
 // times (sign-in is throttled per address). Names are invented and made unique per run.
 const stamp = Date.now().toString(36).slice(-5).toUpperCase();
 const supplier = { name: `Quarry Lane Cable ${stamp}`, code: `QLC${stamp}` };
 
-let browser;
 let page;
-before(async () => {
-  browser = await launchBrowser();
-});
-after(async () => {
-  await browser?.close();
-});
-beforeEach(async () => {
-  await browser.context.clearCookies();
-  page = await browser.context.newPage();
-});
+browserForFile(
+  (p) => {
+    page = p;
+  },
+  { pagePerTest: true },
+);
 
 async function signInTo(email, path) {
   await page.goto(url(path));

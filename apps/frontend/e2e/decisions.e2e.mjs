@@ -1,7 +1,7 @@
 import assert from 'node:assert/strict';
-import { after, before, test } from 'node:test';
+import { test } from 'node:test';
 import { apiAs, lotAwaitingReject } from './api-fixtures.mjs';
-import { launchBrowser, screenshot, signIn, url } from './browser.mjs';
+import { browserForFile, launchBrowser, screenshot, signIn, signInToLot, url } from './browser.mjs';
 
 // An invented supplier and a 4 AWG copper spool of it (see lotAwaitingReject).
 const STAMP = Date.now().toString(36).toUpperCase();
@@ -43,22 +43,15 @@ async function mailTo(to, subject) {
   throw new Error(`no e-mail "${subject}…" to ${to} in MailDev`);
 }
 
-let browser;
 let page;
-before(async () => {
-  browser = await launchBrowser();
-  page = await browser.context.newPage();
-});
-after(async () => {
-  await browser?.close();
+browserForFile((p) => {
+  page = p;
 });
 
 test('a QA lead rejects a lot with a reason, sees the NCR number and prints the tag', async () => {
   const lot = await lotAwaitingDecision();
 
-  await page.goto(url(`/sign-in?redirectTo=${encodeURIComponent(`/lots/${lot.id}`)}`));
-  await signIn(page, 'qa@demo.example');
-  await page.waitForURL((u) => u.pathname === `/lots/${lot.id}`);
+  await signInToLot(page, 'qa@demo.example', lot.id);
   const panel = page.locator('[aria-label="Decision panel"]');
   // On a laptop screen the decision is below the readings: the recommendation leads to it.
   await page.getByRole('button', { name: 'Go to the decision' }).click();
@@ -129,9 +122,7 @@ test('a concession against a reject: terms with the safety caution, a second app
     await adminBrowser.close();
   });
   const qa = await qaBrowser.context.newPage();
-  await qa.goto(url(`/sign-in?redirectTo=${encodeURIComponent(`/lots/${lot.id}`)}`));
-  await signIn(qa, 'qa@demo.example');
-  await qa.waitForURL((u) => u.pathname === `/lots/${lot.id}`);
+  await signInToLot(qa, 'qa@demo.example', lot.id);
   const panel = qa.locator('[aria-label="Decision panel"]');
   await panel.getByRole('radio', { name: 'Accept on concession' }).check();
   const terms = panel.getByRole('group', { name: 'Concession terms' });

@@ -1,22 +1,17 @@
 import assert from 'node:assert/strict';
-import { after, before, test } from 'node:test';
-import { launchBrowser, screenshot, signIn, url } from './browser.mjs';
+import { test } from 'node:test';
+import { browserForFile, screenshot, signIn, url } from './browser.mjs';
 import { discPng } from './images.mjs';
 
 const PO = `PO-E2E-${Date.now().toString(36).toUpperCase()}`;
 
 const escape = (text) => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 
-let browser;
 let page;
 /** The lot the first test receives (PO with packing slip PS-77). */
 let firstLotId;
-before(async () => {
-  browser = await launchBrowser();
-  page = await browser.context.newPage();
-});
-after(async () => {
-  await browser?.close();
+browserForFile((p) => {
+  page = p;
 });
 
 /** A seeded, active spool of an approved supplier whose first conductor is sold as copper. */
@@ -47,16 +42,7 @@ test('a clerk receives a spool lot, records a mass reading and uploads a photo',
 
   await page.getByRole('link', { name: 'Receive a delivery' }).click();
   await page.waitForURL((u) => u.pathname === '/receiving');
-  await page.getByRole('combobox', { name: 'Supplier' }).fill(product.supplier.name);
-  await page
-    .getByRole('option', { name: new RegExp(escape(product.supplier.code)) })
-    .first()
-    .click();
-  await page.getByRole('combobox', { name: 'Product' }).fill(product.sku);
-  await page
-    .getByRole('option', { name: new RegExp(escape(product.sku)) })
-    .first()
-    .click();
+  await chooseSpool(product);
   await page.getByRole('textbox', { name: 'PO number' }).fill(PO);
   await page.getByLabel('Packing-slip number').fill('PS-77');
   // Client validation as the clerk types: 0 is not a lot.

@@ -1,8 +1,8 @@
 import assert from 'node:assert/strict';
 import { readFile } from 'node:fs/promises';
-import { after, before, test } from 'node:test';
+import { test } from 'node:test';
 import { apiAs, lotAwaitingReject } from './api-fixtures.mjs';
-import { launchBrowser, screenshot, signIn, url } from './browser.mjs';
+import { browserForFile, launchBrowser, screenshot, signIn, url } from './browser.mjs';
 
 const STAMP = Date.now().toString(36).toUpperCase();
 
@@ -31,14 +31,9 @@ async function rejectedLot(request) {
   return call('GET', `/lots/${lot.id}`);
 }
 
-let browser;
 let page;
-before(async () => {
-  browser = await launchBrowser();
-  page = await browser.context.newPage();
-});
-after(async () => {
-  await browser?.close();
+browserForFile((p) => {
+  page = p;
 });
 
 test('purchasing raises a return for a rejected lot, downloads its CSV and e-mails the supplier', async () => {

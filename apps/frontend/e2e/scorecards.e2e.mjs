@@ -1,6 +1,6 @@
 import assert from 'node:assert/strict';
-import { after, before, test } from 'node:test';
-import { launchBrowser, screenshot, signIn, url } from './browser.mjs';
+import { test } from 'node:test';
+import { browserForFile, screenshot, signIn, url } from './browser.mjs';
 
 // Sign-in is throttled per address (5 a minute) and the other files sign in too: wait
 // out the window once if the server says so.
@@ -21,16 +21,11 @@ async function signInPatiently(page, email) {
   throw new Error(`could not sign in as ${email}`);
 }
 
-let browser;
 let page;
-before(async () => {
-  browser = await launchBrowser();
-  page = await browser.context.newPage();
+browserForFile(async (p) => {
+  page = p;
   // x-charts honours reduced motion: charts are drawn without animation for screenshots.
   await page.emulateMedia({ reducedMotion: 'reduce' });
-});
-after(async () => {
-  await browser?.close();
 });
 
 const CHARTS = [

@@ -1,7 +1,7 @@
 import assert from 'node:assert/strict';
 import { after, before, test } from 'node:test';
 import { apiAs } from './api-fixtures.mjs';
-import { launchBrowser, screenshot, signIn, url } from './browser.mjs';
+import { launchBrowser, screenshot, signInToLot } from './browser.mjs';
 
 // Issue 13 in the browser: a stranded conductor offers no diameter tab, a typing slip is
 // questioned before anything is saved, and a lot whose nonconforming units reach the
@@ -58,9 +58,7 @@ after(async () => {
 });
 
 test('a stranded conductor offers no diameter tab, and a typing slip is questioned', async () => {
-  await page.goto(url(`/sign-in?redirectTo=${encodeURIComponent(`/lots/${lot.id}`)}`));
-  await signIn(page, 'clerk@demo.example');
-  await page.waitForURL((u) => u.pathname === `/lots/${lot.id}`);
+  await signInToLot(page, 'clerk@demo.example', lot.id);
   const tabs = page.getByRole('tablist', { name: 'Reading method' });
   await tabs.waitFor();
   const names = await tabs.getByRole('tab').allTextContents();
@@ -111,9 +109,7 @@ test('a lot whose nonconforming units reach Re is rejected at once', async () =>
   assert.equal(detail.evaluation.samplesTested, 2);
 
   await browser.context.clearCookies();
-  await page.goto(url(`/sign-in?redirectTo=${encodeURIComponent(`/lots/${lot.id}`)}`));
-  await signIn(page, 'qa@demo.example');
-  await page.waitForURL((u) => u.pathname === `/lots/${lot.id}`);
+  await signInToLot(page, 'qa@demo.example', lot.id);
   const panel = page.locator('[aria-label="Decision panel"]');
   await page.getByRole('button', { name: 'Go to the decision' }).click();
   await panel.getByText('Recommendation:').waitFor();
