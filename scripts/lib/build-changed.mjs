@@ -22,7 +22,8 @@ export const PARTS = [
     inputs: ['libs/api-types/src', 'libs/api-types/package.json', 'libs/api-types/tsconfig.json'],
     marker: 'libs/api-types/tsconfig.tsbuildinfo',
     command: ['npm', 'run', 'build', '-w', 'libs/api-types'],
-    after: [],
+    // The contract takes the computation's own enums from the standards library.
+    after: ['standards'],
   },
   {
     name: 'client',

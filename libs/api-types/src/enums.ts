@@ -1,8 +1,41 @@
+import { VERDICTS } from '@gaugeproof/standards';
+
 /**
  * Every set of values both apps use, written once. Each is a readonly tuple (for
  * validation: `@IsIn(LOT_STATUSES)`, `z.enum(LOT_STATUSES)`) and a union type of its values.
  * Words shown to people for these values are the client's (its label vocabulary).
+ *
+ * The values the computation itself knows (materials, methods, verdicts, gauge systems,
+ * IEC 60228 classes, ISO 2859-1 severities) are the standards library's own tuples, taken
+ * from there under the contract's names, so the rule and its values cannot drift apart.
  */
+export {
+  /** What a product's conductor is sold as. */
+  MATERIAL_IDS as CLAIMED_MATERIALS,
+  type MaterialId as ClaimedMaterial,
+  /** What the readings of a sample say the metal is. */
+  IDENTIFIED_MATERIALS,
+  type IdentifiedMaterial,
+  /** IEC 60228 conductor classes a metric conductor may name (IEC 60228 clause 5). */
+  CONDUCTOR_CLASSES,
+  type ConductorClass,
+  GAUGE_SYSTEMS,
+  type GaugeSystem,
+  /** The four ways a reading finds a conductor's cross-section. */
+  READING_METHODS,
+  type ReadingMethod,
+  /** What a sample's verdict compares: the area (AWG) or the resistance (metric copper). */
+  CRITERIA,
+  type Criterion,
+  VERDICTS,
+  type Verdict,
+  /** ISO 2859-1 inspection severity of a lot's plan. */
+  SEVERITIES as PLAN_SEVERITIES,
+  type Severity as PlanSeverity,
+  /** A product's switching state: a plan severity, or inspection discontinued (ISO 2859-1 9.4). */
+  INSPECTION_SEVERITIES,
+  type InspectionSeverity,
+} from '@gaugeproof/standards';
 
 /** Roles of a signed-in account; admin may do everything. */
 export const ROLES = ['clerk', 'qa_lead', 'purchasing', 'admin'] as const;
@@ -29,39 +62,6 @@ export type ProductKind = (typeof PRODUCT_KINDS)[number];
 export const CONDUCTOR_PURPOSES = ['power', 'ground', 'remote', 'speaker', 'other'] as const;
 export type ConductorPurpose = (typeof CONDUCTOR_PURPOSES)[number];
 
-/** What a product's conductor is sold as. */
-export const CLAIMED_MATERIALS = [
-  'copper',
-  'tinned_copper',
-  'cca10',
-  'cca15',
-  'aluminium',
-] as const;
-export type ClaimedMaterial = (typeof CLAIMED_MATERIALS)[number];
-
-/** What the readings of a sample say the metal is. */
-export const IDENTIFIED_MATERIALS = [
-  'copper',
-  'cca',
-  'aluminium',
-  'inconsistent',
-  'unknown',
-] as const;
-export type IdentifiedMaterial = (typeof IDENTIFIED_MATERIALS)[number];
-
-/** IEC 60228 conductor classes a metric conductor may name (IEC 60228 clause 5). */
-export const CONDUCTOR_CLASSES = [1, 2, 5, 6] as const;
-export type ConductorClass = (typeof CONDUCTOR_CLASSES)[number];
-
-export const GAUGE_SYSTEMS = ['awg', 'metric'] as const;
-export type GaugeSystem = (typeof GAUGE_SYSTEMS)[number];
-
-/** The four ways a reading finds a conductor's cross-section. */
-export const READING_METHODS = ['mass', 'strands', 'resistance', 'diameter'] as const;
-export type ReadingMethod = (typeof READING_METHODS)[number];
-
-export const VERDICTS = ['conforms', 'nonconforming', 'inconclusive'] as const;
-export type Verdict = (typeof VERDICTS)[number];
 /** A sample's verdict; `untested` before its first live reading. */
 export const SAMPLE_VERDICTS = [...VERDICTS, 'untested'] as const;
 export type SampleVerdict = (typeof SAMPLE_VERDICTS)[number];
@@ -89,13 +89,6 @@ export type NoticeSwitch = (typeof NOTICE_SWITCHES)[number];
 
 export const NCR_STATUSES = ['open', 'closed'] as const;
 export type NcrStatus = (typeof NCR_STATUSES)[number];
-
-/** ISO 2859-1 inspection severity of a lot's plan. */
-export const PLAN_SEVERITIES = ['normal', 'tightened', 'reduced'] as const;
-export type PlanSeverity = (typeof PLAN_SEVERITIES)[number];
-/** A product's switching state: a plan severity, or inspection discontinued (ISO 2859-1 9.4). */
-export const INSPECTION_SEVERITIES = [...PLAN_SEVERITIES, 'discontinued'] as const;
-export type InspectionSeverity = (typeof INSPECTION_SEVERITIES)[number];
 
 export const INSTRUMENT_KINDS = [
   'balance',

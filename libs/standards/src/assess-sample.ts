@@ -27,12 +27,16 @@ import {
 import { requireIncrement, STANDARD_STRANDING_INCREMENT } from './methods/common.js';
 import { requireNonNegative, requireOneOf, requirePositive } from './validate.js';
 
-export type Verdict = 'conforms' | 'nonconforming' | 'inconclusive';
+export const VERDICTS = ['conforms', 'nonconforming', 'inconclusive'] as const;
+export type Verdict = (typeof VERDICTS)[number];
 export type MaterialCheck =
   'not_checked' | 'as_claimed' | 'not_as_claimed' | 'inconsistent' | 'unknown';
-export type ReadingMethod = 'mass' | 'strands' | 'resistance' | 'diameter';
+/** The four ways a reading finds a conductor's cross-section. */
+export const READING_METHODS = ['mass', 'strands', 'resistance', 'diameter'] as const;
+export type ReadingMethod = (typeof READING_METHODS)[number];
 /** What the verdict compares: the area (AWG, ASTM B258) or the resistance (metric, IEC 60228). */
-export type Criterion = 'area' | 'resistance';
+export const CRITERIA = ['area', 'resistance'] as const;
+export type Criterion = (typeof CRITERIA)[number];
 
 /** Longest specimen we advise cutting for a conclusive result, mm (common practice, no source). */
 export const PRACTICAL_SPECIMEN_LENGTH_MM = 5000;

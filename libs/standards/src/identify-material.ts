@@ -9,7 +9,15 @@ import { requireIncrement, STANDARD_STRANDING_INCREMENT } from './methods/common
 import { gramsPerMetre } from './units.js';
 import { requirePositive, requireTemperature } from './validate.js';
 
-export type IdentifiedMaterial = 'copper' | 'cca' | 'aluminium' | 'inconsistent' | 'unknown';
+/** What the readings of a sample say the metal is. */
+export const IDENTIFIED_MATERIALS = [
+  'copper',
+  'cca',
+  'aluminium',
+  'inconsistent',
+  'unknown',
+] as const;
+export type IdentifiedMaterial = (typeof IDENTIFIED_MATERIALS)[number];
 
 export interface IdentifyMaterialInput {
   massG: number;

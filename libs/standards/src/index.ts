@@ -7,7 +7,7 @@ export const STANDARDS_VERSION = '0.1.0';
 export { StandardsInputError } from './errors.js';
 export * from './units.js';
 
-export type { Gauge, GaugeSystem } from './gauges/types.js';
+export { GAUGE_SYSTEMS, type Gauge, type GaugeSystem } from './gauges/types.js';
 export {
   AWG_MAX,
   AWG_MIN,
@@ -94,6 +94,7 @@ export { areaFromDiameter, type AreaFromDiameterInput } from './methods/diameter
 
 export {
   IDENTIFICATION_TOLERANCE,
+  IDENTIFIED_MATERIALS,
   identifyMaterial,
   type IdentifiedMaterial,
   type IdentifyMaterialInput,
@@ -101,7 +102,10 @@ export {
 } from './identify-material.js';
 export {
   assessSample,
+  CRITERIA,
   PRACTICAL_SPECIMEN_LENGTH_MM,
+  READING_METHODS,
+  VERDICTS,
   type AssessSampleInput,
   type Criterion,
   type MaterialCheck,
@@ -151,6 +155,7 @@ export {
 } from './sampling/plan.js';
 export {
   approveReducedInspection,
+  INSPECTION_SEVERITIES,
   initialInspectionState,
   nextInspectionState,
   type InspectionSeverity,

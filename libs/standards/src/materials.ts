@@ -1,6 +1,8 @@
 import { requireOneOf } from './validate.js';
 
-export type MaterialId = 'copper' | 'tinned_copper' | 'cca10' | 'cca15' | 'aluminium';
+/** The materials a conductor may be sold as, in the order of `MATERIALS`. */
+export const MATERIAL_IDS = ['copper', 'tinned_copper', 'cca10', 'cca15', 'aluminium'] as const;
+export type MaterialId = (typeof MATERIAL_IDS)[number];
 
 /** What a measurement can tell apart: copper (plain or tinned), CCA, aluminium. */
 export type MaterialFamily = 'copper' | 'cca' | 'aluminium';
@@ -109,10 +111,6 @@ export const MATERIALS: Readonly<Record<MaterialId, Material>> = Object.freeze({
     },
   },
 });
-
-export const MATERIAL_IDS: readonly MaterialId[] = Object.freeze(
-  Object.keys(MATERIALS) as MaterialId[],
-);
 
 /**
  * Mass resistivity at 20 °C, Ω·g/m²: density × resistivity. For a conductor it equals

@@ -7,7 +7,7 @@ import {
   type NoticeSwitch,
 } from '../enums.js';
 import { sessionUser } from './catalog.js';
-import { calendarDate, id, instant } from './common.js';
+import { calendarDate, id, instant, storedFile } from './common.js';
 import { reading, switchingNotice } from './lots.js';
 import { correctiveAction, outboundMessage } from './records.js';
 
@@ -47,20 +47,13 @@ export const linksRevoked = z.object({ revoked: z.number().int() });
 /** GET /api/corrective-actions/:id/attachments: what the supplier sent. */
 export const scarAttachment = z.object({
   id,
-  filename: z.string(),
-  contentType: z.string(),
-  sizeBytes: z.number().int(),
+  ...storedFile.shape,
   addedBy: z.string().nullable(),
   createdAt: instant,
 });
 
 /** A file as the supplier's page lists it. */
-export const portalAttachment = z.object({
-  filename: z.string(),
-  contentType: z.string(),
-  sizeBytes: z.number().int(),
-  addedAt: instant,
-});
+export const portalAttachment = storedFile.extend({ addedAt: instant });
 
 const portalLot = z.object({
   poNumber: z.string(),

@@ -8,7 +8,7 @@ import {
   ROLES,
   SUPPLIER_STATUSES,
 } from '../enums.js';
-import { id, instant, supplierRef } from './common.js';
+import { editableRecord, id, instant, supplierRef } from './common.js';
 
 /** GET /api/suppliers/:id */
 export const supplier = z.object({
@@ -18,10 +18,7 @@ export const supplier = z.object({
   contactEmail: z.string().nullable(),
   status: z.enum(SUPPLIER_STATUSES),
   notes: z.string().nullable(),
-  /** The version an edit names; a stale one gets 409 (docs/api-conventions.md). */
-  version: z.number().int().min(1),
-  createdAt: instant,
-  updatedAt: instant,
+  ...editableRecord.shape,
 });
 export type Supplier = z.infer<typeof supplier>;
 
@@ -66,25 +63,9 @@ export const product = z.object({
   conductors: z.array(conductor),
   inspectionState,
   warnings: z.array(z.string()),
-  /** The version an edit names; a stale one gets 409 (docs/api-conventions.md). */
-  version: z.number().int().min(1),
-  createdAt: instant,
-  updatedAt: instant,
+  ...editableRecord.shape,
 });
 export type Product = z.infer<typeof product>;
-
-/** GET /api/users/:id */
-export const user = z.object({
-  id,
-  email: z.string(),
-  name: z.string(),
-  role: z.enum(ROLES),
-  active: z.boolean(),
-  /** The version an edit names; a stale one gets 409 (docs/api-conventions.md). */
-  version: z.number().int().min(1),
-  createdAt: instant,
-});
-export type User = z.infer<typeof user>;
 
 /** The signed-in account (GET /api/auth/me). */
 export const sessionUser = z.object({
@@ -94,3 +75,11 @@ export const sessionUser = z.object({
   role: z.enum(ROLES),
 });
 export type SessionUser = z.infer<typeof sessionUser>;
+
+/** GET /api/users/:id */
+export const user = sessionUser.extend({
+  active: z.boolean(),
+  version: editableRecord.shape.version,
+  createdAt: instant,
+});
+export type User = z.infer<typeof user>;

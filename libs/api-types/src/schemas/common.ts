@@ -1,5 +1,10 @@
 import { z } from 'zod';
-import { PLAN_SEVERITIES, SUPPLIER_STATUSES } from '../enums.js';
+import {
+  INSTRUMENT_KINDS,
+  PLAN_SEVERITIES,
+  RESOLUTION_UNITS,
+  SUPPLIER_STATUSES,
+} from '../enums.js';
 
 /** An instant as JSON carries it: ISO 8601 in UTC (`Date.toJSON`). */
 export const instant = z.iso.datetime();
@@ -24,6 +29,39 @@ export interface Page<T> {
 }
 
 export const personRef = z.object({ id, name: z.string() });
+
+/** The end of every register record an edit may change (suppliers, products, instruments). */
+export const editableRecord = z.object({
+  /** The version an edit names; a stale one gets 409 (docs/api-conventions.md). */
+  version: z.number().int().min(1),
+  createdAt: instant,
+  updatedAt: instant,
+});
+
+/** Evidence (a reading, a photo) is never deleted, only voided with a reason and stays shown. */
+export const voidMark = z.object({
+  voided: z.boolean(),
+  voidReason: z.string().nullable(),
+  voidedBy: personRef.nullable(),
+  voidedAt: instant.nullable(),
+});
+
+/** What an instrument is and reads to: the register's record and a reading's copy share it. */
+export const instrumentIdentity = z.object({
+  id,
+  kind: z.enum(INSTRUMENT_KINDS),
+  name: z.string(),
+  serial: z.string(),
+  resolution: z.number(),
+  resolutionUnit: z.enum(RESOLUTION_UNITS),
+});
+
+/** A file kept with a record (a SCAR's attachments, as staff and the supplier see them). */
+export const storedFile = z.object({
+  filename: z.string(),
+  contentType: z.string(),
+  sizeBytes: z.number().int(),
+});
 export type PersonRef = z.infer<typeof personRef>;
 
 export const supplierRef = z.object({

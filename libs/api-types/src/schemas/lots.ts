@@ -1,20 +1,28 @@
 import { z } from 'zod';
 import {
   CONCESSION_STATUSES,
+  CRITERIA,
   DECISION_OUTCOMES,
   IDENTIFIED_MATERIALS,
   INSPECTION_SEVERITIES,
-  INSTRUMENT_KINDS,
   LOT_STATUSES,
   PRODUCT_KINDS,
   READING_METHODS,
   RECOMMENDATIONS,
-  RESOLUTION_UNITS,
   SAMPLE_VERDICTS,
   VERDICTS,
 } from '../enums.js';
 import { product } from './catalog.js';
-import { calendarDate, id, instant, personRef, samplingPlan, supplierRef } from './common.js';
+import {
+  calendarDate,
+  id,
+  instant,
+  instrumentIdentity,
+  personRef,
+  samplingPlan,
+  supplierRef,
+  voidMark,
+} from './common.js';
 
 /** A lot as lists show it (GET /api/lots). */
 export const lotSummary = z.object({
@@ -48,12 +56,7 @@ export type ReceivedLot = z.infer<typeof receivedLot>;
 
 /** An instrument as a reading keeps it (the register may change later). */
 export const instrumentSnapshot = z.object({
-  id,
-  kind: z.enum(INSTRUMENT_KINDS),
-  name: z.string(),
-  serial: z.string(),
-  resolution: z.number(),
-  resolutionUnit: z.enum(RESOLUTION_UNITS),
+  ...instrumentIdentity.shape,
   calibrationDueOn: calendarDate,
   /** The register's stated accuracy and certificate U (k = 2) when the reading was taken. */
   accuracyPercentOfReading: z.number().nullable().optional(),
@@ -101,7 +104,7 @@ export const reading = z.object({
   /** How the material was told (the standards library's identification), or null. */
   identification: z.looseObject({}).nullable(),
   /** 'resistance' for metric copper (IEC 60228), 'area' otherwise. */
-  criterion: z.enum(['area', 'resistance']),
+  criterion: z.enum(CRITERIA),
   resistanceOhmPerKm: z.number().nullable(),
   UResistanceOhmPerKm: z.number().nullable(),
   limit: z.looseObject({ maxOhmPerKm: z.number(), source: z.string() }).nullable(),
@@ -117,10 +120,7 @@ export const reading = z.object({
   unusual: z.array(z.looseObject({ field: z.string(), message: z.string() })).nullable(),
   takenBy: personRef.nullable(),
   takenAt: instant,
-  voided: z.boolean(),
-  voidReason: z.string().nullable(),
-  voidedBy: personRef.nullable(),
-  voidedAt: instant.nullable(),
+  ...voidMark.shape,
 });
 export type Reading = z.infer<typeof reading>;
 
@@ -169,10 +169,7 @@ export const photo = z.object({
   uploadedBy: personRef.nullable(),
   createdAt: instant,
   /** Voided photos stay, struck with their reason; they are no evidence. */
-  voided: z.boolean(),
-  voidReason: z.string().nullable(),
-  voidedBy: personRef.nullable(),
-  voidedAt: instant.nullable(),
+  ...voidMark.shape,
 });
 export type Photo = z.infer<typeof photo>;
 

@@ -2,23 +2,23 @@ import { z } from 'zod';
 import {
   CALIBRATION_STATUSES,
   CAR_STATUSES,
-  INSTRUMENT_KINDS,
   LOT_STATUSES,
   MESSAGE_STATUSES,
-  RESOLUTION_UNITS,
   RETURN_STATUSES,
-  SUPPLIER_STATUSES,
 } from '../enums.js';
-import { calendarDate, id, instant, personRef } from './common.js';
+import {
+  calendarDate,
+  editableRecord,
+  id,
+  instant,
+  instrumentIdentity,
+  personRef,
+  supplierRef,
+} from './common.js';
 
 /** GET /api/instruments/:id */
 export const instrument = z.object({
-  id,
-  kind: z.enum(INSTRUMENT_KINDS),
-  name: z.string(),
-  serial: z.string(),
-  resolution: z.number(),
-  resolutionUnit: z.enum(RESOLUTION_UNITS),
+  ...instrumentIdentity.shape,
   /** Stated accuracy ± % of reading, ± an amount in resolutionUnit, certificate U (k = 2). */
   accuracyPercentOfReading: z.number().nullable(),
   accuracyAbsolute: z.number().nullable(),
@@ -28,14 +28,19 @@ export const instrument = z.object({
   active: z.boolean(),
   calibrationStatus: z.enum(CALIBRATION_STATUSES),
   daysToDue: z.number().int(),
-  /** The version an edit names; a stale one gets 409 (docs/api-conventions.md). */
-  version: z.number().int().min(1),
-  createdAt: instant,
-  updatedAt: instant,
+  ...editableRecord.shape,
 });
 export type Instrument = z.infer<typeof instrument>;
 
 const lotRef = z.object({ id, poNumber: z.string(), status: z.enum(LOT_STATUSES) });
+
+/** How a case raised against a supplier (a return, a SCAR) ends: when closed, by whom opened. */
+const caseEnd = z.object({
+  closedAt: instant.nullable(),
+  createdBy: personRef,
+  createdAt: instant,
+  updatedAt: instant,
+});
 
 export const returnCosts = z.object({
   inspectionHours: z.number().optional(),
@@ -52,13 +57,7 @@ export const vendorReturn = z.object({
   status: z.enum(RETURN_STATUSES),
   /** Optimistic lock: send it back with every change. */
   version: z.number().int(),
-  supplier: z.object({
-    id,
-    name: z.string(),
-    code: z.string(),
-    status: z.enum(SUPPLIER_STATUSES),
-    contactEmail: z.string().nullable(),
-  }),
+  supplier: supplierRef.extend({ contactEmail: z.string().nullable() }),
   lots: z.array(lotRef.extend({ quantity: z.number(), unit: z.string() })),
   rmaNumber: z.string().nullable(),
   notes: z.string().nullable(),
@@ -86,12 +85,9 @@ export const vendorReturn = z.object({
       creditedAt: instant.nullable(),
     })
     .nullable(),
-  closedAt: instant.nullable(),
   cancelReason: z.string().nullable(),
   cancelledAt: instant.nullable(),
-  createdBy: personRef,
-  createdAt: instant,
-  updatedAt: instant,
+  ...caseEnd.shape,
 });
 export type VendorReturn = z.infer<typeof vendorReturn>;
 
@@ -102,7 +98,7 @@ export const correctiveAction = z.object({
   status: z.enum(CAR_STATUSES),
   /** Optimistic lock: send it back with every change. */
   version: z.number().int(),
-  supplier: z.object({ id, name: z.string(), code: z.string(), status: z.enum(SUPPLIER_STATUSES) }),
+  supplier: supplierRef,
   lots: z.array(lotRef),
   problem: z.string(),
   dueOn: calendarDate,
@@ -125,10 +121,7 @@ export const correctiveAction = z.object({
       lot: z.object({ id, poNumber: z.string() }).nullable(),
     })
     .nullable(),
-  closedAt: instant.nullable(),
-  createdBy: personRef,
-  createdAt: instant,
-  updatedAt: instant,
+  ...caseEnd.shape,
 });
 export type CorrectiveAction = z.infer<typeof correctiveAction>;
 

@@ -1,4 +1,5 @@
-export type GaugeSystem = 'awg' | 'metric';
+export const GAUGE_SYSTEMS = ['awg', 'metric'] as const;
+export type GaugeSystem = (typeof GAUGE_SYSTEMS)[number];
 
 /** A standard conductor size as a label promises it. */
 export interface Gauge {

@@ -1,8 +1,11 @@
 import { StandardsInputError } from '../errors.js';
 import { requireInteger } from '../validate.js';
 import type { SamplingPlan } from './plan.js';
+import { SEVERITIES } from './tables.js';
 
-export type InspectionSeverity = 'normal' | 'tightened' | 'reduced' | 'discontinued';
+/** A product's switching state: a plan severity, or inspection discontinued (ISO 2859-1 9.4). */
+export const INSPECTION_SEVERITIES = [...SEVERITIES, 'discontinued'] as const;
+export type InspectionSeverity = (typeof INSPECTION_SEVERITIES)[number];
 
 /** Switching state kept per supplier and product; plain JSON, safe to store as is. */
 export interface InspectionState {

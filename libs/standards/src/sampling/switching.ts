@@ -3,6 +3,7 @@ import { acceptedAtTighterAql, lotOutcome, type LotOutcome } from './plan.js';
 import { checkState, move, type InspectionState, type LotResult } from './switching-state.js';
 
 export {
+  INSPECTION_SEVERITIES,
   initialInspectionState,
   type InspectionSeverity,
   type InspectionState,
