@@ -1,4 +1,11 @@
-import { RequestMethod, SetMetadata, type INestApplication } from '@nestjs/common';
+import {
+  applyDecorators,
+  HttpCode,
+  Post,
+  RequestMethod,
+  SetMetadata,
+  type INestApplication,
+} from '@nestjs/common';
 import { HTTP_CODE_METADATA, METHOD_METADATA } from '@nestjs/common/constants';
 import { ModulesContainer } from '@nestjs/core';
 import { ApiProduces, ApiResponse, DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
@@ -25,6 +32,13 @@ export const Answers = Object.assign(
     empty: () => SetMetadata(ANSWERS, { empty: true } satisfies Answer),
   },
 );
+
+/**
+ * A POST that acts on a record that exists (ship a return, approve a concession, revoke a
+ * record's links): nothing is created, so it answers 200 (not POST's 201) with `shape`.
+ */
+export const PostAction = (path: string, shape: ResponseName) =>
+  applyDecorators(Post(path), HttpCode(200), Answers(shape));
 
 /** The answer a handler names, if any. */
 export function answerOf(handler: object): Answer | undefined {

@@ -1,3 +1,4 @@
+import { StreamableFile } from '@nestjs/common';
 import { Readable } from 'node:stream';
 
 export type CsvCell = string | number | boolean | null | undefined;
@@ -83,4 +84,9 @@ export async function csvBuffer(
 /** Content-Disposition for a download, the file name reduced to safe characters. */
 export function attachmentName(filename: string): string {
   return `attachment; filename="${filename.replace(/[^\w.-]+/g, '_')}"`;
+}
+
+/** A CSV download (`text/csv`, UTF-8) of `filename`: `csvDownload('x.csv', csvStream(...))`. */
+export function csvDownload(filename: string, csv: Readable): StreamableFile {
+  return new StreamableFile(csv, { type: CSV_CONTENT_TYPE, disposition: attachmentName(filename) });
 }

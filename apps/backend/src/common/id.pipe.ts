@@ -1,6 +1,7 @@
 import {
   BadRequestException,
   Injectable,
+  Param,
   type ArgumentMetadata,
   type PipeTransform,
 } from '@nestjs/common';
@@ -23,3 +24,6 @@ export class IdPipe implements PipeTransform<string, number> {
     return id;
   }
 }
+
+/** The record id of the path, read through `IdPipe`: `@IdParam() id` (`@IdParam('fileId')`). */
+export const IdParam = (name = 'id'): ParameterDecorator => Param(name, IdPipe);

@@ -1,29 +1,18 @@
-import { Answers } from '../common/answers';
-import {
-  Body,
-  Controller,
-  Get,
-  HttpCode,
-  Param,
-  Patch,
-  Post,
-  Query,
-  Res,
-  StreamableFile,
-} from '@nestjs/common';
+import { Answers, PostAction } from '../common/answers';
+import { Body, Controller, Get, Patch, Post, Query, Res, StreamableFile } from '@nestjs/common';
 import type { Response } from 'express';
 import { SendCorrectiveActionDto } from '../supplier-portal/dto/portal.dto';
 import { SupplierPortalService } from '../supplier-portal/supplier-portal.service';
-import { ApiProduces, ApiTags } from '@nestjs/swagger';
+import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
-import { attachmentName, CSV_CONTENT_TYPE, csvStream } from '../common/csv';
+import { csvDownload, csvStream } from '../common/csv';
 import { CAR_CSV_HEADER, correctiveActionRows } from './corrective-action-csv';
 import { CorrectiveActionsService } from './corrective-actions.service';
 import { CreateCorrectiveActionDto } from './dto/create-corrective-action.dto';
 import { ListCorrectiveActionsDto } from './dto/list-corrective-actions.dto';
 import { UpdateCorrectiveActionDto } from './dto/update-corrective-action.dto';
-import { IdPipe } from '../common/id.pipe';
+import { IdParam } from '../common/id.pipe';
 
 @ApiTags('corrective-actions')
 @Controller('corrective-actions')
@@ -48,20 +37,14 @@ export class CorrectiveActionsController {
 
   @Get('export.csv')
   @Answers.file('text/csv')
-  @ApiProduces('text/csv')
   export(@Query() q: ListCorrectiveActionsDto) {
-    return new StreamableFile(
-      csvStream(CAR_CSV_HEADER, correctiveActionRows(this.cars.listBlocks(q))),
-      {
-        type: CSV_CONTENT_TYPE,
-        disposition: attachmentName('corrective-actions.csv'),
-      },
-    );
+    const rows = correctiveActionRows(this.cars.listBlocks(q));
+    return csvDownload('corrective-actions.csv', csvStream(CAR_CSV_HEADER, rows));
   }
 
   @Get(':id')
   @Answers('CorrectiveAction')
-  get(@Param('id', IdPipe) id: number) {
+  get(@IdParam() id: number) {
     return this.cars.get(id);
   }
 
@@ -72,7 +55,7 @@ export class CorrectiveActionsController {
   @Patch(':id')
   @Answers('CorrectiveActionUpdate')
   async update(
-    @Param('id', IdPipe) id: number,
+    @IdParam() id: number,
     @Body() dto: UpdateCorrectiveActionDto,
     @CurrentUser() actor: RequestUser,
   ) {
@@ -96,7 +79,7 @@ export class CorrectiveActionsController {
   @Post(':id/send')
   @Answers('SupplierLinkSent')
   send(
-    @Param('id', IdPipe) id: number,
+    @IdParam() id: number,
     @Body() dto: SendCorrectiveActionDto,
     @CurrentUser() actor: RequestUser,
   ) {
@@ -104,24 +87,22 @@ export class CorrectiveActionsController {
   }
 
   /** Withdraws every link sent for the request. */
-  @Post(':id/revoke-links')
-  @Answers('LinksRevoked')
-  @HttpCode(200)
-  revoke(@Param('id', IdPipe) id: number, @CurrentUser() actor: RequestUser) {
+  @PostAction(':id/revoke-links', 'LinksRevoked')
+  revoke(@IdParam() id: number, @CurrentUser() actor: RequestUser) {
     return this.portal.revoke(id, actor);
   }
 
   @Get(':id/attachments')
   @Answers('ScarAttachmentList')
-  attachments(@Param('id', IdPipe) id: number) {
+  attachments(@IdParam() id: number) {
     return this.portal.attachments(id);
   }
 
   @Get(':id/attachments/:fileId')
   @Answers.file('application/octet-stream')
   async attachment(
-    @Param('id', IdPipe) id: number,
-    @Param('fileId', IdPipe) fileId: number,
+    @IdParam() id: number,
+    @IdParam('fileId') fileId: number,
     @Res({ passthrough: true }) res: Response,
   ) {
     const { stream, att } = await this.portal.openAttachment(id, fileId);

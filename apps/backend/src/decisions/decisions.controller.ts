@@ -1,5 +1,5 @@
-import { Answers } from '../common/answers';
-import { Body, Controller, Get, HttpCode, Param, Post, Res } from '@nestjs/common';
+import { Answers, PostAction } from '../common/answers';
+import { Body, Controller, Get, Post, Res } from '@nestjs/common';
 import type { Response } from 'express';
 import { ALL_ROLES } from '../auth/roles';
 import { ReviewConcessionDto } from './dto/concession.dto';
@@ -9,7 +9,7 @@ import type { RequestUser } from '../auth/request-user';
 import { DecisionsService } from './decisions.service';
 import { CreateDecisionDto } from './dto/create-decision.dto';
 import { RestoreInspectionStateDto } from './dto/restore-inspection-state.dto';
-import { IdPipe } from '../common/id.pipe';
+import { IdParam } from '../common/id.pipe';
 
 @ApiTags('decisions')
 @Controller()
@@ -24,7 +24,7 @@ export class DecisionsController {
   @Post('lots/:id/decisions')
   @Answers('DecisionResult', 202)
   async decide(
-    @Param('id', IdPipe) id: number,
+    @IdParam() id: number,
     @Body() dto: CreateDecisionDto,
     @CurrentUser() actor: RequestUser,
     @Res({ passthrough: true }) res: Response,
@@ -37,7 +37,7 @@ export class DecisionsController {
   @Get('lots/:id/concessions')
   @Answers('ConcessionList')
   @Roles(...ALL_ROLES)
-  concessions(@Param('id', IdPipe) id: number) {
+  concessions(@IdParam() id: number) {
     return this.decisions.concessionsOf(id);
   }
 
@@ -52,22 +52,18 @@ export class DecisionsController {
   }
 
   /** A second QA lead or an admin puts a pending concession in force (not its requester). */
-  @Post('concessions/:id/approve')
-  @Answers('DecisionResult')
-  @HttpCode(200)
+  @PostAction('concessions/:id/approve', 'DecisionResult')
   approve(
-    @Param('id', IdPipe) id: number,
+    @IdParam() id: number,
     @Body() dto: ReviewConcessionDto,
     @CurrentUser() actor: RequestUser,
   ) {
     return this.decisions.approve(id, dto, actor);
   }
 
-  @Post('concessions/:id/refuse')
-  @Answers('Concession')
-  @HttpCode(200)
+  @PostAction('concessions/:id/refuse', 'Concession')
   refuse(
-    @Param('id', IdPipe) id: number,
+    @IdParam() id: number,
     @Body() dto: ReviewConcessionDto,
     @CurrentUser() actor: RequestUser,
   ) {
@@ -78,7 +74,7 @@ export class DecisionsController {
   @Post('products/:id/inspection-state/restore')
   @Answers('RestoreAnswer')
   restore(
-    @Param('id', IdPipe) id: number,
+    @IdParam() id: number,
     @Body() dto: RestoreInspectionStateDto,
     @CurrentUser() actor: RequestUser,
   ) {

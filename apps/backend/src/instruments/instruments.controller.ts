@@ -1,5 +1,5 @@
 import { Answers } from '../common/answers';
-import { Body, Controller, Get, Param, Patch, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, Patch, Post, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
@@ -8,7 +8,7 @@ import { CreateInstrumentDto } from './dto/create-instrument.dto';
 import { ListInstrumentsDto } from './dto/list-instruments.dto';
 import { UpdateInstrumentDto } from './dto/update-instrument.dto';
 import { InstrumentsService } from './instruments.service';
-import { IdPipe } from '../common/id.pipe';
+import { IdParam } from '../common/id.pipe';
 
 @ApiTags('instruments')
 @Controller('instruments')
@@ -25,7 +25,7 @@ export class InstrumentsController {
   @Get(':id')
   @Answers('Instrument')
   @Roles(...ALL_ROLES)
-  get(@Param('id', IdPipe) id: number) {
+  get(@IdParam() id: number) {
     return this.instruments.get(id);
   }
 
@@ -40,7 +40,7 @@ export class InstrumentsController {
   @Answers('Instrument')
   @Roles('qa_lead', 'admin')
   update(
-    @Param('id', IdPipe) id: number,
+    @IdParam() id: number,
     @Body() dto: UpdateInstrumentDto,
     @CurrentUser() actor: RequestUser,
   ) {

@@ -1,5 +1,5 @@
 import { Answers } from '../common/answers';
-import { Body, Controller, Get, Param, Patch, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, Patch, Post, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
@@ -9,7 +9,7 @@ import { ListProductsDto } from './dto/list-products.dto';
 import { SamplingPlanQueryDto } from './dto/sampling-plan-query.dto';
 import { UpdateProductDto } from './dto/update-product.dto';
 import { ProductsService } from './products.service';
-import { IdPipe } from '../common/id.pipe';
+import { IdParam } from '../common/id.pipe';
 
 @ApiTags('products')
 @Controller('products')
@@ -26,7 +26,7 @@ export class ProductsController {
   @Get(':id')
   @Answers('Product')
   @Roles(...ALL_ROLES)
-  get(@Param('id', IdPipe) id: number) {
+  get(@IdParam() id: number) {
     return this.products.get(id);
   }
 
@@ -34,7 +34,7 @@ export class ProductsController {
   @Get(':id/sampling-plan')
   @Answers('SamplingPlanAnswer')
   @Roles(...ALL_ROLES)
-  samplingPlan(@Param('id', IdPipe) id: number, @Query() query: SamplingPlanQueryDto) {
+  samplingPlan(@IdParam() id: number, @Query() query: SamplingPlanQueryDto) {
     return this.products.samplingPlan(id, query.quantity);
   }
 
@@ -48,11 +48,7 @@ export class ProductsController {
   @Patch(':id')
   @Answers('Product')
   @Roles('qa_lead', 'purchasing', 'admin')
-  update(
-    @Param('id', IdPipe) id: number,
-    @Body() dto: UpdateProductDto,
-    @CurrentUser() actor: RequestUser,
-  ) {
+  update(@IdParam() id: number, @Body() dto: UpdateProductDto, @CurrentUser() actor: RequestUser) {
     return this.products.update(id, dto, actor);
   }
 }

@@ -1,19 +1,9 @@
-import { Answers } from '../common/answers';
-import {
-  Body,
-  Controller,
-  Get,
-  HttpCode,
-  Param,
-  Patch,
-  Post,
-  Query,
-  StreamableFile,
-} from '@nestjs/common';
-import { ApiProduces, ApiTags } from '@nestjs/swagger';
+import { Answers, PostAction } from '../common/answers';
+import { Body, Controller, Get, Patch, Post, Query, StreamableFile } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
-import { attachmentName, CSV_CONTENT_TYPE, csvStream } from '../common/csv';
+import { csvDownload, csvStream } from '../common/csv';
 import { CreateReturnDto } from './dto/create-return.dto';
 import { EmailReturnDto } from './dto/email-return.dto';
 import { EvidenceQueryDto } from './dto/evidence-query.dto';
@@ -30,7 +20,7 @@ import { ReturnDocuments } from './return-documents';
 import { ReturnMailService } from './return-mail.service';
 import { RETURN_LIST_HEADER, returnListRows } from './return-list-csv';
 import { refOf, ReturnsService } from './returns.service';
-import { IdPipe } from '../common/id.pipe';
+import { IdParam } from '../common/id.pipe';
 
 @ApiTags('returns')
 @Controller('returns')
@@ -56,15 +46,9 @@ export class ReturnsController {
 
   @Get('export.csv')
   @Answers.file('text/csv')
-  @ApiProduces('text/csv')
   exportList(@Query() q: ListReturnsDto) {
-    return new StreamableFile(
-      csvStream(RETURN_LIST_HEADER, returnListRows(this.returns.listBlocks(q))),
-      {
-        type: CSV_CONTENT_TYPE,
-        disposition: attachmentName('returns.csv'),
-      },
-    );
+    const rows = returnListRows(this.returns.listBlocks(q));
+    return csvDownload('returns.csv', csvStream(RETURN_LIST_HEADER, rows));
   }
 
   /** Rejected lots that are on no return yet, for purchasing's Today. */
@@ -76,49 +60,31 @@ export class ReturnsController {
 
   @Get(':id')
   @Answers('VendorReturn')
-  get(@Param('id', IdPipe) id: number) {
+  get(@IdParam() id: number) {
     return this.returns.get(id);
   }
 
   @Patch(':id')
   @Answers('VendorReturn')
-  update(
-    @Param('id', IdPipe) id: number,
-    @Body() dto: UpdateReturnDto,
-    @CurrentUser() actor: RequestUser,
-  ) {
+  update(@IdParam() id: number, @Body() dto: UpdateReturnDto, @CurrentUser() actor: RequestUser) {
     return this.returns.update(id, dto, actor);
   }
 
   /** A draft that should not go: its lots are freed for another return. */
-  @Post(':id/cancel')
-  @Answers('VendorReturn')
-  @HttpCode(200)
-  cancel(
-    @Param('id', IdPipe) id: number,
-    @Body() dto: CancelReturnDto,
-    @CurrentUser() actor: RequestUser,
-  ) {
+  @PostAction(':id/cancel', 'VendorReturn')
+  cancel(@IdParam() id: number, @Body() dto: CancelReturnDto, @CurrentUser() actor: RequestUser) {
     return this.returns.cancel(id, dto, actor);
   }
 
   /** The goods left, with carrier, tracking number, date and quantity. */
-  @Post(':id/ship')
-  @Answers('VendorReturn')
-  @HttpCode(200)
-  ship(
-    @Param('id', IdPipe) id: number,
-    @Body() dto: ShipReturnDto,
-    @CurrentUser() actor: RequestUser,
-  ) {
+  @PostAction(':id/ship', 'VendorReturn')
+  ship(@IdParam() id: number, @Body() dto: ShipReturnDto, @CurrentUser() actor: RequestUser) {
     return this.returns.ship(id, dto, actor);
   }
 
-  @Post(':id/acknowledge')
-  @Answers('VendorReturn')
-  @HttpCode(200)
+  @PostAction(':id/acknowledge', 'VendorReturn')
   acknowledge(
-    @Param('id', IdPipe) id: number,
+    @IdParam() id: number,
     @Body() dto: AcknowledgeReturnDto,
     @CurrentUser() actor: RequestUser,
   ) {
@@ -126,46 +92,29 @@ export class ReturnsController {
   }
 
   /** The supplier's credit note for the chargeback. */
-  @Post(':id/credit')
-  @Answers('VendorReturn')
-  @HttpCode(200)
-  credit(
-    @Param('id', IdPipe) id: number,
-    @Body() dto: CreditReturnDto,
-    @CurrentUser() actor: RequestUser,
-  ) {
+  @PostAction(':id/credit', 'VendorReturn')
+  credit(@IdParam() id: number, @Body() dto: CreditReturnDto, @CurrentUser() actor: RequestUser) {
     return this.returns.credit(id, dto, actor);
   }
 
-  @Post(':id/close')
-  @Answers('VendorReturn')
-  @HttpCode(200)
-  close(
-    @Param('id', IdPipe) id: number,
-    @Body() dto: ReturnStepDto,
-    @CurrentUser() actor: RequestUser,
-  ) {
+  @PostAction(':id/close', 'VendorReturn')
+  close(@IdParam() id: number, @Body() dto: ReturnStepDto, @CurrentUser() actor: RequestUser) {
     return this.returns.close(id, dto, actor);
   }
 
   /** One row per reading of every lot on the return. */
   @Get(':id/export.csv')
   @Answers.file('text/csv')
-  @ApiProduces('text/csv')
-  async exportReadings(@Param('id', IdPipe) id: number, @CurrentUser() actor: RequestUser) {
+  async exportReadings(@IdParam() id: number, @CurrentUser() actor: RequestUser) {
     const ret = await this.returns.ref(id);
     await this.mail.recordExport(ret, 'CSV', actor);
-    return new StreamableFile(this.documents.csvStream(ret), {
-      type: CSV_CONTENT_TYPE,
-      disposition: attachmentName(`${ret.number}-readings.csv`),
-    });
+    return csvDownload(`${ret.number}-readings.csv`, this.documents.csvStream(ret));
   }
 
   @Get(':id/evidence.pdf')
   @Answers.file('application/pdf')
-  @ApiProduces('application/pdf')
   async evidence(
-    @Param('id', IdPipe) id: number,
+    @IdParam() id: number,
     @Query() q: EvidenceQueryDto,
     @CurrentUser() actor: RequestUser,
   ) {
@@ -180,19 +129,13 @@ export class ReturnsController {
 
   @Post(':id/email')
   @Answers('OutboundMessage')
-  email(
-    @Param('id', IdPipe) id: number,
-    @Body() dto: EmailReturnDto,
-    @CurrentUser() actor: RequestUser,
-  ) {
+  email(@IdParam() id: number, @Body() dto: EmailReturnDto, @CurrentUser() actor: RequestUser) {
     return this.mail.email(id, dto, actor);
   }
 
   /** Withdraws the supplier's links to the notice's page (e.g. sent to a wrong address). */
-  @Post(':id/revoke-links')
-  @Answers('LinksRevoked')
-  @HttpCode(200)
-  revokeLinks(@Param('id', IdPipe) id: number, @CurrentUser() actor: RequestUser) {
+  @PostAction(':id/revoke-links', 'LinksRevoked')
+  revokeLinks(@IdParam() id: number, @CurrentUser() actor: RequestUser) {
     return this.mail.revokeLinks(id, actor);
   }
 }

@@ -1,5 +1,5 @@
 import { Answers } from '../common/answers';
-import { Body, Controller, Get, Param, Patch, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, Patch, Post, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
@@ -8,7 +8,7 @@ import { CreateSupplierDto } from './dto/create-supplier.dto';
 import { ListSuppliersDto } from './dto/list-suppliers.dto';
 import { UpdateSupplierDto } from './dto/update-supplier.dto';
 import { SuppliersService } from './suppliers.service';
-import { IdPipe } from '../common/id.pipe';
+import { IdParam } from '../common/id.pipe';
 
 @ApiTags('suppliers')
 @Controller('suppliers')
@@ -25,7 +25,7 @@ export class SuppliersController {
   @Get(':id')
   @Answers('Supplier')
   @Roles(...ALL_ROLES)
-  get(@Param('id', IdPipe) id: number) {
+  get(@IdParam() id: number) {
     return this.suppliers.get(id);
   }
 
@@ -39,11 +39,7 @@ export class SuppliersController {
   @Patch(':id')
   @Answers('Supplier')
   @Roles('purchasing', 'admin')
-  update(
-    @Param('id', IdPipe) id: number,
-    @Body() dto: UpdateSupplierDto,
-    @CurrentUser() actor: RequestUser,
-  ) {
+  update(@IdParam() id: number, @Body() dto: UpdateSupplierDto, @CurrentUser() actor: RequestUser) {
     return this.suppliers.update(id, dto, actor);
   }
 }

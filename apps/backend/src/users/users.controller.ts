@@ -1,12 +1,12 @@
 import { Answers } from '../common/answers';
-import { Body, Controller, Get, Param, Patch, Post } from '@nestjs/common';
+import { Body, Controller, Get, Patch, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
 import { CreateUserDto } from './dto/create-user.dto';
 import { UpdateUserDto } from './dto/update-user.dto';
 import { UsersService } from './users.service';
-import { IdPipe } from '../common/id.pipe';
+import { IdParam } from '../common/id.pipe';
 
 @ApiTags('users')
 @Controller('users')
@@ -28,11 +28,7 @@ export class UsersController {
 
   @Patch(':id')
   @Answers('User')
-  update(
-    @Param('id', IdPipe) id: number,
-    @Body() dto: UpdateUserDto,
-    @CurrentUser() actor: RequestUser,
-  ) {
+  update(@IdParam() id: number, @Body() dto: UpdateUserDto, @CurrentUser() actor: RequestUser) {
     return this.users.update(id, dto, actor);
   }
 }
