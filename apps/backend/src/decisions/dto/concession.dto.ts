@@ -1,15 +1,7 @@
 import { TEXT_MAX, TEXT_MIN } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import {
-  IsInt,
-  IsNumber,
-  IsOptional,
-  IsString,
-  Matches,
-  MaxLength,
-  Min,
-  MinLength,
-} from 'class-validator';
+import { IsNumber, IsOptional, IsString, MaxLength, Min, MinLength } from 'class-validator';
+import { IsDay, StepVersion } from '../../common/dto-fields';
 
 /** The terms of a concession, given with an accept-on-concession decision. */
 export class ConcessionTermsDto {
@@ -28,14 +20,12 @@ export class ConcessionTermsDto {
 
   @ApiProperty({ description: 'Last day the concession holds, YYYY-MM-DD' })
   @IsString({ message: 'expiresOn must be a date YYYY-MM-DD' })
-  @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'expiresOn must be a date YYYY-MM-DD' })
+  @IsDay()
   readonly expiresOn: string;
 }
 
 export class ReviewConcessionDto {
-  @ApiProperty({ description: 'The concession version looked at (optimistic lock)' })
-  @IsInt({ message: 'version must be a whole number' })
-  @Min(1, { message: 'version must be a whole number' })
+  @StepVersion('The concession version looked at (optimistic lock)')
   readonly version: number;
 
   @ApiPropertyOptional({ description: 'Why (required to refuse: at least 10 characters)' })

@@ -1,16 +1,8 @@
 import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import {
-  IsBoolean,
-  IsIn,
-  IsInt,
-  IsOptional,
-  IsString,
-  MaxLength,
-  Min,
-  ValidateNested,
-} from 'class-validator';
+import { IsBoolean, IsIn, IsOptional, IsString, MaxLength, ValidateNested } from 'class-validator';
+import { StepVersion } from '../../common/dto-fields';
 import { ConcessionTermsDto } from './concession.dto';
 import { DECISION_OUTCOMES, type DecisionOutcome } from '../entities/decision.entity';
 
@@ -26,9 +18,7 @@ export class CreateDecisionDto {
   @MaxLength(TEXT_MAX.long, { message: `reason must be at most ${TEXT_MAX.long} characters` })
   readonly reason: string;
 
-  @ApiProperty({ description: 'The lot version the decision was taken on (optimistic lock).' })
-  @IsInt({ message: 'version must be a whole number' })
-  @Min(1, { message: 'version must be a whole number' })
+  @StepVersion('The lot version the decision was taken on (optimistic lock).')
   readonly version: number;
 
   @ApiPropertyOptional({

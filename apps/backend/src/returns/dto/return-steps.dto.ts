@@ -1,45 +1,23 @@
 import { TEXT_MAX, TEXT_MIN } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import {
-  IsInt,
-  IsNumber,
-  IsOptional,
-  IsString,
-  Matches,
-  MaxLength,
-  Max,
-  Min,
-  MinLength,
-} from 'class-validator';
+import { IsNumber, IsOptional, IsString, MaxLength, Max, Min, MinLength } from 'class-validator';
+import { IsDay, OptionalText, RequiredText, StepVersion } from '../../common/dto-fields';
 
 /** A step of a return; `version`, when given, must be the current one (else 409). */
 export class ReturnStepDto {
-  @ApiPropertyOptional({ description: 'The version the step was taken on' })
-  @IsOptional()
-  @IsInt({ message: 'version must be a whole number' })
-  @Min(1, { message: 'version must be a whole number' })
+  @StepVersion('The version the step was taken on', false)
   readonly version?: number;
 }
 
 export class CancelReturnDto extends ReturnStepDto {
-  @ApiProperty({ description: 'Why the return is cancelled (kept in the audit trail)' })
-  @IsString({ message: 'reason must be text' })
-  @MinLength(TEXT_MIN.cancelReason, {
-    message: `reason must be at least ${TEXT_MIN.cancelReason} characters`,
+  @RequiredText(TEXT_MIN.cancelReason, TEXT_MAX.reason, {
+    description: 'Why the return is cancelled (kept in the audit trail)',
   })
-  @MaxLength(TEXT_MAX.reason, { message: `reason must be at most ${TEXT_MAX.reason} characters` })
   readonly reason: string;
 }
 
 export class ShipReturnDto extends ReturnStepDto {
-  @ApiProperty({ example: 'Northline Freight' })
-  @IsString({ message: 'carrier must be text' })
-  @MinLength(TEXT_MIN.carrier, {
-    message: `carrier must be at least ${TEXT_MIN.carrier} characters`,
-  })
-  @MaxLength(TEXT_MAX.reference, {
-    message: `carrier must be at most ${TEXT_MAX.reference} characters`,
-  })
+  @RequiredText(TEXT_MIN.carrier, TEXT_MAX.reference, { example: 'Northline Freight' })
   readonly carrier: string;
 
   @ApiPropertyOptional()
@@ -51,7 +29,7 @@ export class ShipReturnDto extends ReturnStepDto {
   readonly trackingNumber?: string;
 
   @ApiProperty({ example: '2026-12-03' })
-  @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'shippedOn must be a date YYYY-MM-DD' })
+  @IsDay()
   readonly shippedOn: string;
 
   @ApiProperty({ description: "How much went back, in the lots' unit" })
@@ -62,11 +40,8 @@ export class ShipReturnDto extends ReturnStepDto {
 }
 
 export class AcknowledgeReturnDto extends ReturnStepDto {
-  @ApiPropertyOptional({ description: "The supplier's RMA number, if it came with the answer" })
-  @IsOptional()
-  @IsString()
-  @MaxLength(TEXT_MAX.reference, {
-    message: `rmaNumber must be at most ${TEXT_MAX.reference} characters`,
+  @OptionalText(TEXT_MAX.reference, {
+    description: "The supplier's RMA number, if it came with the answer",
   })
   readonly rmaNumber?: string;
 }

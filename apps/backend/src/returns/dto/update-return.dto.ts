@@ -1,47 +1,25 @@
 import { TEXT_MAX } from '@gaugeproof/api-types';
-import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import {
-  ArrayMaxSize,
-  ArrayMinSize,
-  ArrayUnique,
-  IsArray,
-  IsBoolean,
-  IsInt,
-  IsOptional,
-  IsString,
-  Matches,
-  MaxLength,
-  Min,
-  ValidateNested,
-} from 'class-validator';
+import { IsBoolean, IsOptional, ValidateNested } from 'class-validator';
+import { LotIdList, OptionalCurrency, OptionalText, StepVersion } from '../../common/dto-fields';
+import { SUPPLIER_NOTE } from './create-return.dto';
 import { ReturnCostsDto } from './return-costs.dto';
 
 /** An edit of a return, made on the copy the client loaded (`version`). */
 export class UpdateReturnDto {
-  @ApiProperty({ description: 'The version the edit was made on; a stale one gets 409' })
-  @IsInt({ message: 'version must be a whole number' })
-  @Min(1, { message: 'version must be a whole number' })
+  @StepVersion('The version the edit was made on; a stale one gets 409')
   readonly version: number;
 
-  @ApiPropertyOptional()
-  @IsOptional()
-  @IsString()
-  @MaxLength(TEXT_MAX.reference, {
-    message: `rmaNumber must be at most ${TEXT_MAX.reference} characters`,
-  })
+  @OptionalText(TEXT_MAX.reference)
   readonly rmaNumber?: string;
 
-  @ApiPropertyOptional({ description: "Purchasing's own notes; never sent to the supplier" })
-  @IsOptional()
-  @IsString()
-  @MaxLength(TEXT_MAX.long, { message: `notes must be at most ${TEXT_MAX.long} characters` })
+  @OptionalText(TEXT_MAX.long, {
+    description: "Purchasing's own notes; never sent to the supplier",
+  })
   readonly notes?: string;
 
-  @ApiPropertyOptional({ description: 'Why the goods come back, written for the supplier' })
-  @IsOptional()
-  @IsString()
-  @MaxLength(TEXT_MAX.long, { message: `supplierNote must be at most ${TEXT_MAX.long} characters` })
+  @OptionalText(TEXT_MAX.long, { description: SUPPLIER_NOTE })
   readonly supplierNote?: string;
 
   @ApiPropertyOptional({ description: "Put the QA lead's reason in the supplier's documents" })
@@ -55,9 +33,7 @@ export class UpdateReturnDto {
   @Type(() => ReturnCostsDto)
   readonly costs?: ReturnCostsDto;
 
-  @ApiPropertyOptional({ example: 'EUR', description: 'ISO 4217 code (draft only)' })
-  @IsOptional()
-  @Matches(/^[A-Z]{3}$/, { message: 'currency must be an ISO 4217 code such as EUR or USD' })
+  @OptionalCurrency({ description: 'ISO 4217 code (draft only)' })
   readonly currency?: string;
 
   @ApiPropertyOptional({
@@ -65,11 +41,6 @@ export class UpdateReturnDto {
     description: 'The lots on the return, replacing the list (draft only)',
   })
   @IsOptional()
-  @IsArray({ message: 'lotIds must be a list of lot ids' })
-  @ArrayMinSize(1, { message: 'lotIds must name at least one lot; cancel the return instead' })
-  @ArrayMaxSize(100, { message: 'lotIds can name at most 100 lots' })
-  @ArrayUnique({ message: 'lotIds must not repeat a lot' })
-  @IsInt({ each: true, message: 'each lot id must be a whole number' })
-  @Min(1, { each: true, message: 'each lot id must be a whole number' })
+  @LotIdList('lotIds must name at least one lot; cancel the return instead')
   readonly lotIds?: number[];
 }

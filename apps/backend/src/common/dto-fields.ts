@@ -1,0 +1,104 @@
+import { applyDecorators } from '@nestjs/common';
+import { ApiProperty, ApiPropertyOptional, type ApiPropertyOptions } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  ArrayUnique,
+  IsArray,
+  IsInt,
+  IsOptional,
+  IsString,
+  Matches,
+  MaxLength,
+  Min,
+  MinLength,
+} from 'class-validator';
+
+/*
+ * Property rules several DTOs share, written once. Each stands for the decorators its
+ * properties carried one above the other, applied in the same order (a stack applies its
+ * lowest decorator first), so class-validator reports the same sentences in the same order
+ * and the OpenAPI document does not change. Sentences name the property through
+ * class-validator's `$property` and the limit through `$constraint1`.
+ */
+const stacked = (...decorators: PropertyDecorator[]) => applyDecorators(...decorators.reverse());
+
+const WHOLE = { message: '$property must be a whole number' };
+const AT_LEAST = { message: '$property must be at least $constraint1 characters' };
+const AT_MOST = { message: '$property must be at most $constraint1 characters' };
+
+/** A record id or a version in a body: a whole number from 1. */
+export const IsWholeFromOne = () => stacked(IsInt(WHOLE), Min(1, WHOLE));
+
+/** The version a step or review was taken on (optimistic lock; a stale one gets 409). */
+export const StepVersion = (description: string, required = true) =>
+  required
+    ? stacked(ApiProperty({ description }), IsWholeFromOne())
+    : stacked(ApiPropertyOptional({ description }), IsOptional(), IsWholeFromOne());
+
+/** An optional record id in a query string (`?supplierId=3`). */
+export const OptionalQueryId = () =>
+  stacked(
+    ApiPropertyOptional(),
+    IsOptional(),
+    Type(() => Number),
+    IsWholeFromOne(),
+  );
+
+/** Optional text of at most `max` characters (at least `min` when given). */
+export const OptionalText = (max: number, doc?: ApiPropertyOptions, min?: number) =>
+  stacked(
+    ApiPropertyOptional(doc),
+    IsOptional(),
+    IsString(),
+    ...(min === undefined ? [] : [MinLength(min, AT_LEAST)]),
+    MaxLength(max, AT_MOST),
+  );
+
+/** Required text of `min` to `max` characters: `$property must be text` when it is none. */
+export const RequiredText = (min: number, max: number, doc?: ApiPropertyOptions) =>
+  stacked(
+    ApiProperty(doc),
+    IsString({ message: '$property must be text' }),
+    MinLength(min, AT_LEAST),
+    MaxLength(max, AT_MOST),
+  );
+
+/** A calendar day written YYYY-MM-DD. */
+export const IsDay = () =>
+  Matches(/^\d{4}-\d{2}-\d{2}$/, { message: '$property must be a date YYYY-MM-DD' });
+
+/** An optional ISO 4217 currency code. */
+export const OptionalCurrency = (doc: ApiPropertyOptions) =>
+  stacked(
+    ApiPropertyOptional({ example: 'EUR', ...doc }),
+    IsOptional(),
+    Matches(/^[A-Z]{3}$/, { message: 'currency must be an ISO 4217 code such as EUR or USD' }),
+  );
+
+/**
+ * The lots a return or a SCAR is about: up to 100 distinct lot ids. `atLeastOne`: the
+ * sentence when the list is empty (a SCAR may name none).
+ */
+export const LotIdList = (atLeastOne?: string) =>
+  stacked(
+    IsArray({ message: 'lotIds must be a list of lot ids' }),
+    ...(atLeastOne === undefined ? [] : [ArrayMinSize(1, { message: atLeastOne })]),
+    ArrayMaxSize(100, { message: 'lotIds can name at most 100 lots' }),
+    ArrayUnique({ message: 'lotIds must not repeat a lot' }),
+    IsInt({ each: true, message: 'each lot id must be a whole number' }),
+    Min(1, { each: true, message: 'each lot id must be a whole number' }),
+  );
+
+/** A comma list of a status enum's values in a query string (`?status=open,reopened`). */
+export const StatusList = (values: readonly string[]) => {
+  const one = values.join('|');
+  return stacked(
+    ApiPropertyOptional({ description: `Comma list of ${values.join(', ')}` }),
+    IsOptional(),
+    Matches(new RegExp(`^(${one})(,(${one}))*$`), {
+      message: `status must be a comma list of ${values.join(', ')}`,
+    }),
+  );
+};
