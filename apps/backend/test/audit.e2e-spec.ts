@@ -1,39 +1,20 @@
-import { execFileSync } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
-import { join } from 'node:path';
-import type { Response } from 'superagent';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { AuditService } from '../src/audit/audit.service';
 import { Sample } from '../src/inspection/entities/sample.entity';
-import { Fixtures } from './helpers/decision-fixtures';
-import { DEMO, ORIGIN, startTestApp, type TestApp } from './helpers/test-app';
+import { auth } from './helpers/api';
+import { Fixtures, startWithFixtures } from './helpers/decision-fixtures';
+import { collect, pdfTool } from './helpers/pdf';
+import { DEMO, ORIGIN, type TestApp } from './helpers/test-app';
 
 let t: TestApp;
 let fx: Fixtures;
 let qa: string;
-beforeAll(async () => {
-  t = await startTestApp();
-  fx = new Fixtures(t);
-  qa = await t.token(DEMO.qa);
-});
+beforeAll(async () => ({ t, fx, token: qa } = await startWithFixtures(DEMO.qa)));
 afterAll(async () => t.close());
 
-const auth = (token: string) => ({ Authorization: `Bearer ${token}` });
-
-/** Collects a binary answer into a Buffer. */
-function collect(res: Response, cb: (err: Error | null, body: Buffer) => void) {
-  const stream = res as unknown as NodeJS.ReadableStream;
-  const chunks: Buffer[] = [];
-  stream.on('data', (c: Buffer) => chunks.push(c));
-  stream.on('end', () => cb(null, Buffer.concat(chunks)));
-}
-
-/** The text of a PDF through poppler's pdftotext (apt-get install poppler-utils). */
-function pdfText(pdf: Buffer): string {
-  const file = join(t.dir, `doc-${Date.now()}.pdf`);
-  writeFileSync(file, pdf);
-  return execFileSync('pdftotext', ['-layout', file, '-']).toString();
-}
+/** The text of a PDF through poppler's pdftotext. */
+const pdfText = (pdf: Buffer) => pdfTool(t.dir, 'pdftotext', pdf, ['-layout']);
 
 /** A rejected lot whose reading of unit 1 (power) was recorded through the audit trail. */
 async function rejectedLot() {

@@ -5,25 +5,22 @@ import { Reading } from '../src/inspection/entities/reading.entity';
 import { Sample } from '../src/inspection/entities/sample.entity';
 import {
   as,
-  createBench,
   createLot,
-  createProduct,
   GOOD_4AWG_MASS,
   type Bench,
   type Catalog,
+  SPOOL_4AWG,
+  startWithBench,
 } from './helpers/fixtures';
-import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
+import { DEMO, type TestApp } from './helpers/test-app';
 
 // Issue 15: bench mode's writes. Client ids make a retried reading or sample land once;
 // a clerk voids their own slip until the lot is decided.
 let t: TestApp;
 let bench: Bench;
 let spool: Catalog;
-beforeAll(async () => {
-  t = await startTestApp();
-  bench = await createBench(t);
-  spool = await createProduct(t); // one 4 AWG copper conductor; S-3, AQL 15 → n 3, Ac 1, Re 2
-});
+// One 4 AWG copper conductor; S-3, AQL 15 → n 3, Ac 1, Re 2.
+beforeAll(async () => ({ t, bench, spool } = await startWithBench({ spool: SPOOL_4AWG })));
 afterAll(async () => t.close());
 
 const count = (entity: typeof Reading | typeof Sample, where: object) =>

@@ -1,9 +1,6 @@
-import { execFileSync } from 'node:child_process';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Fixtures } from './helpers/decision-fixtures';
+import { pdfTool } from './helpers/pdf';
 import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
 
 let t: TestApp;
@@ -36,16 +33,7 @@ async function auth(email: string) {
 }
 
 /** The text of a PDF through poppler's pdftotext. */
-function pdfText(pdf: Buffer): string {
-  const dir = mkdtempSync(join(tmpdir(), 'gp-pdf-'));
-  try {
-    const file = join(dir, 'doc.pdf');
-    writeFileSync(file, pdf);
-    return execFileSync('pdftotext', ['-layout', file, '-']).toString();
-  } finally {
-    rmSync(dir, { recursive: true, force: true });
-  }
-}
+const pdfText = (pdf: Buffer) => pdfTool(t.dir, 'pdftotext', pdf, ['-layout']);
 
 const inDays = (n: number) => new Date(Date.now() + n * 86_400_000).toISOString().slice(0, 10);
 const TERMS = {

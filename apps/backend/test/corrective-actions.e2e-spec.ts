@@ -1,21 +1,17 @@
 import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CorrectiveAction } from '../src/corrective-actions/entities/corrective-action.entity';
-import { Fixtures, rejectedLot } from './helpers/decision-fixtures';
-import { DEMO, ORIGIN, startTestApp, type TestApp } from './helpers/test-app';
+import { auth, dayFromToday } from './helpers/api';
+import { Fixtures, rejectedLot, startWithFixtures } from './helpers/decision-fixtures';
+import { DEMO, ORIGIN, type TestApp } from './helpers/test-app';
 
 let t: TestApp;
 let fx: Fixtures;
 let buyer: string;
-beforeAll(async () => {
-  t = await startTestApp();
-  fx = new Fixtures(t);
-  buyer = await t.token(DEMO.buyer);
-});
+beforeAll(async () => ({ t, fx, token: buyer } = await startWithFixtures(DEMO.buyer)));
 afterAll(async () => t.close());
 
-const auth = (token: string) => ({ Authorization: `Bearer ${token}` });
-const inDays = (n: number) => new Date(Date.now() + n * 86_400_000).toISOString().slice(0, 10);
+const inDays = dayFromToday;
 const PROBLEM = 'Power conductor of 4 AWG kits measures as 8 AWG on two units';
 
 async function supplierWithLot(name: string) {

@@ -1,15 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Fixtures } from './helpers/decision-fixtures';
-import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
+import { Fixtures, startWithFixtures } from './helpers/decision-fixtures';
+import { DEMO, type TestApp } from './helpers/test-app';
 
 let t: TestApp;
 let fx: Fixtures;
 let qa: string;
-beforeAll(async () => {
-  t = await startTestApp();
-  fx = new Fixtures(t);
-  qa = await t.token(DEMO.qa);
-});
+beforeAll(async () => ({ t, fx, token: qa } = await startWithFixtures(DEMO.qa)));
 afterAll(async () => t.close());
 
 const LONG_REASON = 'Power conductor measured two sizes small on three units';

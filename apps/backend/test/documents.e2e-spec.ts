@@ -1,12 +1,11 @@
 import { execFileSync } from 'node:child_process';
-import { writeFileSync } from 'node:fs';
-import { join } from 'node:path';
-import type { Response } from 'superagent';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { evidencePackPdf } from '../src/documents/evidence-pack';
 import { Product } from '../src/products/entities/product.entity';
-import { Fixtures } from './helpers/decision-fixtures';
-import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
+import { auth } from './helpers/api';
+import { Fixtures, startWithFixtures } from './helpers/decision-fixtures';
+import { collect, pdfFile as writePdf } from './helpers/pdf';
+import { DEMO, type TestApp } from './helpers/test-app';
 
 /**
  * Documents in any script (issue 17 item 9): every PDF embeds a Unicode font, and the tag's
@@ -15,28 +14,10 @@ import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
 let t: TestApp;
 let fx: Fixtures;
 let qa: string;
-beforeAll(async () => {
-  t = await startTestApp();
-  fx = new Fixtures(t);
-  qa = await t.token(DEMO.qa);
-});
+beforeAll(async () => ({ t, fx, token: qa } = await startWithFixtures(DEMO.qa)));
 afterAll(async () => t.close());
 
-const auth = (token: string) => ({ Authorization: `Bearer ${token}` });
-
-function collect(res: Response, cb: (err: Error | null, body: Buffer) => void) {
-  const stream = res as unknown as NodeJS.ReadableStream;
-  const chunks: Buffer[] = [];
-  stream.on('data', (c: Buffer) => chunks.push(c));
-  stream.on('end', () => cb(null, Buffer.concat(chunks)));
-}
-
-let n = 0;
-function pdfFile(pdf: Buffer): string {
-  const file = join(process.env.KEEP_DOCS ?? t.dir, `doc-${++n}.pdf`);
-  writeFileSync(file, pdf);
-  return file;
-}
+const pdfFile = (pdf: Buffer) => writePdf(process.env.KEEP_DOCS ?? t.dir, pdf);
 const pdfText = (pdf: Buffer) =>
   execFileSync('pdftotext', ['-layout', pdfFile(pdf), '-'])
     .toString()

@@ -1,22 +1,18 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import {
   as,
-  createBench,
   createLot,
-  createProduct,
   type Bench,
   type Catalog,
+  SPOOL_4AWG,
+  startWithBench,
 } from './helpers/fixtures';
-import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
+import { DEMO, type TestApp } from './helpers/test-app';
 
 let t: TestApp;
 let bench: Bench;
 let kit: Catalog;
-beforeAll(async () => {
-  t = await startTestApp();
-  bench = await createBench(t);
-  kit = await createProduct(t, [{ purpose: 'power', gauge: '4 AWG' }]);
-});
+beforeAll(async () => ({ t, bench, kit } = await startWithBench({ kit: SPOOL_4AWG })));
 afterAll(async () => t.close());
 
 describe('errors as data: every problem names its field', () => {

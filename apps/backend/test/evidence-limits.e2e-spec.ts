@@ -8,14 +8,14 @@ import { Fixtures, rejectedLot } from './helpers/decision-fixtures';
 import { startMailDev, type MailDev } from './helpers/maildev';
 import {
   as,
-  createBench,
   createLot,
-  createProduct,
   GOOD_4AWG_MASS,
   type Bench,
   type Catalog,
+  SPOOL_4AWG,
+  startWithBench,
 } from './helpers/fixtures';
-import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
+import { DEMO, type TestApp } from './helpers/test-app';
 
 // Issue 17 item 10: at most 20 live readings per sample (a clear 422 through the one
 // reading write path, form and import alike), and a lot's evidence frozen once a return of
@@ -31,9 +31,8 @@ let png: Buffer;
 
 beforeAll(async () => {
   mail = await startMailDev();
-  t = await startTestApp({ SMTP_URL: mail.smtpUrl });
-  bench = await createBench(t);
-  spool = await createProduct(t, [{ purpose: 'power', gauge: '4 AWG' }]);
+  const env = { SMTP_URL: mail.smtpUrl };
+  ({ t, bench, spool } = await startWithBench({ spool: SPOOL_4AWG }, env));
   fx = new Fixtures(t);
   png = await new Jimp({ width: 8, height: 8, color: 0xb87333ff }).getBuffer('image/png');
 });

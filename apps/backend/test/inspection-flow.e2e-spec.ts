@@ -3,29 +3,24 @@ import { MikroORM } from '@mikro-orm/core';
 import { AuditEvent } from '../src/audit/entities/audit-event.entity';
 import {
   as,
-  createBench,
   createLot,
-  createProduct,
   GOOD_4AWG_MASS,
   lotRow,
   type Bench,
   type Catalog,
+  KIT_4AWG,
+  SPOOL_4AWG,
+  startWithBench,
 } from './helpers/fixtures';
-import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
+import { DEMO, type TestApp } from './helpers/test-app';
 
 let t: TestApp;
 let bench: Bench;
 let kit: Catalog;
 let spool: Catalog;
+// S-3, AQL 15, 50 units → code letter B, 3 units, Ac 1, Re 2 (MIL-STD-105E Table II-A).
 beforeAll(async () => {
-  t = await startTestApp();
-  bench = await createBench(t);
-  // S-3, AQL 15, 50 units → code letter B, 3 units, Ac 1, Re 2 (MIL-STD-105E Table II-A).
-  kit = await createProduct(t, [
-    { purpose: 'power', gauge: '4 AWG' },
-    { purpose: 'ground', gauge: '4 AWG' },
-  ]);
-  spool = await createProduct(t);
+  ({ t, bench, kit, spool } = await startWithBench({ kit: KIT_4AWG, spool: SPOOL_4AWG }));
 });
 afterAll(async () => t.close());
 

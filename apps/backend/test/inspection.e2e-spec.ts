@@ -6,24 +6,22 @@ import { plainSql } from '../src/common/plain-sql';
 import { Reading } from '../src/inspection/entities/reading.entity';
 import {
   as,
-  createBench,
   createLot,
   createProduct,
   GOOD_4AWG_MASS,
   lotRow,
   type Bench,
   type Catalog,
+  SPOOL_4AWG,
+  startWithBench,
 } from './helpers/fixtures';
-import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
+import { DEMO, type TestApp } from './helpers/test-app';
 
 let t: TestApp;
 let bench: Bench;
 let spool: Catalog;
-beforeAll(async () => {
-  t = await startTestApp();
-  bench = await createBench(t);
-  spool = await createProduct(t); // one 4 AWG copper conductor; S-3, AQL 15 → n 3, Ac 1, Re 2
-});
+// One 4 AWG copper conductor; S-3, AQL 15 → n 3, Ac 1, Re 2.
+beforeAll(async () => ({ t, bench, spool } = await startWithBench({ spool: SPOOL_4AWG })));
 afterAll(async () => t.close());
 
 const readingCount = () => t.app.get(MikroORM).em.fork().count(Reading);

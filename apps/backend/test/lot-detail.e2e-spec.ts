@@ -6,20 +6,17 @@ import { Lot } from '../src/lots/entities/lot.entity';
 import { User } from '../src/users/entities/user.entity';
 import {
   as,
-  createBench,
   createLot,
   createProduct,
   GOOD_4AWG_MASS,
   type Bench,
+  startWithBench,
 } from './helpers/fixtures';
-import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
+import { DEMO, type TestApp } from './helpers/test-app';
 
 let t: TestApp;
 let bench: Bench;
-beforeAll(async () => {
-  t = await startTestApp();
-  bench = await createBench(t);
-});
+beforeAll(async () => ({ t, bench } = await startWithBench({})));
 afterAll(async () => t.close());
 
 describe('GET /api/lots/:id', () => {

@@ -3,11 +3,10 @@ import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { auth } from './helpers/api';
 import { Fixtures, rejectedLot } from './helpers/decision-fixtures';
 import { freePort, startMailDev, type MailDev } from './helpers/maildev';
 import { DEMO, ORIGIN, startTestApp, type TestApp } from './helpers/test-app';
-
-const auth = (token: string) => ({ Authorization: `Bearer ${token}` });
 
 async function draftReturn(
   t: TestApp,

@@ -7,27 +7,21 @@ import { ReadingWriter } from '../src/inspection/reading-writer';
 import { Sample } from '../src/inspection/entities/sample.entity';
 import {
   as,
-  createBench,
   createLot,
   createProduct,
   lotRow,
   type Bench,
   type Catalog,
+  KIT_4AWG,
+  startWithBench,
 } from './helpers/fixtures';
-import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
+import { DEMO, type TestApp } from './helpers/test-app';
 
 let t: TestApp;
 let bench: Bench;
 let kit: Catalog;
-beforeAll(async () => {
-  t = await startTestApp();
-  bench = await createBench(t);
-  // Power and ground 4 AWG copper; S-3, AQL 15 at 50 units → 3 units planned.
-  kit = await createProduct(t, [
-    { purpose: 'power', gauge: '4 AWG' },
-    { purpose: 'ground', gauge: '4 AWG' },
-  ]);
-});
+// Power and ground 4 AWG copper; S-3, AQL 15 at 50 units → 3 units planned.
+beforeAll(async () => ({ t, bench, kit } = await startWithBench({ kit: KIT_4AWG })));
 afterAll(async () => t.close());
 
 const HEADER =

@@ -1,8 +1,5 @@
-import { execFileSync } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
-import { join } from 'node:path';
 import Papa from 'papaparse';
-import type { Response } from 'superagent';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Jimp } from 'jimp';
 import { AuditEvent } from '../src/audit/entities/audit-event.entity';
@@ -10,31 +7,19 @@ import { Decision } from '../src/decisions/entities/decision.entity';
 import { Photo } from '../src/photos/entities/photo.entity';
 import { StorageService } from '../src/storage/storage.service';
 import { User } from '../src/users/entities/user.entity';
-import { Fixtures, rejectedLot } from './helpers/decision-fixtures';
-import { DEMO, ORIGIN, startTestApp, type TestApp } from './helpers/test-app';
+import { auth } from './helpers/api';
+import { Fixtures, rejectedLot, startWithFixtures } from './helpers/decision-fixtures';
+import { collect, pdfTool as runPdfTool } from './helpers/pdf';
+import { DEMO, ORIGIN, type TestApp } from './helpers/test-app';
 
 let t: TestApp;
 let fx: Fixtures;
 let buyer: string;
-beforeAll(async () => {
-  t = await startTestApp();
-  fx = new Fixtures(t);
-  buyer = await t.token(DEMO.buyer);
-});
+beforeAll(async () => ({ t, fx, token: buyer } = await startWithFixtures(DEMO.buyer)));
 afterAll(async () => t.close());
 
-const auth = (token: string) => ({ Authorization: `Bearer ${token}` });
-function collect(res: Response, cb: (err: Error | null, body: Buffer) => void) {
-  const stream = res as unknown as NodeJS.ReadableStream;
-  const chunks: Buffer[] = [];
-  stream.on('data', (c: Buffer) => chunks.push(c));
-  stream.on('end', () => cb(null, Buffer.concat(chunks)));
-}
-function pdfTool(tool: string, pdf: Buffer, args: string[] = []): string {
-  const file = join(t.dir, `doc-${Date.now()}-${Math.random()}.pdf`);
-  writeFileSync(file, pdf);
-  return execFileSync(tool, [...args, file, ...(tool === 'pdftotext' ? ['-'] : [])]).toString();
-}
+const pdfTool = (tool: string, pdf: Buffer, args: string[] = []) =>
+  runPdfTool(t.dir, tool, pdf, args);
 function parseCsv(text: string): string[][] {
   expect(text.startsWith('\ufeff')).toBe(true);
   return Papa.parse<string[]>(text.slice(1).trim(), { newline: '\r\n' }).data;

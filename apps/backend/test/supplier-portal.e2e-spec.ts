@@ -7,9 +7,10 @@ import {
   PortalThrottle,
   PORTAL_BAD_TOKENS_PER_WINDOW,
 } from '../src/supplier-portal/portal-throttle';
-import { Fixtures, rejectedLot } from './helpers/decision-fixtures';
+import { auth, dayFromToday } from './helpers/api';
+import { Fixtures, rejectedLot, startWithFixtures } from './helpers/decision-fixtures';
 import { startMailDev, type MailDev } from './helpers/maildev';
-import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
+import { DEMO, type TestApp } from './helpers/test-app';
 
 let t: TestApp;
 let fx: Fixtures;
@@ -17,17 +18,14 @@ let mail: MailDev;
 let buyer: string;
 beforeAll(async () => {
   mail = await startMailDev();
-  t = await startTestApp({ SMTP_URL: mail.smtpUrl });
-  fx = new Fixtures(t);
-  buyer = await t.token(DEMO.buyer);
+  ({ t, fx, token: buyer } = await startWithFixtures(DEMO.buyer, { SMTP_URL: mail.smtpUrl }));
 });
 afterAll(async () => {
   await t.close();
   await mail.stop();
 });
 
-const auth = (token: string) => ({ Authorization: `Bearer ${token}` });
-const inDays = (n: number) => new Date(Date.now() + n * 86_400_000).toISOString().slice(0, 10);
+const inDays = dayFromToday;
 const ANSWER = {
   containment: 'All reels of that batch quarantined in our warehouse and at two distributors.',
   rootCause: 'A strand pack of 8 AWG was loaded on the 4 AWG line after a changeover.',

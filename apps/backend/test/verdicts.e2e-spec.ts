@@ -4,14 +4,14 @@ import { call, dayFromToday } from './helpers/api';
 import { makeSupplier, spoolBody } from './helpers/catalog';
 import {
   as,
-  createBench,
   createInstrument,
   createLot,
   createProduct,
   lotRow,
   type Bench,
+  startWithBench,
 } from './helpers/fixtures';
-import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
+import { DEMO, type TestApp } from './helpers/test-app';
 
 /**
  * Issue 13, "verdicts a supplier cannot dispute": every rule through the API, on the real app
@@ -19,10 +19,7 @@ import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
  */
 let t: TestApp;
 let bench: Bench;
-beforeAll(async () => {
-  t = await startTestApp();
-  bench = await createBench(t);
-});
+beforeAll(async () => ({ t, bench } = await startWithBench({})));
 afterAll(async () => t.close());
 
 async function sampleOf(lotId: number, conductorId: number, seq = 1) {

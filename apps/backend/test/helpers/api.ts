@@ -19,3 +19,6 @@ export async function call(
 export function dayFromToday(days: number): string {
   return new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
 }
+
+/** The header that signs a request in with a bearer token. */
+export const auth = (token: string) => ({ Authorization: `Bearer ${token}` });

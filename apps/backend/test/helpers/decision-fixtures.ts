@@ -9,7 +9,8 @@ import { Product } from '../../src/products/entities/product.entity';
 import { Supplier } from '../../src/suppliers/entities/supplier.entity';
 import { User } from '../../src/users/entities/user.entity';
 import { initialInspectionState } from '@gaugeproof/standards';
-import { DEMO, type TestApp } from './test-app';
+import { storedPlan } from './fixtures';
+import { DEMO, startTestApp, type TestApp } from './test-app';
 
 /**
  * Builds suppliers, products, lots, samples and readings straight through the ORM, so the
@@ -18,6 +19,15 @@ import { DEMO, type TestApp } from './test-app';
  */
 /** Shared by every Fixtures of a test file, so codes stay unique in one database. */
 let counter = 0;
+
+/**
+ * Boots the app for a test file (as `startTestApp(env)`) with its Fixtures and the bearer
+ * token of the demo user `email`: `({ t, fx, token: qa } = await startWithFixtures(DEMO.qa))`.
+ */
+export async function startWithFixtures(email: string, env: Record<string, string> = {}) {
+  const t = await startTestApp(env);
+  return { t, fx: new Fixtures(t), token: await t.token(email) };
+}
 
 export class Fixtures {
   constructor(private readonly t: TestApp) {}
@@ -105,16 +115,7 @@ export class Fixtures {
       receivedBy: clerk,
       status: opts.status ?? 'awaiting_decision',
       version: 1,
-      samplingPlan: {
-        severity: plan.severity as 'normal' | 'tightened' | 'reduced',
-        level: plan.level,
-        aql: plan.aql,
-        codeLetter: plan.codeLetter,
-        sampleSize: plan.sampleSize,
-        accept: plan.accept,
-        reject: plan.reject,
-        inspectAll: plan.inspectAll,
-      },
+      samplingPlan: storedPlan(plan),
     });
     const bad = opts.nonconforming ?? 0;
     const unsure = opts.inconclusive ?? 0;

@@ -1,5 +1,11 @@
 import { MikroORM, type EntityManager } from '@mikro-orm/core';
-import { parseGauge, samplingPlan, type Aql, type InspectionLevel } from '@gaugeproof/standards';
+import {
+  parseGauge,
+  samplingPlan,
+  type Aql,
+  type InspectionLevel,
+  type SamplingPlan,
+} from '@gaugeproof/standards';
 import { Instrument, type InstrumentKind } from '../../src/instruments/entities/instrument.entity';
 import { Lot } from '../../src/lots/entities/lot.entity';
 import {
@@ -10,7 +16,7 @@ import {
 import { Product } from '../../src/products/entities/product.entity';
 import { Supplier, type SupplierStatus } from '../../src/suppliers/entities/supplier.entity';
 import { User } from '../../src/users/entities/user.entity';
-import { DEMO, type TestApp } from './test-app';
+import { DEMO, startTestApp, type TestApp } from './test-app';
 
 /**
  * Invented catalog records written straight through the EntityManager, so the inspection
@@ -94,16 +100,7 @@ export async function createLot(t: TestApp, c: Catalog, quantity = 50): Promise<
     unit: 'spools',
     version: 1,
     receivedBy: await m.findOneOrFail(User, { email: DEMO.clerk }),
-    samplingPlan: {
-      severity: plan.severity as 'normal',
-      level: plan.level,
-      aql: plan.aql,
-      codeLetter: plan.codeLetter,
-      sampleSize: plan.sampleSize,
-      accept: plan.accept,
-      reject: plan.reject,
-      inspectAll: plan.inspectAll,
-    },
+    samplingPlan: storedPlan(plan),
   });
   await m.flush();
   return lot.id;
@@ -147,6 +144,46 @@ export async function createBench(t: TestApp) {
   };
 }
 export type Bench = Awaited<ReturnType<typeof createBench>>;
+
+/** One 4 AWG copper power conductor (a spool; createProduct's default). */
+export const SPOOL_4AWG: ConductorInput[] = [{ purpose: 'power', gauge: '4 AWG' }];
+/** A kit of a 4 AWG copper power and a 4 AWG copper ground conductor. */
+export const KIT_4AWG: ConductorInput[] = [
+  { purpose: 'power', gauge: '4 AWG' },
+  { purpose: 'ground', gauge: '4 AWG' },
+];
+
+/**
+ * Boots the app for a test file (as `startTestApp(env)`) with a full bench and one product
+ * per entry of `products`, made in that order (S-3, AQL 15 as createProduct makes them):
+ * `({ t, bench, spool } = await startWithBench({ spool: SPOOL_4AWG }))`.
+ */
+export async function startWithBench<K extends string>(
+  products: Record<K, ConductorInput[]>,
+  env: Record<string, string> = {},
+) {
+  const t = await startTestApp(env);
+  const bench = await createBench(t);
+  const catalog = {} as Record<K, Catalog>;
+  for (const [name, conductors] of Object.entries(products) as [K, ConductorInput[]][]) {
+    catalog[name] = await createProduct(t, conductors);
+  }
+  return { t, bench, ...catalog };
+}
+
+/** The plan a lot stores (lots.sampling_plan), from the standards library's plan. */
+export function storedPlan(plan: SamplingPlan) {
+  return {
+    severity: plan.severity,
+    level: plan.level,
+    aql: plan.aql,
+    codeLetter: plan.codeLetter,
+    sampleSize: plan.sampleSize,
+    accept: plan.accept,
+    reject: plan.reject,
+    inspectAll: plan.inspectAll,
+  };
+}
 
 export async function lotRow(t: TestApp, lotId: number): Promise<Lot> {
   return em(t).findOneOrFail(Lot, { id: lotId });
