@@ -1,6 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import {
-  Alert,
   Box,
   Button,
   Dialog,
@@ -8,10 +7,10 @@ import {
   DialogContent,
   DialogTitle,
   MenuItem,
-  TextField,
 } from '@mui/material';
-import { useState } from 'react';
-import { Controller, useForm, useWatch } from 'react-hook-form';
+import { useForm, useWatch } from 'react-hook-form';
+import { FormTextField, type FormTextFieldProps } from '@/components/form/form-text-field';
+import { useVersionedEdit } from '@/components/form/use-versioned-edit';
 import {
   instrumentSchema,
   toInstrumentBody,
@@ -26,8 +25,6 @@ import {
   unitLabels,
   type Instrument,
 } from '@/features/instruments/types';
-import { StaleEditAlert, staleCurrent } from '@/components/stale-edit-alert';
-import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 
 const FIELDS = [
@@ -67,6 +64,8 @@ const toInput = (i: Instrument): InstrumentInput => ({
   calibrationDueOn: i.calibrationDueOn,
 });
 
+type FieldProps = Omit<FormTextFieldProps<InstrumentInput, InstrumentInput>, 'control' | 'name'>;
+
 export function InstrumentDialog(props: { instrument: Instrument | null; onClose: () => void }) {
   const { instrument, onClose } = props;
   const create = useCreateInstrument();
@@ -77,143 +76,86 @@ export function InstrumentDialog(props: { instrument: Instrument | null; onClose
     mode: 'onChange',
     defaultValues: instrument ? toInput(instrument) : EMPTY,
   });
-  const { errors, isSubmitting } = form.formState;
+  const { isSubmitting } = form.formState;
   const kind = useWatch({ control: form.control, name: 'kind' });
-  // The copy the edit is made on: its fields tell what the user changed, its version goes along.
-  const [loaded, setLoaded] = useState(instrument);
-  // The instrument as someone else saved it after this form was opened (a 409), until resolved.
-  const [theirs, setTheirs] = useState<Instrument | null>(null);
-  const formErrors =
-    mutation.isError && !theirs ? splitServerErrors(mutation.error, FIELDS).formErrors : [];
-
-  const save = async (input: InstrumentInput, version: number | undefined) => {
-    const body = toInstrumentBody(input);
-    try {
-      const saved = loaded
+  const edit = useVersionedEdit({
+    form,
+    fields: FIELDS,
+    record: instrument,
+    toInput,
+    mutation,
+    what: 'this instrument',
+    save: async (input, base, version) => {
+      const body = toInstrumentBody(input);
+      const saved = base
         ? await update.mutateAsync({
-            id: loaded.id,
-            version: version ?? loaded.version,
-            patch: instrumentPatch(loaded, body),
+            id: base.id,
+            version: version ?? base.version,
+            patch: instrumentPatch(base, body),
           })
         : await create.mutateAsync(body);
       toasts.success(`${saved.name} saved.`);
       onClose();
-    } catch (error) {
-      const current = staleCurrent<Instrument>(error);
-      if (current) {
-        setTheirs(current);
-        return;
-      }
-      const { fieldErrors } = splitServerErrors(error, FIELDS);
-      for (const field of FIELDS) {
-        const message = fieldErrors[field];
-        if (message) form.setError(field, { type: 'server', message });
-      }
-    }
-  };
-  const onSubmit = form.handleSubmit((input) => save(input, undefined));
-  const onSaveMine = form.handleSubmit((input) => {
-    const version = theirs?.version;
-    setTheirs(null);
-    return save(input, version);
+    },
   });
-  const onLoadTheirs = () => {
-    if (!theirs) return;
-    form.reset(toInput(theirs));
-    setLoaded(theirs);
-    setTheirs(null);
-    update.reset();
-  };
 
   const title = instrument ? `Edit ${instrument.name}` : 'New instrument';
-  const select = (name: 'kind' | 'resolutionUnit', label: string, options: readonly string[]) => (
-    <Controller
-      control={form.control}
-      name={name}
-      render={({ field, fieldState }) => (
-        <TextField
-          select
-          label={label}
-          {...field}
-          onChange={(event) => {
-            field.onChange(event);
-            if (name === 'kind') {
-              const units = UNITS_BY_KIND[event.target.value as Instrument['kind']];
-              form.setValue('resolutionUnit', units[0], { shouldValidate: true });
-            }
-          }}
-          error={!!fieldState.error}
-          helperText={fieldState.error?.message}
-        >
-          {options.map((o) => (
-            <MenuItem key={o} value={o}>
-              {name === 'kind'
-                ? kindLabels[o as Instrument['kind']]
-                : unitLabels[o as Instrument['resolutionUnit']]}
-            </MenuItem>
-          ))}
-        </TextField>
-      )}
-    />
+  const field = (name: (typeof FIELDS)[number], label: string, props: FieldProps = {}) => (
+    <FormTextField control={form.control} name={name} label={label} {...props} />
   );
-  const text = (
-    name: (typeof FIELDS)[number],
-    label: string,
-    { helper, ...extra }: { helper?: string } & Record<string, unknown> = {},
-  ) => (
-    <TextField
-      label={label}
-      error={!!errors[name]}
-      helperText={errors[name]?.message ?? helper}
-      {...extra}
-      {...form.register(name)}
-    />
-  );
+  const decimal = (name: (typeof FIELDS)[number], label: string, helperText?: string) =>
+    field(name, label, { helperText, slotProps: { htmlInput: { inputMode: 'decimal' } } });
+  const date = (name: (typeof FIELDS)[number], label: string) =>
+    field(name, label, { type: 'date', slotProps: { inputLabel: { shrink: true } } });
 
   return (
     <Dialog open onClose={onClose} fullWidth maxWidth="sm">
-      <form noValidate onSubmit={onSubmit} aria-label={title}>
+      <form noValidate onSubmit={edit.onSubmit} aria-label={title}>
         <DialogTitle>{title}</DialogTitle>
         <DialogContent>
-          {theirs && (
-            <StaleEditAlert
-              what="this instrument"
-              onLoadTheirs={onLoadTheirs}
-              onSaveMine={() => void onSaveMine()}
-              saving={isSubmitting}
-            />
-          )}
-          {formErrors.length > 0 && <Alert severity="error">{formErrors.join(' ')}</Alert>}
-          {select('kind', 'Kind', INSTRUMENT_KINDS)}
-          {text('name', 'Name')}
-          {text('serial', 'Serial number')}
+          {edit.alerts}
+          {field('kind', 'Kind', {
+            select: true,
+            // Each kind reads in its own units: the unit follows the kind.
+            onValueChange: (value) =>
+              form.setValue('resolutionUnit', UNITS_BY_KIND[value as Instrument['kind']][0], {
+                shouldValidate: true,
+              }),
+            children: INSTRUMENT_KINDS.map((k) => (
+              <MenuItem key={k} value={k}>
+                {kindLabels[k]}
+              </MenuItem>
+            )),
+          })}
+          {field('name', 'Name')}
+          {field('serial', 'Serial number')}
           <Box sx={{ display: 'grid', gridTemplateColumns: '1fr 1fr', columnGap: 1.5 }}>
-            {text('resolution', 'Resolution', { inputMode: 'decimal' })}
-            {select('resolutionUnit', 'Unit', UNITS_BY_KIND[kind])}
+            {decimal('resolution', 'Resolution')}
+            {field('resolutionUnit', 'Unit', {
+              select: true,
+              children: UNITS_BY_KIND[kind].map((u) => (
+                <MenuItem key={u} value={u}>
+                  {unitLabels[u]}
+                </MenuItem>
+              )),
+            })}
           </Box>
           <Box sx={{ display: 'grid', gridTemplateColumns: '1fr 1fr 1fr', columnGap: 1.5 }}>
-            {text('accuracyPercentOfReading', 'Accuracy ± % of reading', {
-              inputMode: 'decimal',
-              helper: 'From the maker’s specification; optional.',
-            })}
-            {text('accuracyAbsolute', 'Accuracy ± amount', {
-              inputMode: 'decimal',
-              helper: 'In the unit above; optional.',
-            })}
-            {text('calibrationUncertainty', 'Certificate U (k = 2)', {
-              inputMode: 'decimal',
-              helper: 'In the unit above; optional.',
-            })}
+            {decimal(
+              'accuracyPercentOfReading',
+              'Accuracy ± % of reading',
+              'From the maker’s specification; optional.',
+            )}
+            {decimal('accuracyAbsolute', 'Accuracy ± amount', 'In the unit above; optional.')}
+            {decimal(
+              'calibrationUncertainty',
+              'Certificate U (k = 2)',
+              'In the unit above; optional.',
+            )}
           </Box>
           <Box sx={{ display: 'grid', gridTemplateColumns: '1fr 1fr', columnGap: 1.5 }}>
-            {text('calibratedOn', 'Calibrated on', {
-              type: 'date',
-              slotProps: { inputLabel: { shrink: true } },
-            })}
-            {text('calibrationDueOn', 'Calibration due', {
-              type: 'date',
-              slotProps: { inputLabel: { shrink: true } },
-            })}
+            {date('calibratedOn', 'Calibrated on')}
+            {date('calibrationDueOn', 'Calibration due')}
           </Box>
         </DialogContent>
         <DialogActions>

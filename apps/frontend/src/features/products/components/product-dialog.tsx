@@ -9,9 +9,8 @@ import {
   Stack,
   Typography,
 } from '@mui/material';
-import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { StaleEditAlert, staleCurrent } from '@/components/stale-edit-alert';
+import { useVersionedEdit } from '@/components/form/use-versioned-edit';
 import {
   EMPTY_PRODUCT,
   productSchema,
@@ -30,7 +29,6 @@ import { InspectionStateChip } from '@/features/products/components/inspection-s
 import { ProductMainFields } from '@/features/products/components/product-main-fields';
 import { kitWarnings } from '@/features/products/product-rules';
 import type { Product } from '@/features/products/types';
-import { splitServerErrors } from '@/lib/server-field-errors';
 import { toasts } from '@/lib/toast-store';
 
 const FIELDS = [
@@ -66,59 +64,34 @@ export function ProductDialog({ product, canSetCriteria, onClose }: ProductDialo
   const { isSubmitting, errors } = form.formState;
   const conductors = useWatch({ control: form.control, name: 'conductors' });
   const liveWarnings = kitWarnings(conductors);
-  // The copy the edit is made on: its fields tell what the user changed, its version goes along.
-  const [loaded, setLoaded] = useState(product);
-  // The product as someone else saved it after this form was opened (a 409), until resolved.
-  const [theirs, setTheirs] = useState<Product | null>(null);
-  const formErrors =
-    mutation.isError && !theirs ? splitServerErrors(mutation.error, FIELDS).formErrors : [];
   const conductorsLocked = !canSetCriteria && product !== null;
-
-  const save = async (input: ProductInput, version: number | undefined) => {
-    const body = toProductBody(input);
-    try {
-      const saved = loaded
+  const edit = useVersionedEdit({
+    form,
+    fields: FIELDS,
+    record: product,
+    toInput: productToInput,
+    mutation,
+    what: 'this product',
+    save: async (input, base, version) => {
+      const body = toProductBody(input);
+      const saved = base
         ? await update.mutateAsync({
-            id: loaded.id,
-            version: version ?? loaded.version,
-            patch: productPatch(toProductBody(productToInput(loaded)), body),
+            id: base.id,
+            version: version ?? base.version,
+            patch: productPatch(toProductBody(productToInput(base)), body),
           })
         : await create.mutateAsync(body);
       if (saved.warnings.length > 0) {
         toasts.show(`${saved.sku} saved. ${saved.warnings.join(' ')}`, 'warning');
       } else toasts.success(`${saved.sku} saved.`);
       onClose();
-    } catch (error) {
-      const current = staleCurrent<Product>(error);
-      if (current) {
-        setTheirs(current);
-        return;
-      }
-      const { fieldErrors } = splitServerErrors(error, FIELDS);
-      for (const field of FIELDS) {
-        const message = fieldErrors[field];
-        if (message) form.setError(field, { type: 'server', message });
-      }
-    }
-  };
-  const onSubmit = form.handleSubmit((input) => save(input, undefined));
-  const onSaveMine = form.handleSubmit((input) => {
-    const version = theirs?.version;
-    setTheirs(null);
-    return save(input, version);
+    },
   });
-  const onLoadTheirs = () => {
-    if (!theirs) return;
-    form.reset(productToInput(theirs));
-    setLoaded(theirs);
-    setTheirs(null);
-    update.reset();
-  };
 
   const title = product ? `Edit ${product.sku}` : 'New product';
   return (
     <Dialog open onClose={onClose} fullWidth maxWidth="md">
-      <form noValidate onSubmit={onSubmit} aria-label={title}>
+      <form noValidate onSubmit={edit.onSubmit} aria-label={title}>
         <DialogTitle>{title}</DialogTitle>
         <DialogContent>
           {product && (
@@ -134,15 +107,7 @@ export function ProductDialog({ product, canSetCriteria, onClose }: ProductDialo
               {warning}
             </Alert>
           ))}
-          {theirs && (
-            <StaleEditAlert
-              what="this product"
-              onLoadTheirs={onLoadTheirs}
-              onSaveMine={() => void onSaveMine()}
-              saving={isSubmitting}
-            />
-          )}
-          {formErrors.length > 0 && <Alert severity="error">{formErrors.join(' ')}</Alert>}
+          {edit.alerts}
           <ProductMainFields control={form.control} locked={product !== null} />
           <Typography variant="subtitle1" sx={{ fontWeight: 600, mt: 2 }}>
             Inspection policy

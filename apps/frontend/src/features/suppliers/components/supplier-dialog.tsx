@@ -1,10 +1,8 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, Dialog, DialogActions, DialogContent, DialogTitle, MenuItem } from '@mui/material';
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { StaleEditAlert, staleCurrent } from '@/components/stale-edit-alert';
 import { FormTextField } from '@/components/form/form-text-field';
-import { ServerErrorAlert, submitWithServerErrors } from '@/components/form/server-errors';
+import { useVersionedEdit } from '@/components/form/use-versioned-edit';
 import {
   supplierSchema,
   toSupplierBody,
@@ -50,59 +48,34 @@ export function SupplierDialog({ supplier, onClose }: SupplierDialogProps) {
   });
   const { control } = form;
 
-  // The copy the edit is made on: its fields tell what the user changed, its version goes along.
-  const [loaded, setLoaded] = useState(supplier);
-  // The supplier as someone else saved it after this form was opened (a 409), until resolved.
-  const [theirs, setTheirs] = useState<Supplier | null>(null);
-
-  const save = (version?: number) =>
-    submitWithServerErrors(form, FIELDS, async (input) => {
+  const edit = useVersionedEdit({
+    form,
+    fields: FIELDS,
+    record: supplier,
+    toInput,
+    mutation,
+    what: 'this supplier',
+    save: async (input, base, version) => {
       const body = toSupplierBody(input);
-      try {
-        const saved = loaded
-          ? await update.mutateAsync({
-              id: loaded.id,
-              version: version ?? loaded.version,
-              patch: supplierPatch(loaded, body),
-            })
-          : await create.mutateAsync(body);
-        toasts.success(supplier ? `${saved.name} saved.` : `${saved.name} added.`);
-        onClose();
-      } catch (error) {
-        const current = staleCurrent<Supplier>(error);
-        if (!current) throw error;
-        setTheirs(current);
-      }
-    });
-  const onSubmit = save();
-  const onSaveMine = () => {
-    const version = theirs?.version;
-    setTheirs(null);
-    void save(version)();
-  };
-  const onLoadTheirs = () => {
-    if (!theirs) return;
-    form.reset(toInput(theirs));
-    setLoaded(theirs);
-    setTheirs(null);
-    update.reset();
-  };
+      const saved = base
+        ? await update.mutateAsync({
+            id: base.id,
+            version: version ?? base.version,
+            patch: supplierPatch(base, body),
+          })
+        : await create.mutateAsync(body);
+      toasts.success(supplier ? `${saved.name} saved.` : `${saved.name} added.`);
+      onClose();
+    },
+  });
 
   const title = supplier ? `Edit ${supplier.name}` : 'New supplier';
   return (
     <Dialog open onClose={onClose} fullWidth maxWidth="sm">
-      <form noValidate onSubmit={onSubmit} aria-label={title}>
+      <form noValidate onSubmit={edit.onSubmit} aria-label={title}>
         <DialogTitle>{title}</DialogTitle>
         <DialogContent>
-          {theirs && (
-            <StaleEditAlert
-              what="this supplier"
-              onLoadTheirs={onLoadTheirs}
-              onSaveMine={onSaveMine}
-              saving={form.formState.isSubmitting}
-            />
-          )}
-          <ServerErrorAlert error={theirs ? null : mutation.error} fields={FIELDS} />
+          {edit.alerts}
           <FormTextField control={control} name="name" label="Name" />
           <FormTextField
             control={control}
