@@ -1,19 +1,24 @@
 import { applyDecorators } from '@nestjs/common';
 import { ApiProperty, ApiPropertyOptional, type ApiPropertyOptions } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
+import { Transform, Type } from 'class-transformer';
 import {
   ArrayMaxSize,
   ArrayMinSize,
   ArrayUnique,
   IsArray,
+  IsBoolean,
+  IsIn,
   IsInt,
   IsOptional,
   IsString,
   Matches,
+  Max,
   MaxLength,
   Min,
   MinLength,
 } from 'class-validator';
+import { queryBoolean } from './paging';
+import { MAX_ID } from './validators';
 
 /*
  * Property rules several DTOs share, written once. Each stands for the decorators its
@@ -22,7 +27,8 @@ import {
  * and the OpenAPI document does not change. Sentences name the property through
  * class-validator's `$property` and the limit through `$constraint1`.
  */
-const stacked = (...decorators: PropertyDecorator[]) => applyDecorators(...decorators.reverse());
+export const stacked = (...decorators: PropertyDecorator[]) =>
+  applyDecorators(...decorators.reverse());
 
 const WHOLE = { message: '$property must be a whole number' };
 const AT_LEAST = { message: '$property must be at least $constraint1 characters' };
@@ -30,6 +36,49 @@ const AT_MOST = { message: '$property must be at most $constraint1 characters' }
 
 /** A record id or a version in a body: a whole number from 1. */
 export const IsWholeFromOne = () => stacked(IsInt(WHOLE), Min(1, WHOLE));
+
+/**
+ * The version of a record an edit was made on (issue 17 item 7): required, a whole number
+ * within the id columns' range; a stale one gets 409.
+ */
+export const EditVersion = (description: string) =>
+  stacked(ApiProperty({ description }), IsInt(WHOLE), Min(1, WHOLE), Max(MAX_ID, WHOLE));
+
+const oneOf = (values: readonly (string | number)[]) => ({
+  message: `$property must be one of ${values.join(', ')}`,
+});
+
+/** One of an enum's values (the contract's tuple), each named in the sentence. */
+export const OneOf = (values: readonly (string | number)[], doc: ApiPropertyOptions = {}) =>
+  stacked(ApiProperty({ enum: values, ...doc }), IsIn(values, oneOf(values)));
+
+/** Optionally one of an enum's values. */
+export const OptionalOneOf = (values: readonly (string | number)[], doc: ApiPropertyOptions = {}) =>
+  stacked(ApiPropertyOptional({ enum: values, ...doc }), IsOptional(), IsIn(values, oneOf(values)));
+
+const TRUE_OR_FALSE = { message: '$property must be true or false' };
+
+/** An optional true or false in a body. */
+export const OptionalFlag = (doc?: ApiPropertyOptions) =>
+  stacked(ApiPropertyOptional(doc), IsOptional(), IsBoolean(TRUE_OR_FALSE));
+
+/** An optional true or false in a query string (`?active=false`, `?overdue=true`). */
+export const QueryFlag = (doc?: ApiPropertyOptions) =>
+  stacked(
+    ApiPropertyOptional(doc),
+    IsOptional(),
+    Transform(queryBoolean),
+    IsBoolean(TRUE_OR_FALSE),
+  );
+
+/** A name or a serial: text of 1 to `max` characters (`$property is required` when empty). */
+export const RequiredName = (max: number, doc?: ApiPropertyOptions) =>
+  stacked(
+    ApiProperty(doc),
+    IsString(),
+    MinLength(1, { message: '$property is required' }),
+    MaxLength(max),
+  );
 
 /** The version a step or review was taken on (optimistic lock; a stale one gets 409). */
 export const StepVersion = (description: string, required = true) =>

@@ -1,19 +1,13 @@
 import { DomainError } from './domain-error';
-import { ApiProperty } from '@nestjs/swagger';
 import { EntityManager, OptimisticLockError } from '@mikro-orm/core';
-import { IsInt, Max, Min } from 'class-validator';
+import { EditVersion } from './dto-fields';
 
 /**
  * The version an edit was made on (issue 17 item 7). Required: an edit that names no
  * version could silently overwrite one made since the client loaded the record.
  */
 export class EditVersionDto {
-  @ApiProperty({
-    description: 'The version of the record the edit was made on; a stale one gets 409',
-  })
-  @IsInt({ message: 'version must be a whole number' })
-  @Min(1, { message: 'version must be a whole number' })
-  @Max(2147483647, { message: 'version must be a whole number' })
+  @EditVersion('The version of the record the edit was made on; a stale one gets 409')
   readonly version!: number;
 }
 

@@ -1,8 +1,5 @@
-import { ApiPropertyOptional } from '@nestjs/swagger';
-import { Transform } from 'class-transformer';
-import { IsBoolean, IsOptional } from 'class-validator';
-import { OptionalQueryId, StatusList } from '../../common/dto-fields';
-import { ListQueryDto, queryBoolean } from '../../common/paging';
+import { OptionalQueryId, QueryFlag, StatusList } from '../../common/dto-fields';
+import { ListQueryDto } from '../../common/paging';
 import { CAR_STATUSES } from '../entities/corrective-action.entity';
 
 export class ListCorrectiveActionsDto extends ListQueryDto {
@@ -12,11 +9,6 @@ export class ListCorrectiveActionsDto extends ListQueryDto {
   @OptionalQueryId()
   readonly supplierId?: number;
 
-  @ApiPropertyOptional({
-    description: 'Only requests still awaiting the supplier past their due date',
-  })
-  @IsOptional()
-  @Transform(queryBoolean)
-  @IsBoolean({ message: 'overdue must be true or false' })
+  @QueryFlag({ description: 'Only requests still awaiting the supplier past their due date' })
   readonly overdue?: boolean;
 }

@@ -1,19 +1,22 @@
 import { TEXT_MAX, TEXT_MIN } from '@gaugeproof/api-types';
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { IsIn, IsOptional } from 'class-validator';
-import { IsDay, IsWholeFromOne, OptionalText, StepVersion } from '../../common/dto-fields';
+import { IsOptional } from 'class-validator';
+import {
+  IsDay,
+  IsWholeFromOne,
+  OptionalOneOf,
+  OptionalText,
+  StepVersion,
+} from '../../common/dto-fields';
 import { CAR_STATUSES, type CorrectiveActionStatus } from '../entities/corrective-action.entity';
 
 export class UpdateCorrectiveActionDto {
   @StepVersion('The version the change was made on; a stale one gets 409')
   readonly version: number;
 
-  @ApiPropertyOptional({
-    enum: CAR_STATUSES,
+  @OptionalOneOf(CAR_STATUSES, {
     description: 'open → responded → verified | reopened; reopened → responded; verified → closed',
   })
-  @IsOptional()
-  @IsIn(CAR_STATUSES, { message: `status must be one of ${CAR_STATUSES.join(', ')}` })
   readonly status?: CorrectiveActionStatus;
 
   @OptionalText(TEXT_MAX.long, undefined, TEXT_MIN.problem)

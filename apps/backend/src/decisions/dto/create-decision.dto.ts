@@ -1,14 +1,13 @@
 import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsBoolean, IsIn, IsOptional, IsString, MaxLength, ValidateNested } from 'class-validator';
-import { StepVersion } from '../../common/dto-fields';
+import { IsOptional, IsString, MaxLength, ValidateNested } from 'class-validator';
+import { OneOf, OptionalFlag, StepVersion } from '../../common/dto-fields';
 import { ConcessionTermsDto } from './concession.dto';
 import { DECISION_OUTCOMES, type DecisionOutcome } from '../entities/decision.entity';
 
 export class CreateDecisionDto {
-  @ApiProperty({ enum: DECISION_OUTCOMES })
-  @IsIn(DECISION_OUTCOMES, { message: `outcome must be one of ${DECISION_OUTCOMES.join(', ')}` })
+  @OneOf(DECISION_OUTCOMES)
   readonly outcome: DecisionOutcome;
 
   @ApiProperty({
@@ -21,11 +20,9 @@ export class CreateDecisionDto {
   @StepVersion('The lot version the decision was taken on (optimistic lock).')
   readonly version: number;
 
-  @ApiPropertyOptional({
+  @OptionalFlag({
     description: 'The QA lead approves a move to reduced inspection when the rules allow it.',
   })
-  @IsOptional()
-  @IsBoolean({ message: 'approveReduced must be true or false' })
   readonly approveReduced?: boolean;
 
   @ApiPropertyOptional({

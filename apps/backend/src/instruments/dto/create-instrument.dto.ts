@@ -1,39 +1,21 @@
 import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import {
-  IsIn,
-  IsOptional,
-  Max,
-  Min,
-  ValidateIf,
-  IsNumber,
-  IsPositive,
-  IsString,
-  Matches,
-  MaxLength,
-  MinLength,
-} from 'class-validator';
+import { IsOptional, Max, Min, ValidateIf, IsNumber, IsPositive, Matches } from 'class-validator';
 import { INSTRUMENT_KINDS, type InstrumentKind } from '../entities/instrument.entity';
 import { RESOLUTION_UNITS, type ResolutionUnit } from '../instrument-rules';
+import { OneOf, RequiredName } from '../../common/dto-fields';
 
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
 const NUMBER = { allowNaN: false, allowInfinity: false } as const;
 
 export class CreateInstrumentDto {
-  @ApiProperty({ enum: INSTRUMENT_KINDS })
-  @IsIn(INSTRUMENT_KINDS, { message: `kind must be one of ${INSTRUMENT_KINDS.join(', ')}` })
+  @OneOf(INSTRUMENT_KINDS)
   readonly kind: InstrumentKind;
 
-  @ApiProperty({ example: 'Bench balance B-2' })
-  @IsString()
-  @MinLength(1, { message: 'name is required' })
-  @MaxLength(TEXT_MAX.name)
+  @RequiredName(TEXT_MAX.name, { example: 'Bench balance B-2' })
   readonly name: string;
 
-  @ApiProperty({ example: 'B-2' })
-  @IsString()
-  @MinLength(1, { message: 'serial is required' })
-  @MaxLength(TEXT_MAX.reference)
+  @RequiredName(TEXT_MAX.reference, { example: 'B-2' })
   readonly serial: string;
 
   @ApiProperty({ example: 0.01, description: 'Smallest step shown, in resolutionUnit' })
@@ -41,10 +23,7 @@ export class CreateInstrumentDto {
   @IsPositive({ message: 'resolution must be greater than 0' })
   readonly resolution: number;
 
-  @ApiProperty({ enum: RESOLUTION_UNITS })
-  @IsIn(RESOLUTION_UNITS, {
-    message: `resolutionUnit must be one of ${RESOLUTION_UNITS.join(', ')}`,
-  })
+  @OneOf(RESOLUTION_UNITS)
   readonly resolutionUnit: ResolutionUnit;
 
   @ApiProperty({ example: '2026-05-01', description: 'YYYY-MM-DD' })

@@ -1,19 +1,15 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { Transform, Type } from 'class-transformer';
-import { IsBoolean, IsIn, IsInt, IsOptional, Max, Min } from 'class-validator';
-import { ListQueryDto, queryBoolean } from '../../common/paging';
+import { Type } from 'class-transformer';
+import { IsInt, IsOptional, Max, Min } from 'class-validator';
+import { ListQueryDto } from '../../common/paging';
 import { INSTRUMENT_KINDS, type InstrumentKind } from '../entities/instrument.entity';
+import { OptionalOneOf, QueryFlag } from '../../common/dto-fields';
 
 export class ListInstrumentsDto extends ListQueryDto {
-  @ApiPropertyOptional({ enum: INSTRUMENT_KINDS })
-  @IsOptional()
-  @IsIn(INSTRUMENT_KINDS, { message: `kind must be one of ${INSTRUMENT_KINDS.join(', ')}` })
+  @OptionalOneOf(INSTRUMENT_KINDS)
   readonly kind?: InstrumentKind;
 
-  @ApiPropertyOptional()
-  @IsOptional()
-  @Transform(queryBoolean)
-  @IsBoolean({ message: 'active must be true or false' })
+  @QueryFlag()
   readonly active?: boolean;
 
   @ApiPropertyOptional({ description: 'Only instruments due within this many days, or overdue' })

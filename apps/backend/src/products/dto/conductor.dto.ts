@@ -1,6 +1,15 @@
-import { CLAIMED_STRANDS, CONDUCTOR_CLASSES, TEXT_MAX } from '@gaugeproof/api-types';
+import {
+  CLAIMED_STRANDS,
+  CONDUCTOR_CLASSES,
+  PRODUCT_CONDUCTORS,
+  TEXT_MAX,
+} from '@gaugeproof/api-types';
+import { Type } from 'class-transformer';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  IsArray,
   IsIn,
   IsInt,
   IsOptional,
@@ -10,6 +19,7 @@ import {
   Min,
   MinLength,
   ValidateIf,
+  ValidateNested,
 } from 'class-validator';
 import {
   CLAIMED_MATERIALS,
@@ -17,12 +27,12 @@ import {
   type ClaimedMaterial,
   type ConductorPurpose,
 } from '../entities/conductor-spec.entity';
+import { OneOf, stacked } from '../../common/dto-fields';
 
 const STRANDS = `claimedStrands must be a whole number from ${CLAIMED_STRANDS.min} to ${CLAIMED_STRANDS.max}`;
 
 export class ConductorDto {
-  @ApiProperty({ enum: CONDUCTOR_PURPOSES })
-  @IsIn(CONDUCTOR_PURPOSES, { message: `purpose must be one of ${CONDUCTOR_PURPOSES.join(', ')}` })
+  @OneOf(CONDUCTOR_PURPOSES)
   readonly purpose: ConductorPurpose;
 
   @ApiProperty({ example: '4 AWG', description: 'Any label parseGauge reads: 4, 1/0, 25 mm²' })
@@ -31,10 +41,7 @@ export class ConductorDto {
   @MaxLength(TEXT_MAX.gauge, { message: `gauge must be at most ${TEXT_MAX.gauge} characters` })
   readonly gauge: string;
 
-  @ApiProperty({ enum: CLAIMED_MATERIALS })
-  @IsIn(CLAIMED_MATERIALS, {
-    message: `claimedMaterial must be one of ${CLAIMED_MATERIALS.join(', ')}`,
-  })
+  @OneOf(CLAIMED_MATERIALS)
   readonly claimedMaterial: ClaimedMaterial;
 
   @ApiPropertyOptional({ nullable: true, example: 665 })
@@ -57,3 +64,17 @@ export class ConductorDto {
   })
   readonly conductorClass?: number | null;
 }
+
+/** A product's conductors (1 to PRODUCT_CONDUCTORS.max), each checked as a ConductorDto. */
+export const ConductorList = () =>
+  stacked(
+    IsArray({ message: 'conductors must hold at least one conductor' }),
+    ArrayMinSize(PRODUCT_CONDUCTORS.min, {
+      message: 'conductors must hold at least one conductor',
+    }),
+    ArrayMaxSize(PRODUCT_CONDUCTORS.max, {
+      message: `conductors can hold at most ${PRODUCT_CONDUCTORS.max} conductors`,
+    }),
+    ValidateNested({ each: true }),
+    Type(() => ConductorDto),
+  );

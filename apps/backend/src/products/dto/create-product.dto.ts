@@ -1,21 +1,12 @@
-import { PRODUCT_CONDUCTORS, TEXT_MAX } from '@gaugeproof/api-types';
+import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import {
-  ArrayMaxSize,
-  ArrayMinSize,
-  IsArray,
-  IsIn,
-  IsString,
-  Matches,
-  MaxLength,
-  MinLength,
-  ValidateNested,
-} from 'class-validator';
+import { IsString, Matches, MaxLength, MinLength } from 'class-validator';
 import { IsId } from '../../common/validators';
 import { PRODUCT_KINDS, type ProductKind } from '../entities/product.entity';
-import { ConductorDto } from './conductor.dto';
+import { ConductorDto, ConductorList } from './conductor.dto';
 import { ProductPolicyDto } from './product-policy.dto';
+import { OneOf } from '../../common/dto-fields';
 
 export class CreateProductDto extends ProductPolicyDto {
   @ApiProperty()
@@ -28,8 +19,7 @@ export class CreateProductDto extends ProductPolicyDto {
   @Matches(/^\S(.{0,62}\S)?$/, { message: 'sku must be 1 to 64 characters, no spaces at the ends' })
   readonly sku: string;
 
-  @ApiProperty({ enum: PRODUCT_KINDS })
-  @IsIn(PRODUCT_KINDS, { message: `kind must be one of ${PRODUCT_KINDS.join(', ')}` })
+  @OneOf(PRODUCT_KINDS)
   readonly kind: ProductKind;
 
   @ApiProperty({ example: '4 AWG power cable, red, 50 m spool' })
@@ -41,12 +31,6 @@ export class CreateProductDto extends ProductPolicyDto {
   readonly description: string;
 
   @ApiProperty({ type: [ConductorDto] })
-  @IsArray({ message: 'conductors must hold at least one conductor' })
-  @ArrayMinSize(PRODUCT_CONDUCTORS.min, { message: 'conductors must hold at least one conductor' })
-  @ArrayMaxSize(PRODUCT_CONDUCTORS.max, {
-    message: `conductors can hold at most ${PRODUCT_CONDUCTORS.max} conductors`,
-  })
-  @ValidateNested({ each: true })
-  @Type(() => ConductorDto)
+  @ConductorList()
   readonly conductors: ConductorDto[];
 }

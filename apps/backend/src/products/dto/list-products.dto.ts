@@ -1,9 +1,10 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { Transform, Type } from 'class-transformer';
-import { IsBoolean, IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
+import { Type } from 'class-transformer';
+import { IsOptional, IsString, MaxLength } from 'class-validator';
 import { IsId } from '../../common/validators';
-import { ListQueryDto, queryBoolean } from '../../common/paging';
+import { ListQueryDto } from '../../common/paging';
 import { PRODUCT_KINDS, type ProductKind } from '../entities/product.entity';
+import { OptionalOneOf, QueryFlag } from '../../common/dto-fields';
 
 export class ListProductsDto extends ListQueryDto {
   @ApiPropertyOptional()
@@ -12,15 +13,10 @@ export class ListProductsDto extends ListQueryDto {
   @IsId({ message: 'supplierId must be the id of a supplier' })
   readonly supplierId?: number;
 
-  @ApiPropertyOptional({ enum: PRODUCT_KINDS })
-  @IsOptional()
-  @IsIn(PRODUCT_KINDS, { message: `kind must be one of ${PRODUCT_KINDS.join(', ')}` })
+  @OptionalOneOf(PRODUCT_KINDS)
   readonly kind?: ProductKind;
 
-  @ApiPropertyOptional()
-  @IsOptional()
-  @Transform(queryBoolean)
-  @IsBoolean({ message: 'active must be true or false' })
+  @QueryFlag()
   readonly active?: boolean;
 
   @ApiPropertyOptional({ description: 'Text in the SKU, description or supplier name' })

@@ -7,7 +7,8 @@ import {
   type Aql,
   type InspectionLevel,
 } from '@gaugeproof/standards';
-import { IsBoolean, IsIn, IsNumber, IsOptional, Max, Min, ValidateIf } from 'class-validator';
+import { IsIn, IsNumber, IsOptional, Max, Min, ValidateIf } from 'class-validator';
+import { OptionalFlag, OptionalOneOf } from '../../common/dto-fields';
 
 /**
  * AQLs a plan that counts nonconforming units may use: 10 and below (ANSI/ASQ Z1.4;
@@ -32,11 +33,7 @@ export class ProductPolicyDto {
   })
   readonly lengthPerUnitM?: number | null;
 
-  @ApiPropertyOptional({ enum: INSPECTION_LEVELS, default: 'S-3' })
-  @IsOptional()
-  @IsIn(INSPECTION_LEVELS, {
-    message: `inspectionLevel must be one of ${INSPECTION_LEVELS.join(', ')}`,
-  })
+  @OptionalOneOf(INSPECTION_LEVELS, { default: 'S-3' })
   readonly inspectionLevel?: InspectionLevel;
 
   @ApiPropertyOptional({ enum: UNIT_AQLS, default: '1.0' })
@@ -56,8 +53,6 @@ export class ProductPolicyDto {
   readonly minAreaRatio?: number;
 
   /** A concession against a reject needs a second QA lead or an admin (default on). */
-  @ApiPropertyOptional({ default: true })
-  @IsOptional()
-  @IsBoolean({ message: 'concessionNeedsApproval must be true or false' })
+  @OptionalFlag({ default: true })
   readonly concessionNeedsApproval?: boolean;
 }

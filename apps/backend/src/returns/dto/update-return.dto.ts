@@ -1,8 +1,14 @@
 import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsBoolean, IsOptional, ValidateNested } from 'class-validator';
-import { LotIdList, OptionalCurrency, OptionalText, StepVersion } from '../../common/dto-fields';
+import { IsOptional, ValidateNested } from 'class-validator';
+import {
+  LotIdList,
+  OptionalCurrency,
+  OptionalFlag,
+  OptionalText,
+  StepVersion,
+} from '../../common/dto-fields';
 import { SUPPLIER_NOTE } from './create-return.dto';
 import { ReturnCostsDto } from './return-costs.dto';
 
@@ -22,9 +28,7 @@ export class UpdateReturnDto {
   @OptionalText(TEXT_MAX.long, { description: SUPPLIER_NOTE })
   readonly supplierNote?: string;
 
-  @ApiPropertyOptional({ description: "Put the QA lead's reason in the supplier's documents" })
-  @IsOptional()
-  @IsBoolean({ message: 'shareDecisionReason must be true or false' })
+  @OptionalFlag({ description: "Put the QA lead's reason in the supplier's documents" })
   readonly shareDecisionReason?: boolean;
 
   @ApiPropertyOptional({ type: ReturnCostsDto, description: 'Replaces the costs (draft only)' })

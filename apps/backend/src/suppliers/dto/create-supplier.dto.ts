@@ -2,7 +2,6 @@ import { TEXT_MAX } from '@gaugeproof/api-types';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   IsEmail,
-  IsIn,
   IsOptional,
   IsString,
   Matches,
@@ -11,6 +10,7 @@ import {
   ValidateIf,
 } from 'class-validator';
 import { SUPPLIER_STATUSES, type SupplierStatus } from '../entities/supplier.entity';
+import { OptionalOneOf } from '../../common/dto-fields';
 
 export class CreateSupplierDto {
   @ApiProperty({ example: 'Northbank Cable Works' })
@@ -35,9 +35,7 @@ export class CreateSupplierDto {
   @MaxLength(TEXT_MAX.email)
   readonly contactEmail?: string | null;
 
-  @ApiPropertyOptional({ enum: SUPPLIER_STATUSES, default: 'approved' })
-  @IsOptional()
-  @IsIn(SUPPLIER_STATUSES, { message: `status must be one of ${SUPPLIER_STATUSES.join(', ')}` })
+  @OptionalOneOf(SUPPLIER_STATUSES, { default: 'approved' })
   readonly status?: SupplierStatus;
 
   @ApiPropertyOptional({ nullable: true })

@@ -1,7 +1,8 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
+import { IsOptional, IsString, MaxLength } from 'class-validator';
 import { ListQueryDto } from '../../common/paging';
 import { SUPPLIER_STATUSES, type SupplierStatus } from '../entities/supplier.entity';
+import { OptionalOneOf } from '../../common/dto-fields';
 
 export class ListSuppliersDto extends ListQueryDto {
   @ApiPropertyOptional({ description: 'Text in the name, code or contact e-mail' })
@@ -10,8 +11,6 @@ export class ListSuppliersDto extends ListQueryDto {
   @MaxLength(100)
   readonly q?: string;
 
-  @ApiPropertyOptional({ enum: SUPPLIER_STATUSES })
-  @IsOptional()
-  @IsIn(SUPPLIER_STATUSES, { message: `status must be one of ${SUPPLIER_STATUSES.join(', ')}` })
+  @OptionalOneOf(SUPPLIER_STATUSES)
   readonly status?: SupplierStatus;
 }

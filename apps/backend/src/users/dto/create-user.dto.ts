@@ -1,8 +1,9 @@
 import { TEXT_MAX } from '@gaugeproof/api-types';
 import { IsAcceptablePassword } from '../password-rules';
 import { ApiProperty } from '@nestjs/swagger';
-import { IsEmail, IsIn, IsString, MaxLength, MinLength } from 'class-validator';
+import { IsEmail, MaxLength } from 'class-validator';
 import { ROLES, type Role } from '../../auth/roles';
+import { OneOf, RequiredName } from '../../common/dto-fields';
 
 export class CreateUserDto {
   @ApiProperty()
@@ -10,14 +11,10 @@ export class CreateUserDto {
   @MaxLength(TEXT_MAX.email)
   readonly email: string;
 
-  @ApiProperty()
-  @IsString()
-  @MinLength(1, { message: 'name is required' })
-  @MaxLength(TEXT_MAX.name)
+  @RequiredName(TEXT_MAX.name)
   readonly name: string;
 
-  @ApiProperty({ enum: ROLES })
-  @IsIn(ROLES, { message: `role must be one of ${ROLES.join(', ')}` })
+  @OneOf(ROLES)
   readonly role: Role;
 
   @ApiProperty({ minLength: 10 })

@@ -2,8 +2,9 @@ import { TEXT_MAX } from '@gaugeproof/api-types';
 import { IsAcceptablePassword } from '../password-rules';
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { EditVersionDto } from '../../common/versioned-edit';
-import { IsBoolean, IsIn, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { IsBoolean, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
 import { ROLES, type Role } from '../../auth/roles';
+import { OptionalOneOf } from '../../common/dto-fields';
 
 /** Changed fields of an account, made on the version the admin loaded (a stale one: 409). */
 export class UpdateUserDto extends EditVersionDto {
@@ -14,9 +15,7 @@ export class UpdateUserDto extends EditVersionDto {
   @MaxLength(TEXT_MAX.name)
   readonly name?: string;
 
-  @ApiPropertyOptional({ enum: ROLES })
-  @IsOptional()
-  @IsIn(ROLES, { message: `role must be one of ${ROLES.join(', ')}` })
+  @OptionalOneOf(ROLES)
   readonly role?: Role;
 
   @ApiPropertyOptional()
