@@ -4,7 +4,6 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import Database from 'better-sqlite3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD } from '../src/seed/seed-users';
 import { ChildServer, freePort } from './helpers/child-server';
 
 /**
@@ -41,15 +40,8 @@ let rejectConductor = 0;
 const readingLots: number[] = [];
 let balanceSerial = '';
 
-async function api<T = Record<string, unknown>>(method: string, path: string, body?: unknown) {
-  const res = await fetch(`${server.url}${path}`, {
-    method,
-    headers: { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
-  const text = await res.text();
-  return { status: res.status, body: (text ? JSON.parse(text) : {}) as T };
-}
+const api = <T = Record<string, unknown>>(method: string, path: string, body?: unknown) =>
+  server.call<T>(method, path, token, body);
 
 async function must<T = Record<string, unknown>>(method: string, path: string, body?: unknown) {
   const res = await api<T>(method, path, body);
@@ -59,12 +51,7 @@ async function must<T = Record<string, unknown>>(method: string, path: string, b
 }
 
 async function signIn() {
-  const res = await fetch(`${server.url}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email: 'admin@demo.example', password: DEMO_PASSWORD }),
-  });
-  token = ((await res.json()) as { accessToken: string }).accessToken;
+  token = await server.signIn('admin@demo.example');
 }
 
 function day(offset: number): string {

@@ -30,6 +30,24 @@ interface Word {
   x1: number;
   y1: number;
 }
+/**
+ * Pairs of words whose boxes overlap by more than a hair (0.5 pt: glyph boxes of
+ * neighbouring lines touch), as "a / b".
+ */
+function overlapsOf(words: Word[]): string[] {
+  const overlaps: string[] = [];
+  for (let i = 0; i < words.length; i++) {
+    for (let j = i + 1; j < words.length; j++) {
+      const a = words[i];
+      const b = words[j];
+      const dx = Math.min(a.x1, b.x1) - Math.max(a.x0, b.x0);
+      const dy = Math.min(a.y1, b.y1) - Math.max(a.y0, b.y0);
+      if (dx > 0.5 && dy > 0.5) overlaps.push(`${a.text} / ${b.text}`);
+    }
+  }
+  return overlaps;
+}
+
 /** Every word with its box, from pdftotext -bbox. */
 function pdfWords(pdf: Buffer): { page: { w: number; h: number }; words: Word[] } {
   const html = execFileSync('pdftotext', ['-bbox', pdfFile(pdf), '-']).toString();
@@ -94,18 +112,7 @@ describe('documents in any script', () => {
       expect(w.x1).toBeLessThanOrEqual(page.w);
       expect(w.y1).toBeLessThanOrEqual(page.h);
     }
-    // Two words overlap when their boxes share more than a hair (0.5 pt: glyph boxes of
-    // neighbouring lines touch).
-    const overlaps: string[] = [];
-    for (let i = 0; i < words.length; i++) {
-      for (let j = i + 1; j < words.length; j++) {
-        const a = words[i];
-        const b = words[j];
-        const dx = Math.min(a.x1, b.x1) - Math.max(a.x0, b.x0);
-        const dy = Math.min(a.y1, b.y1) - Math.max(a.y0, b.y0);
-        if (dx > 0.5 && dy > 0.5) overlaps.push(`${a.text} / ${b.text}`);
-      }
-    }
+    const overlaps = overlapsOf(words);
     expect(overlaps).toEqual([]);
     // The supplier starts in its field, the fields after it are all there.
     const text = words.map((w) => w.text).join(' ');
@@ -123,16 +130,7 @@ describe('documents in any script', () => {
     expect(words.map((w) => w.text)).toContain('CONCESSION');
     expect(words.map((w) => w.text)).not.toContain('CONCESSIO');
     expect(text).toContain('Use only as the concession allows');
-    const overlaps: string[] = [];
-    for (let i = 0; i < words.length; i++) {
-      for (let j = i + 1; j < words.length; j++) {
-        const a = words[i];
-        const b = words[j];
-        const dx = Math.min(a.x1, b.x1) - Math.max(a.x0, b.x0);
-        const dy = Math.min(a.y1, b.y1) - Math.max(a.y0, b.y0);
-        if (dx > 0.5 && dy > 0.5) overlaps.push(`${a.text} / ${b.text}`);
-      }
-    }
+    const overlaps = overlapsOf(words);
     expect(overlaps).toEqual([]);
   });
 

@@ -2,7 +2,6 @@ import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD } from '../src/seed/seed-users';
 import { ChildServer, freePort } from './helpers/child-server';
 import { startMailDev, type MailDev } from './helpers/maildev';
 
@@ -18,24 +17,13 @@ let smtpPort = 0;
 let token = '';
 
 async function api<T = Record<string, unknown>>(method: string, path: string, body?: unknown) {
-  const res = await fetch(`${server.url}${path}`, {
-    method,
-    headers: { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
-  const text = await res.text();
-  const parsed = (text ? JSON.parse(text) : {}) as T;
-  if (res.status >= 300) throw new Error(`${method} ${path}: ${res.status} ${text}`);
-  return parsed;
+  const res = await server.call<T>(method, path, token, body);
+  if (res.status >= 300) throw new Error(`${method} ${path}: ${res.status} ${res.text}`);
+  return res.body;
 }
 
 async function signIn(email: string) {
-  const res = await fetch(`${server.url}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
-  });
-  token = ((await res.json()) as { accessToken: string }).accessToken;
+  token = await server.signIn(email);
 }
 
 const day = (offset: number) =>

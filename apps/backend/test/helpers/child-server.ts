@@ -1,21 +1,13 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { existsSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { join, resolve } from 'node:path';
+import { DEMO_PASSWORD } from '../../src/seed/seed-users';
+import { freePort } from './free-port';
 
 const REPO = resolve(__dirname, '..', '..', '..', '..');
 export const SERVER_JS = join(REPO, 'apps', 'backend', 'dist', 'main.js');
 
-export async function freePort(): Promise<number> {
-  return new Promise((res, rej) => {
-    const srv = createServer();
-    srv.once('error', rej);
-    srv.listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as { port: number };
-      srv.close(() => res(port));
-    });
-  });
-}
+export { freePort };
 
 /** The production server (`node apps/backend/dist/main.js`) as a child process. */
 export class ChildServer {
@@ -65,6 +57,34 @@ export class ChildServer {
       child.kill(signal);
     });
     this.child = null;
+  }
+
+  /** Calls the server's API, JSON in and out, with a bearer token when one is given. */
+  async call<T = Record<string, unknown>>(
+    method: string,
+    path: string,
+    token?: string,
+    body?: unknown,
+  ): Promise<{ status: number; text: string; body: T }> {
+    const res = await fetch(`${this.url}${path}`, {
+      method,
+      headers: {
+        ...(token ? { Authorization: `Bearer ${token}` } : {}),
+        'Content-Type': 'application/json',
+      },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+    const text = await res.text();
+    return { status: res.status, text, body: (text ? JSON.parse(text) : {}) as T };
+  }
+
+  /** Signs a demo user in; answers the bearer token. */
+  async signIn(email: string): Promise<string> {
+    const res = await this.call<{ accessToken: string }>('POST', '/api/auth/login', undefined, {
+      email,
+      password: DEMO_PASSWORD,
+    });
+    return res.body.accessToken;
   }
 
   get pid(): number | undefined {

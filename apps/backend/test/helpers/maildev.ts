@@ -1,6 +1,6 @@
 import { spawn, type ChildProcess } from 'node:child_process';
-import { createServer } from 'node:net';
 import { resolve } from 'node:path';
+import { freePort } from './free-port';
 
 /** The CLI of the `maildev` npm package (its package only exports an ES module). */
 const MAILDEV_BIN = resolve(__dirname, '../../../../node_modules/maildev/dist/bin/maildev.js');
@@ -27,17 +27,7 @@ export interface MailDev {
   stop(): Promise<void>;
 }
 
-/** A port nobody listens on right now, on loopback. */
-export function freePort(): Promise<number> {
-  return new Promise((done, fail) => {
-    const srv = createServer();
-    srv.once('error', fail);
-    srv.listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as { port: number };
-      srv.close(() => done(port));
-    });
-  });
-}
+export { freePort };
 
 async function waitForWeb(port: number, child: ChildProcess): Promise<void> {
   const until = Date.now() + 20_000;

@@ -1,24 +1,13 @@
 import { mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { freePort } from './free-port';
 // s3rver ships no type declarations.
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const S3rver = require('s3rver') as new (options: Record<string, unknown>) => {
   run(): Promise<{ port: number }>;
   close(): Promise<void>;
 };
-
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = createServer();
-    srv.once('error', reject);
-    srv.listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as { port: number };
-      srv.close(() => resolve(port));
-    });
-  });
-}
 
 /** A local S3 fake (s3rver) on a free loopback port, with one bucket. */
 export async function startS3Fake(bucket: string) {
