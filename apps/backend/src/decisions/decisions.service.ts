@@ -119,18 +119,21 @@ export class DecisionsService {
       );
     }
 
+    /** The decision as the QA lead takes it: they are its approver too. */
+    const recordAsDecided = () =>
+      this.record(
+        tx,
+        lot,
+        dto.outcome,
+        reason,
+        evaluation,
+        actor,
+        actor.id,
+        dto.approveReduced === true,
+      );
     if (dto.outcome !== 'accept_on_concession') {
       return {
-        ...(await this.record(
-          tx,
-          lot,
-          dto.outcome,
-          reason,
-          evaluation,
-          actor,
-          actor.id,
-          dto.approveReduced === true,
-        )),
+        ...(await recordAsDecided()),
         pendingApproval: false,
         concession: null,
       };
@@ -172,16 +175,7 @@ export class DecisionsService {
       };
     }
     // No second approval needed: the QA lead who decides is the approver.
-    const result = await this.record(
-      tx,
-      lot,
-      dto.outcome,
-      reason,
-      evaluation,
-      actor,
-      actor.id,
-      dto.approveReduced === true,
-    );
+    const result = await recordAsDecided();
     concession.status = 'approved';
     concession.reviewedBy = tx.getReference(User, actor.id);
     concession.reviewedAt = clock.now();

@@ -1,5 +1,19 @@
 import type { VendorReturn } from './entities/vendor-return.entity';
 
+/**
+ * What purchasing writes on a return and what it charges back: the same fields in the
+ * API's view and in the audit trail's before and after.
+ */
+export const returnTerms = (r: VendorReturn) => ({
+  rmaNumber: r.rmaNumber,
+  notes: r.notes,
+  supplierNote: r.supplierNote,
+  shareDecisionReason: r.shareDecisionReason,
+  costs: r.costs,
+  chargebackTotal: r.chargebackTotal,
+  currency: r.currency,
+});
+
 /** VendorReturn as the API shows it; lots, supplier and createdBy loaded. */
 export function returnView(r: VendorReturn) {
   return {
@@ -24,13 +38,7 @@ export function returnView(r: VendorReturn) {
         quantity: l.quantity,
         unit: l.unit,
       })),
-    rmaNumber: r.rmaNumber,
-    notes: r.notes,
-    supplierNote: r.supplierNote,
-    shareDecisionReason: r.shareDecisionReason,
-    costs: r.costs,
-    chargebackTotal: r.chargebackTotal,
-    currency: r.currency,
+    ...returnTerms(r),
     emailedAt: r.emailedAt,
     shipment: r.shippedOn
       ? {

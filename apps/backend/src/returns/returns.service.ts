@@ -26,7 +26,7 @@ import { UpdateReturnDto } from './dto/update-return.dto';
 import { OpenReturnLot } from './entities/open-return-lot.entity';
 import { VendorReturn, type ReturnStatus } from './entities/vendor-return.entity';
 import { allowedNext, canMove, chargeback, cleanCosts } from './return-rules';
-import { returnView, type ReturnView } from './return-view';
+import { returnTerms, returnView, type ReturnView } from './return-view';
 import { clock } from '../common/clock';
 
 const POPULATE = ['supplier', 'lots', 'createdBy'] as const;
@@ -47,13 +47,7 @@ const audited = (r: VendorReturn) => ({
   number: r.number,
   status: r.status,
   version: r.version,
-  rmaNumber: r.rmaNumber,
-  notes: r.notes,
-  supplierNote: r.supplierNote,
-  shareDecisionReason: r.shareDecisionReason,
-  costs: r.costs,
-  chargebackTotal: r.chargebackTotal,
-  currency: r.currency,
+  ...returnTerms(r),
   lotIds: r.lots.getItems().map((l) => l.id),
   carrier: r.carrier,
   trackingNumber: r.trackingNumber,
