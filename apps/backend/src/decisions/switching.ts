@@ -1,16 +1,13 @@
 import {
   lotOutcome,
   nextInspectionState,
-  type Aql,
-  type CodeLetter,
-  type InspectionLevel,
   type InspectionSeverity,
   type InspectionState,
   type LotResult,
-  type SamplingPlan,
 } from '@gaugeproof/standards';
 import type { Evaluation } from '../inspection/lot-evaluation';
 import type { Lot } from '../lots/entities/lot.entity';
+import { standardsPlan } from '../products/sampling-plan';
 import type { DecisionOutcome } from './entities/decision.entity';
 
 /** What a decision did to the product's switching state, for the QA lead. */
@@ -30,18 +27,6 @@ export interface SwitchingRecord {
   after: InspectionState;
 }
 
-function planOf(lot: Lot): SamplingPlan {
-  const p = lot.samplingPlan;
-  return {
-    ...p,
-    lotSize: lot.quantity,
-    level: p.level as InspectionLevel,
-    aql: p.aql as Aql,
-    codeLetter: p.codeLetter as CodeLetter,
-    planSampleSize: p.sampleSize,
-  };
-}
-
 /**
  * The lot result the switching rules count. ISO 2859-1 (clause 9.3) switches on lots
  * "not accepted on original inspection": a lot taken on concession failed the plan and is
@@ -58,7 +43,7 @@ export function lotResultFor(
   const accepted = outcome === 'accept';
   const result: LotResult = { accepted, approveReduced };
   if (evaluation.recommendation === 'incomplete') return result;
-  const plan = planOf(lot);
+  const plan = standardsPlan(lot.samplingPlan, lot.quantity);
   const countSaysReject = lotOutcome(plan, evaluation.nonconforming) === 'reject';
   if (countSaysReject !== accepted) {
     result.plan = plan;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { StoredSamplingPlan } from '../lots/entities/lot.entity';
+import type { StoredSamplingPlan } from '../products/sampling-plan';
 import { evaluateUnits, sampleVerdict, type UnitSample } from './lot-evaluation';
 
 // Code letter C, AQL 6.5, normal: n = 5, Ac 1, Re 2 (MIL-STD-105E Table II-A).

@@ -1,15 +1,10 @@
 import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
-import {
-  lotOutcome,
-  type Aql,
-  type CodeLetter,
-  type InspectionLevel,
-  type SamplingPlan,
-} from '@gaugeproof/standards';
-import { Lot, type StoredSamplingPlan } from '../lots/entities/lot.entity';
+import { lotOutcome } from '@gaugeproof/standards';
+import { Lot } from '../lots/entities/lot.entity';
+import { standardsPlan, type StoredSamplingPlan } from '../products/sampling-plan';
 import type { Reading } from './entities/reading.entity';
-import type { Sample } from './entities/sample.entity';
+import { Sample } from './entities/sample.entity';
 
 export type SampleVerdict = 'conforms' | 'nonconforming' | 'inconclusive' | 'untested';
 export type Recommendation = 'accept' | 'reject' | 'incomplete';
@@ -42,18 +37,6 @@ export interface UnitSample {
   seq: number;
   conductorId: number;
   verdict: SampleVerdict;
-}
-
-/** The stored plan as the standards library's plan type, for `lotOutcome`. */
-function asPlan(plan: StoredSamplingPlan, lotSize: number): SamplingPlan {
-  return {
-    ...plan,
-    lotSize,
-    level: plan.level as InspectionLevel,
-    aql: plan.aql as Aql,
-    codeLetter: plan.codeLetter as CodeLetter,
-    planSampleSize: plan.sampleSize,
-  };
 }
 
 /**
@@ -110,7 +93,7 @@ export function evaluateUnits(
       message: `Incomplete: ${counts}; the inconclusive units could still reach the reject number ${plan.reject}: measure them again with a longer sample or another method.`,
     };
   }
-  const outcome = lotOutcome(asPlan(plan, lotSize), nonconforming);
+  const outcome = lotOutcome(standardsPlan(plan, lotSize), nonconforming);
   if (outcome === 'reject') {
     return { ...base, recommendation: 'reject', message: `Reject: ${counts}.` };
   }
@@ -134,17 +117,18 @@ export class LotEvaluationService {
   async evaluate(lotOrId: Lot | number, em: EntityManager = this.em): Promise<Evaluation> {
     const lot =
       typeof lotOrId === 'number' ? await em.findOneOrFail(Lot, { id: lotOrId }) : lotOrId;
-    await em.populate(lot, ['product.conductors', 'samples.readings', 'samples.conductor']);
-    return this.evaluateLoaded(lot);
+    await em.populate(lot, ['product.conductors']);
+    const samples = await em.find(Sample, { lot }, { populate: ['readings', 'conductor'] });
+    return this.evaluateLoaded(lot, samples);
   }
 
-  /** For a lot whose product conductors and samples with readings are already loaded. */
-  evaluateLoaded(lot: Lot): Evaluation {
+  /** For a lot whose product conductors are loaded, and its samples with their readings. */
+  evaluateLoaded(lot: Lot, ofLot: readonly Sample[]): Evaluation {
     const conductorIds = lot.product.conductors
       .getItems()
       .filter((c) => c.active)
       .map((c) => c.id);
-    const samples = lot.samples.getItems().map((s: Sample) => ({
+    const samples = ofLot.map((s) => ({
       seq: s.seq,
       conductorId: s.conductor.id,
       verdict: sampleVerdict(s.readings.getItems()),

@@ -9,6 +9,7 @@ import { InspectionState } from '../products/entities/inspection-state.entity';
 import { productView } from '../products/product-view';
 import { Photo } from '../photos/entities/photo.entity';
 import { photoView } from '../photos/photo-view';
+import { Sample } from '../inspection/entities/sample.entity';
 import { LotEvaluationService } from '../inspection/lot-evaluation';
 import { sampleView } from '../inspection/views';
 
@@ -29,19 +30,15 @@ export class LotPageService {
       Lot,
       { id },
       {
-        populate: [
-          'supplier',
-          'product.supplier',
-          'receivedBy',
-          'product.conductors',
-          'samples.conductor',
-          'samples.createdBy',
-          'samples.readings.takenBy',
-          'samples.readings.voidedBy',
-        ],
+        populate: ['supplier', 'product.supplier', 'receivedBy', 'product.conductors'],
       },
     );
-    const [state, photos, decisions, ncr] = await Promise.all([
+    const [ofLot, state, photos, decisions, ncr] = await Promise.all([
+      this.em.find(
+        Sample,
+        { lot },
+        { populate: ['conductor', 'createdBy', 'readings.takenBy', 'readings.voidedBy'] },
+      ),
       this.em.findOne(InspectionState, { product: lot.product }),
       this.em.find(
         Photo,
@@ -55,7 +52,7 @@ export class LotPageService {
       ),
       this.em.findOne(Nonconformance, { lot }, { orderBy: { id: 'desc' }, populate: ['decision'] }),
     ]);
-    const samples = [...lot.samples.getItems()].sort(
+    const samples = [...ofLot].sort(
       (a, b) => a.conductor.position - b.conductor.position || a.seq - b.seq,
     );
     return {
@@ -65,7 +62,7 @@ export class LotPageService {
       product: productView(lot.product, state, { allConductors: true }),
       samples: samples.map(sampleView),
       photos: photos.map(photoView),
-      evaluation: this.evaluation.evaluateLoaded(lot),
+      evaluation: this.evaluation.evaluateLoaded(lot, ofLot),
       decisions: decisions.map((d) =>
         decisionView(d, ncr && ncr.decision.id === d.id ? ncr.number : null),
       ),

@@ -3,12 +3,40 @@ import {
   SAMPLING_PLAN_NAME,
   samplingPlan,
   type Aql,
+  type CodeLetter,
   type InspectionLevel,
+  type SamplingPlan,
 } from '@gaugeproof/standards';
-import type { StoredSamplingPlan } from '../lots/entities/lot.entity';
 import type { InspectionState } from './entities/inspection-state.entity';
 import type { Product } from './entities/product.entity';
 import { inspectionStateView } from './product-view';
+
+/**
+ * The plan a lot was received under, stored with the lot (`Lot.samplingPlan`) so later
+ * changes of the product's level, AQL or severity never rewrite history.
+ */
+export interface StoredSamplingPlan {
+  severity: 'normal' | 'tightened' | 'reduced';
+  level: string;
+  aql: string;
+  codeLetter: string;
+  sampleSize: number;
+  accept: number;
+  reject: number;
+  inspectAll: boolean;
+}
+
+/** A stored plan as the standards library's plan type (for `lotOutcome` and switching). */
+export function standardsPlan(plan: StoredSamplingPlan, lotSize: number): SamplingPlan {
+  return {
+    ...plan,
+    lotSize,
+    level: plan.level as InspectionLevel,
+    aql: plan.aql as Aql,
+    codeLetter: plan.codeLetter as CodeLetter,
+    planSampleSize: plan.sampleSize,
+  };
+}
 
 export interface PlanAnswer {
   samplingPlan: StoredSamplingPlan | null;

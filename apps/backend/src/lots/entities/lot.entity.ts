@@ -1,35 +1,13 @@
-import {
-  Collection,
-  Entity,
-  Enum,
-  Index,
-  ManyToOne,
-  OneToMany,
-  PrimaryKey,
-  Property,
-  type Opt,
-} from '@mikro-orm/core';
+import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
 import { Product } from '../../products/entities/product.entity';
+import type { StoredSamplingPlan } from '../../products/sampling-plan';
 import { Supplier } from '../../suppliers/entities/supplier.entity';
 import { User } from '../../users/entities/user.entity';
-import { Sample } from '../../inspection/entities/sample.entity';
 import { LOT_STATUSES, type LotStatus } from '@gaugeproof/api-types';
 import { clock } from '../../common/clock';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { LOT_STATUSES, type LotStatus };
-
-/** The plan stored with the lot so later policy changes never rewrite history. */
-export interface StoredSamplingPlan {
-  severity: 'normal' | 'tightened' | 'reduced';
-  level: string;
-  aql: string;
-  codeLetter: string;
-  sampleSize: number;
-  accept: number;
-  reject: number;
-  inspectAll: boolean;
-}
 
 @Entity({ tableName: 'lots' })
 @Index({ properties: ['status', 'receivedAt'] })
@@ -78,9 +56,6 @@ export class Lot {
 
   @Property({ type: 'text', nullable: true })
   notes: string | null = null;
-
-  @OneToMany(() => Sample, (s) => s.lot)
-  samples = new Collection<Sample>(this);
 
   /** Optimistic lock: a decision on a stale version is refused with 409. */
   @Property({ type: 'integer', version: true })
