@@ -11,7 +11,7 @@ import { lotListQuery } from './raw-sql.mjs';
 const db = new Database(process.argv[2], { readonly: true, fileMustExist: true });
 const cache = new Map();
 const totals = new Map();
-// The sum of the counters of lots, products and suppliers (apps/backend database/change-counters.ts).
+// The sum of the counters of lots, products and suppliers (apps/backend common/change-counters.ts).
 const counted = db.prepare(
   "select sum(version) as v from change_counters where table_name in ('lots', 'products', 'suppliers')",
 );

@@ -14,7 +14,7 @@ import { BodyDepthPipe } from './common/body-depth.pipe';
 import { BootQuietLogger } from './common/boot-quiet.logger';
 import type { AppConfig } from './config/env';
 import { FieldValidationPipe } from './common/field-validation.pipe';
-import { checkCountedTables } from './database/change-counters';
+import { checkCountedTables } from './common/change-counters';
 
 /**
  * Builds the whole application: used by main.ts, by the API tests and the benchmark,

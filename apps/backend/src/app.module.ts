@@ -15,7 +15,8 @@ import { randomUUID } from 'node:crypto';
 import { hostname } from 'node:os';
 import type { IncomingMessage } from 'node:http';
 import { AuditModule } from './audit/audit.module';
-import { AuthModule } from './auth/auth.module';
+import { AuditTrailModule } from './audit-trail/audit-trail.module';
+import { AuthModule } from './sessions/auth.module';
 import { ConfigModule } from './config/config.module';
 import { ClockModule } from './common/clock';
 import { ServerLockHolder } from './ops/server-lock.holder';
@@ -44,6 +45,7 @@ import { LotPageModule } from './lot-page/lot-page.module';
 /** Domain modules; each later domain adds its module here. */
 const DOMAIN_MODULES = [
   AuditModule,
+  AuditTrailModule,
   AuthModule,
   UsersModule,
   HealthModule,

@@ -137,7 +137,7 @@ describe('users (admin)', () => {
       .send({ email: 'temp.clerk@demo.example', password: 'long-enough-pw' });
     expect(login.status).toBe(200);
     const tempToken = login.body.accessToken as string;
-    // Signed in once, so the server holds the account (auth/signed-in-users.ts).
+    // Signed in once, so the server holds the account (sessions/signed-in-users.ts).
     const before = await t.http.get('/api/auth/me').set('Authorization', `Bearer ${tempToken}`);
     expect(before.status).toBe(200);
     const off = await t.http

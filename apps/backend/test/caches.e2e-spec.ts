@@ -3,7 +3,7 @@ import { MikroORM, RequestContext } from '@mikro-orm/core';
 import type { SqlEntityManager } from '@mikro-orm/knex';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { plainSql } from '../src/common/plain-sql';
-import { checkCountedTables, COUNTED_TABLES } from '../src/database/change-counters';
+import { checkCountedTables, COUNTED_TABLES } from '../src/common/change-counters';
 import { LotListCache } from '../src/lots/lot-list-cache';
 import { LotsService } from '../src/lots/lots.service';
 import { resolveRange } from '../src/scorecards/scorecard-range';
@@ -19,7 +19,7 @@ import { DEMO, startTestApp, type TestApp } from './helpers/test-app';
  * file here; one PostgreSQL database in the PostgreSQL pass, npm run test:pg). Each keeps
  * the lot list and the scorecards; a write through one shows on the other's next request,
  * because the answers are keyed by change counters the database raises in the write's own
- * transaction (database/change-counters.ts).
+ * transaction (common/change-counters.ts).
  */
 let a: TestApp;
 let b: TestApp;

@@ -1,6 +1,6 @@
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
 import { DEMO_PASSWORD } from '../src/seed/seed-users';
-import { LOGIN_TRIES_PER_ADDRESS } from '../src/auth/login-throttler.guard';
+import { LOGIN_TRIES_PER_ADDRESS } from '../src/config/env';
 import {
   SESSION_HOURS,
   SESSION_IDLE_MINUTES,

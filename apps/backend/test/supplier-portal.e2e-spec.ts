@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Jimp } from 'jimp';
 import { EntityManager } from '@mikro-orm/core';
-import { ReturnLink } from '../src/supplier-portal/entities/return-link.entity';
-import { SupplierLink } from '../src/supplier-portal/entities/supplier-link.entity';
+import { ReturnLink } from '../src/returns/entities/return-link.entity';
+import { SupplierLink } from '../src/corrective-actions/entities/supplier-link.entity';
 import {
   PortalThrottle,
   PORTAL_BAD_TOKENS_PER_WINDOW,

@@ -1,12 +1,10 @@
 import { Global, Module } from '@nestjs/common';
-import { AuditController } from './audit.controller';
-import { AuditQueryService } from './audit-query.service';
 import { AuditService } from './audit.service';
 
+/** The audit trail's writer, global: every domain records through it. */
 @Global()
 @Module({
-  controllers: [AuditController],
-  providers: [AuditService, AuditQueryService],
+  providers: [AuditService],
   exports: [AuditService],
 })
 export class AuditModule {}

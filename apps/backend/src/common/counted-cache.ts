@@ -1,8 +1,8 @@
-import type { Counters, CountedTable, Generation } from '../database/change-counters';
+import type { Counters, CountedTable, Generation } from './change-counters';
 
 /**
  * Results of expensive reads, keyed by the database's change counters of the tables they
- * are read from (database/change-counters.ts). A request reads the counters once
+ * are read from (common/change-counters.ts). A request reads the counters once
  * (`ChangeCounters.read()`) and passes them in: while they are what the kept results were
  * computed under, those results are served; once any of the tables was written, by any
  * code path on any server, the counters are higher, the kept results are dropped and the

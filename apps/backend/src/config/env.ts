@@ -2,7 +2,22 @@ import { randomBytes } from 'node:crypto';
 import { chmodSync, existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { isIP } from 'node:net';
 import { dirname, join, resolve } from 'node:path';
-import { LOGIN_TRIES_PER_ACCOUNT, LOGIN_TRIES_PER_ADDRESS } from '../auth/login-throttler.guard';
+
+/**
+ * Sign-in tries one address may make in a minute over all accounts, unless
+ * SIGN_IN_TRIES_PER_ADDRESS says otherwise (our choice: a shop's shared terminal signing
+ * in a shift's staff stays well below it).
+ */
+export const LOGIN_TRIES_PER_ADDRESS = 30;
+
+/**
+ * Sign-in tries one address may make in a minute at one account, unless
+ * SIGN_IN_TRIES_PER_ACCOUNT says otherwise (our choice). Both limits can be raised for a
+ * shop whose staff all sign in from one address behind a router, and the browser-test
+ * runner raises them because every test signs in from 127.0.0.1. They come to the
+ * throttler through AppConfig (sessions/auth.module.ts).
+ */
+export const LOGIN_TRIES_PER_ACCOUNT = 5;
 
 /** Everything the server reads from its environment, checked once at start-up. */
 export interface AppConfig {
@@ -45,7 +60,7 @@ export interface AppConfig {
   trustProxy: boolean | number | string;
   /**
    * Sign-in tries a minute from one address: at one account (SIGN_IN_TRIES_PER_ACCOUNT) and
-   * over all accounts (SIGN_IN_TRIES_PER_ADDRESS); auth/login-throttler.guard.ts.
+   * over all accounts (SIGN_IN_TRIES_PER_ADDRESS); sessions/login-throttler.guard.ts.
    */
   signInTries: { perAccount: number; perAddress: number };
 }

@@ -1,14 +1,14 @@
 import { Answers, PostAction } from '../common/answers';
 import { Body, Controller, Get, Patch, Post, Query, Res, StreamableFile } from '@nestjs/common';
 import type { Response } from 'express';
-import { SendCorrectiveActionDto } from '../supplier-portal/dto/portal.dto';
-import { SupplierPortalService } from '../supplier-portal/supplier-portal.service';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
 import { csvDownload, csvStream } from '../common/csv';
 import { CAR_CSV_HEADER, correctiveActionRows } from './corrective-action-csv';
 import { CorrectiveActionsService } from './corrective-actions.service';
+import { SendCorrectiveActionDto } from './dto/send-corrective-action.dto';
+import { ScarLinks } from './scar-links.service';
 import { CreateCorrectiveActionDto } from './dto/create-corrective-action.dto';
 import { ListCorrectiveActionsDto } from './dto/list-corrective-actions.dto';
 import { UpdateCorrectiveActionDto } from './dto/update-corrective-action.dto';
@@ -20,7 +20,7 @@ import { IdParam } from '../common/id.pipe';
 export class CorrectiveActionsController {
   constructor(
     private readonly cars: CorrectiveActionsService,
-    private readonly portal: SupplierPortalService,
+    private readonly portal: ScarLinks,
   ) {}
 
   @Post()

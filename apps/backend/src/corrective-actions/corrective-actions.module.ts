@@ -1,12 +1,14 @@
 import { Module } from '@nestjs/common';
-import { SupplierPortalModule } from '../supplier-portal/supplier-portal.module';
+import { MailModule } from '../mail/mail.module';
 import { CorrectiveActionsController } from './corrective-actions.controller';
 import { CorrectiveActionsService } from './corrective-actions.service';
+import { OverdueWatch } from './overdue.watch';
+import { ScarLinks } from './scar-links.service';
 
 /** Supplier corrective action requests (SCAR). */
 @Module({
-  imports: [SupplierPortalModule],
+  imports: [MailModule],
   controllers: [CorrectiveActionsController],
-  providers: [CorrectiveActionsService],
+  providers: [CorrectiveActionsService, ScarLinks, OverdueWatch],
 })
 export class CorrectiveActionsModule {}

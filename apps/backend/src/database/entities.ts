@@ -19,11 +19,11 @@ import { Product } from '../products/entities/product.entity';
 import { OpenReturnLot } from '../returns/entities/open-return-lot.entity';
 import { VendorReturn } from '../returns/entities/vendor-return.entity';
 import { Supplier } from '../suppliers/entities/supplier.entity';
-import { ScarAttachment } from '../supplier-portal/entities/scar-attachment.entity';
-import { ReturnLink } from '../supplier-portal/entities/return-link.entity';
-import { SupplierLink } from '../supplier-portal/entities/supplier-link.entity';
+import { ScarAttachment } from '../corrective-actions/entities/scar-attachment.entity';
+import { ReturnLink } from '../returns/entities/return-link.entity';
+import { SupplierLink } from '../corrective-actions/entities/supplier-link.entity';
 import { User } from '../users/entities/user.entity';
-import { ChangeCounter } from './change-counter.entity';
+import { ChangeCounter } from '../common/change-counter.entity';
 
 /** Every entity, in one list, so the migrator and every test see the same schema. */
 export const ENTITIES = [

@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { InspectionModule } from '../inspection/inspection.module';
+import { AwaitingDecisionWatch } from './awaiting-decision.watch';
 import { DecisionsController } from './decisions.controller';
 import { DecisionsService } from './decisions.service';
 import { InspectionStreams } from './inspection-streams';
@@ -8,7 +9,7 @@ import { InspectionStreams } from './inspection-streams';
 @Module({
   imports: [InspectionModule],
   controllers: [DecisionsController],
-  providers: [DecisionsService, InspectionStreams],
+  providers: [DecisionsService, InspectionStreams, AwaitingDecisionWatch],
   exports: [DecisionsService],
 })
 export class DecisionsModule {}

@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { JsonAnswer } from '../common/json-answer';
 import { CountedCache } from '../common/counted-cache';
-import type { Counters } from '../database/change-counters';
+import type { Counters } from '../common/change-counters';
 
 /** Distinct filter sets remembered; the oldest is dropped beyond it (common practice, no source). */
 const MAX_ENTRIES = 500;

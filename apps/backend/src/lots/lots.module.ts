@@ -1,5 +1,5 @@
 import { Module } from '@nestjs/common';
-import { ChangeCounters } from '../database/change-counters';
+import { ChangeCounters } from '../common/change-counters';
 import { LotListCache } from './lot-list-cache';
 import { LotsController } from './lots.controller';
 import { LotsService } from './lots.service';

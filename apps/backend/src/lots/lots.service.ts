@@ -14,7 +14,7 @@ import { CreateLotDto } from './dto/create-lot.dto';
 import { LotFiltersDto } from './dto/list-lots.dto';
 import { Lot } from './entities/lot.entity';
 import { LotListCache } from './lot-list-cache';
-import { ChangeCounters, type Counters } from '../database/change-counters';
+import { ChangeCounters, type Counters } from '../common/change-counters';
 import {
   lotCountSql,
   lotFilterSql,

@@ -1,5 +1,4 @@
 import { Global, Module } from '@nestjs/common';
-import { InspectionModule } from '../inspection/inspection.module';
 import { MailModule } from '../mail/mail.module';
 import { NoticesController } from './notices.controller';
 import { NoticesService } from './notices.service';
@@ -7,7 +6,7 @@ import { NoticesService } from './notices.service';
 /** E-mail notices to staff and their daily digest; global so any domain can raise one. */
 @Global()
 @Module({
-  imports: [MailModule, InspectionModule],
+  imports: [MailModule],
   controllers: [NoticesController],
   providers: [NoticesService],
   exports: [NoticesService],

@@ -13,10 +13,6 @@ import type { Role } from '../auth/roles';
 import { isoDate } from '../common/calendar';
 import { APP_CONFIG } from '../config/config.module';
 import type { AppConfig } from '../config/env';
-import { CorrectiveAction } from '../corrective-actions/entities/corrective-action.entity';
-import { Decision } from '../decisions/entities/decision.entity';
-import { LotEvaluationService } from '../inspection/lot-evaluation';
-import { Lot } from '../lots/entities/lot.entity';
 import { MailService } from '../mail/mail.service';
 import { User } from '../users/entities/user.entity';
 import { UpdateNoticeSettingsDto } from './dto/update-notice-settings.dto';
@@ -44,6 +40,23 @@ export interface NoticeEvent {
   /** Users it is never for (the requester of a concession, who may not approve it). */
   exceptUserIds?: readonly number[];
 }
+
+/** The states `scan` looks for, in this order. */
+export const WATCHED_STATES = ['lot awaiting a decision', 'corrective action overdue'] as const;
+export type WatchedState = (typeof WATCHED_STATES)[number];
+
+/** What a watch gets in one round of the scan. */
+export interface WatchRound {
+  em: EntityManager;
+  now: Date;
+  /** Whether a notice with this key was stored already (each event is noticed once). */
+  noticed(key: string): Promise<boolean>;
+  /** Raises the event in a transaction of its own; returns how many notices were stored. */
+  raise(event: NoticeEvent): Promise<number>;
+}
+
+/** Finds a state's events and raises them; returns how many notices were stored. */
+export type StateWatch = (round: WatchRound) => Promise<number>;
 
 const RELATED = 'notice';
 
@@ -80,7 +93,6 @@ export class NoticesService implements OnApplicationBootstrap, OnModuleDestroy {
     private readonly em: EntityManager,
     private readonly audit: AuditService,
     private readonly mail: MailService,
-    private readonly evaluations: LotEvaluationService,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
@@ -240,57 +252,30 @@ export class NoticesService implements OnApplicationBootstrap, OnModuleDestroy {
 
   // ---- the scan: events that are states ----------------------------------------------
 
+  private readonly watches = new Map<WatchedState, StateWatch>();
+
+  /**
+   * The domain that knows a state registers how to find it (the decisions module its lots
+   * awaiting a decision, the corrective actions module its SCARs past their date), so the
+   * notices sit below the domains that raise them.
+   */
+  watch(state: WatchedState, watch: StateWatch): void {
+    this.watches.set(state, watch);
+  }
+
   /** Lots awaiting a decision (or at their reject number) and SCARs past their date. */
   async scan(now = clock.now()): Promise<number> {
     const em = this.em.fork();
+    const round: WatchRound = {
+      em,
+      now,
+      noticed: async (key) => (await em.count(Notice, { key })) > 0,
+      raise: (event) => this.raiseAlone(event),
+    };
     let stored = 0;
-    const awaiting = await em.find(
-      Lot,
-      { status: 'awaiting_decision' },
-      { populate: ['supplier', 'product'], orderBy: { id: 'asc' } },
-    );
-    for (const lot of awaiting) {
-      const decided = await em.count(Decision, { lot: lot.id });
-      const key = `lot_awaits:${lot.id}:${decided}`;
-      if (await em.count(Notice, { key })) continue;
-      const evaluation = await this.evaluations.evaluate(lot, em);
-      const atReject = evaluation.recommendation === 'reject';
-      const url = `${this.config.publicUrl}/lots/${lot.id}`;
-      const what = `lot ${lot.id} (PO ${lot.poNumber}, ${lot.supplier.name}, ${lot.product.sku})`;
-      stored += await this.raiseAlone({
-        kind: atReject ? 'lot_reject_number' : 'lot_awaits_decision',
-        key,
-        subject: atReject
-          ? `Lot ${lot.id} reached its reject number: decide it`
-          : `Lot ${lot.id} awaits your decision`,
-        body: [
-          atReject
-            ? `${cap(what)} reached its reject number: ${evaluation.nonconforming} nonconforming of ${evaluation.samplesTested} tested (${evaluation.samplesPlanned} planned). It is held until a QA lead decides.`
-            : `${cap(what)} has every planned unit tested (${evaluation.nonconforming} nonconforming of ${evaluation.samplesTested}) and awaits your decision.`,
-          `Decide it here: ${url}`,
-        ].join('\n\n'),
-        wants: (c) => c.lotAwaitsDecision || (atReject && c.lotRejectNumber),
-      });
-    }
-    const today = isoDate(now);
-    const overdue = await em.find(
-      CorrectiveAction,
-      { status: { $in: ['open', 'reopened'] }, dueOn: { $lt: today } },
-      { populate: ['supplier'], orderBy: { id: 'asc' } },
-    );
-    for (const car of overdue) {
-      const key = `scar_overdue:${car.id}:${car.dueOn}`;
-      if (await em.count(Notice, { key })) continue;
-      stored += await this.raiseAlone({
-        kind: 'scar_overdue',
-        key,
-        subject: `${car.number} is overdue: ${car.supplier.name} has not answered`,
-        body: [
-          `${car.supplier.name} was to answer corrective action ${car.number} by ${car.dueOn}; it is ${car.status} and has no answer yet.`,
-          `Problem: ${car.problem}`,
-          `Follow it up here: ${this.config.publicUrl}/corrective-actions/${car.id}`,
-        ].join('\n\n'),
-      });
+    for (const state of WATCHED_STATES) {
+      const watch = this.watches.get(state);
+      if (watch) stored += await watch(round);
     }
     if (stored) this.deliver();
     return stored;
@@ -362,5 +347,3 @@ function pick(row: NoticeSettings): NoticeChoices {
     digest: row.digest,
   };
 }
-
-const cap = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);

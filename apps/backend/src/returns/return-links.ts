@@ -3,6 +3,7 @@ import type { VendorReturn } from './entities/vendor-return.entity';
 import { User } from '../users/entities/user.entity';
 import { ReturnLink } from './entities/return-link.entity';
 import { DAY_MS, LINK_DAYS, newPortalToken, sha256 } from '../common/portal-token';
+import { clock } from '../common/clock';
 
 /**
  * A new link to one return notice's page, persisted with the caller's unit of work; the
@@ -20,7 +21,7 @@ export function createReturnLink(
     tokenHash: sha256(token),
     vendorReturn: ret,
     sentTo: to,
-    expiresAt: new Date(Date.now() + LINK_DAYS * DAY_MS),
+    expiresAt: new Date(clock.nowMs() + LINK_DAYS * DAY_MS),
     createdBy: em.getReference(User, actorId),
   });
   return { link, url: `${config.publicUrl}/supplier/${token}` };

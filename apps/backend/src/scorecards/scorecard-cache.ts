@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { ScorecardList } from '@gaugeproof/api-types';
 import { CountedCache } from '../common/counted-cache';
-import type { Counters } from '../database/change-counters';
+import type { Counters } from '../common/change-counters';
 
 /** Ranges remembered at once (common practice, no source). */
 const MAX_ENTRIES = 50;

@@ -1,5 +1,5 @@
 import { Module } from '@nestjs/common';
-import { ChangeCounters } from '../database/change-counters';
+import { ChangeCounters } from '../common/change-counters';
 import { ScorecardCache } from './scorecard-cache';
 import { ScorecardExportService } from './scorecard-export.service';
 import { ScorecardsController } from './scorecards.controller';

@@ -6,7 +6,7 @@ import { CONDUCTOR_PURPOSES } from '../products/entities/conductor-spec.entity';
 import { Supplier } from '../suppliers/entities/supplier.entity';
 import { assembleRow, compareWorstFirst, type SupplierIdentity } from './scorecard-assemble';
 import { ScorecardCache } from './scorecard-cache';
-import { ChangeCounters } from '../database/change-counters';
+import { ChangeCounters } from '../common/change-counters';
 import type { ScorecardRange } from './scorecard-range';
 import type { ScorecardList, ScorecardRow, SupplierScorecard } from '@gaugeproof/api-types';
 import { SupplierDetailQuery } from './supplier-detail.query';

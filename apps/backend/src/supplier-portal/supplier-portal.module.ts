@@ -1,13 +1,12 @@
 import { Module } from '@nestjs/common';
-import { MailModule } from '../mail/mail.module';
 import { ReturnsModule } from '../returns/returns.module';
 import { SupplierPortalController } from './supplier-portal.controller';
 import { PortalThrottle } from './portal-throttle';
 import { SupplierPortalService } from './supplier-portal.service';
 
-/** The supplier's page for a corrective-action request, reached by a signed link. */
+/** The supplier's page for a SCAR or a return notice, reached by a signed link. */
 @Module({
-  imports: [MailModule, ReturnsModule],
+  imports: [ReturnsModule],
   controllers: [SupplierPortalController],
   providers: [SupplierPortalService, PortalThrottle],
   exports: [SupplierPortalService, PortalThrottle],

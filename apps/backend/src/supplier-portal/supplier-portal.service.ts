@@ -4,13 +4,10 @@ import { randomUUID } from 'node:crypto';
 import { GoneException, Inject, Injectable, UnsupportedMediaTypeException } from '@nestjs/common';
 import { EntityManager, OptimisticLockError } from '@mikro-orm/core';
 import { AuditService } from '../audit/audit.service';
-import type { RequestUser } from '../auth/request-user';
 import { isCalendarDate, isoDate } from '../common/calendar';
 import { APP_CONFIG } from '../config/config.module';
 import type { AppConfig } from '../config/env';
 import { CorrectiveAction } from '../corrective-actions/entities/corrective-action.entity';
-import { MailService } from '../mail/mail.service';
-import type { MessageView } from '../mail/message-view';
 import { Photo } from '../photos/entities/photo.entity';
 import { sniffImageType } from '../photos/image-header';
 import { typeOfKey } from '../photos/photos.service';
@@ -18,15 +15,12 @@ import { VendorReturn } from '../returns/entities/vendor-return.entity';
 import { ReturnDocuments } from '../returns/return-documents';
 import { StorageService } from '../storage/storage.service';
 import { NoticesService } from '../notices/notices.service';
-import { User } from '../users/entities/user.entity';
-import { SendCorrectiveActionDto, SupplierResponseDto } from './dto/portal.dto';
-import { ReturnLink } from './entities/return-link.entity';
-import { ScarAttachment } from './entities/scar-attachment.entity';
-import { SupplierLink } from './entities/supplier-link.entity';
-import { DAY_MS, LINK_DAYS, newPortalToken, sha256, signedByUs } from './portal-token';
+import { SupplierResponseDto } from './dto/portal.dto';
+import { ReturnLink } from '../returns/entities/return-link.entity';
+import { ScarAttachment } from '../corrective-actions/entities/scar-attachment.entity';
+import { SupplierLink } from '../corrective-actions/entities/supplier-link.entity';
+import { sha256, signedByUs } from '../common/portal-token';
 import { clock } from '../common/clock';
-
-export { LINK_DAYS } from './portal-token';
 
 type Resolved = { kind: 'scar'; link: SupplierLink } | { kind: 'return'; link: ReturnLink };
 
@@ -61,114 +55,22 @@ function cleanName(name: string | undefined, type: string): string {
 }
 
 /**
- * The supplier's side of a corrective-action request: a signed link e-mailed to the
- * supplier (`<random>.<HMAC>`, only its SHA-256 stored; 30 days; revocable), the public
- * page's data, the answer and the attachments. The page shows that one request and
- * nothing else: no internal ids, notes, other lots or other suppliers.
+ * The supplier's side of a corrective-action request or a return notice, reached by the
+ * signed link e-mailed to the supplier (`<random>.<HMAC>`, only its SHA-256 stored; 30
+ * days; revocable; sent by `ScarLinks` and `ReturnMailService`): the public page's data,
+ * the answer and the attachments. The page shows that one request and nothing else: no
+ * internal ids, notes, other lots or other suppliers.
  */
 @Injectable()
 export class SupplierPortalService {
   constructor(
     private readonly em: EntityManager,
     private readonly audit: AuditService,
-    private readonly mail: MailService,
     private readonly storage: StorageService,
     private readonly documents: ReturnDocuments,
     private readonly notices: NoticesService,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
-
-  /** E-mails the supplier a new link to answer the request (also after a reopen). */
-  async send(
-    id: number,
-    dto: SendCorrectiveActionDto,
-    actor: RequestUser,
-    opening = 'We ask you for a corrective action',
-  ): Promise<{ message: MessageView; link: { id: number; expiresAt: Date } }> {
-    const em = this.em.fork();
-    const car = await em.findOne(CorrectiveAction, id, { populate: ['supplier', 'lots'] });
-    if (!car) throw DomainError.notFound(`There is no corrective action ${id}`);
-    if (car.status === 'verified' || car.status === 'closed') {
-      throw DomainError.refused(
-        `${car.number} is ${car.status}: there is nothing left for the supplier to answer`,
-      );
-    }
-    const to = dto.to ?? car.supplier.contactEmail;
-    if (!to) {
-      throw DomainError.refused(
-        `${car.supplier.name} has no contact e-mail: add one to the supplier or give an address`,
-      );
-    }
-    const token = newPortalToken(this.config.jwtSecret);
-    const link = em.create(SupplierLink, {
-      tokenHash: sha256(token),
-      correctiveAction: car,
-      sentTo: to,
-      expiresAt: new Date(clock.nowMs() + LINK_DAYS * DAY_MS),
-      createdBy: em.getReference(User, actor.id),
-    });
-    await em.flush();
-    const url = `${this.config.publicUrl}/supplier/${token}`;
-    const lots = car.lots
-      .getItems()
-      .map((l) => `PO ${l.poNumber}${l.supplierLotCode ? ` (your lot ${l.supplierLotCode})` : ''}`)
-      .join(', ');
-    const body = [
-      dto.message?.trim(),
-      `${opening}: ${car.number}.`,
-      `What we found: ${car.problem}`,
-      lots ? `Deliveries concerned: ${lots}.` : null,
-      `Please answer by ${car.dueOn} with your containment, root cause, corrective action and the date it will be in place, on this page (no account needed; the link works until ${isoDate(link.expiresAt)}):`,
-      url,
-    ]
-      .filter(Boolean)
-      .join('\n\n');
-    const message = await this.mail.send(
-      {
-        to,
-        subject: `${car.number}: corrective action requested`,
-        body,
-        attachments: [],
-        relatedType: 'corrective_action',
-        relatedId: car.id,
-      },
-      actor,
-    );
-    this.audit.record(em, actor, {
-      action: 'corrective_action.send',
-      entityType: 'corrective_action',
-      entityId: car.id,
-      after: {
-        number: car.number,
-        to,
-        linkId: link.id,
-        expiresAt: link.expiresAt,
-        messageId: message.id,
-      },
-    });
-    await em.flush();
-    return { message, link: { id: link.id, expiresAt: link.expiresAt } };
-  }
-
-  /** Withdraws every link of the request: they answer 410 from now on. */
-  async revoke(id: number, actor: RequestUser): Promise<{ revoked: number }> {
-    const em = this.em.fork();
-    const car = await em.findOne(CorrectiveAction, id);
-    if (!car) throw DomainError.notFound(`There is no corrective action ${id}`);
-    const revoked = await em.nativeUpdate(
-      SupplierLink,
-      { correctiveAction: id, revokedAt: null },
-      { revokedAt: clock.now() },
-    );
-    this.audit.record(em, actor, {
-      action: 'corrective_action.revoke_links',
-      entityType: 'corrective_action',
-      entityId: id,
-      after: { number: car.number, revoked },
-    });
-    await em.flush();
-    return { revoked };
-  }
 
   /**
    * The link behind a token, of either kind: 404 for anything not ours, 410 once expired
@@ -473,26 +375,5 @@ export class SupplierPortalService {
       sizeBytes: att.sizeBytes,
       addedAt: att.createdAt,
     };
-  }
-
-  /** Staff: the files of a request, and one file's bytes. */
-  async attachments(carId: number) {
-    const rows = await this.em
-      .fork()
-      .find(ScarAttachment, { correctiveAction: carId }, { orderBy: { id: 'asc' } });
-    return rows.map((a) => ({
-      id: a.id,
-      filename: a.filename,
-      contentType: a.contentType,
-      sizeBytes: a.sizeBytes,
-      addedBy: a.addedBy,
-      createdAt: a.createdAt,
-    }));
-  }
-
-  async openAttachment(carId: number, id: number) {
-    const att = await this.em.fork().findOne(ScarAttachment, { id, correctiveAction: carId });
-    if (!att) throw DomainError.notFound(`There is no file ${id} on this request`);
-    return { stream: await this.storage.get(att.storageKey), att };
   }
 }

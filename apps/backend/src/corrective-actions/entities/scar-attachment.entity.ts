@@ -1,5 +1,6 @@
 import { Entity, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
 import { CorrectiveAction } from './corrective-action.entity';
+import { clock } from '../../common/clock';
 
 /** A file the supplier sent with its answer (PDF or image, checked by content). */
 @Entity({ tableName: 'scar_attachments' })
@@ -28,5 +29,5 @@ export class ScarAttachment {
   addedBy!: string;
 
   @Property({ type: 'Date' })
-  createdAt: Opt<Date> = new Date();
+  createdAt: Opt<Date> = clock.now();
 }

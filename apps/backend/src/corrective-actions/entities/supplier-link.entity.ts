@@ -1,6 +1,7 @@
 import { Entity, ManyToOne, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
 import { CorrectiveAction } from './corrective-action.entity';
 import { User } from '../../users/entities/user.entity';
+import { clock } from '../../common/clock';
 
 /**
  * A link that lets a supplier answer one corrective-action request without an account.
@@ -34,5 +35,5 @@ export class SupplierLink {
   createdBy!: User;
 
   @Property({ type: 'Date' })
-  createdAt: Opt<Date> = new Date();
+  createdAt: Opt<Date> = clock.now();
 }

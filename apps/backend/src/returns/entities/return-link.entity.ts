@@ -1,6 +1,7 @@
 import { Entity, ManyToOne, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
 import { VendorReturn } from './vendor-return.entity';
 import { User } from '../../users/entities/user.entity';
+import { clock } from '../../common/clock';
 
 /**
  * A link that shows a supplier one return notice (what was found: the lots, the evidence
@@ -34,5 +35,5 @@ export class ReturnLink {
   createdBy!: User;
 
   @Property({ type: 'Date' })
-  createdAt: Opt<Date> = new Date();
+  createdAt: Opt<Date> = clock.now();
 }

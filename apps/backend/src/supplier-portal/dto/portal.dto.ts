@@ -1,7 +1,6 @@
 import { TEXT_MAX, TEXT_MIN } from '@gaugeproof/api-types';
 import { ApiProperty } from '@nestjs/swagger';
 import { IsDay, RequiredText } from '../../common/dto-fields';
-import { SupplierMailDto } from '../../common/supplier-mail.dto';
 
 /** The supplier's answer, through its link. */
 export class SupplierResponseDto {
@@ -20,6 +19,3 @@ export class SupplierResponseDto {
   @IsDay()
   readonly promisedOn: string;
 }
-
-/** E-mails the supplier a link to answer the request. */
-export class SendCorrectiveActionDto extends SupplierMailDto {}
