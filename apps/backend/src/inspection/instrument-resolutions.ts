@@ -2,6 +2,7 @@ import { DomainError } from '../common/domain-error';
 
 import type { InstrumentAccuracy } from '@gaugeproof/standards';
 import type { Instrument, InstrumentKind } from '../instruments/entities/instrument.entity';
+import { instrumentAccuracy, instrumentIdentity } from '../instruments/instrument-rules';
 import type { InstrumentSnapshot, ReadingMethod } from './entities/reading.entity';
 
 /** Resolutions handed to the standards library, in the method's units (g, mm, Ω, °C). */
@@ -142,15 +143,8 @@ export function snapshot(
     >,
 ): InstrumentSnapshot {
   return {
-    id: i.id,
-    kind: i.kind,
-    name: i.name,
-    serial: i.serial,
-    resolution: i.resolution,
-    resolutionUnit: i.resolutionUnit,
+    ...instrumentIdentity(i),
     calibrationDueOn: i.calibrationDueOn,
-    accuracyPercentOfReading: i.accuracyPercentOfReading ?? null,
-    accuracyAbsolute: i.accuracyAbsolute ?? null,
-    calibrationUncertainty: i.calibrationUncertainty ?? null,
+    ...instrumentAccuracy(i),
   };
 }

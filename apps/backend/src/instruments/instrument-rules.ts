@@ -27,8 +27,10 @@ export function calibrationStatus(dueOn: string, today: string): CalibrationStat
   return days <= DUE_SOON_DAYS ? 'due_soon' : 'ok';
 }
 
-export function instrumentView(i: Instrument, now = clock.now()) {
-  const today = isoDate(now);
+/** Which instrument it is and how finely it reads: in its view and in a reading's snapshot. */
+export function instrumentIdentity(
+  i: Pick<Instrument, 'id' | 'kind' | 'name' | 'serial' | 'resolution' | 'resolutionUnit'>,
+) {
   return {
     id: i.id,
     kind: i.kind,
@@ -36,9 +38,27 @@ export function instrumentView(i: Instrument, now = clock.now()) {
     serial: i.serial,
     resolution: i.resolution,
     resolutionUnit: i.resolutionUnit,
+  };
+}
+
+/** The maker's accuracy and the calibration's uncertainty, null where not given. */
+export function instrumentAccuracy(
+  i: Partial<
+    Pick<Instrument, 'accuracyPercentOfReading' | 'accuracyAbsolute' | 'calibrationUncertainty'>
+  >,
+) {
+  return {
     accuracyPercentOfReading: i.accuracyPercentOfReading ?? null,
     accuracyAbsolute: i.accuracyAbsolute ?? null,
     calibrationUncertainty: i.calibrationUncertainty ?? null,
+  };
+}
+
+export function instrumentView(i: Instrument, now = clock.now()) {
+  const today = isoDate(now);
+  return {
+    ...instrumentIdentity(i),
+    ...instrumentAccuracy(i),
     calibratedOn: i.calibratedOn,
     calibrationDueOn: i.calibrationDueOn,
     active: i.active,
