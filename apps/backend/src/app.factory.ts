@@ -7,7 +7,7 @@ import { buildOpenApiDocument } from './common/answers';
 import cookieParser from 'cookie-parser';
 import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
-import { AppModule } from './app.module';
+import { AppModule, DOMAIN_MODULES } from './app.module';
 import { AllExceptionsFilter } from './common/all-exceptions.filter';
 import { InputSafetyPipe } from './common/input-safety.pipe';
 import { BodyDepthPipe } from './common/body-depth.pipe';
@@ -18,15 +18,22 @@ import { checkCountedTables } from './common/change-counters';
 
 /**
  * Builds the whole application: used by main.ts, by the API tests and the benchmark,
- * so all of them run exactly what production runs.
+ * so all of them run exactly what production runs. `domainModules` is AppModule's list
+ * unless a test builds the app with the modules in another order.
  */
-export async function createApp(config: AppConfig): Promise<INestApplication> {
-  const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot(config), {
-    bufferLogs: true,
-    abortOnError: false,
-    // JSON bodies are parsed by JsonBodyMiddleware (AppModule), so their errors reach our filter.
-    bodyParser: false,
-  });
+export async function createApp(
+  config: AppConfig,
+  domainModules = DOMAIN_MODULES,
+): Promise<INestApplication> {
+  const app = await NestFactory.create<NestExpressApplication>(
+    AppModule.forRoot(config, domainModules),
+    {
+      bufferLogs: true,
+      abortOnError: false,
+      // JSON bodies are parsed by JsonBodyMiddleware (AppModule), so their errors reach our filter.
+      bodyParser: false,
+    },
+  );
   app.useLogger(new BootQuietLogger(app.get(Logger)));
   app.set('trust proxy', config.trustProxy);
   app.use(

@@ -3,6 +3,7 @@ import {
   DynamicModule,
   Module,
   RequestMethod,
+  type Type,
   type MiddlewareConsumer,
   type NestModule,
 } from '@nestjs/common';
@@ -29,6 +30,7 @@ import { NoticesModule } from './notices/notices.module';
 import { ReturnsModule } from './returns/returns.module';
 import type { AppConfig } from './config/env';
 import { JsonBodyMiddleware } from './common/json-body.middleware';
+import { RouteOrder } from './common/route-order';
 import { ormOptions } from './database/orm-options';
 import { HealthModule } from './health/health.module';
 import { UsersModule } from './users/users.module';
@@ -42,8 +44,13 @@ import { ProductsModule } from './products/products.module';
 import { LotsModule } from './lots/lots.module';
 import { LotPageModule } from './lot-page/lot-page.module';
 
-/** Domain modules; each later domain adds its module here. */
-const DOMAIN_MODULES = [
+/**
+ * Domain modules; each later domain adds its module here. Their order decides no route: a
+ * literal route goes before a parameter route that would take it, whichever module added
+ * them (`common/route-order.ts`; test/routes.e2e-spec.ts builds the app with the modules
+ * reversed and compares the answers).
+ */
+export const DOMAIN_MODULES: readonly Type[] = [
   AuditModule,
   AuditTrailModule,
   AuthModule,
@@ -52,7 +59,6 @@ const DOMAIN_MODULES = [
   InstrumentsModule,
   SuppliersModule,
   ProductsModule,
-  // LotsModule before InspectionModule: /api/lots/export.csv must match before /api/lots/:id.
   LotsModule,
   InspectionModule,
   LotPageModule,
@@ -96,7 +102,7 @@ export class AppModule implements NestModule {
     consumer.apply(JsonBodyMiddleware).forRoutes({ path: '{*splat}', method: RequestMethod.ALL });
   }
 
-  static forRoot(config: AppConfig): DynamicModule {
+  static forRoot(config: AppConfig, domainModules = DOMAIN_MODULES): DynamicModule {
     const staticSite = existsSync(config.frontendDist)
       ? [
           ServeStaticModule.forRoot({
@@ -129,10 +135,10 @@ export class AppModule implements NestModule {
           },
         }),
         MikroOrmModule.forRoot(ormOptions(config)),
-        ...DOMAIN_MODULES,
+        ...domainModules,
         ...staticSite,
       ],
-      providers: [ServerLockHolder],
+      providers: [ServerLockHolder, RouteOrder],
     };
   }
 }

@@ -43,7 +43,11 @@ export function contractCheck(app: INestApplication) {
   const check = (req: Request, status: number, body: string) => {
     if (!routes) load();
     const path = req.originalUrl.split('?')[0];
-    const route = routes!.find((r) => r.method === req.method && r.pattern.test(path));
+    // As the server routes it: a literal segment before a parameter (/lots/export.csv is
+    // not /lots/{id}), whatever order the document lists its paths in.
+    const route = routes!
+      .filter((r) => r.method === req.method && r.pattern.test(path))
+      .sort((a, b) => literalFirst(a.path, b.path))[0];
     if (!route) return; // not an API route (the client, the docs)
     const response = route.op.responses?.[String(status)];
     const schema = response?.content?.['application/json']?.schema;
@@ -100,4 +104,15 @@ function jsonSchemaOf(node: unknown): unknown {
   if (nullable !== true) return out;
   if (typeof out.type === 'string') return { ...out, type: [out.type, 'null'] };
   return { anyOf: [out, { type: 'null' }] };
+}
+
+/** Two templates that match one path, the one with a literal at the first difference first. */
+function literalFirst(a: string, b: string): number {
+  const x = a.split('/');
+  const y = b.split('/');
+  for (let i = 0; i < x.length; i++) {
+    const d = Number(x[i].startsWith('{')) - Number(y[i]?.startsWith('{'));
+    if (d !== 0) return d;
+  }
+  return 0;
 }

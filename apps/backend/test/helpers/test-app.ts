@@ -1,4 +1,4 @@
-import type { INestApplication } from '@nestjs/common';
+import type { INestApplication, Type } from '@nestjs/common';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -28,6 +28,7 @@ export interface TestApp {
 export async function startTestApp(
   env: Record<string, string> = {},
   overrides: Partial<AppConfig> = {},
+  domainModules?: readonly Type[],
 ): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'gp-test-'));
   // The PostgreSQL pass of the suite (npm run test:pg) gives each app its own database.
@@ -45,7 +46,7 @@ export async function startTestApp(
     ...env,
   });
   const config = { ...loaded, ...overrides };
-  const app = await createApp(config);
+  const app = await createApp(config, domainModules);
   const contract = contractCheck(app);
   app.use(contract.middleware);
   await app.init();
