@@ -1,5 +1,5 @@
-import { Answers } from '../common/answers';
-import { Body, Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
+import { Answers, PostAction } from '../common/answers';
+import { Body, Controller, Get, Post } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
 import { ApiTags } from '@nestjs/swagger';
 import { CurrentUser, Roles } from '../auth/decorators';
@@ -10,7 +10,7 @@ import { VoidReadingDto } from './dto/void-reading.dto';
 import { ReadingsService } from './readings.service';
 import { SamplesService } from './samples.service';
 import { lotsAtRejectNumber } from './reject-reached';
-import { IdPipe } from '../common/id.pipe';
+import { IdParam } from '../common/id.pipe';
 
 @ApiTags('inspection')
 @Controller()
@@ -33,7 +33,7 @@ export class InspectionController {
   @Answers('Sample')
   @Roles('clerk', 'qa_lead', 'admin')
   createSample(
-    @Param('id', IdPipe) lotId: number,
+    @IdParam() lotId: number,
     @Body() dto: CreateSampleDto,
     @CurrentUser() actor: RequestUser,
   ) {
@@ -44,20 +44,18 @@ export class InspectionController {
   @Answers('Reading')
   @Roles('clerk', 'qa_lead', 'admin')
   createReading(
-    @Param('id', IdPipe) sampleId: number,
+    @IdParam() sampleId: number,
     @Body() dto: CreateReadingDto,
     @CurrentUser() actor: RequestUser,
   ) {
     return this.readings.create(sampleId, dto, actor);
   }
 
-  @Post('readings/:id/void')
-  @Answers('Reading')
-  @HttpCode(200)
+  @PostAction('readings/:id/void', 'Reading')
   // A clerk only their own reading, before the lot is decided (ReadingsService.void).
   @Roles('clerk', 'qa_lead', 'admin')
   voidReading(
-    @Param('id', IdPipe) id: number,
+    @IdParam() id: number,
     @Body() dto: VoidReadingDto,
     @CurrentUser() actor: RequestUser,
   ) {

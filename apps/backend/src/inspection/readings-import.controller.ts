@@ -1,20 +1,12 @@
 import { Answers } from '../common/answers';
-import {
-  Controller,
-  Headers,
-  Param,
-  Post,
-  Res,
-  UploadedFile,
-  UseInterceptors,
-} from '@nestjs/common';
-import { ApiBody, ApiConsumes, ApiHeader, ApiTags } from '@nestjs/swagger';
+import { Controller, Headers, Post, Res, UploadedFile } from '@nestjs/common';
+import { ApiHeader, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
-import { singleFileInterceptor } from '../storage/single-file.interceptor';
+import { FileUpload, singleFileInterceptor } from '../storage/single-file.interceptor';
 import { MAX_IMPORT_ROWS, ReadingsImportService } from './readings-import.service';
-import { IdPipe } from '../common/id.pipe';
+import { IdParam } from '../common/id.pipe';
 
 /** 2 MB holds tens of thousands of bench-logger rows (issue 4; no source). */
 const CsvUpload = singleFileInterceptor(
@@ -30,29 +22,18 @@ export class ReadingsImportController {
   @Post(':id/readings/import')
   @Answers('ImportAnswer')
   @Roles('clerk', 'qa_lead', 'admin')
-  @UseInterceptors(CsvUpload)
-  @ApiConsumes('multipart/form-data')
+  @FileUpload(
+    CsvUpload,
+    `CSV with a header row: unit, conductor, method, massG, lengthMm, count, strandDiameterMm, resistanceOhm, temperatureC, diameterMm, strandingIncrement, instruments (serials separated by ;), unitRef. At most ${MAX_IMPORT_ROWS} reading rows.`,
+  )
   @ApiHeader({
     name: 'Idempotency-Key',
     required: false,
     description:
       "A key of the client's choosing (1 to 200 visible characters). A retry with the same key and file is answered with the first import's answer (header Idempotent-Replayed: true) and records nothing; without a key the file's SHA-256 serves as one.",
   })
-  @ApiBody({
-    schema: {
-      type: 'object',
-      required: ['file'],
-      properties: {
-        file: {
-          type: 'string',
-          format: 'binary',
-          description: `CSV with a header row: unit, conductor, method, massG, lengthMm, count, strandDiameterMm, resistanceOhm, temperatureC, diameterMm, strandingIncrement, instruments (serials separated by ;), unitRef. At most ${MAX_IMPORT_ROWS} reading rows.`,
-        },
-      },
-    },
-  })
   async import(
-    @Param('id', IdPipe) lotId: number,
+    @IdParam() lotId: number,
     @UploadedFile() file: Express.Multer.File | undefined,
     @CurrentUser() actor: RequestUser,
     @Headers('idempotency-key') key: string | undefined,

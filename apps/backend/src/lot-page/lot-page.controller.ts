@@ -1,10 +1,10 @@
 import { Answers } from '../common/answers';
-import { Controller, Get, Param } from '@nestjs/common';
+import { Controller, Get } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { Roles } from '../auth/decorators';
 import { ALL_ROLES } from '../auth/roles';
 import { LotPageService } from './lot-page.service';
-import { IdPipe } from '../common/id.pipe';
+import { IdParam } from '../common/id.pipe';
 
 @ApiTags('lots')
 @Controller('lots')
@@ -14,7 +14,7 @@ export class LotPageController {
   @Get(':id')
   @Answers('LotDetail')
   @Roles(...ALL_ROLES)
-  detail(@Param('id', IdPipe) id: number) {
+  detail(@IdParam() id: number) {
     return this.lots.detail(id);
   }
 }

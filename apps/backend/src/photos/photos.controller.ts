@@ -1,26 +1,16 @@
-import { Answers } from '../common/answers';
-import {
-  Body,
-  Controller,
-  HttpCode,
-  Get,
-  Param,
-  Post,
-  Res,
-  StreamableFile,
-  UploadedFile,
-  UseInterceptors,
-} from '@nestjs/common';
-import { ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
+import { Answers, PostAction } from '../common/answers';
+import { Body, Controller, Get, Post, Res, StreamableFile, UploadedFile } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { CurrentUser, Roles } from '../auth/decorators';
 import type { RequestUser } from '../auth/request-user';
 import { ALL_ROLES } from '../auth/roles';
 import { UploadPhotoDto } from './dto/upload-photo.dto';
 import { VoidPhotoDto } from './dto/void-photo.dto';
+import { FileUpload } from '../storage/single-file.interceptor';
 import { PhotoUploadInterceptor } from './photo-upload.interceptor';
 import { PhotosService } from './photos.service';
-import { IdPipe } from '../common/id.pipe';
+import { IdParam } from '../common/id.pipe';
 
 @ApiTags('photos')
 @Controller()
@@ -30,21 +20,12 @@ export class PhotosController {
   @Post('lots/:id/photos')
   @Answers('Photo')
   @Roles('clerk', 'qa_lead', 'admin')
-  @UseInterceptors(PhotoUploadInterceptor)
-  @ApiConsumes('multipart/form-data')
-  @ApiBody({
-    schema: {
-      type: 'object',
-      required: ['file'],
-      properties: {
-        file: { type: 'string', format: 'binary', description: 'JPEG, PNG or WebP, at most 15 MB' },
-        sampleId: { type: 'integer' },
-        caption: { type: 'string', maxLength: 300 },
-      },
-    },
+  @FileUpload(PhotoUploadInterceptor, 'JPEG, PNG or WebP, at most 15 MB', {
+    sampleId: { type: 'integer' },
+    caption: { type: 'string', maxLength: 300 },
   })
   upload(
-    @Param('id', IdPipe) lotId: number,
+    @IdParam() lotId: number,
     @UploadedFile() file: Express.Multer.File | undefined,
     @Body() dto: UploadPhotoDto,
     @CurrentUser() actor: RequestUser,
@@ -52,30 +33,24 @@ export class PhotosController {
     return this.photos.upload(lotId, file, dto, actor);
   }
 
-  @Post('photos/:id/void')
-  @HttpCode(200)
-  @Answers('Photo')
+  @PostAction('photos/:id/void', 'Photo')
   @Roles('clerk', 'qa_lead', 'admin')
   // A clerk only their own photo, before the lot is decided (PhotosService.void).
-  voidPhoto(
-    @Param('id', IdPipe) id: number,
-    @Body() dto: VoidPhotoDto,
-    @CurrentUser() actor: RequestUser,
-  ) {
+  voidPhoto(@IdParam() id: number, @Body() dto: VoidPhotoDto, @CurrentUser() actor: RequestUser) {
     return this.photos.void(id, dto.reason, actor);
   }
 
   @Get('photos/:id/original')
   @Answers.file('image/jpeg')
   @Roles(...ALL_ROLES)
-  original(@Param('id', IdPipe) id: number, @Res({ passthrough: true }) res: Response) {
+  original(@IdParam() id: number, @Res({ passthrough: true }) res: Response) {
     return this.serve(id, 'original', res);
   }
 
   @Get('photos/:id/thumbnail')
   @Answers.file('image/jpeg')
   @Roles(...ALL_ROLES)
-  thumbnail(@Param('id', IdPipe) id: number, @Res({ passthrough: true }) res: Response) {
+  thumbnail(@IdParam() id: number, @Res({ passthrough: true }) res: Response) {
     return this.serve(id, 'thumbnail', res);
   }
 

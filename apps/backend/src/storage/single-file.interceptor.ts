@@ -1,11 +1,14 @@
 import {
+  applyDecorators,
   BadRequestException,
   PayloadTooLargeException,
+  UseInterceptors,
   type CallHandler,
   type ExecutionContext,
   type NestInterceptor,
   type Type,
 } from '@nestjs/common';
+import { ApiBody, ApiConsumes } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import multer, { MulterError } from 'multer';
 import { from, switchMap, type Observable } from 'rxjs';
@@ -42,4 +45,27 @@ export function singleFileInterceptor(maxBytes: number, tooLarge: string): Type<
     }
   }
   return SingleFileInterceptor;
+}
+
+/**
+ * A route taking one uploaded `file` (read by `interceptor`, from `singleFileInterceptor`)
+ * as a multipart form, described as such in the OpenAPI document: the file's description
+ * and the form's other fields.
+ */
+export function FileUpload(
+  interceptor: Type<NestInterceptor>,
+  file: string,
+  fields: Record<string, object> = {},
+) {
+  return applyDecorators(
+    UseInterceptors(interceptor),
+    ApiConsumes('multipart/form-data'),
+    ApiBody({
+      schema: {
+        type: 'object',
+        required: ['file'],
+        properties: { file: { type: 'string', format: 'binary', description: file }, ...fields },
+      },
+    }),
+  );
 }

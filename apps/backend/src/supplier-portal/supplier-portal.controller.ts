@@ -12,10 +12,10 @@ import {
   UploadedFile,
   UseInterceptors,
 } from '@nestjs/common';
-import { ApiBody, ApiConsumes, ApiProduces, ApiQuery, ApiTags } from '@nestjs/swagger';
+import { ApiProduces, ApiQuery, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { Public } from '../auth/decorators';
-import { singleFileInterceptor } from '../storage/single-file.interceptor';
+import { FileUpload, singleFileInterceptor } from '../storage/single-file.interceptor';
 import { IdPipe } from '../common/id.pipe';
 import { SupplierResponseDto } from './dto/portal.dto';
 import { PortalThrottle } from './portal-throttle';
@@ -56,17 +56,7 @@ export class SupplierPortalController {
   @Post('attachments')
   @Answers('PortalAttachment')
   @Public()
-  @UseInterceptors(AttachmentUpload)
-  @ApiConsumes('multipart/form-data')
-  @ApiBody({
-    schema: {
-      type: 'object',
-      required: ['file'],
-      properties: {
-        file: { type: 'string', format: 'binary', description: 'PDF, JPEG, PNG or WebP, ≤ 10 MB' },
-      },
-    },
-  })
+  @FileUpload(AttachmentUpload, 'PDF, JPEG, PNG or WebP, ≤ 10 MB')
   attach(@Param('token') token: string, @UploadedFile() file: Express.Multer.File | undefined) {
     return this.portal.attach(token, file);
   }
