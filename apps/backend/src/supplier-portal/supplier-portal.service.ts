@@ -8,6 +8,7 @@ import { isCalendarDate, isoDate } from '../common/calendar';
 import { APP_CONFIG } from '../config/config.module';
 import type { AppConfig } from '../config/env';
 import { CorrectiveAction } from '../corrective-actions/entities/corrective-action.entity';
+import type { Lot } from '../lots/entities/lot.entity';
 import { Photo } from '../photos/entities/photo.entity';
 import { sniffImageType } from '../photos/image-header';
 import { typeOfKey } from '../photos/photos.service';
@@ -41,6 +42,20 @@ export class UnknownLinkError extends DomainError {
 function sniffAttachment(b: Buffer): string | null {
   if (b.length >= 5 && b.toString('latin1', 0, 5) === '%PDF-') return 'application/pdf';
   return sniffImageType(b);
+}
+
+/** The deliveries a page names, oldest first, as the supplier knows them: no internal ids. */
+function deliveriesOf(lots: readonly Lot[]) {
+  return [...lots]
+    .sort((a, b) => a.id - b.id)
+    .map((l) => ({
+      poNumber: l.poNumber,
+      packingSlip: l.packingSlip,
+      supplierLotCode: l.supplierLotCode,
+      receivedOn: isoDate(l.receivedAt),
+      quantity: l.quantity,
+      unit: l.unit,
+    }));
 }
 
 /** A file name safe to show and to put in a header: letters, digits, dot, dash, space. */
@@ -151,17 +166,7 @@ export class SupplierPortalService {
       rmaNumber: ret.rmaNumber,
       chargeback: { amount: ret.chargebackTotal, currency: ret.currency },
       emailedOn: ret.emailedAt ? isoDate(ret.emailedAt) : null,
-      lots: ret.lots
-        .getItems()
-        .sort((a, b) => a.id - b.id)
-        .map((l) => ({
-          poNumber: l.poNumber,
-          packingSlip: l.packingSlip,
-          supplierLotCode: l.supplierLotCode,
-          receivedOn: isoDate(l.receivedAt),
-          quantity: l.quantity,
-          unit: l.unit,
-        })),
+      lots: deliveriesOf(ret.lots.getItems()),
       photos: photos.map((p, i) => ({
         n: i + 1,
         poNumber: p.lot.poNumber,
@@ -201,17 +206,7 @@ export class SupplierPortalService {
       supplier: { name: car.supplier.name },
       problem: car.problem,
       dueOn: car.dueOn,
-      lots: car.lots
-        .getItems()
-        .sort((a, b) => a.id - b.id)
-        .map((l) => ({
-          poNumber: l.poNumber,
-          packingSlip: l.packingSlip,
-          supplierLotCode: l.supplierLotCode,
-          receivedOn: isoDate(l.receivedAt),
-          quantity: l.quantity,
-          unit: l.unit,
-        })),
+      lots: deliveriesOf(car.lots.getItems()),
       reopenComment: car.status === 'reopened' ? car.reopenComment : null,
       answer: {
         containment: car.containment,
