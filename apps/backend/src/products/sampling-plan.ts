@@ -61,6 +61,20 @@ export function discontinuedMessage(product: Product, reason: string | null): st
   );
 }
 
+/** The plan as a lot keeps it (lots.sampling_plan), from the standards library's plan. */
+export function storedPlanOf(plan: SamplingPlan): StoredSamplingPlan {
+  return {
+    severity: plan.severity,
+    level: plan.level,
+    aql: plan.aql,
+    codeLetter: plan.codeLetter,
+    sampleSize: plan.sampleSize,
+    accept: plan.accept,
+    reject: plan.reject,
+    inspectAll: plan.inspectAll,
+  };
+}
+
 const acceptWords = (ac: number) =>
   ac === 0 ? 'accept only with no nonconforming unit' : `accept with up to ${ac} nonconforming`;
 
@@ -88,16 +102,7 @@ export function planForLot(
     aql: product.aql as Aql,
     severity,
   });
-  const stored: StoredSamplingPlan = {
-    severity: plan.severity,
-    level: plan.level,
-    aql: plan.aql,
-    codeLetter: plan.codeLetter,
-    sampleSize: plan.sampleSize,
-    accept: plan.accept,
-    reject: plan.reject,
-    inspectAll: plan.inspectAll,
-  };
+  const stored = storedPlanOf(plan);
   const cut = !plan.inspectAll
     ? `cut ${plan.sampleSize} of the ${quantity} units`
     : quantity === 1

@@ -6,10 +6,10 @@ import { Lot, type LotStatus } from '../../src/lots/entities/lot.entity';
 import { ConductorSpec } from '../../src/products/entities/conductor-spec.entity';
 import { InspectionState } from '../../src/products/entities/inspection-state.entity';
 import { Product } from '../../src/products/entities/product.entity';
+import { storedPlanOf } from '../../src/products/sampling-plan';
 import { Supplier } from '../../src/suppliers/entities/supplier.entity';
 import { User } from '../../src/users/entities/user.entity';
 import { initialInspectionState } from '@gaugeproof/standards';
-import { storedPlan } from './fixtures';
 import { DEMO, startTestApp, type TestApp } from './test-app';
 
 /**
@@ -115,7 +115,7 @@ export class Fixtures {
       receivedBy: clerk,
       status: opts.status ?? 'awaiting_decision',
       version: 1,
-      samplingPlan: storedPlan(plan),
+      samplingPlan: storedPlanOf(plan),
     });
     const bad = opts.nonconforming ?? 0;
     const unsure = opts.inconclusive ?? 0;

@@ -1,11 +1,5 @@
 import { MikroORM, type EntityManager } from '@mikro-orm/core';
-import {
-  parseGauge,
-  samplingPlan,
-  type Aql,
-  type InspectionLevel,
-  type SamplingPlan,
-} from '@gaugeproof/standards';
+import { parseGauge, samplingPlan, type Aql, type InspectionLevel } from '@gaugeproof/standards';
 import { Instrument, type InstrumentKind } from '../../src/instruments/entities/instrument.entity';
 import { Lot } from '../../src/lots/entities/lot.entity';
 import {
@@ -14,6 +8,7 @@ import {
   type ConductorPurpose,
 } from '../../src/products/entities/conductor-spec.entity';
 import { Product } from '../../src/products/entities/product.entity';
+import { storedPlanOf } from '../../src/products/sampling-plan';
 import { Supplier, type SupplierStatus } from '../../src/suppliers/entities/supplier.entity';
 import { User } from '../../src/users/entities/user.entity';
 import { DEMO, startTestApp, type TestApp } from './test-app';
@@ -100,7 +95,7 @@ export async function createLot(t: TestApp, c: Catalog, quantity = 50): Promise<
     unit: 'spools',
     version: 1,
     receivedBy: await m.findOneOrFail(User, { email: DEMO.clerk }),
-    samplingPlan: storedPlan(plan),
+    samplingPlan: storedPlanOf(plan),
   });
   await m.flush();
   return lot.id;
@@ -169,20 +164,6 @@ export async function startWithBench<K extends string>(
     catalog[name] = await createProduct(t, conductors);
   }
   return { t, bench, ...catalog };
-}
-
-/** The plan a lot stores (lots.sampling_plan), from the standards library's plan. */
-export function storedPlan(plan: SamplingPlan) {
-  return {
-    severity: plan.severity,
-    level: plan.level,
-    aql: plan.aql,
-    codeLetter: plan.codeLetter,
-    sampleSize: plan.sampleSize,
-    accept: plan.accept,
-    reject: plan.reject,
-    inspectAll: plan.inspectAll,
-  };
 }
 
 export async function lotRow(t: TestApp, lotId: number): Promise<Lot> {
