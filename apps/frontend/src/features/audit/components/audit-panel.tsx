@@ -1,9 +1,9 @@
-import { Box, Link, MenuItem, Paper, TextField, Typography } from '@mui/material';
+import { Box, Link, Paper, TextField, Typography } from '@mui/material';
 import { useEffect, useState } from 'react';
 import { Link as RouterLink } from 'react-router';
 import { CsvDownloadButton } from '@/components/data-table/csv-download-button';
 import { createDataTableColumnHelper, DataTable } from '@/components/data-table/data-table';
-import { allOptionProps, FilterBar } from '@/components/data-table/filter-bar';
+import { FilterBar, FilterSelect } from '@/components/data-table/filter-bar';
 import { useListParams } from '@/components/data-table/use-list-params';
 import { paths } from '@/config/paths';
 import { useAuditEvents, useAuditFacets } from '@/features/audit/api/get-audit-events';
@@ -111,21 +111,13 @@ export function AuditPanel() {
   return (
     <Paper variant="outlined" sx={{ p: 2 }}>
       <FilterBar>
-        <TextField
-          select
+        <FilterSelect
           label="Record type"
-          {...allOptionProps}
           value={list.filters.entityType}
-          onChange={(e) => list.setFilter('entityType', e.target.value)}
-          sx={{ width: 170 }}
-        >
-          <MenuItem value="">All</MenuItem>
-          {(facets.data?.entityTypes ?? []).map((t) => (
-            <MenuItem key={t} value={t}>
-              {t}
-            </MenuItem>
-          ))}
-        </TextField>
+          onChange={(type) => list.setFilter('entityType', type)}
+          options={(facets.data?.entityTypes ?? []).map((t) => ({ value: t, label: t }))}
+          width={170}
+        />
         <TextField
           label="Record id"
           fullWidth={false}
@@ -136,36 +128,21 @@ export function AuditPanel() {
           slotProps={{ htmlInput: { inputMode: 'numeric' } }}
           sx={{ width: 120 }}
         />
-        <TextField
-          select
+        <FilterSelect
           label="Person"
-          {...allOptionProps}
+          allLabel="Everyone"
           value={list.filters.actorId}
-          onChange={(e) => list.setFilter('actorId', e.target.value)}
-          sx={{ width: 200 }}
-        >
-          <MenuItem value="">Everyone</MenuItem>
-          {(facets.data?.people ?? []).map((p) => (
-            <MenuItem key={p.id} value={String(p.id)}>
-              {p.name}
-            </MenuItem>
-          ))}
-        </TextField>
-        <TextField
-          select
+          onChange={(actorId) => list.setFilter('actorId', actorId)}
+          options={(facets.data?.people ?? []).map((p) => ({ value: String(p.id), label: p.name }))}
+          width={200}
+        />
+        <FilterSelect
           label="Action"
-          {...allOptionProps}
           value={list.filters.action}
-          onChange={(e) => list.setFilter('action', e.target.value)}
-          sx={{ width: 210 }}
-        >
-          <MenuItem value="">All</MenuItem>
-          {(facets.data?.actions ?? []).map((a) => (
-            <MenuItem key={a} value={a}>
-              {a}
-            </MenuItem>
-          ))}
-        </TextField>
+          onChange={(action) => list.setFilter('action', action)}
+          options={(facets.data?.actions ?? []).map((a) => ({ value: a, label: a }))}
+          width={210}
+        />
         <TextField
           label="From"
           type="date"

@@ -1,14 +1,19 @@
 import AddTaskOutlined from '@mui/icons-material/AddTaskOutlined';
-import { Box, Button, Checkbox, FormControlLabel, MenuItem, Paper, TextField } from '@mui/material';
+import { Box, Button, Checkbox, FormControlLabel, Paper } from '@mui/material';
 import { useState } from 'react';
 import { CsvDownloadButton } from '@/components/data-table/csv-download-button';
-import { FilterBar } from '@/components/data-table/filter-bar';
+import { FilterBar, FilterSelect, optionsOf } from '@/components/data-table/filter-bar';
 import { useListParams } from '@/components/data-table/use-list-params';
 import { useCorrectiveActions } from '@/features/corrective-actions/api/get-corrective-actions';
 import { CorrectiveActionsTable } from '@/features/corrective-actions/components/corrective-actions-table';
 import { NewCorrectiveActionDialog } from '@/features/corrective-actions/components/new-corrective-action-dialog';
 import { SupplierSelect } from '@/components/supplier-select/supplier-select';
 import { CAR_STATUSES, carStatusLabels } from '@/features/corrective-actions/types';
+
+const STATUS_OPTIONS = [
+  { value: 'open,responded,verified,reopened', label: 'Not closed' },
+  ...optionsOf(CAR_STATUSES, carStatusLabels),
+];
 
 export function CorrectiveActionsPanel() {
   const list = useListParams({
@@ -22,22 +27,14 @@ export function CorrectiveActionsPanel() {
   return (
     <Paper variant="outlined" sx={{ p: 2 }}>
       <FilterBar>
-        <TextField
-          select
+        <FilterSelect
           label="Status"
-          fullWidth={false}
+          showAll={false}
           value={list.filters.status}
-          onChange={(event) => list.setFilter('status', event.target.value)}
-          sx={{ width: 180 }}
-        >
-          <MenuItem value="">All</MenuItem>
-          <MenuItem value="open,responded,verified,reopened">Not closed</MenuItem>
-          {CAR_STATUSES.map((s) => (
-            <MenuItem key={s} value={s}>
-              {carStatusLabels[s]}
-            </MenuItem>
-          ))}
-        </TextField>
+          onChange={(status) => list.setFilter('status', status)}
+          options={STATUS_OPTIONS}
+          width={180}
+        />
         <SupplierSelect
           allowAll
           value={list.filters.supplierId ? Number(list.filters.supplierId) : null}

@@ -1,7 +1,12 @@
 import AddOutlined from '@mui/icons-material/AddOutlined';
-import { Alert, Button, MenuItem, Paper, TextField } from '@mui/material';
+import { Alert, Button, Paper } from '@mui/material';
 import { useCallback, useState } from 'react';
-import { FilterBar, FilterBarSpacer, allOptionProps } from '@/components/data-table/filter-bar';
+import {
+  FilterBar,
+  FilterBarSpacer,
+  FilterSelect,
+  optionsOf,
+} from '@/components/data-table/filter-bar';
 import { useListParams } from '@/components/data-table/use-list-params';
 import { useInstruments } from '@/features/instruments/api/get-instruments';
 import { useUpdateInstrument } from '@/features/instruments/api/update-instrument';
@@ -9,6 +14,15 @@ import { InstrumentDialog } from '@/features/instruments/components/instrument-d
 import { InstrumentsTable } from '@/features/instruments/components/instruments-table';
 import { INSTRUMENT_KINDS, kindLabels, type Instrument } from '@/features/instruments/types';
 import { toasts } from '@/lib/toast-store';
+
+const CALIBRATION_OPTIONS = [
+  { value: '14', label: 'Due within 14 days or overdue' },
+  { value: '0', label: 'Overdue or due today' },
+];
+const SERVICE_OPTIONS = [
+  { value: 'true', label: 'In service' },
+  { value: 'false', label: 'Retired' },
+];
 
 export function InstrumentsPanel({ canWrite }: { canWrite: boolean }) {
   const list = useListParams({
@@ -40,45 +54,28 @@ export function InstrumentsPanel({ canWrite }: { canWrite: boolean }) {
         </Alert>
       )}
       <FilterBar>
-        <TextField
-          select
+        <FilterSelect
           label="Kind"
-          {...allOptionProps}
           value={list.filters.kind}
-          onChange={(e) => list.setFilter('kind', e.target.value)}
-          sx={{ width: 200 }}
-        >
-          <MenuItem value="">All</MenuItem>
-          {INSTRUMENT_KINDS.map((k) => (
-            <MenuItem key={k} value={k}>
-              {kindLabels[k]}
-            </MenuItem>
-          ))}
-        </TextField>
-        <TextField
-          select
+          onChange={(kind) => list.setFilter('kind', kind)}
+          options={optionsOf(INSTRUMENT_KINDS, kindLabels)}
+          width={200}
+        />
+        <FilterSelect
           label="Calibration"
-          {...allOptionProps}
+          allLabel="Any"
           value={list.filters.dueWithinDays}
-          onChange={(e) => list.setFilter('dueWithinDays', e.target.value)}
-          sx={{ width: 280 }}
-        >
-          <MenuItem value="">Any</MenuItem>
-          <MenuItem value="14">Due within 14 days or overdue</MenuItem>
-          <MenuItem value="0">Overdue or due today</MenuItem>
-        </TextField>
-        <TextField
-          select
+          onChange={(days) => list.setFilter('dueWithinDays', days)}
+          options={CALIBRATION_OPTIONS}
+          width={280}
+        />
+        <FilterSelect
           label="In service"
-          {...allOptionProps}
           value={list.filters.active}
-          onChange={(e) => list.setFilter('active', e.target.value)}
-          sx={{ width: 160 }}
-        >
-          <MenuItem value="">All</MenuItem>
-          <MenuItem value="true">In service</MenuItem>
-          <MenuItem value="false">Retired</MenuItem>
-        </TextField>
+          onChange={(active) => list.setFilter('active', active)}
+          options={SERVICE_OPTIONS}
+          width={160}
+        />
         <FilterBarSpacer />
         {canWrite && (
           <Button variant="contained" startIcon={<AddOutlined />} onClick={() => setEditing('new')}>

@@ -1,7 +1,13 @@
 import AddOutlined from '@mui/icons-material/AddOutlined';
-import { Button, MenuItem, Paper, TextField } from '@mui/material';
-import { useEffect, useState } from 'react';
-import { FilterBar, FilterBarSpacer, allOptionProps } from '@/components/data-table/filter-bar';
+import { Button, Paper } from '@mui/material';
+import { useState } from 'react';
+import {
+  FilterBar,
+  FilterBarSpacer,
+  FilterSelect,
+  SearchFilter,
+  optionsOf,
+} from '@/components/data-table/filter-bar';
 import { useListParams } from '@/components/data-table/use-list-params';
 import { useProducts } from '@/features/products/api/get-products';
 import { SupplierSelect } from '@/components/supplier-select/supplier-select';
@@ -23,47 +29,29 @@ export function ProductsPanel({
   });
   const products = useProducts(list.query);
   const [editing, setEditing] = useState<Product | 'new' | null>(null);
-  const [search, setSearch] = useState(list.filters.q);
-  const { setFilter } = list;
-  const urlQ = list.filters.q;
-
-  useEffect(() => {
-    if (search === urlQ) return;
-    const timer = setTimeout(() => setFilter('q', search.trim()), 300);
-    return () => clearTimeout(timer);
-  }, [search, urlQ, setFilter]);
 
   const filtered = Boolean(list.filters.q || list.filters.supplierId || list.filters.kind);
   return (
     <Paper variant="outlined" sx={{ p: 2 }}>
       <FilterBar>
-        <TextField
+        <SearchFilter
           label="Search SKU or description"
-          value={search}
-          onChange={(event) => setSearch(event.target.value)}
-          fullWidth={false}
-          sx={{ width: 300 }}
+          value={list.filters.q}
+          setFilter={list.setFilter}
+          width={300}
         />
         <SupplierSelect
           allowAll
           value={list.filters.supplierId ? Number(list.filters.supplierId) : null}
           onChange={(id) => list.setFilter('supplierId', id ? String(id) : '')}
         />
-        <TextField
-          select
+        <FilterSelect
           label="Kind"
-          {...allOptionProps}
           value={list.filters.kind}
-          onChange={(event) => list.setFilter('kind', event.target.value)}
-          sx={{ width: 160 }}
-        >
-          <MenuItem value="">All</MenuItem>
-          {PRODUCT_KINDS.map((k) => (
-            <MenuItem key={k} value={k}>
-              {kindLabels[k]}
-            </MenuItem>
-          ))}
-        </TextField>
+          onChange={(kind) => list.setFilter('kind', kind)}
+          options={optionsOf(PRODUCT_KINDS, kindLabels)}
+          width={160}
+        />
         <FilterBarSpacer />
         {canWrite && (
           <Button variant="contained" startIcon={<AddOutlined />} onClick={() => setEditing('new')}>

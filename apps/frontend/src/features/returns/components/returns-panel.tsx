@@ -1,8 +1,13 @@
 import AssignmentReturnOutlined from '@mui/icons-material/AssignmentReturnOutlined';
-import { Button, MenuItem, Paper, TextField } from '@mui/material';
+import { Button, Paper } from '@mui/material';
 import { useSearchParams } from 'react-router';
 import { CsvDownloadButton } from '@/components/data-table/csv-download-button';
-import { FilterBar, FilterBarSpacer } from '@/components/data-table/filter-bar';
+import {
+  FilterBar,
+  FilterBarSpacer,
+  FilterSelect,
+  optionsOf,
+} from '@/components/data-table/filter-bar';
 import { useListParams } from '@/components/data-table/use-list-params';
 import { useReturns } from '@/features/returns/api/get-returns';
 import { NewReturnDialog } from '@/features/returns/components/new-return-dialog';
@@ -11,6 +16,11 @@ import { SupplierSelect } from '@/components/supplier-select/supplier-select';
 import { RETURN_STATUSES, returnStatusLabels } from '@/features/returns/types';
 
 const positive = (v: string | null) => (v && /^\d+$/.test(v) && Number(v) > 0 ? Number(v) : null);
+
+const STATUS_OPTIONS = [
+  { value: 'draft,emailed,shipped,acknowledged,credited', label: 'Open (not closed or cancelled)' },
+  ...optionsOf(RETURN_STATUSES, returnStatusLabels),
+];
 
 /** Returns to vendor with their filters; `?raiseLot=&raiseSupplier=` opens the new-return form. */
 export function ReturnsPanel() {
@@ -39,24 +49,14 @@ export function ReturnsPanel() {
   return (
     <Paper variant="outlined" sx={{ p: 2 }}>
       <FilterBar>
-        <TextField
-          select
+        <FilterSelect
           label="Status"
-          fullWidth={false}
+          showAll={false}
           value={list.filters.status}
-          onChange={(event) => list.setFilter('status', event.target.value)}
-          sx={{ width: 200 }}
-        >
-          <MenuItem value="">All</MenuItem>
-          <MenuItem value="draft,emailed,shipped,acknowledged,credited">
-            Open (not closed or cancelled)
-          </MenuItem>
-          {RETURN_STATUSES.map((s) => (
-            <MenuItem key={s} value={s}>
-              {returnStatusLabels[s]}
-            </MenuItem>
-          ))}
-        </TextField>
+          onChange={(status) => list.setFilter('status', status)}
+          options={STATUS_OPTIONS}
+          width={200}
+        />
         <SupplierSelect
           allowAll
           value={positive(list.filters.supplierId)}

@@ -1,7 +1,13 @@
 import AddBusinessOutlined from '@mui/icons-material/AddBusinessOutlined';
-import { Button, MenuItem, Paper, TextField } from '@mui/material';
-import { useEffect, useState } from 'react';
-import { FilterBar, FilterBarSpacer, allOptionProps } from '@/components/data-table/filter-bar';
+import { Button, Paper } from '@mui/material';
+import { useState } from 'react';
+import {
+  FilterBar,
+  FilterBarSpacer,
+  FilterSelect,
+  SearchFilter,
+  optionsOf,
+} from '@/components/data-table/filter-bar';
 import { useListParams } from '@/components/data-table/use-list-params';
 import { useSuppliers } from '@/features/suppliers/api/get-suppliers';
 import { SupplierDialog } from '@/features/suppliers/components/supplier-dialog';
@@ -16,42 +22,23 @@ export function SuppliersPanel({ canWrite }: { canWrite: boolean }) {
   });
   const suppliers = useSuppliers(list.query);
   const [editing, setEditing] = useState<Supplier | 'new' | null>(null);
-  const [search, setSearch] = useState(list.filters.q);
-  const { setFilter } = list;
-  const urlQ = list.filters.q;
-
-  // Type freely; the request waits until typing pauses.
-  useEffect(() => {
-    if (search === urlQ) return;
-    const timer = setTimeout(() => setFilter('q', search.trim()), 300);
-    return () => clearTimeout(timer);
-  }, [search, urlQ, setFilter]);
 
   return (
     <Paper variant="outlined" sx={{ p: 2 }}>
       <FilterBar>
-        <TextField
+        <SearchFilter
           label="Search name or code"
-          value={search}
-          onChange={(event) => setSearch(event.target.value)}
-          fullWidth={false}
-          sx={{ width: 320 }}
+          value={list.filters.q}
+          setFilter={list.setFilter}
+          width={320}
         />
-        <TextField
-          select
+        <FilterSelect
           label="Status"
-          {...allOptionProps}
           value={list.filters.status}
-          onChange={(event) => list.setFilter('status', event.target.value)}
-          sx={{ width: 200 }}
-        >
-          <MenuItem value="">All</MenuItem>
-          {SUPPLIER_STATUSES.map((status) => (
-            <MenuItem key={status} value={status}>
-              {supplierStatusLabels[status]}
-            </MenuItem>
-          ))}
-        </TextField>
+          onChange={(status) => list.setFilter('status', status)}
+          options={optionsOf(SUPPLIER_STATUSES, supplierStatusLabels)}
+          width={200}
+        />
         <FilterBarSpacer />
         {canWrite && (
           <Button
