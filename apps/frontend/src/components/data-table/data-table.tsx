@@ -44,6 +44,25 @@ export type DataTableColumns<T extends RowData> = ReturnType<
   ColumnHelper<DataTableFeatures, T>['columns']
 >;
 
+/**
+ * The last column of a register for a user who may edit it: an "Edit" button on each row.
+ * None without `onEdit`, so the table shows no command the user may not use.
+ */
+export function editColumns<T extends RowData>(onEdit: ((row: T) => void) | undefined) {
+  if (!onEdit) return [];
+  return [
+    createDataTableColumnHelper<T>().display({
+      id: 'actions',
+      header: '',
+      cell: ({ row }) => (
+        <Button size="small" onClick={() => onEdit(row.original)}>
+          Edit
+        </Button>
+      ),
+    }),
+  ];
+}
+
 export interface DataTableProps<T extends RowData> {
   /** Accessible name of the table ("Suppliers"). */
   label: string;

@@ -1,9 +1,10 @@
 import WarningAmberOutlined from '@mui/icons-material/WarningAmberOutlined';
-import { Box, Button, Stack, Tooltip, Typography } from '@mui/material';
+import { Box, Stack, Tooltip, Typography } from '@mui/material';
 import { useMemo } from 'react';
 import {
   DataTable,
   createDataTableColumnHelper,
+  editColumns,
   type DataTableProps,
 } from '@/components/data-table/data-table';
 import { InspectionStateChip } from '@/features/products/components/inspection-state-chip';
@@ -70,19 +71,7 @@ export function ProductsTable({ onEdit, ...props }: ProductsTableProps) {
             </Stack>
           ),
         }),
-        ...(onEdit
-          ? [
-              helper.display({
-                id: 'actions',
-                header: '',
-                cell: ({ row }) => (
-                  <Button size="small" onClick={() => onEdit(row.original)}>
-                    Edit
-                  </Button>
-                ),
-              }),
-            ]
-          : []),
+        ...editColumns(onEdit),
       ]),
     [onEdit],
   );

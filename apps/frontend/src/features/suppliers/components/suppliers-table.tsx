@@ -1,8 +1,8 @@
-import { Button } from '@mui/material';
 import { useMemo } from 'react';
 import {
   DataTable,
   createDataTableColumnHelper,
+  editColumns,
   type DataTableProps,
 } from '@/components/data-table/data-table';
 import { SupplierStatusChip } from '@/features/suppliers/components/supplier-status-chip';
@@ -35,19 +35,7 @@ export function SuppliersTable({ onEdit, ...props }: SuppliersTableProps) {
           header: 'Updated',
           cell: (info) => formatDate(info.getValue()),
         }),
-        ...(onEdit
-          ? [
-              helper.display({
-                id: 'actions',
-                header: '',
-                cell: ({ row }) => (
-                  <Button size="small" onClick={() => onEdit(row.original)}>
-                    Edit
-                  </Button>
-                ),
-              }),
-            ]
-          : []),
+        ...editColumns(onEdit),
       ]),
     [onEdit],
   );
