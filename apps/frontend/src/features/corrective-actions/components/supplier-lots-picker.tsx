@@ -1,15 +1,6 @@
-import {
-  Alert,
-  Checkbox,
-  FormControlLabel,
-  FormGroup,
-  FormHelperText,
-  Skeleton,
-  Typography,
-} from '@mui/material';
+import { LotsChecklist } from '@/components/lots-checklist';
 import { useSupplierLots } from '@/features/corrective-actions/api/get-supplier-lots';
 import { inSentence, labelOf, lotStatusLabels } from '@/lib/labels';
-import { errorMessage } from '@/lib/query-client';
 
 interface SupplierLotsPickerProps {
   supplierId: number | null;
@@ -18,45 +9,27 @@ interface SupplierLotsPickerProps {
   error?: string;
 }
 
-export function SupplierLotsPicker({
-  supplierId,
-  value,
-  onChange,
-  error,
-}: SupplierLotsPickerProps) {
+/** The supplier's decided lots, to tick those a SCAR is about. */
+export function SupplierLotsPicker({ supplierId, ...props }: SupplierLotsPickerProps) {
   const lots = useSupplierLots(supplierId);
-  if (supplierId === null)
-    return <Typography color="text.secondary">Choose the supplier to see its lots.</Typography>;
-  if (lots.isPending)
-    return <Skeleton variant="rounded" height={64} aria-label="Loading the supplier's lots" />;
-  if (lots.isError)
-    return <Alert severity="error">The lots could not be loaded: {errorMessage(lots.error)}</Alert>;
-  if (lots.data.items.length === 0) {
-    return <Typography color="text.secondary">This supplier has no decided lot yet.</Typography>;
-  }
-  const toggle = (id: number, on: boolean) =>
-    onChange(on ? [...value, id] : value.filter((v) => v !== id));
   return (
-    <div>
-      <Typography variant="subtitle2">Lots</Typography>
-      <FormGroup
-        aria-label="Lots of the supplier"
-        sx={{ maxHeight: 220, overflowY: 'auto', flexWrap: 'nowrap' }}
-      >
-        {lots.data.items.map((lot) => (
-          <FormControlLabel
-            key={lot.id}
-            control={
-              <Checkbox
-                checked={value.includes(lot.id)}
-                onChange={(e) => toggle(lot.id, e.target.checked)}
-              />
-            }
-            label={`Lot ${lot.id} · PO ${lot.poNumber} · ${lot.product.sku} · ${inSentence(labelOf(lotStatusLabels, lot.status))}`}
-          />
-        ))}
-      </FormGroup>
-      {error && <FormHelperText error>{error}</FormHelperText>}
-    </div>
+    <LotsChecklist
+      supplierId={supplierId}
+      query={lots}
+      lots={lots.data?.items}
+      describe={(lot) =>
+        `Lot ${lot.id} · PO ${lot.poNumber} · ${lot.product.sku} · ${inSentence(labelOf(lotStatusLabels, lot.status))}`
+      }
+      words={{
+        title: 'Lots',
+        listLabel: 'Lots of the supplier',
+        noSupplier: 'Choose the supplier to see its lots.',
+        loading: "Loading the supplier's lots",
+        loadFailed: 'The lots could not be loaded',
+        none: 'This supplier has no decided lot yet.',
+      }}
+      scroll
+      {...props}
+    />
   );
 }
