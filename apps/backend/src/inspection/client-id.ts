@@ -29,6 +29,30 @@ export async function earlierRecord(
   return Number(row.recordId);
 }
 
+/**
+ * What `clientId` made earlier under `parent` (a reading on this sample, a sample in this
+ * lot) as `load` gives it with its parent's id, or null; 409 when it made one under
+ * another parent.
+ */
+export async function earlierRecordUnder<T>(
+  em: EntityManager,
+  clientId: string,
+  kind: ClientKeyKind,
+  parent: { kind: string; id: number },
+  load: (id: number) => Promise<{ parentId: number; answer: T }>,
+): Promise<T | null> {
+  const id = await earlierRecord(em, clientId, kind);
+  if (id === null) return null;
+  const { parentId, answer } = await load(id);
+  if (parentId !== parent.id) {
+    throw DomainError.conflict(
+      `clientId ${clientId} was already used for a ${kind} of ${parent.kind} ${parentId}; make a new id for a new ${kind}.`,
+      'clientId',
+    );
+  }
+  return answer;
+}
+
 /** Keeps the client's id with the record it made, in the caller's transaction. */
 export async function keepClientKey(
   em: EntityManager,

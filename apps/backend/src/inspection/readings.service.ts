@@ -1,6 +1,6 @@
 import { ForbiddenException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/core';
-import { earlierRecord } from './client-id';
+import { earlierRecordUnder } from './client-id';
 import { Reading } from './entities/reading.entity';
 import { readingView } from './views';
 import { DomainError } from '../common/domain-error';
@@ -77,22 +77,22 @@ export class ReadingsService {
   }
 
   /** The reading a client id already made, on this sample; 409 when it made one elsewhere. */
-  private async byClientId(clientId: string, sampleId: number) {
+  private byClientId(clientId: string, sampleId: number) {
     const em = this.em.fork();
-    const id = await earlierRecord(em, clientId, 'reading');
-    if (id === null) return null;
-    const reading = await em.findOneOrFail(
-      Reading,
-      { id },
-      { populate: ['sample', 'takenBy', 'voidedBy'] },
+    return earlierRecordUnder(
+      em,
+      clientId,
+      'reading',
+      { kind: 'sample', id: sampleId },
+      async (id) => {
+        const reading = await em.findOneOrFail(
+          Reading,
+          { id },
+          { populate: ['sample', 'takenBy', 'voidedBy'] },
+        );
+        return { parentId: reading.sample.id, answer: readingView(reading) };
+      },
     );
-    if (reading.sample.id !== sampleId) {
-      throw DomainError.conflict(
-        `clientId ${clientId} was already used for a reading of sample ${reading.sample.id}; make a new id for a new reading.`,
-        'clientId',
-      );
-    }
-    return readingView(reading);
   }
 
   async void(id: number, dto: VoidReadingDto, actor: RequestUser) {

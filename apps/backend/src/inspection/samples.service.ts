@@ -8,7 +8,7 @@ import type { ConductorSpec } from '../products/entities/conductor-spec.entity';
 import { User } from '../users/entities/user.entity';
 import { CreateSampleDto } from './dto/create-sample.dto';
 import { Sample } from './entities/sample.entity';
-import { earlierRecord, keepClientKey } from './client-id';
+import { earlierRecordUnder, keepClientKey } from './client-id';
 import { assertLotOpen } from './lot-status';
 import { sampleView } from './views';
 import { clock } from '../common/clock';
@@ -42,22 +42,16 @@ export class SamplesService {
   }
 
   /** The sample a client id already made, in this lot; 409 when it made one elsewhere. */
-  private async byClientId(clientId: string, lotId: number) {
+  private byClientId(clientId: string, lotId: number) {
     const em = this.em.fork();
-    const id = await earlierRecord(em, clientId, 'sample');
-    if (id === null) return null;
-    const sample = await em.findOneOrFail(
-      Sample,
-      { id },
-      { populate: ['lot', 'createdBy', 'readings.takenBy', 'readings.voidedBy'] },
-    );
-    if (sample.lot.id !== lotId) {
-      throw DomainError.conflict(
-        `clientId ${clientId} was already used for a sample of lot ${sample.lot.id}; make a new id for a new sample.`,
-        'clientId',
+    return earlierRecordUnder(em, clientId, 'sample', { kind: 'lot', id: lotId }, async (id) => {
+      const sample = await em.findOneOrFail(
+        Sample,
+        { id },
+        { populate: ['lot', 'createdBy', 'readings.takenBy', 'readings.voidedBy'] },
       );
-    }
-    return sampleView(sample);
+      return { parentId: sample.lot.id, answer: sampleView(sample) };
+    });
   }
 
   private async createNew(lotId: number, dto: CreateSampleDto, actor: RequestUser) {
