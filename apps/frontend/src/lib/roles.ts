@@ -1,5 +1,6 @@
-export const ROLES = ['clerk', 'qa_lead', 'purchasing', 'admin'] as const;
-export type Role = (typeof ROLES)[number];
+import { ROLES, type Role } from '@gaugeproof/api-types';
+/** The roles are the contract's (libs/api-types). */
+export { ROLES, type Role };
 
 export const roleLabels: Record<Role, string> = {
   clerk: 'Receiving clerk',

@@ -97,7 +97,7 @@ export function LotBenchRoute() {
               canVoid={(p) =>
                 user.role !== 'clerk' ||
                 // A clerk voids their own photo until the lot is decided.
-                (OPEN_STATUSES.includes(data.status) && p.uploadedBy.id === user.id)
+                (OPEN_STATUSES.includes(data.status) && p.uploadedBy?.id === user.id)
               }
             />
           </SectionBoundary>

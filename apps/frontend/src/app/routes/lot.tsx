@@ -107,7 +107,7 @@ export function LotRoute() {
                   !frozen &&
                   (VOIDERS.includes(user.role) ||
                     // A clerk corrects their own slip until the lot is decided.
-                    (user.role === 'clerk' && open && r.takenBy.id === user.id))
+                    (user.role === 'clerk' && open && r.takenBy?.id === user.id))
                 }
               />
             </SectionBoundary>
@@ -127,7 +127,7 @@ export function LotRoute() {
                   !frozen &&
                   (VOIDERS.includes(user.role) ||
                     // A clerk voids their own photo until the lot is decided.
-                    (user.role === 'clerk' && open && p.uploadedBy.id === user.id))
+                    (user.role === 'clerk' && open && p.uploadedBy?.id === user.id))
                 }
               />
             </SectionBoundary>

@@ -1,9 +1,2 @@
-import type { Role } from '@/lib/roles';
-
-/** The signed-in user as the server describes it (`GET /api/auth/me`). */
-export interface SessionUser {
-  id: number;
-  email: string;
-  name: string;
-  role: Role;
-}
+/** The signed-in user as the server describes it (`GET /api/auth/me`): the contract's shape. */
+export type { SessionUser } from '@gaugeproof/api-types';

@@ -1,60 +1,32 @@
 import {
+  type Decision,
   type DecisionOutcome,
+  type DecisionResult,
   type InspectionSeverity,
+  type LotDetail,
   type Recommendation,
+  type SwitchingNotice,
 } from '@gaugeproof/api-types';
-/** Shapes of docs/api-conventions.md the decision panel works with. */
+/** The decision panel's enums and shapes are the contract's (libs/api-types). */
 export { type DecisionOutcome, type InspectionSeverity, type Recommendation };
-
-export interface Decision {
-  id: number;
-  outcome: DecisionOutcome;
-  recommendation: Recommendation;
-  reason: string;
-  decidedBy: { id: number; name: string };
-  decidedAt: string;
-  lotVersion: number;
-  ncrNumber: string | null;
-}
-
-export interface EvaluationCounts {
-  samplesPlanned: number;
-  samplesTested: number;
-  nonconforming: number;
-  inconclusive: number;
-  recommendation: Recommendation;
-  message: string;
-}
+export type {
+  Decision,
+  DecisionResult,
+  Evaluation as EvaluationCounts,
+  SwitchingNotice,
+} from '@gaugeproof/api-types';
 
 /** What the panel needs of LotDetail. */
-export interface DecidableLot {
-  id: number;
-  status: string;
-  version: number;
-  quantity: number;
-  unit: string;
-  evaluation: EvaluationCounts;
-  ncrNumber: string | null;
-}
+export type DecidableLot = Pick<
+  LotDetail,
+  'id' | 'status' | 'version' | 'quantity' | 'unit' | 'evaluation' | 'ncrNumber'
+>;
 
-/** What a decision did to the product's ISO 2859-1 switching state. */
-export interface SwitchingNotice {
-  from: InspectionSeverity;
-  to: InspectionSeverity;
-  changed: boolean;
-  reducedAvailable: boolean;
-  message: string;
-}
+/** A decision the server wrote (not a concession waiting for its second approval). */
+export type WrittenDecision = DecisionResult & { decision: Decision; switching: SwitchingNotice };
 
-export interface DecisionResult {
-  /** True when a concession was asked for and waits for a second approval (nothing decided). */
-  pendingApproval?: boolean;
-  decision: Decision;
-  lot: { id: number; status: string; version: number };
-  evaluation: EvaluationCounts;
-  ncrNumber: string | null;
-  switching: SwitchingNotice;
-}
+export const isWrittenDecision = (r: DecisionResult): r is WrittenDecision =>
+  !r.pendingApproval && r.decision !== null && r.switching !== null;
 
 export const outcomeLabels: Record<DecisionOutcome, string> = {
   accept: 'Accept',

@@ -6,7 +6,7 @@ import {
   type InstrumentKind,
   type ResolutionUnit,
 } from '@gaugeproof/api-types';
-// The enums are the contract's (libs/api-types).
+// The enums and the shape are the contract's (libs/api-types).
 export {
   INSTRUMENT_KINDS,
   RESOLUTION_UNITS,
@@ -15,25 +15,7 @@ export {
   type ResolutionUnit,
 };
 
-export interface Instrument {
-  id: number;
-  kind: InstrumentKind;
-  name: string;
-  serial: string;
-  resolution: number;
-  resolutionUnit: ResolutionUnit;
-  calibratedOn: string;
-  calibrationDueOn: string;
-  active: boolean;
-  calibrationStatus: CalibrationStatus;
-  daysToDue: number;
-  /** Stated accuracy ± % of reading, ± an amount in resolutionUnit, certificate U (k = 2). */
-  accuracyPercentOfReading: number | null;
-  accuracyAbsolute: number | null;
-  calibrationUncertainty: number | null;
-  /** Moves on every save; an edit sends the one it was made on (a stale one: 409). */
-  version: number;
-}
+export type { Instrument } from '@gaugeproof/api-types';
 
 export { instrumentKindLabels as kindLabels } from '@/lib/labels';
 

@@ -1,18 +1,7 @@
-export const SUPPLIER_STATUSES = ['approved', 'probation', 'suspended'] as const;
-export type SupplierStatus = (typeof SUPPLIER_STATUSES)[number];
-
-export interface Supplier {
-  id: number;
-  name: string;
-  code: string;
-  contactEmail: string | null;
-  status: SupplierStatus;
-  notes: string | null;
-  /** Moves on every save; an edit sends the one it was made on (a stale one: 409). */
-  version: number;
-  createdAt: string;
-  updatedAt: string;
-}
+import { SUPPLIER_STATUSES, type SupplierStatus } from '@gaugeproof/api-types';
+/** The enum and the shape are the contract's (libs/api-types). */
+export { SUPPLIER_STATUSES, type SupplierStatus };
+export type { Supplier } from '@gaugeproof/api-types';
 
 export const supplierStatusLabels: Record<SupplierStatus, string> = {
   approved: 'Approved',

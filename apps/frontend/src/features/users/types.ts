@@ -1,13 +1,2 @@
-import type { Role } from '@/lib/roles';
-
-export interface User {
-  id: number;
-  email: string;
-  name: string;
-  role: Role;
-  active: boolean;
-  /** ISO date-time. */
-  createdAt: string;
-  /** The edit version: an edit names it, and a stale one is answered 409. */
-  version: number;
-}
+/** An account as the server sends it: the contract's shape (libs/api-types). */
+export type { User } from '@gaugeproof/api-types';

@@ -17,6 +17,7 @@ const event = (i: number): TimelineEvent => ({
   action: 'reading.create',
   entityType: 'reading',
   entityId: i,
+  lotId: 1,
   summary: `Event number ${i}`,
   before: null,
   after: null,

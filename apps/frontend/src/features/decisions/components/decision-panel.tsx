@@ -17,7 +17,11 @@ import { DecisionForm } from '@/features/decisions/components/decision-form';
 import { DecisionHistory } from '@/features/decisions/components/decision-history';
 import { SwitchingNoticeView } from '@/features/decisions/components/switching-notice';
 import { decisionConflict } from '@/features/decisions/lib/conflict';
-import type { DecidableLot, DecisionResult } from '@/features/decisions/types';
+import {
+  isWrittenDecision,
+  type DecidableLot,
+  type WrittenDecision,
+} from '@/features/decisions/types';
 import { splitServerErrors } from '@/lib/server-field-errors';
 import { inSentence, labelOf, lotStatusLabels } from '@/lib/labels';
 import { queryKeys } from '@/lib/query-keys';
@@ -29,7 +33,7 @@ const DECIDABLE = ['awaiting_decision', 'accepted', 'accepted_on_concession', 'r
 export function DecisionPanel({ lot, meId }: { lot: DecidableLot; meId: number }) {
   const queryClient = useQueryClient();
   const decide = useCreateDecision();
-  const [result, setResult] = useState<DecisionResult | null>(null);
+  const [result, setResult] = useState<WrittenDecision | null>(null);
   const [last, setLast] = useState<DecisionInput | null>(null);
   const [revising, setRevising] = useState(false);
   const [asked, setAsked] = useState(false);
@@ -53,7 +57,7 @@ export function DecisionPanel({ lot, meId }: { lot: DecidableLot; meId: number }
     setResult(null);
     setAsked(false);
     const answer = await decide.mutateAsync({ lotId: lot.id, version, ...input, approveReduced });
-    if (answer.pendingApproval) {
+    if (!isWrittenDecision(answer)) {
       // A concession against a reject waits for a second QA lead or an admin.
       setAsked(true);
       setRevising(false);

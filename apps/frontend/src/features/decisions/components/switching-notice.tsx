@@ -9,15 +9,15 @@ import {
   DialogTitle,
 } from '@mui/material';
 import { useState } from 'react';
-import type { DecisionResult } from '@/features/decisions/types';
+import type { WrittenDecision } from '@/features/decisions/types';
 
 interface SwitchingNoticeProps {
-  result: DecisionResult;
+  result: WrittenDecision;
   approving: boolean;
   onApproveReduced: () => void;
 }
 
-const titleOf = (r: DecisionResult) => {
+const titleOf = (r: WrittenDecision) => {
   const s = r.switching;
   if (s.changed && s.to === 'discontinued') return 'Inspection discontinued for this product';
   if (s.changed) return `Inspection moves from ${s.from} to ${s.to}`;

@@ -20,6 +20,8 @@ const conductor: Conductor = {
   nominalAreaMm2: 21.15,
   claimedMaterial: 'copper',
   claimedStrands: null,
+  conductorClass: null,
+  active: true,
 };
 const instrument = (over: Partial<Instrument>): Instrument => ({
   id: 1,
@@ -33,6 +35,12 @@ const instrument = (over: Partial<Instrument>): Instrument => ({
   active: true,
   calibrationStatus: 'ok',
   daysToDue: 100,
+  accuracyPercentOfReading: null,
+  accuracyAbsolute: null,
+  calibrationUncertainty: null,
+  version: 1,
+  createdAt: '2026-01-10T08:00:00.000Z',
+  updatedAt: '2026-01-10T08:00:00.000Z',
   ...over,
 });
 const instruments = [

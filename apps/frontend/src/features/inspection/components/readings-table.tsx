@@ -145,7 +145,7 @@ export function ReadingsTable({ readings, canVoid, onVoid }: ReadingsTableProps)
                 <VerdictChip verdict={r.verdict} />
               </TableCell>
               <TableCell>
-                <span style={{ whiteSpace: 'nowrap' }}>{r.takenBy.name}</span>
+                <span style={{ whiteSpace: 'nowrap' }}>{r.takenBy?.name ?? '—'}</span>
                 <br />
                 <span style={{ whiteSpace: 'nowrap' }}>{formatDateTime(r.takenAt)}</span>
                 <Typography variant="caption" component="div" color="text.secondary">

@@ -31,6 +31,8 @@ const conductor = (
   nominalAreaMm2: 21.15,
   claimedMaterial: 'copper',
   claimedStrands,
+  conductorClass: null,
+  active: true,
 });
 
 const reading = (voided: boolean) => ({ voided }) as Reading;

@@ -24,6 +24,12 @@ const balance: Instrument = {
   active: true,
   calibrationStatus: 'ok',
   daysToDue: 200,
+  accuracyPercentOfReading: null,
+  accuracyAbsolute: null,
+  calibrationUncertainty: null,
+  version: 1,
+  createdAt: '2026-01-01T08:00:00.000Z',
+  updatedAt: '2026-01-01T08:00:00.000Z',
 };
 const meter: Instrument = {
   ...balance,

@@ -50,7 +50,8 @@ export function PhotoViewerDialog({
             />
             <Typography variant="caption" color="text.secondary" component="p" sx={{ mt: 1 }}>
               {photo.width} × {photo.height} px · {(photo.sizeBytes / 1024).toFixed(0)} kB ·
-              uploaded by {photo.uploadedBy.name}, {formatDateTime(photo.createdAt)} · SHA-256{' '}
+              uploaded {photo.uploadedBy ? `by ${photo.uploadedBy.name}, ` : ''}
+              {formatDateTime(photo.createdAt)} · SHA-256{' '}
               <span style={{ fontFamily: 'monospace', wordBreak: 'break-all' }}>
                 {photo.sha256}
               </span>

@@ -46,6 +46,7 @@ const SPOOL: Product = {
   inspectionLevel: 'S-3',
   aql: '1.0',
   minAreaRatio: 0.98,
+  concessionNeedsApproval: false,
   active: true,
   conductors: [
     {
@@ -57,11 +58,15 @@ const SPOOL: Product = {
       nominalAreaMm2: 21.15,
       claimedMaterial: 'copper',
       claimedStrands: null,
+      conductorClass: null,
+      active: true,
     },
   ],
   inspectionState: { severity: 'normal', reason: null, reducedEligible: false },
   warnings: [],
   version: 2,
+  createdAt: '2026-11-02T09:00:00.000Z',
+  updatedAt: '2026-11-02T09:00:00.000Z',
 };
 
 // A large MUI form under jsdom on a shared machine: allow time.

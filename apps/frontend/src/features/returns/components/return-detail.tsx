@@ -207,12 +207,12 @@ function ReturnFacts({ ret }: { ret: VendorReturn }) {
   if (ret.emailedAt) facts.push(`Notice e-mailed ${formatDate(ret.emailedAt)}`);
   if (ret.shipment)
     facts.push(
-      `Shipped ${formatCalendarDate(ret.shipment.shippedOn)} by ${ret.shipment.carrier}${ret.shipment.trackingNumber ? `, tracking ${ret.shipment.trackingNumber}` : ''}, ${countOf(ret.shipment.quantity, ret.lots[0]?.unit ?? '')}`,
+      `Shipped ${formatCalendarDate(ret.shipment.shippedOn)}${ret.shipment.carrier ? ` by ${ret.shipment.carrier}` : ''}${ret.shipment.trackingNumber ? `, tracking ${ret.shipment.trackingNumber}` : ''}${ret.shipment.quantity !== null ? `, ${countOf(ret.shipment.quantity, ret.lots[0]?.unit ?? '')}` : ''}`,
     );
   if (ret.acknowledgedAt) facts.push(`Acknowledged ${formatDate(ret.acknowledgedAt)}`);
   if (ret.credit)
     facts.push(
-      `Credit note ${ret.credit.creditNoteNumber}: ${formatMoney(ret.credit.amount, ret.currency)}`,
+      `Credit note ${ret.credit.creditNoteNumber}${ret.credit.amount !== null ? `: ${formatMoney(ret.credit.amount, ret.currency)}` : ''}`,
     );
   if (ret.cancelReason && ret.cancelledAt)
     facts.push(`Cancelled ${formatDate(ret.cancelledAt)}: ${ret.cancelReason}`);
