@@ -12,17 +12,15 @@ import {
   UniqueConstraintViolationException,
   ForeignKeyConstraintViolationException,
 } from '@mikro-orm/core';
+import type { ErrorBody as ContractErrorBody, ImportErrorBody } from '@gaugeproof/api-types';
 import type { Request, Response } from 'express';
 import { DomainError, type FieldError } from './domain-error';
 
-export interface ErrorBody {
-  statusCode: number;
-  error: string;
-  message: string | string[];
-  path: string;
-  requestId: string;
+/** The contract's ErrorBody (libs/api-types), with what a rule adds beside it (`current`, an import's rows). */
+type ErrorBody = Omit<ContractErrorBody, 'errors'> & {
+  errors: ContractErrorBody['errors'] | ImportErrorBody['errors'];
   [extra: string]: unknown;
-}
+};
 
 const STATUS_NAMES: Record<number, string> = {
   400: 'Bad Request',

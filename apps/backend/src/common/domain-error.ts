@@ -1,8 +1,6 @@
-/** One problem, on the request field it is about when there is one. */
-export interface FieldError {
-  field: string | null;
-  message: string;
-}
+import type { FieldError } from '@gaugeproof/api-types';
+/** One problem, on the request field it is about when there is one: the contract's shape. */
+export type { FieldError };
 
 /**
  * What a rule refuses, and why: `invalid` (400: the input cannot be read that way),

@@ -2,7 +2,6 @@ import type { QueryClient } from '@tanstack/react-query';
 import { matchPath } from 'react-router';
 import { paths } from '@/config/paths';
 import { instrumentsQueryOptions } from '@/features/inspection/api/get-instruments';
-import type { LotDetail } from '@/features/inspection/types';
 import { lotQueryOptions } from '@/lib/lots-api';
 
 /** The Lot page's code: one loader, so the router and the warm start fetch one chunk. */
@@ -21,6 +20,6 @@ export function warmStart(client: QueryClient, pathname: string): void {
   const id = Number(lot?.params.id);
   if (!lot || !Number.isInteger(id) || id <= 0) return;
   void loadLotRoute();
-  void client.prefetchQuery(lotQueryOptions<LotDetail>(id));
+  void client.prefetchQuery(lotQueryOptions(id));
   void client.prefetchQuery(instrumentsQueryOptions({ active: true }));
 }

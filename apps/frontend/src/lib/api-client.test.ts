@@ -42,6 +42,7 @@ describe('apiRequest', () => {
       statusCode: 401,
       error: 'Unauthorized',
       message: 'E-mail or password is not correct.',
+      errors: [{ field: null, message: 'E-mail or password is not correct.' }],
       path: '/api/auth/login',
       requestId: 'req-1',
     };
@@ -65,6 +66,10 @@ describe('apiRequest', () => {
         statusCode: 400,
         error: 'Bad Request',
         message,
+        errors: [
+          { field: 'email', message: message[0] },
+          { field: 'password', message: message[1] },
+        ],
         path: '/api/users',
         requestId: 'r',
       }),

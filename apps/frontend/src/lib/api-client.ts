@@ -1,24 +1,38 @@
-/** The server's error body (one exception filter shapes every error this way). */
-export interface ApiErrorBody {
-  statusCode: number;
-  error: string;
-  message: string | string[];
-  path: string;
-  requestId: string;
-  /** Each problem with the request field it is about (null when it names none). */
-  errors?: { field?: string | null; message: string }[];
-}
+import type { ErrorBody } from '@gaugeproof/api-types';
 
-function isApiErrorBody(value: unknown): value is ApiErrorBody {
-  if (typeof value !== 'object' || value === null) return false;
+/**
+ * The server's error body: the contract's `ErrorBody` (libs/api-types), which the one
+ * exception filter gives every error: `message`, and `errors: [{field, message}]` naming the
+ * request field each problem is about (null when none). What a rule adds beside it (`current`
+ * on a stale edit's 409) is read where it is needed.
+ */
+export type ApiErrorBody = ErrorBody;
+
+/**
+ * The body as the contract's ErrorBody, or null when the server (or a proxy) sent another.
+ * A body without its `errors` list gets one as the server's filter makes it for a problem
+ * that names no field: each message with field null.
+ */
+export function errorBodyOf(value: unknown): ApiErrorBody | null {
+  if (typeof value !== 'object' || value === null) return null;
   const body = value as Record<string, unknown>;
   const message = body.message;
-  return (
-    typeof body.statusCode === 'number' &&
-    (typeof message === 'string' ||
-      (Array.isArray(message) && message.every((m) => typeof m === 'string')))
-  );
+  if (
+    typeof body.statusCode !== 'number' ||
+    !(
+      typeof message === 'string' ||
+      (Array.isArray(message) && message.every((m) => typeof m === 'string'))
+    )
+  )
+    return null;
+  const listed = body.errors;
+  if (Array.isArray(listed) && listed.every(isProblem)) return value as ApiErrorBody;
+  const errors = [message].flat().map((m) => ({ field: null, message: m }));
+  return { ...(value as Omit<ApiErrorBody, 'errors'>), errors };
 }
+
+const isProblem = (e: unknown) =>
+  typeof e === 'object' && e !== null && typeof (e as { message?: unknown }).message === 'string';
 
 export class ApiError extends Error {
   readonly status: number;
@@ -53,8 +67,8 @@ export interface RequestOptions {
   signal?: AbortSignal;
 }
 
-async function readBody(response: Response): Promise<unknown> {
-  const text = await response.text();
+/** An answer's text as JSON, the text itself when it is none, undefined when empty. */
+export function parseAnswer(text: string): unknown {
   if (text === '') return undefined;
   try {
     return JSON.parse(text) as unknown;
@@ -62,6 +76,10 @@ async function readBody(response: Response): Promise<unknown> {
     return text;
   }
 }
+
+/** The ApiError of a non-2xx answer read outside apiRequest (uploads with their own transport). */
+export const apiErrorOf = (status: number, body: unknown, fallbackMessage: string) =>
+  new ApiError(status, errorBodyOf(body), fallbackMessage);
 
 /**
  * The one way the client talks to the server. It sends the session cookie, speaks
@@ -81,10 +99,10 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
   });
 
   if (response.status === 204) return undefined as T;
-  const body = await readBody(response);
+  const body = parseAnswer(await response.text());
   if (!response.ok) {
     const fallback = response.statusText || `Request failed with status ${response.status}`;
-    throw new ApiError(response.status, isApiErrorBody(body) ? body : null, fallback);
+    throw apiErrorOf(response.status, body, fallback);
   }
   return body as T;
 }

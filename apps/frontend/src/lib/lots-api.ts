@@ -1,12 +1,12 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { Page } from '@gaugeproof/api-types';
+import type { LotDetail, LotSummary, Page, TimelineEvent } from '@gaugeproof/api-types';
 import { api } from '@/lib/api-client';
 import { queryKeys } from '@/lib/query-keys';
 
 /**
  * The lot reads of the API in one module, so every feature asks for a lot, a page of lots
  * or a lot's timeline with the same request under the same key (lib/query-keys.ts): one
- * cache entry per lot, refreshed once. A feature names the fields it reads as `T`.
+ * cache entry per lot, refreshed once. The answers are the contract's shapes (libs/api-types).
  */
 
 /** Filters of GET /api/lots and its CSV export (docs/api-conventions.md). */
@@ -45,27 +45,28 @@ export function lotQueryString(params: LotListParams): string {
 }
 
 /** GET /api/lots: one page of lots. */
-export const getLots = <T>(params: LotListParams, signal?: AbortSignal) =>
-  api.get<Page<T>>(`/lots${lotQueryString(params)}`, signal);
+export const getLots = (params: LotListParams, signal?: AbortSignal) =>
+  api.get<Page<LotSummary>>(`/lots${lotQueryString(params)}`, signal);
 
-export const lotsQueryOptions = <T>(params: LotListParams) =>
+export const lotsQueryOptions = (params: LotListParams) =>
   queryOptions({
     queryKey: queryKeys.lots.list(params),
-    queryFn: ({ signal }) => getLots<T>(params, signal),
+    queryFn: ({ signal }) => getLots(params, signal),
   });
 
 /** GET /api/lots/:id: the Lot page's read model (lot, samples, readings, photos, decisions). */
-export const getLot = <T>(id: number, signal?: AbortSignal) => api.get<T>(`/lots/${id}`, signal);
+export const getLot = (id: number, signal?: AbortSignal) =>
+  api.get<LotDetail>(`/lots/${id}`, signal);
 
-export const lotQueryOptions = <T>(id: number) =>
+export const lotQueryOptions = (id: number) =>
   queryOptions({
     queryKey: queryKeys.lots.detail(id),
-    queryFn: ({ signal }) => getLot<T>(id, signal),
+    queryFn: ({ signal }) => getLot(id, signal),
   });
 
 /** GET /api/lots/:id/timeline: the lot's audit events, oldest first. */
-export const lotTimelineQueryOptions = <T>(lotId: number) =>
+export const lotTimelineQueryOptions = (lotId: number) =>
   queryOptions({
     queryKey: queryKeys.lots.timeline(lotId),
-    queryFn: ({ signal }) => api.get<T[]>(`/lots/${lotId}/timeline`, signal),
+    queryFn: ({ signal }) => api.get<TimelineEvent[]>(`/lots/${lotId}/timeline`, signal),
   });

@@ -6,7 +6,14 @@ import { toasts } from '@/lib/toast-store';
 const apiError = (status: number) =>
   new ApiError(
     status,
-    { statusCode: status, error: 'x', message: `failed ${status}`, path: '/', requestId: 'r' },
+    {
+      statusCode: status,
+      error: 'x',
+      message: `failed ${status}`,
+      errors: [{ field: null, message: `failed ${status}` }],
+      path: '/',
+      requestId: 'r',
+    },
     '',
   );
 

@@ -8,9 +8,9 @@ export interface SplitServerErrors<F extends string> {
 }
 
 /**
- * Sorts the server's problems onto the form by the field each names (`errors[].field`).
- * A body without that list (an older server) falls back to the field named first in
- * each message ("password must be longer than or equal to 10 characters").
+ * Sorts the server's problems onto the form by the field each names (the contract's
+ * ErrorBody `errors[].field`), never by the wording of a message. A problem naming no field
+ * of this form, and an error that is no server answer (the network), go above the form.
  */
 export function splitServerErrors<F extends string>(
   error: unknown,
@@ -18,23 +18,17 @@ export function splitServerErrors<F extends string>(
 ): SplitServerErrors<F> {
   const result: SplitServerErrors<F> = { fieldErrors: {}, formErrors: [] };
   const listed = isApiError(error) ? error.body?.errors : undefined;
-  if (Array.isArray(listed)) {
-    for (const { field: name, message } of listed) {
-      // A nested property (`conductors.0.gauge`) belongs to the form field holding it.
-      const field = fields.find((c) => c === name || (name ?? '').startsWith(`${c}.`));
-      if (field && result.fieldErrors[field] === undefined) result.fieldErrors[field] = message;
-      else if (!field) result.formErrors.push(message);
-    }
+  if (!listed) {
+    result.formErrors.push(...(isApiError(error) ? error.messages : [errorText(error)]));
     return result;
   }
-  const messages = isApiError(error)
-    ? error.messages
-    : [error instanceof Error ? error.message : String(error)];
-  for (const message of messages) {
-    const firstWord = message.split(/[\s.:]/, 1)[0] ?? '';
-    const field = fields.find((candidate) => candidate === firstWord);
+  for (const { field: name, message } of listed) {
+    // A nested property (`conductors.0.gauge`) belongs to the form field holding it.
+    const field = fields.find((c) => c === name || (name ?? '').startsWith(`${c}.`));
     if (field && result.fieldErrors[field] === undefined) result.fieldErrors[field] = message;
     else if (!field) result.formErrors.push(message);
   }
   return result;
 }
+
+const errorText = (error: unknown) => (error instanceof Error ? error.message : String(error));

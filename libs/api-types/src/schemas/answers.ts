@@ -13,12 +13,15 @@ import { correctiveAction, outboundMessage } from './records.js';
 
 /** GET /api/health */
 export const health = z.object({ status: z.string(), database: z.string(), time: instant });
+export type Health = z.infer<typeof health>;
 
 /** POST /api/auth/login: the session also travels as an httpOnly cookie. */
 export const loginAnswer = z.object({ accessToken: z.string(), user: sessionUser });
+export type LoginAnswer = z.infer<typeof loginAnswer>;
 
 /** POST /api/lots/:id/readings/import */
 export const importAnswer = z.object({ imported: z.number().int(), readings: z.array(reading) });
+export type ImportAnswer = z.infer<typeof importAnswer>;
 
 /** POST /api/products/:id/inspection-state/restore */
 export const restoreAnswer = z.object({
@@ -27,6 +30,7 @@ export const restoreAnswer = z.object({
   reason: z.string().nullable(),
   switching: switchingNotice,
 });
+export type RestoreAnswer = z.infer<typeof restoreAnswer>;
 
 /** PATCH /api/corrective-actions/:id with `send`: the request and what became of its e-mail. */
 export const correctiveActionUpdate = correctiveAction.extend({
@@ -34,15 +38,18 @@ export const correctiveActionUpdate = correctiveAction.extend({
     .object({ status: z.string(), to: z.string().optional(), error: z.string().optional() })
     .optional(),
 });
+export type CorrectiveActionUpdate = z.infer<typeof correctiveActionUpdate>;
 
 /** POST /api/corrective-actions/:id/send */
 export const supplierLinkSent = z.object({
   message: outboundMessage,
   link: z.object({ id, expiresAt: instant }),
 });
+export type SupplierLinkSent = z.infer<typeof supplierLinkSent>;
 
 /** POST /api/corrective-actions/:id/revoke-links */
 export const linksRevoked = z.object({ revoked: z.number().int() });
+export type LinksRevoked = z.infer<typeof linksRevoked>;
 
 /** GET /api/corrective-actions/:id/attachments: what the supplier sent. */
 export const scarAttachment = z.object({
@@ -51,9 +58,11 @@ export const scarAttachment = z.object({
   addedBy: z.string().nullable(),
   createdAt: instant,
 });
+export type ScarAttachment = z.infer<typeof scarAttachment>;
 
 /** A file as the supplier's page lists it. */
 export const portalAttachment = storedFile.extend({ addedAt: instant });
+export type PortalAttachment = z.infer<typeof portalAttachment>;
 
 const portalLot = z.object({
   poNumber: z.string(),

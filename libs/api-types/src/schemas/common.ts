@@ -85,13 +85,29 @@ export const samplingPlan = z.object({
 });
 export type SamplingPlan = z.infer<typeof samplingPlan>;
 
+/** One problem of a request, on the request field it is about (null when it names none). */
+export const fieldError = z.object({ field: z.string().nullable(), message: z.string() });
+export type FieldError = z.infer<typeof fieldError>;
+
 /** Every error body (docs/api-conventions.md, errors). */
 export const errorBody = z.object({
   statusCode: z.number().int(),
   error: z.string(),
   message: z.union([z.string(), z.array(z.string())]),
-  errors: z.array(z.object({ field: z.string().nullable(), message: z.string() })),
+  errors: z.array(fieldError),
   path: z.string(),
   requestId: z.string(),
 });
 export type ErrorBody = z.infer<typeof errorBody>;
+
+/** One problem of a refused CSV import: its spreadsheet row and column (null: the whole file). */
+export const importRowError = z.object({
+  row: z.number().int().nullable(),
+  column: z.string().nullable(),
+  message: z.string(),
+});
+export type ImportRowError = z.infer<typeof importRowError>;
+
+/** A refused CSV import (422): the error body, its problems by row and column. */
+export const importErrorBody = errorBody.extend({ errors: z.array(importRowError) });
+export type ImportErrorBody = z.infer<typeof importErrorBody>;

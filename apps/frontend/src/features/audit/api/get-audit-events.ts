@@ -1,17 +1,13 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { toQueryString } from '@/components/data-table/use-list-params';
-import type { Page } from '@gaugeproof/api-types';
+import type { AuditFacets, Page } from '@gaugeproof/api-types';
 import { api } from '@/lib/api-client';
 import type { TimelineEvent } from '@/features/audit/types';
 
 /** GET /api/audit (admin): page, pageSize, sort, entityType, entityId, action, actorId, from, to. */
 export type AuditListParams = Record<string, string>;
 
-export interface AuditFacets {
-  actions: string[];
-  entityTypes: string[];
-  people: { id: number; name: string; email: string }[];
-}
+export type { AuditFacets };
 
 export const auditKeys = {
   all: ['audit'] as const,

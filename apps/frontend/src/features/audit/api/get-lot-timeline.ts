@@ -1,7 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import type { TimelineEvent } from '@/features/audit/types';
 import { lotTimelineQueryOptions } from '@/lib/lots-api';
 
 // Under ['lots'] so that whatever refreshes a lot refreshes its timeline too.
-export const useLotTimeline = (lotId: number) =>
-  useQuery(lotTimelineQueryOptions<TimelineEvent>(lotId));
+export const useLotTimeline = (lotId: number) => useQuery(lotTimelineQueryOptions(lotId));

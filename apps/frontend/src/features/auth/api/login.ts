@@ -1,8 +1,8 @@
+import type { LoginAnswer } from '@gaugeproof/api-types';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { forgetOfflineAnswers } from '@/lib/offline-answers';
-import type { SessionUser } from '@/features/auth/types';
 import { queryKeys } from '@/lib/query-keys';
 
 export const loginSchema = z.object({
@@ -15,10 +15,7 @@ export const loginSchema = z.object({
 });
 export type LoginInput = z.infer<typeof loginSchema>;
 
-export interface LoginResponse {
-  accessToken: string;
-  user: SessionUser;
-}
+export type LoginResponse = LoginAnswer;
 
 export const login = (input: LoginInput) => api.post<LoginResponse>('/auth/login', input);
 

@@ -1,19 +1,15 @@
+import type { LotSummary } from '@gaugeproof/api-types';
 import { useQuery } from '@tanstack/react-query';
 import { lotsQueryOptions } from '@/lib/lots-api';
 
-export interface SupplierLot {
-  id: number;
-  poNumber: string;
-  status: string;
-  receivedAt: string;
-  product: { sku: string };
-}
+/** A lot as GET /api/lots lists it: the contract's shape. */
+export type SupplierLot = LotSummary;
 
 /** The supplier's decided lots (the ones a corrective action is about), newest first. */
 const DECIDED = ['rejected', 'accepted_on_concession', 'returned', 'accepted'];
 
 export const supplierLotsQueryOptions = (supplierId: number) =>
-  lotsQueryOptions<SupplierLot>({
+  lotsQueryOptions({
     supplierId,
     status: DECIDED,
     pageSize: 100,

@@ -1,25 +1,16 @@
+import type { LinksRevoked, ScarAttachment, SupplierLinkSent } from '@gaugeproof/api-types';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { queryKeys } from '@/lib/query-keys';
 
-export interface ScarFile {
-  id: number;
-  filename: string;
-  contentType: string;
-  sizeBytes: number;
-  addedBy: string;
-  createdAt: string;
-}
+/** A file the supplier sent with its answer: the contract's shape. */
+export type ScarFile = ScarAttachment;
 
 /** E-mails the supplier a signed link (30 days) to answer on its own page. */
 export function useSendToSupplier(id: number) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: () =>
-      api.post<{ message: { status: string; to: string; error: string | null } }>(
-        `/corrective-actions/${id}/send`,
-        {},
-      ),
+    mutationFn: () => api.post<SupplierLinkSent>(`/corrective-actions/${id}/send`, {}),
     meta: { inlineErrors: true },
     onSettled: () => client.invalidateQueries({ queryKey: queryKeys.messages.all }),
   });
@@ -27,7 +18,7 @@ export function useSendToSupplier(id: number) {
 
 export function useRevokeLinks(id: number) {
   return useMutation({
-    mutationFn: () => api.post<{ revoked: number }>(`/corrective-actions/${id}/revoke-links`),
+    mutationFn: () => api.post<LinksRevoked>(`/corrective-actions/${id}/revoke-links`),
     meta: { inlineErrors: true },
   });
 }

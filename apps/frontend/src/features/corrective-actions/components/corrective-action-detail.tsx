@@ -234,7 +234,13 @@ function ScarFiles({ id }: { id: number }) {
                     {f.filename}
                   </Link>
                 }
-                secondary={`${(f.sizeBytes / 1024).toFixed(0)} KB · ${f.addedBy} · ${formatDate(f.createdAt)}`}
+                secondary={[
+                  `${(f.sizeBytes / 1024).toFixed(0)} KB`,
+                  f.addedBy,
+                  formatDate(f.createdAt),
+                ]
+                  .filter(Boolean)
+                  .join(' · ')}
               />
             </ListItem>
           ))}

@@ -1,44 +1,19 @@
+import type { Concession, ConcessionsAwaitingApproval } from '@gaugeproof/api-types';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { queryKeys } from '@/lib/query-keys';
 
-/** GET /api/lots/:id/concessions, newest first. */
-export interface Concession {
-  id: number;
-  lotId: number;
-  status: 'pending' | 'approved' | 'refused';
-  scope: string;
-  quantity: number;
-  unit: string;
-  expiresOn: string;
-  expired: boolean;
-  reason: string;
-  recommendation: string;
-  needsSecondApproval: boolean;
-  requestedBy: { id: number; name: string };
-  requestedAt: string;
-  reviewedBy: { id: number; name: string } | null;
-  reviewedAt: string | null;
-  reviewNote: string | null;
-  decisionId: number | null;
-  version: number;
-}
+/** A concession as GET /api/lots/:id/concessions lists it (newest first): the contract's shape. */
+export type { Concession };
 
 /** GET /api/concessions/awaiting-approval: pending concessions the caller may approve. */
-export interface AwaitingConcession extends Concession {
-  lot: {
-    id: number;
-    poNumber: string;
-    supplier: { id: number; name: string };
-    product: { id: number; sku: string };
-  };
-}
+export type AwaitingConcession = ConcessionsAwaitingApproval['items'][number];
 
 export const useConcessionsAwaitingApproval = () =>
   useQuery({
     queryKey: queryKeys.lots.awaitingApproval(),
     queryFn: ({ signal }) =>
-      api.get<{ items: AwaitingConcession[] }>('/concessions/awaiting-approval', signal),
+      api.get<ConcessionsAwaitingApproval>('/concessions/awaiting-approval', signal),
   });
 
 export const lotConcessionsQueryOptions = (lotId: number) =>

@@ -1,4 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { Page } from '@gaugeproof/api-types';
 import { api } from '@/lib/api-client';
 import type { Instrument } from '@/features/inspection/types';
 import { queryKeys } from '@/lib/query-keys';
@@ -10,17 +11,12 @@ export interface InstrumentListParams {
   pageSize?: number;
 }
 
-interface InstrumentPage {
-  items: Instrument[];
-  total: number;
-}
-
 export const getInstruments = (params: InstrumentListParams, signal?: AbortSignal) => {
   const search = new URLSearchParams();
   if (params.dueWithinDays !== undefined) search.set('dueWithinDays', String(params.dueWithinDays));
   if (params.active !== undefined) search.set('active', String(params.active));
   search.set('pageSize', String(params.pageSize ?? 100));
-  return api.get<InstrumentPage>(`/instruments?${search.toString()}`, signal);
+  return api.get<Page<Instrument>>(`/instruments?${search.toString()}`, signal);
 };
 
 export const instrumentsQueryOptions = (params: InstrumentListParams) =>

@@ -1,5 +1,4 @@
 import { useQuery } from '@tanstack/react-query';
-import type { LotDetail } from '@/features/inspection/types';
 import { lotQueryOptions } from '@/lib/lots-api';
 
-export const useLot = (id: number) => useQuery(lotQueryOptions<LotDetail>(id));
+export const useLot = (id: number) => useQuery(lotQueryOptions(id));

@@ -1,39 +1,39 @@
+import type { ImportAnswer, ImportErrorBody, ImportRowError } from '@gaugeproof/api-types';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { ApiError, type ApiErrorBody } from '@/lib/api-client';
+import { ApiError, apiErrorOf, errorBodyOf, parseAnswer } from '@/lib/api-client';
 import { queryKeys } from '@/lib/query-keys';
 
-export interface ImportRowError {
-  /** Spreadsheet row (the header is row 1, the first reading row 2), or null for the whole file. */
-  row: number | null;
-  column: string | null;
-  message: string;
-}
-
-export interface ImportResult {
-  imported: number;
-  readings: unknown[];
-}
+/** One problem of a refused file: its row (the header is row 1) and column, or null for the whole file. */
+export type { ImportRowError };
+export type ImportResult = ImportAnswer;
 
 /** Thrown on 422: the file was refused as a whole, nothing was saved. */
 export class ImportRejectedError extends ApiError {
   readonly rowErrors: ImportRowError[];
-  constructor(status: number, body: ApiErrorBody, rowErrors: ImportRowError[]) {
-    super(status, body, 'The file was refused.');
-    this.rowErrors = rowErrors;
+  constructor(status: number, body: ImportErrorBody) {
+    // Its problems are rows and columns of the file, not request fields.
+    super(
+      status,
+      { ...body, errors: body.errors.map((e) => ({ field: null, message: e.message })) },
+      'The file was refused.',
+    );
+    this.rowErrors = body.errors;
   }
 }
 
-function rowErrorsOf(body: unknown): ImportRowError[] {
-  const list = (body as { errors?: unknown } | null)?.errors;
-  if (!Array.isArray(list)) return [];
-  return list.map((item: unknown) => {
+/** The contract's ImportErrorBody: an error body whose problems name a row and a column. */
+function importErrorBodyOf(value: unknown): ImportErrorBody | null {
+  const body = errorBodyOf(value);
+  if (!body) return null;
+  const rows = (body.errors as unknown[]).map((item) => {
     const e = item as Partial<Record<'row' | 'column' | 'message', unknown>>;
     return {
       row: typeof e.row === 'number' ? e.row : null,
       column: typeof e.column === 'string' ? e.column : null,
-      message: typeof e.message === 'string' ? e.message : String(e.message),
+      message: String(e.message),
     };
   });
+  return { ...body, errors: rows };
 }
 
 export async function importReadings(lotId: number, file: File): Promise<ImportResult> {
@@ -45,20 +45,11 @@ export async function importReadings(lotId: number, file: File): Promise<ImportR
     headers: { Accept: 'application/json' },
     body: form,
   });
-  const text = await response.text();
-  let body: unknown = undefined;
-  try {
-    body = text ? (JSON.parse(text) as unknown) : undefined;
-  } catch {
-    body = undefined;
-  }
+  const body = parseAnswer(await response.text());
   if (response.ok) return body as ImportResult;
-  const errorBody =
-    body && typeof body === 'object' && 'statusCode' in body ? (body as ApiErrorBody) : null;
-  if (response.status === 422 && errorBody) {
-    throw new ImportRejectedError(422, errorBody, rowErrorsOf(errorBody));
-  }
-  throw new ApiError(response.status, errorBody, response.statusText || 'The import failed.');
+  const rejected = response.status === 422 ? importErrorBodyOf(body) : null;
+  if (rejected) throw new ImportRejectedError(422, rejected);
+  throw apiErrorOf(response.status, body, response.statusText || 'The import failed.');
 }
 
 export function useImportReadings(lotId: number) {

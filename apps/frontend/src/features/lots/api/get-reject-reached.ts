@@ -1,18 +1,13 @@
+import type { RejectReached } from '@gaugeproof/api-types';
 import { useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { LotSummary } from '@/features/lots/types';
 
-export interface RejectReachedLot extends LotSummary {
-  /** Units of the plan with a live nonconforming reading. */
-  nonconformingUnits: number;
-  /** The plan's reject number Re. */
-  reject: number;
-}
+/** A lot at its reject number: its plan's units with a live nonconforming reading and Re. */
+export type RejectReachedLot = RejectReached['items'][number];
 
 /** GET /api/inspection/reject-reached (QA lead, admin): lots at their reject number. */
 export const useRejectReachedLots = () =>
   useQuery({
     queryKey: ['lots', 'reject-reached'],
-    queryFn: ({ signal }) =>
-      api.get<{ items: RejectReachedLot[]; total: number }>('/inspection/reject-reached', signal),
+    queryFn: ({ signal }) => api.get<RejectReached>('/inspection/reject-reached', signal),
   });

@@ -1,4 +1,4 @@
-import { NOTICE_SWITCHES, type NoticeSwitch } from '@gaugeproof/api-types';
+import { NOTICE_SWITCHES, type NoticeSettings, type NoticeSwitch } from '@gaugeproof/api-types';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { queryKeys } from '@/lib/query-keys';
@@ -8,11 +8,7 @@ export { NOTICE_SWITCHES, type NoticeSwitch };
 export type NoticeChoices = Record<NoticeSwitch, boolean> & { digest: boolean };
 
 /** GET /api/me/notices: the user's choices and the notices their role is offered. */
-export interface MyNotices {
-  choices: NoticeChoices;
-  offered: NoticeSwitch[];
-  digestHourUtc: number;
-}
+export type MyNotices = NoticeSettings;
 
 export const myNoticesQueryOptions = () =>
   queryOptions({

@@ -1,11 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { ApiError, type ApiErrorBody } from '@/lib/api-client';
+import { MAX_PHOTO_BYTES } from '@gaugeproof/api-types';
+import { apiErrorOf, parseAnswer } from '@/lib/api-client';
 import type { Photo } from '@/features/photos/types';
 import { queryKeys } from '@/lib/query-keys';
 
-/** Same limits as the server (issue 4): JPEG, PNG or WebP, at most 15 MB. */
+/** Same limits as the server (issue 4): JPEG, PNG or WebP, at most the contract's MAX_PHOTO_BYTES. */
 export const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const;
-export const PHOTO_MAX_BYTES = 15 * 1024 * 1024;
+export const PHOTO_MAX_BYTES = MAX_PHOTO_BYTES;
 
 /** A first check in the browser so a wrong file is refused before it is sent; the server checks the bytes. */
 export function photoFileProblem(file: File): string | null {
@@ -13,7 +14,7 @@ export function photoFileProblem(file: File): string | null {
     return `${file.name} is not a JPEG, PNG or WebP image.`;
   }
   if (file.size > PHOTO_MAX_BYTES) {
-    return `${file.name} is ${(file.size / 1024 / 1024).toFixed(1)} MB; photos may be at most 15 MB.`;
+    return `${file.name} is ${(file.size / 1024 / 1024).toFixed(1)} MB; photos may be at most ${PHOTO_MAX_BYTES / 1024 / 1024} MB.`;
   }
   if (file.size === 0) return `${file.name} is empty.`;
   return null;
@@ -25,14 +26,6 @@ export interface UploadPhotoInput {
   caption?: string;
   /** Fraction sent, 0…1. */
   onProgress?: (fraction: number) => void;
-}
-
-function parse(text: string): unknown {
-  try {
-    return text ? (JSON.parse(text) as unknown) : undefined;
-  } catch {
-    return undefined;
-  }
 }
 
 /** Multipart upload with XMLHttpRequest, the one browser API that reports upload progress. */
@@ -50,14 +43,12 @@ export function uploadPhoto(lotId: number, input: UploadPhotoInput): Promise<Pho
       if (event.lengthComputable) input.onProgress?.(event.loaded / event.total);
     };
     xhr.onload = () => {
-      const body = parse(xhr.responseText);
+      const body = parseAnswer(xhr.responseText);
       if (xhr.status >= 200 && xhr.status < 300) {
         resolve(body as Photo);
         return;
       }
-      const errorBody =
-        body && typeof body === 'object' && 'statusCode' in body ? (body as ApiErrorBody) : null;
-      reject(new ApiError(xhr.status, errorBody, xhr.statusText || 'The upload failed.'));
+      reject(apiErrorOf(xhr.status, body, xhr.statusText || 'The upload failed.'));
     };
     xhr.onerror = () =>
       reject(new TypeError('The server cannot be reached. Check the connection.'));

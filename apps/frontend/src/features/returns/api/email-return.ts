@@ -1,3 +1,4 @@
+import type { OutboundMessage } from '@gaugeproof/api-types';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
@@ -11,12 +12,7 @@ export const emailReturnSchema = z.object({
 export type EmailReturnInput = z.infer<typeof emailReturnSchema>;
 
 /** The stored outbound message; its status tells whether it went (sent, failed, logged). */
-export interface SentMessage {
-  id: number;
-  to: string;
-  status: 'queued' | 'sent' | 'failed' | 'logged';
-  error: string | null;
-}
+export type SentMessage = OutboundMessage;
 
 export const emailReturn = ({ id, input }: { id: number; input: EmailReturnInput }) =>
   api.post<SentMessage>(`/returns/${id}/email`, {

@@ -1,16 +1,11 @@
+import type { LotSummary } from '@gaugeproof/api-types';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { getReturns } from '@/features/returns/api/get-returns';
 import { getLots } from '@/lib/lots-api';
 import { queryKeys } from '@/lib/query-keys';
 
-export interface ReturnableLot {
-  id: number;
-  poNumber: string;
-  quantity: number;
-  unit: string;
-  receivedAt: string;
-  product: { sku: string; description: string };
-}
+/** A lot as GET /api/lots lists it: the contract's shape. */
+export type ReturnableLot = LotSummary;
 
 /**
  * A supplier's rejected lots that are not on an open return yet. A draft return keeps its
@@ -18,10 +13,7 @@ export interface ReturnableLot {
  */
 export async function getReturnableLots(supplierId: number, signal?: AbortSignal) {
   const [lots, open] = await Promise.all([
-    getLots<ReturnableLot>(
-      { status: ['rejected'], supplierId, pageSize: 100, sort: 'receivedAt:asc' },
-      signal,
-    ),
+    getLots({ status: ['rejected'], supplierId, pageSize: 100, sort: 'receivedAt:asc' }, signal),
     getReturns({ supplierId: String(supplierId), status: 'draft', pageSize: '100' }, signal),
   ]);
   const taken = new Set(open.items.flatMap((r) => r.lots.map((l) => l.id)));

@@ -1,60 +1,26 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
-import { ApiError, api, isApiError } from '@/lib/api-client';
+import { api, apiErrorOf, isApiError, parseAnswer } from '@/lib/api-client';
 import { queryKeys } from '@/lib/query-keys';
 import { maxChars } from '@/lib/contract-rules';
-import { TEXT_MIN } from '@gaugeproof/api-types';
-
-interface PortalLot {
-  poNumber: string;
-  packingSlip: string | null;
-  supplierLotCode: string | null;
-  receivedOn: string;
-  quantity: number;
-  unit: string;
-}
+import {
+  MAX_ATTACHMENT_BYTES,
+  TEXT_MIN,
+  type PortalAttachment,
+  type PortalReturnView,
+  type PortalScarView,
+  type PortalView,
+} from '@gaugeproof/api-types';
 
 /** What GET /api/supplier-portal/:token shows for a return notice: that return only. */
-export interface PortalReturn {
-  kind: 'return';
-  number: string;
-  status: string;
-  supplier: { name: string };
-  note: string | null;
-  rmaNumber: string | null;
-  chargeback: { amount: number; currency: string };
-  emailedOn: string | null;
-  lots: PortalLot[];
-  photos: { n: number; poNumber: string; width: number; height: number; takenOn: string }[];
-  evidencePack: { number: string };
-  linkExpiresAt: string;
-}
+export type PortalReturn = PortalReturnView;
 
 /** What GET /api/supplier-portal/:token shows for a SCAR: one request, nothing internal. */
-export interface PortalRequest {
-  kind: 'corrective_action';
-  number: string;
-  status: 'open' | 'responded' | 'verified' | 'reopened' | 'closed';
-  supplier: { name: string };
-  problem: string;
-  dueOn: string;
-  lots: PortalLot[];
-  reopenComment: string | null;
-  answer: {
-    containment: string | null;
-    rootCause: string | null;
-    correctiveAction: string | null;
-    promisedOn: string | null;
-    respondedAt: string | null;
-  };
-  canAnswer: boolean;
-  attachments: { filename: string; contentType: string; sizeBytes: number; addedAt: string }[];
-  evidencePack: { number: string } | null;
-  linkExpiresAt: string;
-}
+export type PortalRequest = PortalScarView;
 
 const path = (token: string, rest = '') => `/supplier-portal/${encodeURIComponent(token)}${rest}`;
-export type PortalPage = PortalRequest | PortalReturn;
+/** The one request or return notice a link is for: the contract's shapes. */
+export type PortalPage = PortalView;
 
 /** Address of a return notice's photo n (1-based) on the public API. */
 export const portalPhotoUrl = (token: string, n: number, size?: 'thumbnail') =>
@@ -97,8 +63,8 @@ export function useSendAnswer(token: string) {
   });
 }
 
-/** 10 MB, as the server (supplier-portal.service.ts MAX_ATTACHMENT_BYTES). */
-export const MAX_FILE_BYTES = 10 * 1024 * 1024;
+/** The largest file a supplier attaches: the contract's limit, as the server checks it. */
+export const MAX_FILE_BYTES = MAX_ATTACHMENT_BYTES;
 
 export function useUploadFile(token: string) {
   const client = useQueryClient();
@@ -110,17 +76,9 @@ export function useUploadFile(token: string) {
         method: 'POST',
         body: form,
       });
-      const body = (await res.json().catch(() => null)) as Record<string, unknown> | null;
-      if (!res.ok) {
-        throw new ApiError(
-          res.status,
-          body && typeof body.statusCode === 'number'
-            ? (body as unknown as ConstructorParameters<typeof ApiError>[1])
-            : null,
-          res.statusText,
-        );
-      }
-      return body;
+      const body = parseAnswer(await res.text());
+      if (!res.ok) throw apiErrorOf(res.status, body, res.statusText);
+      return body as PortalAttachment;
     },
     meta: { inlineErrors: true },
     onSettled: () =>
