@@ -1,9 +1,9 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { todayIso } from '@/lib/dates';
 import type { CorrectiveAction } from '@/features/corrective-actions/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 import { maxChars } from '@/lib/contract-rules';
 import { LOTS_PER_REQUEST, TEXT_MIN } from '@gaugeproof/api-types';
 
@@ -29,10 +29,7 @@ export const createCorrectiveAction = (input: CreateCorrectiveActionInput) =>
   api.post<CorrectiveAction>('/corrective-actions', { ...input, problem: input.problem.trim() });
 
 export function useCreateCorrectiveAction() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: createCorrectiveAction,
-    meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.correctiveActions.all }),
+  return useWriteMutation(createCorrectiveAction, {
+    refresh: [queryKeys.correctiveActions.all],
   });
 }

@@ -1,8 +1,8 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import type { CorrectiveAction, CorrectiveActionStatus } from '@/features/corrective-actions/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 import { maxChars } from '@/lib/contract-rules';
 import { TEXT_MIN } from '@gaugeproof/api-types';
 
@@ -40,11 +40,10 @@ export const updateCorrectiveAction = ({
 }) => api.patch<CorrectiveAction>(`/corrective-actions/${id}`, patch);
 
 export function useUpdateCorrectiveAction({ inlineErrors = false } = {}) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: updateCorrectiveAction,
-    meta: { inlineErrors },
+  return useWriteMutation(updateCorrectiveAction, {
+    refresh: [queryKeys.correctiveActions.all],
     // A 409 means someone else changed it: reload it either way.
-    onSettled: () => queryClient.invalidateQueries({ queryKey: queryKeys.correctiveActions.all }),
+    refreshOnError: true,
+    inlineErrors,
   });
 }

@@ -1,9 +1,9 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { reasonError } from '@/features/decisions/lib/reason-rule';
 import type { DecisionOutcome, DecisionResult, Recommendation } from '@/features/decisions/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 import { parseDecimal, TEXT_MIN } from '@gaugeproof/api-types';
 
 const OUTCOMES = ['accept', 'accept_on_concession', 'reject'] as const;
@@ -83,11 +83,9 @@ export const createDecision = ({ lotId, ...body }: DecisionRequest) =>
   api.post<DecisionResult>(`/lots/${lotId}/decisions`, { ...body, reason: body.reason.trim() });
 
 export function useCreateDecision() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: createDecision,
-    meta: { inlineErrors: true },
+  return useWriteMutation(createDecision, {
+    refresh: [queryKeys.lots.all],
     // The lot, its timeline, the lists and Today all change with a decision.
-    onSettled: () => queryClient.invalidateQueries({ queryKey: queryKeys.lots.all }),
+    refreshOnError: true,
   });
 }

@@ -1,7 +1,7 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { Sample } from '@/features/inspection/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 
 export interface CreateSampleRequest {
   conductorId: number;
@@ -17,10 +17,7 @@ export const createSample = (lotId: number, request: CreateSampleRequest) =>
   api.post<Sample>(`/lots/${lotId}/samples`, request);
 
 export function useCreateSample(lotId: number) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (request: CreateSampleRequest) => createSample(lotId, request),
-    meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.lots.all }),
+  return useWriteMutation((request: CreateSampleRequest) => createSample(lotId, request), {
+    refresh: [queryKeys.lots.all],
   });
 }

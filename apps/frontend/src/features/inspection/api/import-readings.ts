@@ -1,7 +1,7 @@
 import type { ImportAnswer, ImportErrorBody, ImportRowError } from '@gaugeproof/api-types';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { ApiError, apiErrorOf, errorBodyOf, parseAnswer } from '@/lib/api-client';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 
 /** One problem of a refused file: its row (the header is row 1) and column, or null for the whole file. */
 export type { ImportRowError };
@@ -53,10 +53,7 @@ export async function importReadings(lotId: number, file: File): Promise<ImportR
 }
 
 export function useImportReadings(lotId: number) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (file: File) => importReadings(lotId, file),
-    meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.lots.all }),
+  return useWriteMutation((file: File) => importReadings(lotId, file), {
+    refresh: [queryKeys.lots.all],
   });
 }

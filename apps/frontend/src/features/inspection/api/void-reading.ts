@@ -1,8 +1,8 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import type { Reading } from '@/features/inspection/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 import { maxChars } from '@/lib/contract-rules';
 import { TEXT_MIN } from '@gaugeproof/api-types';
 
@@ -21,11 +21,11 @@ export const voidReading = (readingId: number, input: VoidReadingInput) =>
   api.post<Reading>(`/readings/${readingId}/void`, { reason: input.reason.trim() });
 
 export function useVoidReading() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ readingId, ...input }: VoidReadingInput & { readingId: number }) =>
+  return useWriteMutation(
+    ({ readingId, ...input }: VoidReadingInput & { readingId: number }) =>
       voidReading(readingId, input),
-    meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.lots.all }),
-  });
+    {
+      refresh: [queryKeys.lots.all],
+    },
+  );
 }

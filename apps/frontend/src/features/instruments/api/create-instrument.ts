@@ -1,4 +1,3 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { ACCURACY_PERCENT, parseDecimal } from '@gaugeproof/api-types';
 import { api } from '@/lib/api-client';
@@ -9,6 +8,7 @@ import {
   type Instrument,
 } from '@/features/instruments/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 import { maxChars } from '@/lib/contract-rules';
 
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
@@ -96,10 +96,7 @@ export const createInstrument = (body: InstrumentBody) =>
   api.post<Instrument>('/instruments', body);
 
 export function useCreateInstrument() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: createInstrument,
-    meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.instruments.all }),
+  return useWriteMutation(createInstrument, {
+    refresh: [queryKeys.instruments.all],
   });
 }

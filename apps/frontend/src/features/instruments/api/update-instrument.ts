@@ -1,8 +1,8 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { InstrumentBody } from '@/features/instruments/api/create-instrument';
 import type { Instrument } from '@/features/instruments/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 
 export type InstrumentPatch = Partial<InstrumentBody> & { active?: boolean };
 
@@ -26,11 +26,9 @@ export function instrumentPatch(before: Instrument, after: InstrumentBody): Inst
 }
 
 export function useUpdateInstrument() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: updateInstrument,
-    meta: { inlineErrors: true },
+  return useWriteMutation(updateInstrument, {
+    refresh: [queryKeys.instruments.all],
     // A 409 means the list shows an old copy: load it again either way.
-    onSettled: () => queryClient.invalidateQueries({ queryKey: queryKeys.instruments.all }),
+    refreshOnError: true,
   });
 }

@@ -1,9 +1,9 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { LOT_QUANTITY } from '@gaugeproof/api-types';
 import { api } from '@/lib/api-client';
 import type { LotSummary } from '@/features/lots/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 import { maxChars } from '@/lib/contract-rules';
 
 /** Units a delivery is counted in, as packing slips write them. */
@@ -94,10 +94,7 @@ export function toCreateLotRequest(form: CreateLotForm, receiveAgain = false): C
 export const createLot = (request: CreateLotRequest) => api.post<LotSummary>('/lots', request);
 
 export function useCreateLot() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: createLot,
-    meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.lots.all }),
+  return useWriteMutation(createLot, {
+    refresh: [queryKeys.lots.all],
   });
 }

@@ -1,8 +1,8 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { MAX_PHOTO_BYTES } from '@gaugeproof/api-types';
 import { apiErrorOf, parseAnswer } from '@/lib/api-client';
 import type { Photo } from '@/features/photos/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 
 /** Same limits as the server (issue 4): JPEG, PNG or WebP, at most the contract's MAX_PHOTO_BYTES. */
 export const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const;
@@ -57,10 +57,7 @@ export function uploadPhoto(lotId: number, input: UploadPhotoInput): Promise<Pho
 }
 
 export function useUploadPhoto(lotId: number) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (input: UploadPhotoInput) => uploadPhoto(lotId, input),
-    meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.lots.detail(lotId) }),
+  return useWriteMutation((input: UploadPhotoInput) => uploadPhoto(lotId, input), {
+    refresh: [queryKeys.lots.detail(lotId)],
   });
 }

@@ -1,9 +1,10 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import type { Photo } from '@/features/photos/types';
 import { maxChars } from '@/lib/contract-rules';
 import { TEXT_MIN } from '@gaugeproof/api-types';
+import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 
 /** As the server (VoidPhotoDto): the contract's void reason, after trimming. */
 export const voidPhotoSchema = z.object({
@@ -19,11 +20,10 @@ export const voidPhoto = (photoId: number, input: VoidPhotoInput) =>
   api.post<Photo>(`/photos/${photoId}/void`, { reason: input.reason.trim() });
 
 export function useVoidPhoto() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ photoId, ...input }: VoidPhotoInput & { photoId: number }) =>
-      voidPhoto(photoId, input),
-    meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['lots'] }),
-  });
+  return useWriteMutation(
+    ({ photoId, ...input }: VoidPhotoInput & { photoId: number }) => voidPhoto(photoId, input),
+    {
+      refresh: [queryKeys.lots.all],
+    },
+  );
 }

@@ -6,7 +6,6 @@ import {
   parseDecimal,
   PRODUCT_CONDUCTORS,
 } from '@gaugeproof/api-types';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { previewGauge } from '@/features/products/product-rules';
@@ -17,6 +16,7 @@ import {
   type Product,
 } from '@/features/products/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 import { maxChars } from '@/lib/contract-rules';
 
 /** Empty, or a number (typed as the contract's parseDecimal reads it) that passes `test`. */
@@ -143,10 +143,7 @@ export function toProductBody(input: ProductInput): ProductBody {
 export const createProduct = (body: ProductBody) => api.post<Product>('/products', body);
 
 export function useCreateProduct() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: createProduct,
-    meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.products.all }),
+  return useWriteMutation(createProduct, {
+    refresh: [queryKeys.products.all],
   });
 }

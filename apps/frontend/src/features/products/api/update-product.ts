@@ -1,8 +1,8 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { ProductBody, ProductInput } from '@/features/products/api/create-product';
 import type { Product } from '@/features/products/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 
 export type ProductPatch = Partial<Omit<ProductBody, 'supplierId' | 'sku' | 'kind'>> & {
   active?: boolean;
@@ -56,10 +56,7 @@ export function productPatch(before: ProductBody, after: ProductBody): ProductPa
 }
 
 export function useUpdateProduct() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: updateProduct,
-    meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.products.all }),
+  return useWriteMutation(updateProduct, {
+    refresh: [queryKeys.products.all],
   });
 }

@@ -1,14 +1,14 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { LOTS_PER_REQUEST } from '@gaugeproof/api-types';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { costsFromForm, costsSchema } from '@/features/returns/api/cost-schema';
 import type { VendorReturn } from '@/features/returns/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 import { maxChars } from '@/lib/contract-rules';
 
-export const createReturnSchema = z.object({
-  supplierId: z.number('Choose the supplier.').int().positive('Choose the supplier.'),
-  lotIds: z.array(z.number().int()).min(1, 'Choose at least one rejected lot.').max(100),
+/** The fields a return's create and edit forms share. */
+export const returnFields = {
   rmaNumber: z
     .string()
     .trim()
@@ -18,6 +18,15 @@ export const createReturnSchema = z.object({
     .trim()
     .max(...maxChars('long')),
   costs: costsSchema,
+};
+
+export const createReturnSchema = z.object({
+  supplierId: z.number('Choose the supplier.').int().positive('Choose the supplier.'),
+  lotIds: z
+    .array(z.number().int())
+    .min(LOTS_PER_REQUEST.min, 'Choose at least one rejected lot.')
+    .max(LOTS_PER_REQUEST.max),
+  ...returnFields,
 });
 export type CreateReturnForm = z.input<typeof createReturnSchema>;
 
@@ -30,13 +39,7 @@ export const createReturn = (form: CreateReturnForm) =>
   });
 
 export function useCreateReturn() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: createReturn,
-    meta: { inlineErrors: true },
-    onSuccess: async () => {
-      await queryClient.invalidateQueries({ queryKey: queryKeys.returns.all });
-      await queryClient.invalidateQueries({ queryKey: queryKeys.lots.all });
-    },
+  return useWriteMutation(createReturn, {
+    refresh: [queryKeys.returns.all, queryKeys.lots.all],
   });
 }

@@ -1,8 +1,8 @@
 import type { OutboundMessage } from '@gaugeproof/api-types';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 import { maxChars } from '@/lib/contract-rules';
 
 export const emailReturnSchema = z.object({
@@ -21,15 +21,9 @@ export const emailReturn = ({ id, input }: { id: number; input: EmailReturnInput
   });
 
 export function useEmailReturn() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: emailReturn,
-    meta: { inlineErrors: true },
+  return useWriteMutation(emailReturn, {
+    refresh: [queryKeys.messages.all, queryKeys.returns.all, queryKeys.lots.all],
     // E-mailing a draft marks it e-mailed and its lots returned.
-    onSettled: async () => {
-      await queryClient.invalidateQueries({ queryKey: queryKeys.messages.all });
-      await queryClient.invalidateQueries({ queryKey: queryKeys.returns.all });
-      await queryClient.invalidateQueries({ queryKey: queryKeys.lots.all });
-    },
+    refreshOnError: true,
   });
 }

@@ -1,9 +1,9 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import type { ReturnStep } from '@/features/returns/lib/return-steps';
 import type { VendorReturn } from '@/features/returns/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 import { decimalText, maxChars } from '@/lib/contract-rules';
 import { RETURN_AMOUNTS, TEXT_MIN } from '@gaugeproof/api-types';
 
@@ -70,14 +70,9 @@ export const takeReturnStep = ({ id, step, version, body }: StepRequest) =>
   api.post<VendorReturn>(`/returns/${id}/${step}`, { version, ...body });
 
 export function useReturnStep() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: takeReturnStep,
-    meta: { inlineErrors: true },
-    onSettled: async () => {
-      await queryClient.invalidateQueries({ queryKey: queryKeys.returns.all });
-      // Shipping a draft marks its lots returned; cancelling frees them.
-      await queryClient.invalidateQueries({ queryKey: queryKeys.lots.all });
-    },
+  return useWriteMutation(takeReturnStep, {
+    refresh: [queryKeys.returns.all, queryKeys.lots.all],
+    // Shipping a draft marks its lots returned; cancelling frees them.
+    refreshOnError: true,
   });
 }

@@ -1,20 +1,13 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
-import { costsSchema } from '@/features/returns/api/cost-schema';
+import { returnFields } from '@/features/returns/api/create-return';
 import type { ReturnCosts, VendorReturn } from '@/features/returns/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 import { maxChars } from '@/lib/contract-rules';
 
 export const editReturnSchema = z.object({
-  rmaNumber: z
-    .string()
-    .trim()
-    .max(...maxChars('reference')),
-  notes: z
-    .string()
-    .trim()
-    .max(...maxChars('long')),
+  ...returnFields,
   supplierNote: z
     .string()
     .trim()
@@ -25,7 +18,6 @@ export const editReturnSchema = z.object({
     .trim()
     .toUpperCase()
     .regex(/^[A-Z]{3}$/, 'Enter an ISO 4217 code such as EUR or USD.'),
-  costs: costsSchema,
 });
 export type EditReturnForm = z.input<typeof editReturnSchema>;
 
@@ -45,14 +37,10 @@ export const updateReturn = ({ id, patch }: { id: number; patch: ReturnPatch }) 
   api.patch<VendorReturn>(`/returns/${id}`, patch);
 
 export function useUpdateReturn({ inlineErrors = false } = {}) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: updateReturn,
-    meta: { inlineErrors },
+  return useWriteMutation(updateReturn, {
+    refresh: [queryKeys.returns.all, queryKeys.lots.all],
     // A 409 means someone else changed it first: reload it either way.
-    onSettled: async () => {
-      await queryClient.invalidateQueries({ queryKey: queryKeys.returns.all });
-      await queryClient.invalidateQueries({ queryKey: queryKeys.lots.all });
-    },
+    refreshOnError: true,
+    inlineErrors,
   });
 }

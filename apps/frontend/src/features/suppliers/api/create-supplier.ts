@@ -1,8 +1,8 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { SUPPLIER_STATUSES, type Supplier } from '@/features/suppliers/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 import { maxChars } from '@/lib/contract-rules';
 
 /** The supplier form, for creating and editing; the server checks the same rules again. */
@@ -46,10 +46,7 @@ export const toSupplierBody = (input: SupplierInput): SupplierBody => ({
 export const createSupplier = (body: SupplierBody) => api.post<Supplier>('/suppliers', body);
 
 export function useCreateSupplier() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: createSupplier,
-    meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.suppliers.all }),
+  return useWriteMutation(createSupplier, {
+    refresh: [queryKeys.suppliers.all],
   });
 }

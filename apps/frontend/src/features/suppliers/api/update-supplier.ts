@@ -1,8 +1,8 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { SupplierBody } from '@/features/suppliers/api/create-supplier';
 import type { Supplier } from '@/features/suppliers/types';
 import { queryKeys } from '@/lib/query-keys';
+import { useWriteMutation } from '@/lib/write-mutation';
 
 export type SupplierPatch = Partial<SupplierBody>;
 
@@ -27,10 +27,7 @@ export function supplierPatch(supplier: Supplier, body: SupplierBody): SupplierP
 }
 
 export function useUpdateSupplier() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: updateSupplier,
-    meta: { inlineErrors: true },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.suppliers.all }),
+  return useWriteMutation(updateSupplier, {
+    refresh: [queryKeys.suppliers.all],
   });
 }

@@ -1,19 +1,15 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
-import { ROLES, type Role } from '@/lib/roles';
+import { accountFields } from '@/features/users/api/create-user';
+import type { Role } from '@/lib/roles';
 import type { User } from '@/features/users/types';
 import { queryKeys } from '@/lib/query-keys';
-import { maxChars, passwordProblem } from '@/lib/contract-rules';
+import { useWriteMutation } from '@/lib/write-mutation';
+import { passwordProblem } from '@/lib/contract-rules';
 
 /** The edit form: an empty password means "leave it as it is". */
 export const editUserSchema = z.object({
-  name: z
-    .string()
-    .trim()
-    .min(1, 'Enter the person’s name.')
-    .max(...maxChars('name')),
-  role: z.enum(ROLES, 'Choose a role.'),
+  ...accountFields,
   password: z.string().superRefine((value, ctx) => {
     const problem = value === '' ? null : passwordProblem(value);
     if (problem)
@@ -50,10 +46,8 @@ export function editToPatch(user: User, input: EditUserInput): UserPatch {
 }
 
 export function useUpdateUser({ inlineErrors = false } = {}) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: updateUser,
-    meta: { inlineErrors },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.users.all }),
+  return useWriteMutation(updateUser, {
+    refresh: [queryKeys.users.all],
+    inlineErrors,
   });
 }
