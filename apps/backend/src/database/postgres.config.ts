@@ -2,6 +2,7 @@ import { defineConfig as definePostgres } from '@mikro-orm/postgresql';
 import { Migrator } from '@mikro-orm/migrations';
 import { ReflectMetadataProvider, type Options } from '@mikro-orm/core';
 import { ENTITIES } from './entities';
+import { placeInheritedColumns } from '../common/base-entities';
 import { POSTGRES_MIGRATIONS } from '../migrations';
 
 /** PostgreSQL, for a business that outgrows one machine: same entities, own migrations. */
@@ -10,6 +11,8 @@ export function postgresOptions(dbUrl: string): Options {
     clientUrl: dbUrl,
     entities: ENTITIES,
     metadataProvider: ReflectMetadataProvider,
+    // Inherited id and timestamp columns stand where each table has them (base-entities.ts).
+    discovery: { afterDiscovered: placeInheritedColumns },
     extensions: [Migrator],
     forceUtcTimezone: true,
     // One query per relation level, each by an indexed key. The default 'joined' strategy

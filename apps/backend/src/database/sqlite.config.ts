@@ -4,6 +4,7 @@ import { ReflectMetadataProvider, type Options } from '@mikro-orm/core';
 import { dirname } from 'node:path';
 import { mkdirSync } from 'node:fs';
 import { ENTITIES } from './entities';
+import { placeInheritedColumns } from '../common/base-entities';
 import { SQLITE_MIGRATIONS } from '../migrations';
 
 /** The part of a better-sqlite3 database the pool's set-up uses. */
@@ -70,6 +71,8 @@ export function sqliteOptions(dbPath: string): Options {
     dbName: dbPath,
     entities: ENTITIES,
     metadataProvider: ReflectMetadataProvider,
+    // Inherited id and timestamp columns stand where each table has them (base-entities.ts).
+    discovery: { afterDiscovered: placeInheritedColumns },
     extensions: [Migrator],
     forceUtcTimezone: true,
     // One query per relation level, each by an indexed key. The default 'joined' strategy

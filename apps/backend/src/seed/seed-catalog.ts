@@ -105,9 +105,8 @@ const PRODUCTS: {
   },
 ];
 
-type Calibration = { sinceDays: number; dueInDays: number };
-const INSTRUMENTS: {
-  key: string;
+/** A demo instrument; its calibration is dated in days from the day the demo starts. */
+export interface DemoInstrument {
   kind: InstrumentKind;
   name: string;
   serial: string;
@@ -117,8 +116,23 @@ const INSTRUMENTS: {
   accuracyPercentOfReading?: number;
   accuracyAbsolute?: number;
   calibrationUncertainty?: number;
-  cal: Calibration;
-}[] = [
+  cal: { sinceDays: number; dueInDays: number };
+}
+
+/** Registers a demo instrument, calibrated and due relative to `today` (YYYY-MM-DD). */
+export function registerInstrument(
+  em: EntityManager,
+  { cal, ...i }: DemoInstrument,
+  today: string,
+): Instrument {
+  return em.create(Instrument, {
+    ...i,
+    calibratedOn: addDays(today, cal.sinceDays),
+    calibrationDueOn: addDays(today, cal.dueInDays),
+  });
+}
+
+const INSTRUMENTS: (DemoInstrument & { key: string })[] = [
   {
     key: 'balance',
     kind: 'balance',
@@ -222,13 +236,7 @@ export async function seedCatalog(em: EntityManager, now = clock.now()): Promise
     products[key] = product;
   }
   const instruments: Record<string, Instrument> = {};
-  for (const { key, cal, ...i } of INSTRUMENTS) {
-    instruments[key] = em.create(Instrument, {
-      ...i,
-      calibratedOn: addDays(today, cal.sinceDays),
-      calibrationDueOn: addDays(today, cal.dueInDays),
-    });
-  }
+  for (const { key, ...i } of INSTRUMENTS) instruments[key] = registerInstrument(em, i, today);
   await em.flush();
   return { suppliers, products, instruments };
 }

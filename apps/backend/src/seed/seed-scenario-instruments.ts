@@ -1,5 +1,6 @@
 import type { EntityManager } from '@mikro-orm/core';
-import { addDays, isoDate } from '../common/calendar';
+import { isoDate } from '../common/calendar';
+import { registerInstrument, type DemoInstrument } from './seed-catalog';
 import { Instrument, type InstrumentKind } from '../instruments/entities/instrument.entity';
 import type { ReadingMethod } from '../inspection/entities/reading.entity';
 
@@ -7,19 +8,7 @@ import type { ReadingMethod } from '../inspection/entities/reading.entity';
  * The second set of bench instruments, on an older calibration cycle than the catalog's, so
  * the readings of the early months were taken with an instrument in calibration on the day.
  */
-const OLDER_CYCLE: {
-  kind: InstrumentKind;
-  name: string;
-  serial: string;
-  resolution: number;
-  resolutionUnit: string;
-  /** Invented demo specifications and certificate uncertainties (k = 2), in resolutionUnit. */
-  accuracyPercentOfReading?: number;
-  accuracyAbsolute?: number;
-  calibrationUncertainty?: number;
-  sinceDays: number;
-  dueInDays: number;
-}[] = [
+const OLDER_CYCLE: DemoInstrument[] = [
   {
     kind: 'balance',
     name: 'Bench balance B-2',
@@ -28,8 +17,7 @@ const OLDER_CYCLE: {
     resolutionUnit: 'g',
     accuracyAbsolute: 0.03,
     calibrationUncertainty: 0.01,
-    sinceDays: -300,
-    dueInDays: 65,
+    cal: { sinceDays: -300, dueInDays: 65 },
   },
   {
     kind: 'milliohm_meter',
@@ -40,8 +28,7 @@ const OLDER_CYCLE: {
     accuracyPercentOfReading: 0.25,
     accuracyAbsolute: 0.002,
     calibrationUncertainty: 0.001,
-    sinceDays: -280,
-    dueInDays: 85,
+    cal: { sinceDays: -280, dueInDays: 85 },
   },
   {
     kind: 'thermometer',
@@ -51,8 +38,7 @@ const OLDER_CYCLE: {
     resolutionUnit: 'degC',
     accuracyAbsolute: 0.5,
     calibrationUncertainty: 0.2,
-    sinceDays: -290,
-    dueInDays: 75,
+    cal: { sinceDays: -290, dueInDays: 75 },
   },
 ];
 
@@ -70,13 +56,7 @@ export class InstrumentBench {
 
   static async open(em: EntityManager, now: Date): Promise<InstrumentBench> {
     const today = isoDate(now);
-    for (const { sinceDays, dueInDays, ...i } of OLDER_CYCLE) {
-      em.create(Instrument, {
-        ...i,
-        calibratedOn: addDays(today, sinceDays),
-        calibrationDueOn: addDays(today, dueInDays),
-      });
-    }
+    for (const i of OLDER_CYCLE) registerInstrument(em, i, today);
     await em.flush();
     return new InstrumentBench(await em.find(Instrument, { active: true }));
   }

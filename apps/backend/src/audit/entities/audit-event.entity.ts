@@ -1,14 +1,12 @@
-import { Entity, Index, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { Entity, Index, Property, type Opt } from '@mikro-orm/core';
 import { clock } from '../../common/clock';
+import { IdEntity } from '../../common/base-entities';
 
 /** Append-only record of who did what to which record. No API deletes one. */
 @Entity({ tableName: 'audit_events' })
 @Index({ properties: ['entityType', 'entityId'] })
 @Index({ properties: ['lotId', 'at'] })
-export class AuditEvent {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+export class AuditEvent extends IdEntity {
   /** Null for the system (seed, start-up). */
   @Property({ type: 'integer', nullable: true })
   actorId: number | null = null;

@@ -4,7 +4,6 @@ import {
   Enum,
   ManyToMany,
   ManyToOne,
-  PrimaryKey,
   Property,
   Unique,
   type Opt,
@@ -13,17 +12,14 @@ import { Lot } from '../../lots/entities/lot.entity';
 import { Supplier } from '../../suppliers/entities/supplier.entity';
 import { User } from '../../users/entities/user.entity';
 import { CAR_STATUSES, type CorrectiveActionStatus } from '@gaugeproof/api-types';
-import { clock } from '../../common/clock';
+import { TimestampedEntity } from '../../common/base-entities';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { CAR_STATUSES, type CorrectiveActionStatus };
 
 /** Supplier corrective action request (SCAR). */
 @Entity({ tableName: 'corrective_actions' })
-export class CorrectiveAction {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+export class CorrectiveAction extends TimestampedEntity {
   @Property({ type: 'string', length: 20 })
   @Unique()
   number!: string;
@@ -89,10 +85,4 @@ export class CorrectiveAction {
 
   @ManyToOne(() => User)
   createdBy!: User;
-
-  @Property({ type: 'Date' })
-  createdAt: Opt<Date> = clock.now();
-
-  @Property({ type: 'Date', onUpdate: () => clock.now() })
-  updatedAt: Opt<Date> = clock.now();
 }

@@ -1,13 +1,10 @@
-import { Entity, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { Entity, ManyToOne, Property } from '@mikro-orm/core';
 import { CorrectiveAction } from './corrective-action.entity';
-import { clock } from '../../common/clock';
+import { CreatedEntity } from '../../common/base-entities';
 
 /** A file the supplier sent with its answer (PDF or image, checked by content). */
 @Entity({ tableName: 'scar_attachments' })
-export class ScarAttachment {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+export class ScarAttachment extends CreatedEntity {
   @ManyToOne(() => CorrectiveAction, { deleteRule: 'cascade' })
   correctiveAction!: CorrectiveAction;
 
@@ -27,7 +24,4 @@ export class ScarAttachment {
   /** `supplier` (through the link) or the e-mail of the staff member who added it. */
   @Property({ type: 'string', length: 254 })
   addedBy!: string;
-
-  @Property({ type: 'Date' })
-  createdAt: Opt<Date> = clock.now();
 }

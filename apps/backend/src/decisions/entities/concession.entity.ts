@@ -1,9 +1,10 @@
 import { CONCESSION_STATUSES, type ConcessionStatus } from '@gaugeproof/api-types';
-import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { Entity, Enum, Index, ManyToOne, Property, type Opt } from '@mikro-orm/core';
+import { clock } from '../../common/clock';
 import { Lot } from '../../lots/entities/lot.entity';
 import { User } from '../../users/entities/user.entity';
 import { Decision } from './decision.entity';
-import { clock } from '../../common/clock';
+import { IdEntity } from '../../common/base-entities';
 
 /**
  * `pending`: asked for, waiting for a second QA lead or an admin (the product's policy
@@ -18,10 +19,7 @@ export { CONCESSION_STATUSES, type ConcessionStatus };
  */
 @Entity({ tableName: 'concessions' })
 @Index({ properties: ['lot', 'status'] })
-export class Concession {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+export class Concession extends IdEntity {
   @ManyToOne(() => Lot)
   lot!: Lot;
 

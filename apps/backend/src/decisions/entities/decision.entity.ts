@@ -1,8 +1,9 @@
-import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { Entity, Enum, Index, ManyToOne, Property, type Opt } from '@mikro-orm/core';
+import { clock } from '../../common/clock';
 import { Lot } from '../../lots/entities/lot.entity';
 import { User } from '../../users/entities/user.entity';
 import { DECISION_OUTCOMES, type DecisionOutcome } from '@gaugeproof/api-types';
-import { clock } from '../../common/clock';
+import { IdEntity } from '../../common/base-entities';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { DECISION_OUTCOMES, type DecisionOutcome };
@@ -10,10 +11,7 @@ export { DECISION_OUTCOMES, type DecisionOutcome };
 /** Append-only: a later decision supersedes an earlier one, never edits it. */
 @Entity({ tableName: 'decisions' })
 @Index({ properties: ['lot', 'decidedAt'] })
-export class Decision {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+export class Decision extends IdEntity {
   @ManyToOne(() => Lot)
   lot!: Lot;
 

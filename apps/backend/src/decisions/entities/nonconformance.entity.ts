@@ -1,8 +1,8 @@
-import { Entity, ManyToOne, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
+import { Entity, ManyToOne, Property, Unique, type Opt } from '@mikro-orm/core';
 import { Lot } from '../../lots/entities/lot.entity';
 import { Decision } from './decision.entity';
 import { NCR_STATUSES } from '@gaugeproof/api-types';
-import { clock } from '../../common/clock';
+import { CreatedEntity } from '../../common/base-entities';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { NCR_STATUSES };
@@ -10,10 +10,7 @@ export { NCR_STATUSES };
 /** Nonconformance report opened by a reject, numbered NCR-YYYY-NNNN. */
 @Entity({ tableName: 'nonconformances' })
 @Unique({ properties: ['year', 'seq'] })
-export class Nonconformance {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+export class Nonconformance extends CreatedEntity {
   @Property({ type: 'string', length: 20 })
   @Unique()
   number!: string;
@@ -36,7 +33,4 @@ export class Nonconformance {
 
   @Property({ type: 'string', length: 8 })
   status: Opt<string> = 'open';
-
-  @Property({ type: 'Date' })
-  createdAt: Opt<Date> = clock.now();
 }

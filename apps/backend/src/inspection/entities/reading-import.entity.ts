@@ -1,7 +1,8 @@
-import { Entity, ManyToOne, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
+import { Entity, ManyToOne, Property, Unique, type Opt } from '@mikro-orm/core';
+import { clock } from '../../common/clock';
 import { Lot } from '../../lots/entities/lot.entity';
 import { User } from '../../users/entities/user.entity';
-import { clock } from '../../common/clock';
+import { IdEntity } from '../../common/base-entities';
 
 /**
  * A readings CSV import that was recorded, kept so that a retry of it (the same
@@ -10,10 +11,7 @@ import { clock } from '../../common/clock';
  */
 @Entity({ tableName: 'reading_imports' })
 @Unique({ properties: ['lot', 'key'] })
-export class ReadingImport {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+export class ReadingImport extends IdEntity {
   @ManyToOne(() => Lot)
   lot!: Lot;
 

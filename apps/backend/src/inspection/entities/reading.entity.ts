@@ -1,8 +1,10 @@
-import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { Entity, Enum, Index, ManyToOne, Property, type Opt } from '@mikro-orm/core';
+import { clock } from '../../common/clock';
 import { User } from '../../users/entities/user.entity';
 import { Sample } from './sample.entity';
 import { READING_METHODS, VERDICTS, type ReadingMethod, type Verdict } from '@gaugeproof/api-types';
-import { clock } from '../../common/clock';
+import { InheritedColumns } from '../../common/base-entities';
+import { VoidableEntity } from '../../users/entities/voidable-entity';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { READING_METHODS, VERDICTS, type ReadingMethod, type Verdict };
@@ -26,7 +28,7 @@ export interface InstrumentSnapshot {
 export type ReadingInputValue = number | number[];
 
 /**
- * One measurement on a sample. Never deleted: a wrong one is voided with a reason.
+ * One measurement on a sample. Never deleted: a wrong one is voided with a reason (VoidableEntity).
  * The flat result columns feed lists and scorecards; `result` keeps the whole computation.
  */
 @Entity({ tableName: 'readings' })
@@ -39,10 +41,8 @@ export type ReadingInputValue = number | number[];
   name: 'readings_scorecard_covering_index',
   properties: ['sample', 'voided', 'verdict', 'materialMismatch', 'areaRatio', 'measuresAs'],
 })
-export class Reading {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+@InheritedColumns({ before: 'fourWire' })
+export class Reading extends VoidableEntity {
   @ManyToOne(() => Sample)
   sample!: Sample;
 
@@ -93,18 +93,6 @@ export class Reading {
 
   @Property({ type: 'Date' })
   takenAt: Opt<Date> = clock.now();
-
-  @Property({ type: 'boolean' })
-  voided: Opt<boolean> = false;
-
-  @Property({ type: 'text', nullable: true })
-  voidReason: string | null = null;
-
-  @ManyToOne(() => User, { nullable: true })
-  voidedBy: User | null = null;
-
-  @Property({ type: 'Date', nullable: true })
-  voidedAt: Date | null = null;
 
   /** Resistance readings: four-wire (Kelvin) or not; null for the other methods. */
   @Property({ type: 'boolean', nullable: true })

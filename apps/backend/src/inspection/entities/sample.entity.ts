@@ -1,24 +1,13 @@
-import {
-  Collection,
-  Entity,
-  ManyToOne,
-  OneToMany,
-  PrimaryKey,
-  Property,
-  type Opt,
-} from '@mikro-orm/core';
+import { Collection, Entity, ManyToOne, OneToMany, Property } from '@mikro-orm/core';
 import { Lot } from '../../lots/entities/lot.entity';
 import { ConductorSpec } from '../../products/entities/conductor-spec.entity';
 import { User } from '../../users/entities/user.entity';
 import { Reading } from './reading.entity';
-import { clock } from '../../common/clock';
+import { CreatedEntity } from '../../common/base-entities';
 
 /** One cut piece from one unit of a lot, for one conductor of the product. */
 @Entity({ tableName: 'samples' })
-export class Sample {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+export class Sample extends CreatedEntity {
   @ManyToOne(() => Lot)
   lot!: Lot;
 
@@ -38,7 +27,4 @@ export class Sample {
 
   @ManyToOne(() => User)
   createdBy!: User;
-
-  @Property({ type: 'Date' })
-  createdAt: Opt<Date> = clock.now();
 }

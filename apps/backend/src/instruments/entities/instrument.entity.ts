@@ -1,16 +1,14 @@
-import { Entity, Enum, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
+import { Entity, Enum, Property, Unique, type Opt } from '@mikro-orm/core';
 import { INSTRUMENT_KINDS, type InstrumentKind } from '@gaugeproof/api-types';
-import { clock } from '../../common/clock';
+import { TimestampedEntity, InheritedColumns } from '../../common/base-entities';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { INSTRUMENT_KINDS, type InstrumentKind };
 
 /** A registered measuring instrument with its calibration status (ISO 9001 7.1.5). */
 @Entity({ tableName: 'instruments' })
-export class Instrument {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+@InheritedColumns({ before: 'accuracyPercentOfReading' })
+export class Instrument extends TimestampedEntity {
   @Enum({ items: () => INSTRUMENT_KINDS, type: 'string' })
   kind!: InstrumentKind;
 
@@ -38,12 +36,6 @@ export class Instrument {
 
   @Property({ type: 'boolean' })
   active: Opt<boolean> = true;
-
-  @Property({ type: 'Date' })
-  createdAt: Opt<Date> = clock.now();
-
-  @Property({ type: 'Date', onUpdate: () => clock.now() })
-  updatedAt: Opt<Date> = clock.now();
 
   /** Stated accuracy as ± % of the reading (maker's specification); null when not stated. */
   @Property({ type: 'double', nullable: true })

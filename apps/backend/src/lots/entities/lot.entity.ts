@@ -1,10 +1,11 @@
-import { Entity, Enum, Index, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { Entity, Enum, Index, ManyToOne, Property, type Opt } from '@mikro-orm/core';
+import { clock } from '../../common/clock';
 import { Product } from '../../products/entities/product.entity';
 import type { StoredSamplingPlan } from '../../products/sampling-plan';
 import { Supplier } from '../../suppliers/entities/supplier.entity';
 import { User } from '../../users/entities/user.entity';
 import { LOT_STATUSES, type LotStatus } from '@gaugeproof/api-types';
-import { clock } from '../../common/clock';
+import { TimestampedEntity } from '../../common/base-entities';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { LOT_STATUSES, type LotStatus };
@@ -14,10 +15,7 @@ export { LOT_STATUSES, type LotStatus };
 @Index({ properties: ['supplier', 'receivedAt'] })
 /** The list's default order: a page walks it newest first and stops after the page. */
 @Index({ properties: ['receivedAt'] })
-export class Lot {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+export class Lot extends TimestampedEntity {
   @ManyToOne(() => Product)
   product!: Product;
 
@@ -60,10 +58,4 @@ export class Lot {
   /** Optimistic lock: a decision on a stale version is refused with 409. */
   @Property({ type: 'integer', version: true })
   version!: number;
-
-  @Property({ type: 'Date' })
-  createdAt: Opt<Date> = clock.now();
-
-  @Property({ type: 'Date', onUpdate: () => clock.now() })
-  updatedAt: Opt<Date> = clock.now();
 }

@@ -1,6 +1,6 @@
-import { Entity, Enum, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { Entity, Enum, Property, type Opt } from '@mikro-orm/core';
 import { MESSAGE_STATUSES, type MessageStatus } from '@gaugeproof/api-types';
-import { clock } from '../../common/clock';
+import { CreatedEntity, InheritedColumns } from '../../common/base-entities';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { MESSAGE_STATUSES, type MessageStatus };
@@ -11,10 +11,8 @@ export { MESSAGE_STATUSES, type MessageStatus };
  * message outlives a crash between a failed attempt and its retry.
  */
 @Entity({ tableName: 'outbound_messages' })
-export class OutboundMessage {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+@InheritedColumns({ before: 'sentAt' })
+export class OutboundMessage extends CreatedEntity {
   @Property({ type: 'string', length: 254 })
   to!: string;
 
@@ -46,9 +44,6 @@ export class OutboundMessage {
 
   @Property({ type: 'integer', nullable: true })
   sentById: number | null = null;
-
-  @Property({ type: 'Date' })
-  createdAt: Opt<Date> = clock.now();
 
   @Property({ type: 'Date', nullable: true })
   sentAt: Date | null = null;

@@ -1,6 +1,6 @@
-import { Entity, Index, ManyToOne, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
+import { Entity, Index, ManyToOne, Property, Unique } from '@mikro-orm/core';
 import { User } from '../../users/entities/user.entity';
-import { clock } from '../../common/clock';
+import { CreatedEntity } from '../../common/base-entities';
 
 export const NOTICE_KINDS = [
   'lot_awaits_decision',
@@ -21,10 +21,7 @@ export type NoticeKind = (typeof NOTICE_KINDS)[number];
 @Entity({ tableName: 'notices' })
 @Unique({ properties: ['user', 'key'] })
 @Index({ properties: ['delivery', 'messageId'] })
-export class Notice {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+export class Notice extends CreatedEntity {
   @ManyToOne(() => User, { deleteRule: 'cascade' })
   user!: User;
 
@@ -46,7 +43,4 @@ export class Notice {
 
   @Property({ type: 'integer', nullable: true })
   messageId: number | null = null;
-
-  @Property({ type: 'Date' })
-  createdAt: Opt<Date> = clock.now();
 }

@@ -1,14 +1,13 @@
-import { Entity, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { Entity, ManyToOne, Property, type Opt } from '@mikro-orm/core';
 import { Sample } from '../../inspection/entities/sample.entity';
 import { Lot } from '../../lots/entities/lot.entity';
 import { User } from '../../users/entities/user.entity';
 import { clock } from '../../common/clock';
+import { VoidableEntity } from '../../users/entities/voidable-entity';
 
+/** Never deleted: a wrong or misleading photo is voided with a reason (issue 15). */
 @Entity({ tableName: 'photos' })
-export class Photo {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+export class Photo extends VoidableEntity {
   @ManyToOne(() => Lot)
   lot!: Lot;
 
@@ -45,17 +44,4 @@ export class Photo {
 
   @Property({ type: 'Date' })
   createdAt: Opt<Date> = clock.now();
-
-  /** Never deleted: a wrong or misleading photo is voided with a reason (issue 15). */
-  @Property({ type: 'boolean' })
-  voided: Opt<boolean> = false;
-
-  @Property({ type: 'text', nullable: true })
-  voidReason: string | null = null;
-
-  @ManyToOne(() => User, { nullable: true })
-  voidedBy: User | null = null;
-
-  @Property({ type: 'Date', nullable: true })
-  voidedAt: Date | null = null;
 }

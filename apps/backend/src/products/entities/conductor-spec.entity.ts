@@ -1,4 +1,5 @@
-import { Entity, Enum, ManyToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
+import { Entity, Enum, ManyToOne, Property, type Opt } from '@mikro-orm/core';
+import { IdEntity } from '../../common/base-entities';
 import { Product } from './product.entity';
 import {
   CONDUCTOR_PURPOSES,
@@ -11,10 +12,7 @@ import {
 export { CONDUCTOR_PURPOSES, CLAIMED_MATERIALS, type ConductorPurpose, type ClaimedMaterial };
 
 @Entity({ tableName: 'conductor_specs' })
-export class ConductorSpec {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+export class ConductorSpec extends IdEntity {
   @ManyToOne(() => Product)
   product!: Product;
 

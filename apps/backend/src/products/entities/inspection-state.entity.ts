@@ -1,13 +1,11 @@
-import { Entity, OneToOne, PrimaryKey, Property, type Opt } from '@mikro-orm/core';
-import { Product } from './product.entity';
+import { Entity, OneToOne, Property, type Opt } from '@mikro-orm/core';
 import { clock } from '../../common/clock';
+import { Product } from './product.entity';
+import { IdEntity } from '../../common/base-entities';
 
 /** ISO 2859-1 switching state of one supplier's product (a product has one supplier). */
 @Entity({ tableName: 'inspection_states' })
-export class InspectionState {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+export class InspectionState extends IdEntity {
   @OneToOne(() => Product, { owner: true, unique: true })
   product!: Product;
 

@@ -4,7 +4,6 @@ import {
   Enum,
   ManyToOne,
   OneToMany,
-  PrimaryKey,
   Property,
   Unique,
   type Opt,
@@ -12,17 +11,15 @@ import {
 import { Supplier } from '../../suppliers/entities/supplier.entity';
 import { ConductorSpec } from './conductor-spec.entity';
 import { PRODUCT_KINDS, type ProductKind } from '@gaugeproof/api-types';
-import { clock } from '../../common/clock';
+import { TimestampedEntity, InheritedColumns } from '../../common/base-entities';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { PRODUCT_KINDS, type ProductKind };
 
 @Entity({ tableName: 'products' })
 @Unique({ properties: ['supplier', 'sku'] })
-export class Product {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+@InheritedColumns({ before: 'concessionNeedsApproval' })
+export class Product extends TimestampedEntity {
   @ManyToOne(() => Supplier)
   supplier!: Supplier;
 
@@ -56,12 +53,6 @@ export class Product {
 
   @OneToMany(() => ConductorSpec, (c) => c.product, { orphanRemoval: false })
   conductors = new Collection<ConductorSpec>(this);
-
-  @Property({ type: 'Date' })
-  createdAt: Opt<Date> = clock.now();
-
-  @Property({ type: 'Date', onUpdate: () => clock.now() })
-  updatedAt: Opt<Date> = clock.now();
 
   // Last, as the migration adds it (SQLite compares column order).
   /**

@@ -4,7 +4,6 @@ import {
   Enum,
   ManyToMany,
   ManyToOne,
-  PrimaryKey,
   Property,
   Unique,
   type Opt,
@@ -13,7 +12,7 @@ import { Lot } from '../../lots/entities/lot.entity';
 import { Supplier } from '../../suppliers/entities/supplier.entity';
 import { User } from '../../users/entities/user.entity';
 import { RETURN_STATUSES, type ReturnStatus } from '@gaugeproof/api-types';
-import { clock } from '../../common/clock';
+import { TimestampedEntity } from '../../common/base-entities';
 
 // The values are the contract's (libs/api-types), used here and re-exported for this module.
 export { RETURN_STATUSES, type ReturnStatus };
@@ -27,10 +26,7 @@ export interface ReturnCosts {
 
 /** Return to vendor (RTV) of rejected lots of one supplier. */
 @Entity({ tableName: 'vendor_returns' })
-export class VendorReturn {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+export class VendorReturn extends TimestampedEntity {
   @Property({ type: 'string', length: 20 })
   @Unique()
   number!: string;
@@ -114,10 +110,4 @@ export class VendorReturn {
 
   @ManyToOne(() => User)
   createdBy!: User;
-
-  @Property({ type: 'Date' })
-  createdAt: Opt<Date> = clock.now();
-
-  @Property({ type: 'Date', onUpdate: () => clock.now() })
-  updatedAt: Opt<Date> = clock.now();
 }

@@ -1,12 +1,10 @@
-import { Entity, Enum, PrimaryKey, Property, Unique, type Opt } from '@mikro-orm/core';
+import { Entity, Enum, Property, Unique, type Opt } from '@mikro-orm/core';
 import { ROLES, type Role } from '../../auth/roles';
-import { clock } from '../../common/clock';
+import { TimestampedEntity, InheritedColumns } from '../../common/base-entities';
 
 @Entity({ tableName: 'users' })
-export class User {
-  @PrimaryKey({ type: 'integer' })
-  id!: number;
-
+@InheritedColumns({ before: 'sessionVersion' })
+export class User extends TimestampedEntity {
   @Property({ type: 'string', length: 254 })
   @Unique()
   email!: string;
@@ -22,12 +20,6 @@ export class User {
 
   @Property({ type: 'boolean' })
   active: Opt<boolean> = true;
-
-  @Property({ type: 'Date' })
-  createdAt: Opt<Date> = clock.now();
-
-  @Property({ type: 'Date', onUpdate: () => clock.now() })
-  updatedAt: Opt<Date> = clock.now();
 
   // Last, as the migration adds it (SQLite compares column order).
   /**
