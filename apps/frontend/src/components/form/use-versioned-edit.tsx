@@ -77,3 +77,23 @@ export function useVersionedEdit<T extends FieldValues, O, R extends { version: 
     ),
   };
 }
+
+/**
+ * The usual `save` of a register's dialog: creates the record from `body` when there is no
+ * base, otherwise sends the fields `patch` finds changed on the base's id and the version.
+ */
+export function createOrUpdate<T extends { id: number; version: number }, B, P, R>(
+  base: T | null,
+  version: number | undefined,
+  body: B,
+  send: {
+    create: (body: B) => Promise<R>;
+    update: (change: { id: number; version: number; patch: P }) => Promise<R>;
+    /** The fields of `body` that differ from the base. */
+    patch: (body: B, base: T) => P;
+  },
+): Promise<R> {
+  return base
+    ? send.update({ id: base.id, version: version ?? base.version, patch: send.patch(body, base) })
+    : send.create(body);
+}

@@ -10,7 +10,7 @@ import {
 } from '@mui/material';
 import { useForm, useWatch } from 'react-hook-form';
 import { FormTextField, type FormTextFieldProps } from '@/components/form/form-text-field';
-import { useVersionedEdit } from '@/components/form/use-versioned-edit';
+import { createOrUpdate, useVersionedEdit } from '@/components/form/use-versioned-edit';
 import {
   instrumentSchema,
   toInstrumentBody,
@@ -86,14 +86,11 @@ export function InstrumentDialog(props: { instrument: Instrument | null; onClose
     mutation,
     what: 'this instrument',
     save: async (input, base, version) => {
-      const body = toInstrumentBody(input);
-      const saved = base
-        ? await update.mutateAsync({
-            id: base.id,
-            version: version ?? base.version,
-            patch: instrumentPatch(base, body),
-          })
-        : await create.mutateAsync(body);
+      const saved = await createOrUpdate(base, version, toInstrumentBody(input), {
+        create: create.mutateAsync,
+        update: update.mutateAsync,
+        patch: (body, from) => instrumentPatch(from, body),
+      });
       toasts.success(`${saved.name} saved.`);
       onClose();
     },

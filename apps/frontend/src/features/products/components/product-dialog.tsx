@@ -10,7 +10,7 @@ import {
   Typography,
 } from '@mui/material';
 import { useForm, useWatch } from 'react-hook-form';
-import { useVersionedEdit } from '@/components/form/use-versioned-edit';
+import { createOrUpdate, useVersionedEdit } from '@/components/form/use-versioned-edit';
 import {
   EMPTY_PRODUCT,
   productSchema,
@@ -73,14 +73,11 @@ export function ProductDialog({ product, canSetCriteria, onClose }: ProductDialo
     mutation,
     what: 'this product',
     save: async (input, base, version) => {
-      const body = toProductBody(input);
-      const saved = base
-        ? await update.mutateAsync({
-            id: base.id,
-            version: version ?? base.version,
-            patch: productPatch(toProductBody(productToInput(base)), body),
-          })
-        : await create.mutateAsync(body);
+      const saved = await createOrUpdate(base, version, toProductBody(input), {
+        create: create.mutateAsync,
+        update: update.mutateAsync,
+        patch: (body, from) => productPatch(toProductBody(productToInput(from)), body),
+      });
       if (saved.warnings.length > 0) {
         toasts.show(`${saved.sku} saved. ${saved.warnings.join(' ')}`, 'warning');
       } else toasts.success(`${saved.sku} saved.`);

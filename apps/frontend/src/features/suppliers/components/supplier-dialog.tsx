@@ -2,7 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, Dialog, DialogActions, DialogContent, DialogTitle, MenuItem } from '@mui/material';
 import { useForm } from 'react-hook-form';
 import { FormTextField } from '@/components/form/form-text-field';
-import { useVersionedEdit } from '@/components/form/use-versioned-edit';
+import { createOrUpdate, useVersionedEdit } from '@/components/form/use-versioned-edit';
 import {
   supplierSchema,
   toSupplierBody,
@@ -56,14 +56,11 @@ export function SupplierDialog({ supplier, onClose }: SupplierDialogProps) {
     mutation,
     what: 'this supplier',
     save: async (input, base, version) => {
-      const body = toSupplierBody(input);
-      const saved = base
-        ? await update.mutateAsync({
-            id: base.id,
-            version: version ?? base.version,
-            patch: supplierPatch(base, body),
-          })
-        : await create.mutateAsync(body);
+      const saved = await createOrUpdate(base, version, toSupplierBody(input), {
+        create: create.mutateAsync,
+        update: update.mutateAsync,
+        patch: (body, from) => supplierPatch(from, body),
+      });
       toasts.success(supplier ? `${saved.name} saved.` : `${saved.name} added.`);
       onClose();
     },
