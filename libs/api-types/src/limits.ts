@@ -78,6 +78,8 @@ export const TEXT_MAX = {
   description: 300,
   /** A supplier's name. */
   supplierName: 160,
+  /** A supplier's short code (letters, digits, - and _). */
+  supplierCode: 32,
   /** A person's or an instrument's name. */
   name: 120,
   /** An e-mail address (RFC 5321 4.5.3.1.3 path limit, less the brackets). */
@@ -123,6 +125,12 @@ export const MAX_PHOTO_BYTES = 15 * 1024 * 1024;
 
 /** Largest file a supplier attaches, bytes: a scanned 8D report or a few phone photos (common practice, no source). */
 export const MAX_ATTACHMENT_BYTES = 10 * 1024 * 1024;
+
+/** Longest range a scorecard answers, in calendar months: five years of monthly buckets (our choice). */
+export const MAX_RANGE_MONTHS = 60;
+
+/** A currency as ISO 4217 writes it: three capital letters (ISO 4217, alphabetic code). */
+export const CURRENCY_CODE = /^[A-Z]{3}$/;
 
 /** Rows of a list page (docs/api-conventions.md, paging). */
 export const PAGE_SIZE = { default: 25, max: 100 } as const;

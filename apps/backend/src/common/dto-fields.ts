@@ -1,3 +1,4 @@
+import { CURRENCY_CODE, LOTS_PER_REQUEST } from '@gaugeproof/api-types';
 import { applyDecorators } from '@nestjs/common';
 import { ApiProperty, ApiPropertyOptional, type ApiPropertyOptions } from '@nestjs/swagger';
 import { Transform, Type } from 'class-transformer';
@@ -123,18 +124,20 @@ export const OptionalCurrency = (doc: ApiPropertyOptions) =>
   stacked(
     ApiPropertyOptional({ example: 'EUR', ...doc }),
     IsOptional(),
-    Matches(/^[A-Z]{3}$/, { message: 'currency must be an ISO 4217 code such as EUR or USD' }),
+    Matches(CURRENCY_CODE, { message: 'currency must be an ISO 4217 code such as EUR or USD' }),
   );
 
 /**
- * The lots a return or a SCAR is about: up to 100 distinct lot ids. `atLeastOne`: the
+ * The lots a return or a SCAR is about: up to LOTS_PER_REQUEST.max distinct lot ids. `atLeastOne`: the
  * sentence when the list is empty (a SCAR may name none).
  */
 export const LotIdList = (atLeastOne?: string) =>
   stacked(
     IsArray({ message: 'lotIds must be a list of lot ids' }),
     ...(atLeastOne === undefined ? [] : [ArrayMinSize(1, { message: atLeastOne })]),
-    ArrayMaxSize(100, { message: 'lotIds can name at most 100 lots' }),
+    ArrayMaxSize(LOTS_PER_REQUEST.max, {
+      message: `lotIds can name at most ${LOTS_PER_REQUEST.max} lots`,
+    }),
     ArrayUnique({ message: 'lotIds must not repeat a lot' }),
     IsInt({ each: true, message: 'each lot id must be a whole number' }),
     Min(1, { each: true, message: 'each lot id must be a whole number' }),

@@ -1,9 +1,10 @@
+import { MAX_RANGE_MONTHS } from '@gaugeproof/api-types';
 import { DomainError, type FieldError } from '../common/domain-error';
 import { addDays, isCalendarDate, isoDate } from '../common/calendar';
 import { clock } from '../common/clock';
 
-/** Longest range a scorecard answers: five years of monthly buckets (our choice). */
-export const MAX_RANGE_MONTHS = 60;
+/** Longest range a scorecard answers: the contract's limit (libs/api-types). */
+export { MAX_RANGE_MONTHS };
 
 export interface MonthBucket {
   /** `YYYY-MM` */

@@ -10,6 +10,9 @@ export function maxChars(kind: keyof typeof TEXT_MAX): [number, string] {
   return [TEXT_MAX[kind], `At most ${TEXT_MAX[kind]} characters.`];
 }
 
+/** A byte limit of the contract (MAX_PHOTO_BYTES …) as people read it: "15 MB". */
+export const megabytes = (bytes: number): string => `${bytes / 1024 / 1024} MB`;
+
 /** The shortest a reason of `kind` may be, in characters. */
 export const minChars = (kind: keyof typeof TEXT_MIN): number => TEXT_MIN[kind];
 

@@ -23,8 +23,8 @@ export class CreateSupplierDto {
 
   @ApiProperty({ example: 'NBCW', description: 'Short unique code (letters, digits, - and _)' })
   @IsString()
-  @Matches(/^[A-Za-z0-9][A-Za-z0-9_-]{0,31}$/, {
-    message: 'code must be 1 to 32 letters, digits, - or _',
+  @Matches(new RegExp(`^[A-Za-z0-9][A-Za-z0-9_-]{0,${TEXT_MAX.supplierCode - 1}}$`), {
+    message: `code must be 1 to ${TEXT_MAX.supplierCode} letters, digits, - or _`,
   })
   readonly code: string;
 

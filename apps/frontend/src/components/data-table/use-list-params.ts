@@ -1,6 +1,7 @@
 import { type SortDirection } from '@gaugeproof/api-types';
 import { useCallback, useMemo } from 'react';
 import { useSearchParams } from 'react-router';
+import { PAGE_SIZE } from '@gaugeproof/api-types';
 
 export { type SortDirection };
 export interface ListSort {
@@ -79,7 +80,7 @@ export function useListParams<TFilter extends string>({
 }: ListParamsOptions<TFilter>): ListParams<TFilter> {
   const [search, setSearch] = useSearchParams();
   const page = positiveInt(search.get('page'), 1);
-  const pageSize = positiveInt(search.get('pageSize'), defaultPageSize, 100);
+  const pageSize = positiveInt(search.get('pageSize'), defaultPageSize, PAGE_SIZE.max);
   const sortParam = search.get('sort');
   const defaultSortText = defaultSort ? `${defaultSort.field}:${defaultSort.direction}` : '';
   const filterKey = filterNames.join(',');

@@ -1,4 +1,4 @@
-import type { LotSummary } from '@gaugeproof/api-types';
+import { PAGE_SIZE, type LotSummary } from '@gaugeproof/api-types';
 import { useQuery } from '@tanstack/react-query';
 import { lotsQueryOptions } from '@/lib/lots-api';
 
@@ -12,7 +12,7 @@ export const supplierLotsQueryOptions = (supplierId: number) =>
   lotsQueryOptions({
     supplierId,
     status: DECIDED,
-    pageSize: 100,
+    pageSize: PAGE_SIZE.max,
     sort: 'receivedAt:desc',
   });
 

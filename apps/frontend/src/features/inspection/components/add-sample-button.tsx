@@ -13,6 +13,7 @@ import { useState } from 'react';
 import { useCreateSample } from '@/features/inspection/api/create-sample';
 import type { Sample } from '@/features/inspection/types';
 import { errorMessage } from '@/lib/query-client';
+import { TEXT_MAX } from '@gaugeproof/api-types';
 
 interface AddSampleButtonProps {
   lotId: number;
@@ -67,7 +68,7 @@ export function AddSampleButton({
             fullWidth
             value={unitRef}
             onChange={(e) => setUnitRef(e.target.value)}
-            slotProps={{ htmlInput: { maxLength: 64 } }}
+            slotProps={{ htmlInput: { maxLength: TEXT_MAX.reference } }}
           />
         </DialogContent>
         <DialogActions>

@@ -1,6 +1,6 @@
+import { TEXT_MAX, type ReceivedBefore } from '@gaugeproof/api-types';
 import { useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { LotSummary } from '@/features/lots/types';
 import { queryKeys } from '@/lib/query-keys';
 import { useDebouncedValue } from '@/lib/use-debounced-value';
 
@@ -8,7 +8,7 @@ import { useDebouncedValue } from '@/lib/use-debounced-value';
 const TYPING_PAUSE_MS = 400;
 
 export const getReceivedBefore = (poNumber: string, packingSlip: string, signal?: AbortSignal) =>
-  api.get<{ lots: LotSummary[] }>(
+  api.get<ReceivedBefore>(
     `/lots/received-before?poNumber=${encodeURIComponent(poNumber)}&packingSlip=${encodeURIComponent(packingSlip)}`,
     signal,
   );
@@ -20,7 +20,11 @@ export const getReceivedBefore = (poNumber: string, packingSlip: string, signal?
 export function useReceivedBefore(poNumber: string, packingSlip: string) {
   const po = useDebouncedValue(poNumber.trim(), TYPING_PAUSE_MS);
   const slip = useDebouncedValue(packingSlip.trim(), TYPING_PAUSE_MS);
-  const enabled = po.length > 0 && slip.length > 0 && po.length <= 64 && slip.length <= 64;
+  const enabled =
+    po.length > 0 &&
+    slip.length > 0 &&
+    po.length <= TEXT_MAX.reference &&
+    slip.length <= TEXT_MAX.reference;
   const query = useQuery({
     queryKey: queryKeys.lots.receivedBefore(po, slip),
     queryFn: ({ signal }) => getReceivedBefore(po, slip, signal),

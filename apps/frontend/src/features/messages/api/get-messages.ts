@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { Page } from '@gaugeproof/api-types';
+import { PAGE_SIZE, type Page } from '@gaugeproof/api-types';
 import type { MessageStatus, OutboundMessage } from '@/features/messages/types';
 import { queryKeys } from '@/lib/query-keys';
 
@@ -17,7 +17,7 @@ export interface MessagesQuery {
 }
 
 export function getMessages(q: MessagesQuery, signal?: AbortSignal) {
-  const params = new URLSearchParams({ pageSize: '100' });
+  const params = new URLSearchParams({ pageSize: String(PAGE_SIZE.max) });
   if (q.related) {
     params.set('relatedType', q.related.relatedType);
     params.set('relatedId', String(q.related.relatedId));

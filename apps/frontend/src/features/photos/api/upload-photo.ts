@@ -3,6 +3,7 @@ import { apiErrorOf, parseAnswer } from '@/lib/api-client';
 import type { Photo } from '@/features/photos/types';
 import { queryKeys } from '@/lib/query-keys';
 import { useWriteMutation } from '@/lib/write-mutation';
+import { megabytes } from '@/lib/contract-rules';
 
 /** Same limits as the server (issue 4): JPEG, PNG or WebP, at most the contract's MAX_PHOTO_BYTES. */
 export const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const;
@@ -14,7 +15,7 @@ export function photoFileProblem(file: File): string | null {
     return `${file.name} is not a JPEG, PNG or WebP image.`;
   }
   if (file.size > PHOTO_MAX_BYTES) {
-    return `${file.name} is ${(file.size / 1024 / 1024).toFixed(1)} MB; photos may be at most ${PHOTO_MAX_BYTES / 1024 / 1024} MB.`;
+    return `${file.name} is ${(file.size / 1024 / 1024).toFixed(1)} MB; photos may be at most ${megabytes(PHOTO_MAX_BYTES)}.`;
   }
   if (file.size === 0) return `${file.name} is empty.`;
   return null;

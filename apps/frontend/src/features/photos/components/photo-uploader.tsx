@@ -15,6 +15,8 @@ import { photoFileProblem, useUploadPhoto } from '@/features/photos/api/upload-p
 import type { PhotoSampleOption } from '@/features/photos/types';
 import { errorMessage } from '@/lib/query-client';
 import { toasts } from '@/lib/toast-store';
+import { MAX_PHOTO_BYTES, TEXT_MAX } from '@gaugeproof/api-types';
+import { megabytes } from '@/lib/contract-rules';
 
 interface PhotoUploaderProps {
   lotId: number;
@@ -121,7 +123,7 @@ export function PhotoUploader({ lotId, samples }: PhotoUploaderProps) {
           onChange={(e) => setCaption(e.target.value)}
           fullWidth
           disabled={busy}
-          slotProps={{ htmlInput: { maxLength: 200 } }}
+          slotProps={{ htmlInput: { maxLength: TEXT_MAX.description } }}
         />
       </Stack>
       <Box
@@ -142,7 +144,7 @@ export function PhotoUploader({ lotId, samples }: PhotoUploaderProps) {
         }}
       >
         <Typography color="text.secondary" gutterBottom>
-          JPEG, PNG or WebP, at most 15 MB each; drop files here, or
+          JPEG, PNG or WebP, at most {megabytes(MAX_PHOTO_BYTES)} each; drop files here, or
         </Typography>
         <Stack
           direction="row"

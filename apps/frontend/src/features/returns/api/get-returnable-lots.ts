@@ -1,4 +1,4 @@
-import type { LotSummary } from '@gaugeproof/api-types';
+import { PAGE_SIZE, type LotSummary } from '@gaugeproof/api-types';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { getReturns } from '@/features/returns/api/get-returns';
 import { getLots } from '@/lib/lots-api';
@@ -13,8 +13,14 @@ export type ReturnableLot = LotSummary;
  */
 export async function getReturnableLots(supplierId: number, signal?: AbortSignal) {
   const [lots, open] = await Promise.all([
-    getLots({ status: ['rejected'], supplierId, pageSize: 100, sort: 'receivedAt:asc' }, signal),
-    getReturns({ supplierId: String(supplierId), status: 'draft', pageSize: '100' }, signal),
+    getLots(
+      { status: ['rejected'], supplierId, pageSize: PAGE_SIZE.max, sort: 'receivedAt:asc' },
+      signal,
+    ),
+    getReturns(
+      { supplierId: String(supplierId), status: 'draft', pageSize: String(PAGE_SIZE.max) },
+      signal,
+    ),
   ]);
   const taken = new Set(open.items.flatMap((r) => r.lots.map((l) => l.id)));
   return lots.items.filter((l) => !taken.has(l.id));

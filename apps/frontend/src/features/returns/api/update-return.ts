@@ -1,3 +1,4 @@
+import { CURRENCY_CODE } from '@gaugeproof/api-types';
 import { z } from 'zod';
 import { api } from '@/lib/api-client';
 import { returnFields } from '@/features/returns/api/create-return';
@@ -17,7 +18,7 @@ export const editReturnSchema = z.object({
     .string()
     .trim()
     .toUpperCase()
-    .regex(/^[A-Z]{3}$/, 'Enter an ISO 4217 code such as EUR or USD.'),
+    .regex(CURRENCY_CODE, 'Enter an ISO 4217 code such as EUR or USD.'),
 });
 export type EditReturnForm = z.input<typeof editReturnSchema>;
 

@@ -1,8 +1,9 @@
+import { MAX_RANGE_MONTHS } from '@gaugeproof/api-types';
 import { z } from 'zod';
 import type { DateRange } from '@/features/scorecards/types';
 
-/** The server answers at most 60 calendar months (apps/backend scorecard-range.ts). */
-export const MAX_RANGE_MONTHS = 60;
+/** The server answers at most this many calendar months: the contract's limit. */
+export { MAX_RANGE_MONTHS };
 
 export const RANGE_PRESETS = [3, 6, 12] as const;
 export type RangePreset = (typeof RANGE_PRESETS)[number];

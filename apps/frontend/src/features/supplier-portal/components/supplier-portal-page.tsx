@@ -34,6 +34,7 @@ import { isoDayOf } from '@/lib/dates';
 import { errorMessage } from '@/lib/query-client';
 import { splitServerErrors } from '@/lib/server-field-errors';
 import { countOf } from '@/lib/counts';
+import { megabytes } from '@/lib/contract-rules';
 
 const FIELDS = ['containment', 'rootCause', 'correctiveAction', 'promisedOn'] as const;
 const ACCEPT = 'application/pdf,image/jpeg,image/png,image/webp';
@@ -126,7 +127,9 @@ function Files({ token, req }: { token: string; req: PortalRequest }) {
     setTooBig(null);
     if (!file) return;
     if (file.size > MAX_FILE_BYTES) {
-      setTooBig(`${file.name} is larger than 10 MB: send a smaller PDF or photo.`);
+      setTooBig(
+        `${file.name} is larger than ${megabytes(MAX_FILE_BYTES)}: send a smaller PDF or photo.`,
+      );
       return;
     }
     upload.mutate(file, { onSettled: () => input.current && (input.current.value = '') });
@@ -164,7 +167,7 @@ function Files({ token, req }: { token: string; req: PortalRequest }) {
             loading={upload.isPending}
             onClick={() => input.current?.click()}
           >
-            Add a file (PDF or photo, up to 10 MB)
+            Add a file (PDF or photo, up to {megabytes(MAX_FILE_BYTES)})
           </Button>
         </div>
       )}

@@ -16,7 +16,7 @@ export const supplierSchema = z.object({
     .string()
     .trim()
     .min(1, 'Enter a short code, e.g. NCW.')
-    .max(32, 'At most 32 characters.')
+    .max(...maxChars('supplierCode'))
     .regex(/^[A-Za-z0-9][A-Za-z0-9_-]*$/, 'Letters, digits, - and _ only.'),
   contactEmail: z
     .string()
