@@ -5,17 +5,16 @@ import type { RequestUser } from '../auth/request-user';
 import { isoDate } from '../common/calendar';
 import { clock } from '../common/clock';
 import { DomainError } from '../common/domain-error';
-import { DAY_MS, LINK_DAYS, newPortalToken, sha256 } from '../common/portal-token';
 import { APP_CONFIG } from '../config/config.module';
 import type { AppConfig } from '../config/env';
 import { MailService } from '../mail/mail.service';
 import type { MessageView } from '../mail/message-view';
 import { StorageService } from '../storage/storage.service';
-import { User } from '../users/entities/user.entity';
 import { SendCorrectiveActionDto } from './dto/send-corrective-action.dto';
 import { CorrectiveAction } from './entities/corrective-action.entity';
 import { ScarAttachment } from './entities/scar-attachment.entity';
 import { SupplierLink } from './entities/supplier-link.entity';
+import { createSignedLink } from './signed-links';
 
 /**
  * Staff's side of a request's supplier links: e-mailing the supplier a signed link to its
@@ -52,16 +51,15 @@ export class ScarLinks {
         `${car.supplier.name} has no contact e-mail: add one to the supplier or give an address`,
       );
     }
-    const token = newPortalToken(this.config.jwtSecret);
-    const link = em.create(SupplierLink, {
-      tokenHash: sha256(token),
-      correctiveAction: car,
-      sentTo: to,
-      expiresAt: new Date(clock.nowMs() + LINK_DAYS * DAY_MS),
-      createdBy: em.getReference(User, actor.id),
-    });
+    const { link, url } = createSignedLink(
+      em,
+      this.config,
+      SupplierLink,
+      { correctiveAction: car },
+      to,
+      actor.id,
+    );
     await em.flush();
-    const url = `${this.config.publicUrl}/supplier/${token}`;
     const lots = car.lots
       .getItems()
       .map((l) => `PO ${l.poNumber}${l.supplierLotCode ? ` (your lot ${l.supplierLotCode})` : ''}`)

@@ -9,7 +9,7 @@ import type { AppConfig } from '../config/env';
 import { MailService, type MailAttachment } from '../mail/mail.service';
 import type { MessageView } from '../mail/message-view';
 import { ReturnLink } from './entities/return-link.entity';
-import { createReturnLink } from './return-links';
+import { createSignedLink } from '../corrective-actions/signed-links';
 import { EmailReturnDto } from './dto/email-return.dto';
 import { VendorReturn as VendorReturnEntity } from './entities/vendor-return.entity';
 import type { VendorReturn } from './entities/vendor-return.entity';
@@ -71,7 +71,14 @@ export class ReturnMailService implements OnModuleInit {
     em.clear();
     const ret = await this.returns.load(em, id);
     // The supplier's own page for this notice: what was found, the photos, the evidence pack.
-    const { link, url } = createReturnLink(em, this.config, ret, to, actor.id);
+    const { link, url } = createSignedLink(
+      em,
+      this.config,
+      ReturnLink,
+      { vendorReturn: ret },
+      to,
+      actor.id,
+    );
     await em.flush();
     const lots = ret.lots
       .getItems()
