@@ -1,8 +1,10 @@
-import { CAR_STATUSES, type CorrectiveActionStatus } from '@gaugeproof/api-types';
+import type { CorrectiveActionStatus } from '@gaugeproof/api-types';
 /** Supplier corrective action request (SCAR): the contract's enum and shape (libs/api-types). */
-export { CAR_STATUSES, type CorrectiveActionStatus };
-
-export type { CorrectiveAction } from '@gaugeproof/api-types';
+export {
+  CAR_STATUSES,
+  type CorrectiveAction,
+  type CorrectiveActionStatus,
+} from '@gaugeproof/api-types';
 
 export const carStatusLabels: Record<CorrectiveActionStatus, string> = {
   open: 'Open',

@@ -1,33 +1,21 @@
-import {
-  type ClaimedMaterial,
-  type IdentifiedMaterial,
-  type InstrumentKind,
-  type ReadingMethod,
-  type ResolutionUnit,
-  type SampleVerdict,
-  type Verdict as ReadingVerdict,
-  type LotStatus,
-} from '@gaugeproof/api-types';
 /** The Lot page's enums and shapes are the contract's (libs/api-types). */
-export {
-  type ClaimedMaterial,
-  type IdentifiedMaterial,
-  type InstrumentKind,
-  type ReadingMethod,
-  type ResolutionUnit,
-  type SampleVerdict,
-  type ReadingVerdict,
-  type LotStatus,
-};
 export type {
   BudgetLine,
+  ClaimedMaterial,
   Conductor,
   Evaluation,
+  IdentifiedMaterial,
   Instrument,
+  InstrumentKind,
   InstrumentSnapshot,
   LotDetail,
+  LotStatus,
   PersonRef,
   Photo,
   Reading,
+  ReadingMethod,
+  ResolutionUnit,
   Sample,
+  SampleVerdict,
+  Verdict as ReadingVerdict,
 } from '@gaugeproof/api-types';

@@ -1,11 +1,4 @@
-import {
-  UNITS_BY_KIND,
-  INSTRUMENT_KINDS,
-  RESOLUTION_UNITS,
-  type CalibrationStatus,
-  type InstrumentKind,
-  type ResolutionUnit,
-} from '@gaugeproof/api-types';
+import type { ResolutionUnit } from '@gaugeproof/api-types';
 // The enums and the shape are the contract's (libs/api-types).
 export {
   INSTRUMENT_KINDS,
@@ -13,7 +6,7 @@ export {
   type CalibrationStatus,
   type InstrumentKind,
   type ResolutionUnit,
-};
+} from '@gaugeproof/api-types';
 
 export type { Instrument } from '@gaugeproof/api-types';
 
@@ -28,4 +21,4 @@ export const unitLabels: Record<ResolutionUnit, string> = {
 };
 
 /** What each kind of instrument reads in: the contract's rule, as the server checks it. */
-export { UNITS_BY_KIND };
+export { UNITS_BY_KIND } from '@gaugeproof/api-types';

@@ -1,24 +1,18 @@
-import {
+import type { Conductor, Product, Supplier } from '@gaugeproof/api-types';
+// The enums and the shapes are the contract's (libs/api-types).
+export {
   LOT_STATUSES,
-  type LotStatus,
-  type PlanSeverity,
-  type SupplierStatus,
   type ClaimedMaterial,
   type ConductorPurpose,
   type InspectionSeverity,
-  type Conductor,
-  type Product,
-  type Supplier,
-} from '@gaugeproof/api-types';
-// The enums and the shapes are the contract's (libs/api-types).
-export { LOT_STATUSES, type LotStatus, type PlanSeverity, type SupplierStatus };
-export { type ClaimedMaterial, type ConductorPurpose, type InspectionSeverity };
-export type {
-  LotSummary,
-  PersonRef,
-  SamplingPlan,
-  SamplingPlanAnswer,
-  SupplierRef,
+  type LotStatus,
+  type LotSummary,
+  type PersonRef,
+  type PlanSeverity,
+  type SamplingPlan,
+  type SamplingPlanAnswer,
+  type SupplierRef,
+  type SupplierStatus,
 } from '@gaugeproof/api-types';
 
 /** A product's conductor as the receiving form offers it (GET /api/products). */

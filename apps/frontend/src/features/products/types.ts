@@ -1,12 +1,4 @@
-import {
-  CLAIMED_MATERIALS,
-  CONDUCTOR_PURPOSES,
-  PRODUCT_KINDS,
-  type ClaimedMaterial,
-  type ConductorPurpose,
-  type InspectionSeverity,
-  type ProductKind,
-} from '@gaugeproof/api-types';
+import type { ProductKind } from '@gaugeproof/api-types';
 // The enums and the shapes are the contract's (libs/api-types).
 export {
   CLAIMED_MATERIALS,
@@ -16,7 +8,7 @@ export {
   type ConductorPurpose,
   type InspectionSeverity,
   type ProductKind,
-};
+} from '@gaugeproof/api-types';
 
 export type { Conductor, Product } from '@gaugeproof/api-types';
 
