@@ -35,6 +35,8 @@ export const queryKeys = {
       [...lots.all, 'received-before', poNumber, packingSlip] as const,
     /** Concessions waiting for a second approval the signed-in user may give (Today). */
     awaitingApproval: () => [...lots.all, 'concessions', 'awaiting-approval'] as const,
+    /** Lots at their reject number (Today, QA lead). */
+    rejectReached: () => [...lots.all, 'reject-reached'] as const,
   },
   products: {
     ...products,
@@ -60,6 +62,12 @@ export const queryKeys = {
   /** The signed-in user's e-mail notices (profile page). */
   notices: { mine: () => ['notices', 'mine'] as const },
   messages: resource('messages'),
+  /** The audit screen: its pages of events and the values its filters offer. */
+  audit: {
+    all: ['audit'] as const,
+    list: <P extends object>(params: P) => ['audit', 'list', params] as const,
+    facets: () => ['audit', 'facets'] as const,
+  },
   scorecards: {
     ...scorecards,
     supplier: <P extends object>(supplierId: number, range: P) =>

@@ -2,6 +2,7 @@ import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query'
 import { toQueryString } from '@/components/data-table/use-list-params';
 import type { AuditFacets, Page } from '@gaugeproof/api-types';
 import { api } from '@/lib/api-client';
+import { queryKeys } from '@/lib/query-keys';
 import type { TimelineEvent } from '@/features/audit/types';
 
 /** GET /api/audit (admin): page, pageSize, sort, entityType, entityId, action, actorId, from, to. */
@@ -9,15 +10,9 @@ export type AuditListParams = Record<string, string>;
 
 export type { AuditFacets };
 
-export const auditKeys = {
-  all: ['audit'] as const,
-  list: (params: AuditListParams) => [...auditKeys.all, 'list', params] as const,
-  facets: () => [...auditKeys.all, 'facets'] as const,
-};
-
 export const auditEventsQueryOptions = (params: AuditListParams) =>
   queryOptions({
-    queryKey: auditKeys.list(params),
+    queryKey: queryKeys.audit.list(params),
     queryFn: ({ signal }) => api.get<Page<TimelineEvent>>(`/audit${toQueryString(params)}`, signal),
     placeholderData: keepPreviousData,
   });
@@ -28,7 +23,7 @@ export const useAuditEvents = (params: AuditListParams) =>
 /** The actions, record types and people that occur in the trail, for the filters. */
 export const useAuditFacets = () =>
   useQuery({
-    queryKey: auditKeys.facets(),
+    queryKey: queryKeys.audit.facets(),
     queryFn: ({ signal }) => api.get<AuditFacets>('/audit/facets', signal),
     staleTime: 60_000,
   });
